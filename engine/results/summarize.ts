@@ -1,0 +1,266 @@
+/**
+ * Reduces a simulation's sums to estimates with 95 % confidence half-widths:
+ * - integral quantities (whole-wall stresses and fluxes): blocking analysis of the per-batch series;
+ * - cell fields, row-averaged profiles and wall bins: batch-level values over the doubling batch store
+ *   (batch-level ratios for ratio quantities), t interval with batches − 1 degrees of freedom.
+ */
+import type { Plan, ReferenceState } from '../case/plan';
+import type { SideName } from '../case/schema';
+import type { Simulation } from '../simulation';
+import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN, SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT } from '../kernel/state';
+import { totalOf, batchView, type DoublingBatchStore } from '../stats/doublingBatches';
+import { blockingAnalysis } from '../stats/blocking';
+import { tQuantile975 } from '../stats/studentT';
+import { seriesView } from '../stats/series';
+import { CELL_FIELDS, CELL_FIELD_COUNT, deriveCellFields, type CellFieldConstants } from './cellFields';
+import { WALL_QUANTITIES, wallQuantitiesFromSums, sideIndex, wallLengthM, type WallQuantityName } from './wallQuantities';
+
+export interface Estimate {
+  mean: number;
+  /** 95 % confidence half-width; NaN when there were too few batches to say. */
+  ci95: number;
+}
+
+export interface IntegralEstimate extends Estimate {
+  standardError: number;
+  effectiveSamples: number;
+  correlationTimeSteps: number;
+  /** False when the blocking analysis found no plateau: the error bar is then a lower bound. */
+  plateauFound: boolean;
+}
+
+/** Values for `rows` items × names.length quantities, row-major. */
+export interface FieldTable {
+  readonly names: readonly string[];
+  readonly units: readonly string[];
+  readonly rows: number;
+  readonly mean: Float64Array;
+  readonly ci95: Float64Array;
+  readonly batches: number;
+  readonly batchLengthSteps: number;
+}
+
+export interface SimulationResult {
+  reference: ReferenceState;
+  numerics: {
+    cellsX: number;
+    cellsY: number;
+    cells: number;
+    particles: number;
+    moleculesPerParticle: number;
+    timeStep: number;
+    steps: number;
+    transientSteps: number;
+    sampleSteps: number;
+    batchSteps: number;
+    seed: number;
+    cellSizeOverMeanFreePath: number;
+    timeStepOverCollisionTime: number;
+    timeStepOverCellTransitTime: number;
+    particlesPerCell: number;
+    collisionSeparationOverMeanFreePath: number;
+    collisionsPerParticlePerStep: number;
+  };
+  walls: Partial<Record<SideName, Record<WallQuantityName, IntegralEstimate>>>;
+  /** Cell centres (m), cell index = ix + cellsX·iy. */
+  cellX: Float64Array;
+  cellY: Float64Array;
+  cells: FieldTable;
+  /** Averages over each row of cells (constant y): the profile across a gap. */
+  profileY: Float64Array;
+  profile: FieldTable;
+  wallBins: Partial<Record<SideName, { position: Float64Array; table: FieldTable }>>;
+  warnings: string[];
+}
+
+function fieldConstants(sim: Simulation): CellFieldConstants {
+  const st = sim.state;
+  return { massKg: st.massKg, moleculesPerParticle: st.moleculesPerParticle, rotationalDof: st.rotationalDof };
+}
+
+/**
+ * Groups cells (group g = sum of member cells' raw sums) and derives fields per group: the mean from all samples
+ * (including the still-open batch), the half-width from the complete batches.
+ */
+function groupedFields(sim: Simulation, groupOf: Int32Array, groups: number, volumes: Float64Array): FieldTable {
+  const st = sim.state;
+  const store = sim.cellStore;
+  const k = fieldConstants(sim);
+  const group = (raw: Float64Array): Float64Array => {
+    const g = new Float64Array(groups * RAW_CELL_SUMS);
+    for (let c = 0; c < st.cells; c++) {
+      const o = groupOf[c] * RAW_CELL_SUMS;
+      for (let q = 0; q < RAW_CELL_SUMS; q++) g[o + q] += raw[c * RAW_CELL_SUMS + q];
+    }
+    return g;
+  };
+  const total = totalOf(store);
+  for (let q = 0; q < total.length; q++) total[q] += st.cellSums[q];
+  const totalSteps = store.batches * store.batchLength + store.pendingLength + sim.batchStepsDone;
+  const mean = new Float64Array(groups * CELL_FIELD_COUNT);
+  const gt = group(total);
+  for (let g = 0; g < groups; g++) deriveCellFields(gt, g * RAW_CELL_SUMS, totalSteps, volumes[g], k, mean, g * CELL_FIELD_COUNT);
+  const ci95 = batchHalfWidths(store, groups * CELL_FIELD_COUNT, (b, out) => {
+    const gb = group(batchView(store, b));
+    for (let g = 0; g < groups; g++) deriveCellFields(gb, g * RAW_CELL_SUMS, store.batchLength, volumes[g], k, out, g * CELL_FIELD_COUNT);
+  });
+  return {
+    names: CELL_FIELDS.map((f) => f.name),
+    units: CELL_FIELDS.map((f) => f.unit),
+    rows: groups,
+    mean,
+    ci95,
+    batches: store.batches,
+    batchLengthSteps: store.batchLength,
+  };
+}
+
+/** 95 % half-widths over the store's complete batches of values produced by `derive` for each batch. */
+function batchHalfWidths(store: DoublingBatchStore, width: number, derive: (batch: number, out: Float64Array) => void): Float64Array {
+  const nb = store.batches;
+  const ci = new Float64Array(width).fill(NaN);
+  if (nb < 2) return ci;
+  const mean = new Float64Array(width);
+  const m2 = new Float64Array(width);
+  const values = new Float64Array(width);
+  const count = new Float64Array(width);
+  for (let b = 0; b < nb; b++) {
+    derive(b, values);
+    for (let q = 0; q < width; q++) {
+      const v = values[q];
+      if (!Number.isFinite(v)) continue;
+      const c = ++count[q];
+      const d = v - mean[q];
+      mean[q] += d / c;
+      m2[q] += d * (v - mean[q]);
+    }
+  }
+  for (let q = 0; q < width; q++) {
+    const c = count[q];
+    if (c >= 2) ci[q] = tQuantile975(c - 1) * Math.sqrt(m2[q] / (c - 1) / c);
+  }
+  return ci;
+}
+
+function wallBinTable(sim: Simulation, name: SideName): { position: Float64Array; table: FieldTable } {
+  const st = sim.state;
+  const store = sim.wallStore;
+  const side = sideIndex(name);
+  const row = side * SIDE_STRIDE;
+  const first = st.sideTable[row + SIDE_BIN_OFFSET];
+  const bins = st.sideTable[row + SIDE_BIN_COUNT];
+  const length = wallLengthM(st, side);
+  const binArea = length / bins;
+  const dt = st.timeStep;
+  const nq = WALL_QUANTITIES.length;
+  const scratch = new Float64Array(nq);
+  const fill = (sums: Float64Array, steps: number, out: Float64Array) => {
+    for (let b = 0; b < bins; b++) {
+      wallQuantitiesFromSums(st, side, sums, (first + b) * SUMS_PER_WALL_BIN, binArea, steps * dt, scratch);
+      out.set(scratch, b * nq);
+    }
+  };
+  const total = totalOf(store);
+  for (let q = 0; q < total.length; q++) total[q] += st.wallSums[q];
+  const totalSteps = store.batches * store.batchLength + store.pendingLength + sim.batchStepsDone;
+  const mean = new Float64Array(bins * nq);
+  if (totalSteps > 0) fill(total, totalSteps, mean);
+  const ci95 = batchHalfWidths(store, bins * nq, (b, out) => fill(batchView(store, b), store.batchLength, out));
+  const position = Float64Array.from({ length: bins }, (_, b) => (b + 0.5) * binArea);
+  return {
+    position,
+    table: { names: [...WALL_QUANTITIES], units: ['Pa', 'Pa', 'W/m^2', '1/(m^2 s)'], rows: bins, mean, ci95, batches: store.batches, batchLengthSteps: store.batchLength },
+  };
+}
+
+function integralEstimate(values: Float64Array, batchSteps: number): IntegralEstimate {
+  if (values.length < 2) return { mean: values.length ? values[0] : NaN, ci95: NaN, standardError: NaN, effectiveSamples: values.length, correlationTimeSteps: NaN, plateauFound: false };
+  const b = blockingAnalysis(values);
+  return {
+    mean: b.mean,
+    ci95: b.ci95,
+    standardError: b.standardError,
+    effectiveSamples: b.effectiveSamples,
+    correlationTimeSteps: b.correlationTime * batchSteps,
+    plateauFound: b.plateauFound,
+  };
+}
+
+export function summarize(sim: Simulation): SimulationResult {
+  const st = sim.state;
+  const plan: Plan = sim.plan;
+  const warnings = [...plan.warnings];
+  const walls: SimulationResult['walls'] = {};
+  let longestCorrelationSteps = 0;
+  for (const name of sim.wallNames) {
+    const entry = {} as Record<WallQuantityName, IntegralEstimate>;
+    for (const q of WALL_QUANTITIES) {
+      const e = integralEstimate(seriesView(sim.series.get(`${name}.${q}`)!), plan.batchSteps);
+      entry[q] = e;
+      if (Number.isFinite(e.correlationTimeSteps)) longestCorrelationSteps = Math.max(longestCorrelationSteps, e.correlationTimeSteps);
+      if (q === 'shearStress' || q === 'heatFlux') {
+        if (!e.plateauFound && sim.sampledSteps > 0) warnings.push(`walls.${name}.${q}: no plateau in the blocking analysis; its error bar may be too small — sample longer`);
+      }
+    }
+    walls[name] = entry;
+  }
+
+  const cellX = new Float64Array(st.cells);
+  const cellY = new Float64Array(st.cells);
+  const dx = st.lengthX / st.cellsX;
+  const dy = st.lengthY / st.cellsY;
+  const identity = new Int32Array(st.cells);
+  const rowOf = new Int32Array(st.cells);
+  for (let c = 0; c < st.cells; c++) {
+    cellX[c] = ((c % st.cellsX) + 0.5) * dx;
+    cellY[c] = (Math.floor(c / st.cellsX) + 0.5) * dy;
+    identity[c] = c;
+    rowOf[c] = Math.floor(c / st.cellsX);
+  }
+  const cells = groupedFields(sim, identity, st.cells, new Float64Array(st.cells).fill(st.cellVolume));
+  const profile = groupedFields(sim, rowOf, st.cellsY, new Float64Array(st.cellsY).fill(st.cellVolume * st.cellsX));
+  const profileY = Float64Array.from({ length: st.cellsY }, (_, r) => (r + 0.5) * dy);
+
+  const wallBins: SimulationResult['wallBins'] = {};
+  for (const name of sim.wallNames) wallBins[name] = wallBinTable(sim, name);
+
+  if (cells.batches > 0 && longestCorrelationSteps > 0 && cells.batchLengthSteps < 10 * longestCorrelationSteps) {
+    warnings.push(
+      `field batches are ${cells.batchLengthSteps} steps long but wall quantities stay correlated for about ${longestCorrelationSteps.toFixed(0)} steps; profile error bars may be too small — sample at least ${Math.ceil((10 * longestCorrelationSteps * 16) / 1000) * 1000} steps`,
+    );
+  }
+  if (cells.batches < 2 && sim.sampledSteps > 0) warnings.push('fewer than 2 complete batches: profile error bars are not available — sample longer');
+
+  const lambda = plan.reference.meanFreePathM;
+  const separation = st.collisionCount > 0 ? st.separationSum / st.collisionCount : NaN;
+  const mcsRatio = separation / lambda;
+  if (mcsRatio > 0.2) warnings.push(`mean collision separation is ${mcsRatio.toFixed(2)} mean free paths; keep it below about 0.2 (more particles per cell or smaller cells)`);
+
+  return {
+    reference: plan.reference,
+    numerics: {
+      cellsX: st.cellsX,
+      cellsY: st.cellsY,
+      cells: st.cells,
+      particles: st.count,
+      moleculesPerParticle: st.moleculesPerParticle,
+      timeStep: st.timeStep,
+      steps: st.step,
+      transientSteps: Math.min(st.step, plan.transientSteps),
+      sampleSteps: sim.sampledSteps,
+      batchSteps: plan.batchSteps,
+      seed: plan.seed,
+      ...plan.ratios,
+      collisionSeparationOverMeanFreePath: mcsRatio,
+      collisionsPerParticlePerStep: st.particleSteps > 0 ? (2 * st.collisionCount) / st.particleSteps : 0,
+    },
+    walls,
+    cellX,
+    cellY,
+    cells,
+    profileY,
+    profile,
+    wallBins,
+    warnings,
+  };
+}

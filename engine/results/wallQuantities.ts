@@ -1,0 +1,76 @@
+/**
+ * Wall quantities from the per-bin momentum and energy sums booked by reflectAtWall.
+ *
+ * Sign conventions (SI, per unit area of the wall):
+ * - shearStress: tangential force per area exerted by the gas on the wall, along +x for the bottom and top sides
+ *   and along +y for the left and right sides;
+ * - normalStress: normal force per area pushing the wall outward (the gas pressure on it, positive);
+ * - heatFlux: energy per area per time from the gas into the wall, in the wall's own frame;
+ * - numberFlux: molecules striking the wall per area per time.
+ */
+import type { SimState } from '../kernel/state';
+import {
+  SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT, SIDE_LEFT, SIDE_BOTTOM, SIDE_RIGHT,
+  SUMS_PER_WALL_BIN, WALL_HITS, WALL_PX, WALL_PY, WALL_ENERGY,
+} from '../kernel/state';
+import { SIDE_NAMES, type SideName } from '../case/schema';
+
+export const WALL_QUANTITIES = ['shearStress', 'normalStress', 'heatFlux', 'numberFlux'] as const;
+export type WallQuantityName = (typeof WALL_QUANTITIES)[number];
+export const WALL_QUANTITY_UNITS: Record<WallQuantityName, string> = {
+  shearStress: 'Pa',
+  normalStress: 'Pa',
+  heatFlux: 'W/m^2',
+  numberFlux: '1/(m^2 s)',
+};
+
+export function sideIndex(name: SideName): number {
+  return SIDE_NAMES.indexOf(name);
+}
+
+export function wallLengthM(st: SimState, side: number): number {
+  return side === SIDE_LEFT || side === SIDE_RIGHT ? st.lengthY : st.lengthX;
+}
+
+/**
+ * The four wall quantities from the 5 sums at sums[o…], gathered over an area (m², unit depth) and a time (s),
+ * written into out[0..3] in WALL_QUANTITIES order.
+ */
+export function wallQuantitiesFromSums(
+  st: SimState, side: number, sums: Float64Array, o: number, areaM2: number, timeS: number, out: Float64Array,
+): void {
+  const scale = st.moleculesPerParticle / (areaM2 * timeS);
+  const normalIsX = side === SIDE_LEFT || side === SIDE_RIGHT;
+  const inward = side === SIDE_LEFT || side === SIDE_BOTTOM ? 1 : -1;
+  const pNormal = normalIsX ? sums[o + WALL_PX] : sums[o + WALL_PY];
+  const pTangential = normalIsX ? sums[o + WALL_PY] : sums[o + WALL_PX];
+  out[0] = pTangential * scale;
+  out[1] = -inward * pNormal * scale;
+  out[2] = sums[o + WALL_ENERGY] * scale;
+  out[3] = sums[o + WALL_HITS] * scale;
+}
+
+const scratch = new Float64Array(4);
+const scratchSums = new Float64Array(SUMS_PER_WALL_BIN);
+
+/** Whole-wall totals of one batch of `steps` steps, keyed `${wall}.${quantity}`. */
+export function wallTotalsOfBatch(
+  sim: { state: SimState; wallNames: readonly SideName[] }, sums: Float64Array, steps: number,
+): [string, number][] {
+  const st = sim.state;
+  const out: [string, number][] = [];
+  for (const name of sim.wallNames) {
+    const side = sideIndex(name);
+    const row = side * SIDE_STRIDE;
+    const first = st.sideTable[row + SIDE_BIN_OFFSET];
+    const bins = st.sideTable[row + SIDE_BIN_COUNT];
+    scratchSums.fill(0);
+    for (let b = 0; b < bins; b++) {
+      const o = (first + b) * SUMS_PER_WALL_BIN;
+      for (let k = 0; k < SUMS_PER_WALL_BIN; k++) scratchSums[k] += sums[o + k];
+    }
+    wallQuantitiesFromSums(st, side, scratchSums, 0, wallLengthM(st, side), steps * st.timeStep, scratch);
+    WALL_QUANTITIES.forEach((q, k) => out.push([`${name}.${q}`, scratch[k]]));
+  }
+  return out;
+}
