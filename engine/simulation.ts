@@ -60,8 +60,8 @@ export function createSimulation(plan: Plan, options: CreateOptions = {}): Simul
   return {
     plan,
     state,
-    cellStore: createBatchStore(state.cells * RAW_CELL_SUMS),
-    wallStore: createBatchStore(state.wallBinTotal * SUMS_PER_WALL_BIN),
+    cellStore: createBatchStore(state.cells * RAW_CELL_SUMS, plan.batchSteps),
+    wallStore: createBatchStore(state.wallBinTotal * SUMS_PER_WALL_BIN, plan.batchSteps),
     series,
     wallNames,
     batchStepsDone: 0,
@@ -105,8 +105,8 @@ function closeBatch(sim: Simulation): void {
   const steps = sim.batchStepsDone;
   const totals = wallTotalsOfBatch(sim, st.wallSums, steps);
   for (const [k, v] of totals) pushSeries(sim.series.get(k)!, v);
-  addToBatches(sim.cellStore, st.cellSums, steps);
-  addToBatches(sim.wallStore, st.wallSums, steps);
+  addToBatches(sim.cellStore, st.cellSums);
+  addToBatches(sim.wallStore, st.wallSums);
   st.cellSums.fill(0);
   st.wallSums.fill(0);
   st.cellSumSteps = 0;

@@ -8,7 +8,7 @@ import type { Plan, ReferenceState } from '../case/plan';
 import type { SideName } from '../case/schema';
 import type { Simulation } from '../simulation';
 import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN, SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT } from '../kernel/state';
-import { totalOf, batchView, type DoublingBatchStore } from '../stats/doublingBatches';
+import { totalOf, batchView, batchSteps, storedSteps, type DoublingBatchStore } from '../stats/doublingBatches';
 import { blockingAnalysis } from '../stats/blocking';
 import { tQuantile975 } from '../stats/studentT';
 import { seriesView } from '../stats/series';
@@ -96,13 +96,13 @@ function groupedFields(sim: Simulation, groupOf: Int32Array, groups: number, vol
   };
   const total = totalOf(store);
   for (let q = 0; q < total.length; q++) total[q] += st.cellSums[q];
-  const totalSteps = store.batches * store.batchLength + store.pendingLength + sim.batchStepsDone;
+  const totalSteps = storedSteps(store) + sim.batchStepsDone;
   const mean = new Float64Array(groups * CELL_FIELD_COUNT);
   const gt = group(total);
   for (let g = 0; g < groups; g++) deriveCellFields(gt, g * RAW_CELL_SUMS, totalSteps, volumes[g], k, mean, g * CELL_FIELD_COUNT);
   const ci95 = batchHalfWidths(store, groups * CELL_FIELD_COUNT, (b, out) => {
     const gb = group(batchView(store, b));
-    for (let g = 0; g < groups; g++) deriveCellFields(gb, g * RAW_CELL_SUMS, store.batchLength, volumes[g], k, out, g * CELL_FIELD_COUNT);
+    for (let g = 0; g < groups; g++) deriveCellFields(gb, g * RAW_CELL_SUMS, batchSteps(store), volumes[g], k, out, g * CELL_FIELD_COUNT);
   });
   return {
     names: CELL_FIELDS.map((f) => f.name),
@@ -111,7 +111,7 @@ function groupedFields(sim: Simulation, groupOf: Int32Array, groups: number, vol
     mean,
     ci95,
     batches: store.batches,
-    batchLengthSteps: store.batchLength,
+    batchLengthSteps: batchSteps(store),
   };
 }
 
@@ -162,14 +162,14 @@ function wallBinTable(sim: Simulation, name: SideName): { position: Float64Array
   };
   const total = totalOf(store);
   for (let q = 0; q < total.length; q++) total[q] += st.wallSums[q];
-  const totalSteps = store.batches * store.batchLength + store.pendingLength + sim.batchStepsDone;
+  const totalSteps = storedSteps(store) + sim.batchStepsDone;
   const mean = new Float64Array(bins * nq);
   if (totalSteps > 0) fill(total, totalSteps, mean);
-  const ci95 = batchHalfWidths(store, bins * nq, (b, out) => fill(batchView(store, b), store.batchLength, out));
+  const ci95 = batchHalfWidths(store, bins * nq, (b, out) => fill(batchView(store, b), batchSteps(store), out));
   const position = Float64Array.from({ length: bins }, (_, b) => (b + 0.5) * binArea);
   return {
     position,
-    table: { names: [...WALL_QUANTITIES], units: ['Pa', 'Pa', 'W/m^2', '1/(m^2 s)'], rows: bins, mean, ci95, batches: store.batches, batchLengthSteps: store.batchLength },
+    table: { names: [...WALL_QUANTITIES], units: ['Pa', 'Pa', 'W/m^2', '1/(m^2 s)'], rows: bins, mean, ci95, batches: store.batches, batchLengthSteps: batchSteps(store) },
   };
 }
 
@@ -184,6 +184,19 @@ function integralEstimate(values: Float64Array, batchSteps: number): IntegralEst
     correlationTimeSteps: b.correlationTime * batchSteps,
     plateauFound: b.plateauFound,
   };
+}
+
+/**
+ * Fields averaged over a set of cells (e.g. the whole gap: in steady planar Couette and Fourier flow the shear stress
+ * and heat flux are uniform across it, and averaging every particle gives a far less noisy estimate than wall hits).
+ */
+export function averageOverCells(sim: Simulation, cellIndices: ArrayLike<number>): FieldTable {
+  const st = sim.state;
+  const groupOf = new Int32Array(st.cells).fill(1);
+  for (let k = 0; k < cellIndices.length; k++) groupOf[cellIndices[k]] = 0;
+  const table = groupedFields(sim, groupOf, 2, Float64Array.of(st.cellVolume * cellIndices.length, st.cellVolume * (st.cells - cellIndices.length)));
+  const f = CELL_FIELD_COUNT;
+  return { ...table, rows: 1, mean: table.mean.slice(0, f), ci95: table.ci95.slice(0, f) };
 }
 
 export function summarize(sim: Simulation): SimulationResult {

@@ -17,16 +17,19 @@ export interface DoublingBatchStore {
   /** Complete batches, batch-major: values[b * width + k]. */
   values: Float64Array;
   batches: number;
-  /** Base units (steps) per complete batch. */
+  /** Steps in one base unit (one call of addToBatches). */
+  readonly unitSteps: number;
+  /** Base units per complete batch. */
   batchLength: number;
   /** The batch being filled, and how many base units it holds. */
   pending: Float64Array;
   pendingLength: number;
 }
 
-export function createBatchStore(width: number): DoublingBatchStore {
+export function createBatchStore(width: number, unitSteps: number): DoublingBatchStore {
   return {
     width,
+    unitSteps,
     values: new Float64Array(FIELD_BATCH_CAPACITY * width),
     batches: 0,
     batchLength: 1,
@@ -35,12 +38,15 @@ export function createBatchStore(width: number): DoublingBatchStore {
   };
 }
 
-/** Adds `units` base units (steps) of sums to the pending batch, closing it when it reaches the batch length. */
-export function addToBatches(store: DoublingBatchStore, sums: Float64Array, units: number): void {
+/**
+ * Adds one base unit (unitSteps steps) of sums to the pending batch, closing it when it reaches the batch length.
+ * Counting whole units keeps every complete batch exactly batchLength × unitSteps steps long.
+ */
+export function addToBatches(store: DoublingBatchStore, sums: Float64Array): void {
   const p = store.pending;
   const w = store.width;
   for (let k = 0; k < w; k++) p[k] += sums[k];
-  store.pendingLength += units;
+  store.pendingLength += 1;
   if (store.pendingLength < store.batchLength) return;
   store.values.set(p, store.batches * w);
   store.batches++;
@@ -73,6 +79,16 @@ export function totalOf(store: DoublingBatchStore): Float64Array {
     for (let k = 0; k < w; k++) out[k] += store.values[o + k];
   }
   return out;
+}
+
+/** Steps in each complete batch. */
+export function batchSteps(store: DoublingBatchStore): number {
+  return store.batchLength * store.unitSteps;
+}
+
+/** Steps in all complete batches and the pending one. */
+export function storedSteps(store: DoublingBatchStore): number {
+  return (store.batches * store.batchLength + store.pendingLength) * store.unitSteps;
 }
 
 /** View of complete batch b. */

@@ -1,0 +1,48 @@
+/**
+ * Drives a simulation through its transient and sampling steps in chunks of about `targetChunkMs` of work, yielding
+ * to the event loop between chunks so that Ctrl-C (SIGINT) and progress output are handled while it runs.
+ */
+import { advance, type Simulation } from '../engine/simulation';
+
+export interface ChunkOptions {
+  /** Wall-clock work per chunk, ms (default 250). */
+  readonly targetChunkMs?: number;
+  readonly now?: () => number;
+  readonly onProgress?: (stepsDone: number) => void;
+  /** Checked between chunks; true stops the run early. */
+  readonly shouldStop?: () => boolean;
+}
+
+export interface ChunkOutcome {
+  readonly completed: boolean;
+  readonly stepsDone: number;
+  readonly wallSeconds: number;
+}
+
+const yieldToEventLoop = () => new Promise<void>((resolve) => setImmediate(resolve));
+
+/** Advances `sim` by transientSteps + sampleSteps of its plan, or until shouldStop() says so. */
+export async function advanceInChunks(sim: Simulation, o: ChunkOptions = {}): Promise<ChunkOutcome> {
+  const now = o.now ?? (() => performance.now());
+  const target = o.targetChunkMs ?? 250;
+  const transient = sim.plan.transientSteps;
+  const total = transient + sim.plan.sampleSteps;
+  const start = now();
+  let done = 0;
+  let chunk = 1; // grows to about `target` ms of work after the first few chunks
+  while (done < total) {
+    if (o.shouldStop?.()) return { completed: false, stepsDone: done, wallSeconds: (now() - start) / 1000 };
+    // Chunks end at the transient/sampling boundary so the progress line shows the phase change on time.
+    const end = done < transient ? transient : total;
+    const n = Math.min(chunk, end - done);
+    const t0 = now();
+    advance(sim, n);
+    const ms = now() - t0;
+    done += n;
+    // Aim for `target` ms per chunk; grow by at most 4× per chunk so one slow estimate cannot overshoot far.
+    chunk = Math.max(1, Math.min(4 * n, Math.round((n * target) / Math.max(ms, 0.01))));
+    o.onProgress?.(done);
+    await yieldToEventLoop();
+  }
+  return { completed: true, stepsDone: done, wallSeconds: (now() - start) / 1000 };
+}

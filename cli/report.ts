@@ -1,0 +1,57 @@
+/** Human-readable reports: a plan (for `check` and before `run`) and the short summary after a run. */
+import type { Plan } from '../engine/case/plan';
+import type { SimulationResult } from '../engine/results/summarize';
+import type { Performance } from '../engine/results/exports';
+import { sig, plusMinus, duration, bytes, table } from './format';
+
+/** Reference state, grid, time step, particles, schedule and advisor ratios of a plan. */
+export function planReport(p: Plan): string {
+  const r = p.reference;
+  const g = p.grid;
+  const a = p.ratios;
+  const total = p.transientSteps + p.sampleSteps;
+  return [
+    `case "${p.caseData.name}": valid`,
+    `gas: ${p.gas.name}`,
+    'reference state:',
+    table([
+      ['pressure', `${sig(r.pressurePa)} Pa`],
+      ['temperature', `${sig(r.temperatureK)} K`],
+      ['number density', `${sig(r.numberDensityPerM3)} 1/m^3`],
+      ['viscosity', `${sig(r.viscosityPaS)} Pa s`],
+      ['most probable speed', `${sig(r.mostProbableSpeedMPerS)} m/s`],
+      ['mean free path', `${sig(r.meanFreePathM)} m  (viscosity-based, (μ/p)·sqrt(πkT/(2m)))`],
+      ['length scale', `${sig(r.lengthScaleM)} m`],
+      ['Knudsen number', sig(r.knudsen)],
+      ['rarefaction δ', sig(r.rarefaction)],
+      ['mean collision time', `${sig(r.meanCollisionTimeS)} s`],
+    ]),
+    'numerics:',
+    table([
+      ['cells', `${g.cellsX} × ${g.cellsY}, each ${sig(g.cellSizeXM)} m × ${sig(g.cellSizeYM)} m`],
+      ['time step', `${sig(p.timeStepS)} s`],
+      ['particles', `${p.initialParticles} (${sig(p.particlesPerCell)} per cell), ${sig(p.moleculesPerParticle)} molecules each`],
+      ['steps', `${p.transientSteps} transient + ${p.sampleSteps} sampled = ${total}`],
+      ['memory', `about ${bytes(p.memoryBytesEstimate)}`],
+      ['seed', String(p.seed)],
+    ]),
+    'advisor:',
+    table([
+      ['cell size / mean free path', `${sig(a.cellSizeOverMeanFreePath, 3)}  (keep below about 1/3)`],
+      ['time step / mean collision time', `${sig(a.timeStepOverCollisionTime, 3)}  (keep below about 1/4)`],
+      ['time step / cell transit time', `${sig(a.timeStepOverCellTransitTime, 3)}  (keep below about 1/4)`],
+      ['particles per cell', `${sig(a.particlesPerCell, 3)}  (about 20 or more)`],
+    ]),
+  ].join('\n');
+}
+
+/** Wall shear stress and heat flux with 95 % half-widths, and the run's speed. */
+export function runSummary(result: SimulationResult, performance: Performance, outDir: string): string {
+  const lines = [`finished in ${duration(performance.wallSeconds)}: ${sig(performance.particleSteps, 3)} particle steps, ${sig(performance.particleStepsPerSecond, 3)} per second`];
+  for (const [wall, e] of Object.entries(result.walls)) {
+    if (!e) continue;
+    lines.push(`  ${wall} wall: shear stress ${plusMinus(e.shearStress.mean, e.shearStress.ci95, 'Pa')}, heat flux ${plusMinus(e.heatFlux.mean, e.heatFlux.ci95, 'W/m^2')}`);
+  }
+  lines.push(`results in ${outDir}`);
+  return lines.join('\n');
+}

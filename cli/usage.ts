@@ -1,0 +1,48 @@
+/** Usage texts of the `tenuis` command and its subcommands. */
+
+export const PRESET_USAGE = `Usage:
+  tenuis preset --list                      list the presets
+  tenuis preset NAME [--set key=value ...]  print the complete case file of a preset (JSON, SI units)
+  tenuis preset NAME --help                 the preset's parameters with units and defaults
+
+Values may carry units: --set gap=2mm --set temperature=25C --set knudsen=0.5`;
+
+export const RUN_USAGE = `Usage:
+  tenuis run CASE.json --out DIR [--seed N] [--quiet]
+
+Runs the case and writes summary.json, profiles.csv, fields.csv, surfaces.csv and case.json (the case as run,
+complete and explicit) into DIR. The files appear only when the run succeeds: an error or Ctrl-C leaves DIR as it was.
+  --out, -o DIR   output folder (created if needed; files of the same names in it are replaced)
+  --seed N        random seed, overriding the case's
+  --quiet, -q     no progress line and no summary (warnings and errors are still printed)`;
+
+export const CHECK_USAGE = `Usage:
+  tenuis check CASE.json
+
+Validates the case and plans it: prints the reference state, grid, time step, particles and the advisor's ratios.
+Exit code 0 when the case is valid and can run, 1 otherwise.`;
+
+export const SCHEMA_USAGE = `Usage:
+  tenuis schema
+
+Prints the JSON Schema (draft 2020-12) of the case file.`;
+
+export const MAIN_USAGE = `tenuis: rarefied gas flows by direct simulation Monte Carlo, from the command line
+
+Usage:
+  tenuis preset NAME [--set key=value ...]   print a case file built from a preset (--list, NAME --help)
+  tenuis check CASE.json                     validate a case and show its plan
+  tenuis run CASE.json --out DIR [--seed N] [--quiet]
+                                             run a case and write the results into DIR
+  tenuis schema                              print the case file's JSON Schema
+  tenuis help [COMMAND]                      this text, or a command's
+
+Case files are JSON with SI units; the field names carry the unit (pressurePa, lengthYM).
+Exit codes: 0 success, 1 bad input, 2 wrong usage, 130 interrupted.`;
+
+export const COMMAND_USAGE: Readonly<Record<string, string>> = {
+  preset: PRESET_USAGE,
+  run: RUN_USAGE,
+  check: CHECK_USAGE,
+  schema: SCHEMA_USAGE,
+};

@@ -1,0 +1,240 @@
+/**
+ * Result exports as strings: summary.json and three CSV tables (profiles, cell fields, wall bins). Pure, so the
+ * command line writes them to disk and the browser offers them as downloads from the same code.
+ *
+ * CSV dialect: RFC 4180 except for the line end, which is LF ("\n") rather than CRLF — every spreadsheet and CSV
+ * library reads both, and LF keeps files diff-friendly in git. A field is quoted when it holds a comma, a double
+ * quote, CR or LF (quotes doubled inside). Numbers are written as JavaScript's shortest round-trip decimal
+ * (String(x): parsing the text gives back the same double), never quoted or escaped; a value that is not finite
+ * (NaN: no information, e.g. an empty cell or fewer than two batches for a ci95) is an empty field. Text fields that
+ * a spreadsheet would evaluate as a formula (starting with = + - @, tab or CR) get a leading apostrophe (OWASP,
+ * "CSV Injection"; common practice). Headers carry the SI unit in brackets: `temperature [K]`,
+ * `temperature ci95 [K]`.
+ */
+import type { ReferenceState } from '../case/plan';
+import type { SideName } from '../case/schema';
+import type { SimulationResult, FieldTable, IntegralEstimate } from './summarize';
+import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, type WallQuantityName } from './wallQuantities';
+
+export const CSV_LINE_END = '\n';
+export const SUMMARY_FORMAT = 'tenuis-summary';
+export const SUMMARY_FORMAT_VERSION = 1;
+
+type Numerics = SimulationResult['numerics'];
+interface ExportName {
+  readonly name: string;
+  readonly unit: string;
+}
+
+/**
+ * What summary.json calls each field of the reference state and numerics, with its SI unit. Typed over every key, so
+ * a new field in ReferenceState or SimulationResult['numerics'] fails to compile until someone names it here.
+ */
+const REFERENCE_EXPORT: { readonly [K in keyof ReferenceState]: ExportName } = {
+  pressurePa: { name: 'pressure', unit: 'Pa' },
+  temperatureK: { name: 'temperature', unit: 'K' },
+  numberDensityPerM3: { name: 'numberDensity', unit: '1/m^3' },
+  massDensityKgPerM3: { name: 'massDensity', unit: 'kg/m^3' },
+  viscosityPaS: { name: 'viscosity', unit: 'Pa s' },
+  mostProbableSpeedMPerS: { name: 'mostProbableSpeed', unit: 'm/s' },
+  meanFreePathM: { name: 'meanFreePath', unit: 'm' },
+  knudsen: { name: 'knudsen', unit: '1' },
+  rarefaction: { name: 'rarefaction', unit: '1' },
+  lengthScaleM: { name: 'lengthScale', unit: 'm' },
+  meanCollisionTimeS: { name: 'meanCollisionTime', unit: 's' },
+};
+
+const NUMERICS_EXPORT: { readonly [K in keyof Numerics]: ExportName } = {
+  cellsX: { name: 'cellsX', unit: '1' },
+  cellsY: { name: 'cellsY', unit: '1' },
+  cells: { name: 'cells', unit: '1' },
+  particles: { name: 'particles', unit: '1' },
+  moleculesPerParticle: { name: 'moleculesPerParticle', unit: '1' },
+  timeStep: { name: 'timeStep', unit: 's' },
+  steps: { name: 'steps', unit: 'step' },
+  transientSteps: { name: 'transientSteps', unit: 'step' },
+  sampleSteps: { name: 'sampleSteps', unit: 'step' },
+  batchSteps: { name: 'batchSteps', unit: 'step' },
+  seed: { name: 'seed', unit: '1' },
+  cellSizeOverMeanFreePath: { name: 'cellSizeOverMeanFreePath', unit: '1' },
+  timeStepOverCollisionTime: { name: 'timeStepOverCollisionTime', unit: '1' },
+  timeStepOverCellTransitTime: { name: 'timeStepOverCellTransitTime', unit: '1' },
+  particlesPerCell: { name: 'particlesPerCell', unit: '1' },
+  collisionSeparationOverMeanFreePath: { name: 'collisionSeparationOverMeanFreePath', unit: '1' },
+  collisionsPerParticlePerStep: { name: 'collisionsPerParticlePerStep', unit: '1/step' },
+};
+
+export interface Performance {
+  /** Wall-clock time of the run, s. */
+  readonly wallSeconds: number;
+  /** Particle moves done (particles × steps, summed over steps). */
+  readonly particleSteps: number;
+  readonly particleStepsPerSecond: number;
+}
+
+const PERFORMANCE_UNITS: { readonly [K in keyof Performance]: string } = {
+  wallSeconds: 's',
+  particleSteps: '1',
+  particleStepsPerSecond: '1/s',
+};
+
+/** JSON has no NaN or Infinity: a value that is not finite is written as null ("not available"). */
+export type JsonNumber = number | null;
+
+export interface WallEstimateJson {
+  mean: JsonNumber;
+  ci95: JsonNumber;
+  effectiveSamples: JsonNumber;
+  correlationTimeSteps: JsonNumber;
+  /** False when the blocking analysis found no plateau: ci95 is then a lower bound. */
+  plateauFound: boolean;
+}
+
+export interface SummaryJson {
+  format: typeof SUMMARY_FORMAT;
+  formatVersion: typeof SUMMARY_FORMAT_VERSION;
+  caseName: string;
+  reference: Record<string, JsonNumber>;
+  numerics: Record<string, JsonNumber>;
+  walls: Partial<Record<SideName, Record<WallQuantityName, WallEstimateJson>>>;
+  /** SI unit of every quantity named in this file; a wall estimate's mean and ci95 share its quantity's unit. */
+  units: Record<string, string>;
+  warnings: string[];
+  performance: Record<keyof Performance, JsonNumber>;
+}
+
+function jsonNumber(x: number): JsonNumber {
+  return Number.isFinite(x) ? x : null;
+}
+
+function wallEstimateJson(e: IntegralEstimate): WallEstimateJson {
+  return {
+    mean: jsonNumber(e.mean),
+    ci95: jsonNumber(e.ci95),
+    effectiveSamples: jsonNumber(e.effectiveSamples),
+    correlationTimeSteps: jsonNumber(e.correlationTimeSteps),
+    plateauFound: e.plateauFound,
+  };
+}
+
+/** The summary of a run as a JSON-ready object (no NaN anywhere: see JsonNumber). */
+export function summaryJson(result: SimulationResult, extra: { performance: Performance; caseName: string }): SummaryJson {
+  const units: Record<string, string> = {};
+  const reference: Record<string, JsonNumber> = {};
+  for (const key of Object.keys(REFERENCE_EXPORT) as (keyof ReferenceState)[]) {
+    const { name, unit } = REFERENCE_EXPORT[key];
+    reference[name] = jsonNumber(result.reference[key]);
+    units[name] = unit;
+  }
+  const numerics: Record<string, JsonNumber> = {};
+  for (const key of Object.keys(NUMERICS_EXPORT) as (keyof Numerics)[]) {
+    const { name, unit } = NUMERICS_EXPORT[key];
+    numerics[name] = jsonNumber(result.numerics[key]);
+    units[name] = unit;
+  }
+  const walls: SummaryJson['walls'] = {};
+  for (const [side, estimates] of Object.entries(result.walls) as [SideName, Record<WallQuantityName, IntegralEstimate>][]) {
+    const entry = {} as Record<WallQuantityName, WallEstimateJson>;
+    for (const q of WALL_QUANTITIES) entry[q] = wallEstimateJson(estimates[q]);
+    walls[side] = entry;
+  }
+  for (const q of WALL_QUANTITIES) units[q] = WALL_QUANTITY_UNITS[q];
+  units.effectiveSamples = '1';
+  units.correlationTimeSteps = 'step';
+  const performance = {} as Record<keyof Performance, JsonNumber>;
+  for (const key of Object.keys(PERFORMANCE_UNITS) as (keyof Performance)[]) {
+    performance[key] = jsonNumber(extra.performance[key]);
+    units[key] = PERFORMANCE_UNITS[key];
+  }
+  return {
+    format: SUMMARY_FORMAT,
+    formatVersion: SUMMARY_FORMAT_VERSION,
+    caseName: extra.caseName,
+    reference,
+    numerics,
+    walls,
+    units,
+    warnings: [...result.warnings],
+    performance,
+  };
+}
+
+/** summary.json's text: two-space indented, LF line ends, a final newline. */
+export function summaryJsonText(result: SimulationResult, extra: { performance: Performance; caseName: string }): string {
+  return `${JSON.stringify(summaryJson(result, extra), null, 2)}\n`;
+}
+
+// ─── CSV ─────────────────────────────────────────────────────────────────────────────────────────────────────────
+
+const FORMULA_START = /^[=+\-@\t\r]/;
+const NEEDS_QUOTES = /[",\r\n]/;
+
+/** One CSV field: numbers as shortest round-trip text (empty if not finite); text escaped and quoted as needed. */
+export function csvField(value: number | string): string {
+  if (typeof value === 'number') return Number.isFinite(value) ? String(value) : '';
+  const text = FORMULA_START.test(value) ? `'${value}` : value;
+  return NEEDS_QUOTES.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+/** A whole CSV document: header row, data rows, LF after every row. */
+export function csvDocument(header: readonly string[], rows: readonly (readonly (number | string)[])[]): string {
+  const lines = [header, ...rows].map((r) => r.map(csvField).join(','));
+  return lines.join(CSV_LINE_END) + CSV_LINE_END;
+}
+
+/** `name [unit]` and `name ci95 [unit]` for each field of a table. */
+function fieldHeaders(t: FieldTable): string[] {
+  return t.names.flatMap((name, f) => [`${name} [${t.units[f]}]`, `${name} ci95 [${t.units[f]}]`]);
+}
+
+/** Row `r` of a table as mean, ci95 pairs in column order. */
+function fieldValues(t: FieldTable, r: number): number[] {
+  const width = t.names.length;
+  const out: number[] = [];
+  for (let f = 0; f < width; f++) out.push(t.mean[r * width + f], t.ci95[r * width + f]);
+  return out;
+}
+
+/** profiles.csv: one row per row of cells (the profile across the gap), at result.profileY. */
+export function profilesCsv(result: SimulationResult): string {
+  const t = result.profile;
+  const rows: (number | string)[][] = [];
+  for (let r = 0; r < t.rows; r++) rows.push([result.profileY[r], ...fieldValues(t, r)]);
+  return csvDocument(['y [m]', ...fieldHeaders(t)], rows);
+}
+
+/** fields.csv: one row per cell (cell index ix + cellsX·iy, so x varies fastest), at the cell centre. */
+export function fieldsCsv(result: SimulationResult): string {
+  const t = result.cells;
+  const rows: (number | string)[][] = [];
+  for (let c = 0; c < t.rows; c++) rows.push([result.cellX[c], result.cellY[c], ...fieldValues(t, c)]);
+  return csvDocument(['x [m]', 'y [m]', ...fieldHeaders(t)], rows);
+}
+
+/**
+ * surfaces.csv: one row per wall bin. `position [m]` is the bin centre measured along the wall from its low end:
+ * along x for the bottom and top walls, along y for the left and right walls.
+ */
+export function surfacesCsv(result: SimulationResult): string {
+  let header: string[] | undefined;
+  const rows: (number | string)[][] = [];
+  for (const [wall, bins] of Object.entries(result.wallBins) as [SideName, { position: Float64Array; table: FieldTable }][]) {
+    header ??= ['wall', 'position [m]', ...fieldHeaders(bins.table)];
+    for (let b = 0; b < bins.table.rows; b++) rows.push([wall, bins.position[b], ...fieldValues(bins.table, b)]);
+  }
+  header ??= [
+    'wall', 'position [m]',
+    ...WALL_QUANTITIES.flatMap((q) => [`${q} [${WALL_QUANTITY_UNITS[q]}]`, `${q} ci95 [${WALL_QUANTITY_UNITS[q]}]`]),
+  ];
+  return csvDocument(header, rows);
+}
+
+/** The four result files of a run by file name, in the order they are written. */
+export function resultFiles(result: SimulationResult, extra: { performance: Performance; caseName: string }): Record<string, string> {
+  return {
+    'summary.json': summaryJsonText(result, extra),
+    'profiles.csv': profilesCsv(result),
+    'fields.csv': fieldsCsv(result),
+    'surfaces.csv': surfacesCsv(result),
+  };
+}

@@ -1,0 +1,35 @@
+/** Runs a planar gap preset (couette or fourier) to completion with a fixed seed and returns what the tests read. */
+import { buildPreset } from '../../engine/case/presets';
+import { parseCase } from '../../engine/case/schema';
+import { plan as planCase, type Plan } from '../../engine/case/plan';
+import { createSimulation, advance, type Simulation } from '../../engine/simulation';
+import { summarize, averageOverCells, type SimulationResult, type FieldTable } from '../../engine/results/summarize';
+
+export interface GapRun {
+  plan: Plan;
+  sim: Simulation;
+  result: SimulationResult;
+  /** Fields averaged over every cell of the gap, with batch-means half-widths. */
+  gapAverage: FieldTable;
+}
+
+/** Rarefaction parameter δ = pH/(μ v0) → Knudsen number Kn = λ/H = sqrt(π)/(2δ) (REFERENCES notation). */
+export const knudsenOf = (delta: number) => Math.sqrt(Math.PI) / (2 * delta);
+
+export function runGapPreset(name: 'couette' | 'fourier', overrides: Record<string, string>): GapRun {
+  const parsed = parseCase(buildPreset(name, overrides));
+  if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
+  const p = planCase(parsed.value);
+  if (!p.ok) throw new Error(p.errors.join('\n'));
+  const sim = createSimulation(p.plan);
+  advance(sim, p.plan.transientSteps + p.plan.sampleSteps);
+  const all = Array.from({ length: sim.state.cells }, (_, c) => c);
+  return { plan: p.plan, sim, result: summarize(sim), gapAverage: averageOverCells(sim, all) };
+}
+
+export function field(table: FieldTable, name: string, row = 0): { mean: number; ci95: number } {
+  const k = table.names.indexOf(name);
+  if (k < 0) throw new Error(`no field ${name}`);
+  const f = table.names.length;
+  return { mean: table.mean[row * f + k], ci95: table.ci95[row * f + k] };
+}
