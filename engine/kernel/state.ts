@@ -62,10 +62,11 @@ export interface SimState {
   vy: Float64Array;
   vz: Float64Array;
   erot: Float64Array;
+  /** Sub-cell keys, written by move and read by index; the reorder does not carry them, so they are stale after it. */
   key: Int32Array;
   /** Second set of particle arrays, the target of the periodic reorder into cell order. */
-  spare: { x: Float64Array; y: Float64Array; vx: Float64Array; vy: Float64Array; vz: Float64Array; erot: Float64Array; key: Int32Array };
-  /** Particle indices sorted by key (filled by the index step). */
+  spare: { x: Float64Array; y: Float64Array; vx: Float64Array; vy: Float64Array; vz: Float64Array; erot: Float64Array };
+  /** Particle indices sorted by key (filled by the index step; the identity right after a reorder). */
   order: Int32Array;
   /** keyStart[k] .. keyStart[k+1] is key k's range in `order`; length keys + 1. */
   keyStart: Int32Array;
@@ -78,6 +79,16 @@ export interface SimState {
   readonly cells: number;
   readonly subcellsPerSide: number;
   readonly subcellsPerCell: number;
+  /**
+   * Sub-cell columns and rows per metre, (cells·S)/L: floor(x · subcolumnsPerM) is the global sub-cell column.
+   * columnKey[gx] + rowKey[gy] is the key of that sub-cell, so the move loop needs two truncations and two reads
+   * of small, always-cached tables instead of four truncations and four clamps. Each table has one extra entry
+   * (a copy of the last) for a position that rounds up onto the far side.
+   */
+  readonly subcolumnsPerM: number;
+  readonly subrowsPerM: number;
+  readonly columnKey: Int32Array;
+  readonly rowKey: Int32Array;
   readonly lengthX: number;
   readonly lengthY: number;
   readonly cellVolume: number;
@@ -142,7 +153,26 @@ function sideRow(plan: Plan, side: (typeof SIDE_NAMES)[number], binOffset: numbe
   return row;
 }
 
-function particleArrays(capacity: number) {
+/**
+ * Key tables (see SimState.columnKey): column gx of nx·s lies in cell column floor(gx/s), sub-column gx mod s;
+ * row gy likewise, with the cell row weighted by nx·S and the sub-row by s.
+ */
+function keyTables(nx: number, ny: number, s: number): { columnKey: Int32Array; rowKey: Int32Array } {
+  const subcells = s * s;
+  const columnKey = new Int32Array(nx * s + 1);
+  const rowKey = new Int32Array(ny * s + 1);
+  for (let g = 0; g <= nx * s; g++) {
+    const gx = Math.min(g, nx * s - 1);
+    columnKey[g] = Math.floor(gx / s) * subcells + (gx % s);
+  }
+  for (let g = 0; g <= ny * s; g++) {
+    const gy = Math.min(g, ny * s - 1);
+    rowKey[g] = Math.floor(gy / s) * nx * subcells + (gy % s) * s;
+  }
+  return { columnKey, rowKey };
+}
+
+function spareArrays(capacity: number) {
   return {
     x: new Float64Array(capacity),
     y: new Float64Array(capacity),
@@ -150,8 +180,11 @@ function particleArrays(capacity: number) {
     vy: new Float64Array(capacity),
     vz: new Float64Array(capacity),
     erot: new Float64Array(capacity),
-    key: new Int32Array(capacity),
   };
+}
+
+function particleArrays(capacity: number) {
+  return { ...spareArrays(capacity), key: new Int32Array(capacity) };
 }
 
 export const RAW_CELL_SUMS = 15;
@@ -178,7 +211,7 @@ export function createState(plan: Plan, stream = 0): SimState {
     count: 0,
     capacity,
     ...main,
-    spare: particleArrays(capacity),
+    spare: spareArrays(capacity),
     order: new Int32Array(capacity),
     keyStart: new Int32Array(cells * subcellsPerCell + 1),
     keyCount: new Int32Array(cells * subcellsPerCell),
@@ -188,6 +221,9 @@ export function createState(plan: Plan, stream = 0): SimState {
     cells,
     subcellsPerSide: g.subcellsPerCellSide,
     subcellsPerCell,
+    subcolumnsPerM: (g.cellsX * g.subcellsPerCellSide) / g.lengthXM,
+    subrowsPerM: (g.cellsY * g.subcellsPerCellSide) / g.lengthYM,
+    ...keyTables(g.cellsX, g.cellsY, g.subcellsPerCellSide),
     lengthX: g.lengthXM,
     lengthY: g.lengthYM,
     cellVolume: g.cellVolumeM3,
@@ -268,7 +304,7 @@ export function growParticles(st: SimState, capacity: number): void {
   st.vz = grow(st.vz, f64);
   st.erot = grow(st.erot, f64);
   st.key = grow(st.key, i32);
-  st.spare = particleArrays(capacity);
+  st.spare = spareArrays(capacity);
   st.order = new Int32Array(capacity);
   st.boundaryList = new Int32Array(capacity);
   st.capacity = capacity;
