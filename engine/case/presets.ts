@@ -77,7 +77,7 @@ const numericsParameters: readonly PresetParameter[] = [
   { name: 'cellsY', kind: 'count', unitShown: '', default: null, min: 1, description: 'cells across the gap; default max(20, ceil(3/Kn))' },
   { name: 'particlesPerCell', kind: 'count', unitShown: '', default: null, min: 1, description: 'simulated particles per cell at the start; default 100' },
   { name: 'transientSteps', kind: 'count', unitShown: '', default: null, min: 0, description: 'steps before sampling starts; default chosen by the planner' },
-  { name: 'sampleSteps', kind: 'count', unitShown: '', default: null, min: 1, description: 'sampled steps; default about 8e8 particle-steps' worth (8e8 / (cellsY × particlesPerCell)), between 20000 and 400000' },
+  { name: 'sampleSteps', kind: 'count', unitShown: '', default: null, min: 1, description: 'sampled steps; default about 8e8 particle-steps of sampling (8e8 / (cellsY × particlesPerCell)), between 20000 and 400000' },
   { name: 'seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
 ];
 
