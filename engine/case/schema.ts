@@ -6,10 +6,10 @@
  * command line), never here. Validation happens once, here; everything downstream trusts a parsed `Case`.
  */
 import { z } from 'zod';
+import { SPECIES_IDS } from '../gas/species';
 
 export const CASE_SCHEMA_VERSION = 1;
 
-const SPECIES_IDS = ['H2', 'He', 'Ne', 'Ar', 'Kr', 'Xe', 'N2', 'O2', 'air', 'CO2', 'CH4'] as const;
 export const COLLISION_MODELS = ['HS', 'VHS', 'VSS'] as const;
 export const WALL_MODELS = ['diffuse', 'specular', 'maxwell', 'cercignaniLampis'] as const;
 export const SIDE_NAMES = ['left', 'right', 'bottom', 'top'] as const;

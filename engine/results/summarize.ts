@@ -13,7 +13,7 @@ import { blockingAnalysis } from '../stats/blocking';
 import { tQuantile975 } from '../stats/studentT';
 import { seriesView } from '../stats/series';
 import { CELL_FIELDS, CELL_FIELD_COUNT, deriveCellFields, type CellFieldConstants } from './cellFields';
-import { WALL_QUANTITIES, wallQuantitiesFromSums, sideIndex, wallLengthM, type WallQuantityName } from './wallQuantities';
+import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, wallQuantitiesFromSums, sideIndex, wallLengthM, type WallQuantityName } from './wallQuantities';
 
 export interface Estimate {
   mean: number;
@@ -169,7 +169,7 @@ function wallBinTable(sim: Simulation, name: SideName): { position: Float64Array
   const position = Float64Array.from({ length: bins }, (_, b) => (b + 0.5) * binArea);
   return {
     position,
-    table: { names: [...WALL_QUANTITIES], units: ['Pa', 'Pa', 'W/m^2', '1/(m^2 s)'], rows: bins, mean, ci95, batches: store.batches, batchLengthSteps: batchSteps(store) },
+    table: { names: [...WALL_QUANTITIES], units: WALL_QUANTITIES.map((q) => WALL_QUANTITY_UNITS[q]), rows: bins, mean, ci95, batches: store.batches, batchLengthSteps: batchSteps(store) },
   };
 }
 
