@@ -206,8 +206,12 @@ export function plan(c: Case): PlanResult {
   const length = Math.max(lx, ly);
   const relaxTime = Math.max(10 * length / ref.mostProbableSpeedMPerS, (0.7 * length * length * ref.massDensityKgPerM3) / ref.viscosityPaS);
   const transientSteps = c.sampling.transientSteps ?? Math.ceil(relaxTime / timeStepS);
-  const sampleSteps = c.sampling.sampleSteps ?? Math.max(2000, 4 * transientSteps);
-  const batchSteps = Math.max(1, Math.ceil(sampleSteps / 8192));
+  const requestedSampleSteps = c.sampling.sampleSteps ?? Math.max(2000, 4 * transientSteps);
+  // At least 10 steps per base batch: closing a batch touches every cell, and consecutive steps are strongly
+  // correlated anyway, so finer batches add cost but no information to the blocking analysis.
+  const batchSteps = Math.max(10, Math.ceil(requestedSampleSteps / 8192));
+  // Whole batches only, so every sampled step reaches the integral-quantity series.
+  const sampleSteps = Math.ceil(requestedSampleSteps / batchSteps) * batchSteps;
   const wallBins = {
     left: c.sampling.wallBins ?? cellsY,
     right: c.sampling.wallBins ?? cellsY,

@@ -1,7 +1,8 @@
 /**
  * Per-cell raw moment sums, added every sampling step through the cell index with local accumulators (performance
  * guide, item 3). Everything a cell reports — density, velocity, temperatures, pressure tensor, heat flux — is a
- * function of these 15 sums (see results/cellFields.ts).
+ * function of these 15 sums (see results/cellFields.ts). advance() adds them inside the collision pass, cell by cell
+ * (collideParticles with sample = true, which calls sampleCell); sampleCells is the same thing as a pass of its own.
  */
 import { type SimState, RAW_CELL_SUMS } from './state';
 
