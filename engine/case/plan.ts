@@ -4,7 +4,7 @@
  * on every keystroke.
  */
 import type { Case, SideName, BoundarySpec } from './schema';
-import { SIDE_NAMES } from './schema';
+import { SIDE_NAMES, parseCase } from './schema';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import {
   type MolecularModel,
@@ -260,4 +260,10 @@ export function plan(c: Case): PlanResult {
       seed: c.seed,
     },
   };
+}
+
+/** Validates untrusted case JSON and plans it in one go: the errors of whichever stage refused it. */
+export function planFromInput(input: unknown): PlanResult {
+  const parsed = parseCase(input);
+  return parsed.ok ? plan(parsed.value) : { ok: false, errors: parsed.errors };
 }

@@ -1,8 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { parseCase } from '../../engine/case/schema';
-import { plan } from '../../engine/case/plan';
 import { buildPreset } from '../../engine/case/presets';
-import { advance, createSimulation } from '../../engine/simulation';
+import { runToEnd } from '../support/planOrThrow';
 import { summarize, type SimulationResult } from '../../engine/results/summarize';
 import { CELL_FIELDS } from '../../engine/results/cellFields';
 import { WALL_QUANTITIES } from '../../engine/results/wallQuantities';
@@ -49,13 +47,7 @@ function parseCsv(text: string): string[][] {
 /** A real (tiny) Couette run, so every export sees the shapes summarize() really produces. */
 function tinyResult(sampleSteps: number): SimulationResult {
   const input = buildPreset('couette', { cellsY: '6', particlesPerCell: '10', transientSteps: '20', sampleSteps: String(sampleSteps), knudsen: '0.5' });
-  const parsed = parseCase(input);
-  if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
-  const planned = plan(parsed.value);
-  if (!planned.ok) throw new Error(planned.errors.join('\n'));
-  const sim = createSimulation(planned.plan);
-  advance(sim, planned.plan.transientSteps + planned.plan.sampleSteps);
-  return summarize(sim);
+  return summarize(runToEnd(input));
 }
 
 const performance = { wallSeconds: 0.5, particleSteps: 1000, particleStepsPerSecond: 2000 };

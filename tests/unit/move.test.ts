@@ -4,8 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { parseCase } from '../../engine/case/schema';
-import { plan } from '../../engine/case/plan';
+import { planOrThrow } from '../support/planOrThrow';
 import { createSimulation } from '../../engine/simulation';
 import { moveParticles } from '../../engine/kernel/move';
 
@@ -14,7 +13,7 @@ type Side = { type: 'periodic' } | { type: 'symmetry' } | { type: 'wall'; temper
 function buildSim(lx: number, ly: number, xSides: 'periodic' | 'symmetry' | 'wall', ySides: 'periodic' | 'symmetry' | 'wall', seed: number) {
   const side = (t: string): Side =>
     t === 'periodic' ? { type: 'periodic' } : t === 'symmetry' ? { type: 'symmetry' } : { type: 'wall', temperatureK: 300, model: 'maxwell', accommodation: 0.5 };
-  const r = parseCase({
+  return createSimulation(planOrThrow({
     schemaVersion: 1,
     name: 'flight test',
     gas: { species: 'Ar', model: 'HS' },
@@ -24,11 +23,7 @@ function buildSim(lx: number, ly: number, xSides: 'periodic' | 'symmetry' | 'wal
     numerics: { cellsX: 3, cellsY: 4, particlesPerCell: 10 },
     sampling: { transientSteps: 0, sampleSteps: 1 },
     seed,
-  });
-  if (!r.ok) throw new Error(r.errors.join('\n'));
-  const p = plan(r.value);
-  if (!p.ok) throw new Error(p.errors.join('\n'));
-  return createSimulation(p.plan);
+  }));
 }
 
 const sideType = fc.constantFrom('periodic' as const, 'symmetry' as const, 'wall' as const);

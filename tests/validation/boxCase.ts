@@ -1,6 +1,7 @@
 /** A closed, homogeneous gas: periodic on all four sides (no walls), square cells. Test scenario of our own. */
 import { parseCase, type Case } from '../../engine/case/schema';
-import { plan, type Plan } from '../../engine/case/plan';
+import type { Plan } from '../../engine/case/plan';
+import { planOrThrow } from '../support/planOrThrow';
 import type { SpeciesId } from '../../engine/gas/species';
 
 export interface BoxOptions {
@@ -32,7 +33,5 @@ export function boxCase(o: BoxOptions): Case {
 }
 
 export function boxPlan(o: BoxOptions): Plan {
-  const p = plan(boxCase(o));
-  if (!p.ok) throw new Error(p.errors.join('\n'));
-  return p.plan;
+  return planOrThrow(boxCase(o));
 }

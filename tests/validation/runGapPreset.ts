@@ -1,8 +1,8 @@
 /** Runs a planar gap preset (couette or fourier) to completion with a fixed seed and returns what the tests read. */
 import { buildPreset } from '../../engine/case/presets';
-import { parseCase } from '../../engine/case/schema';
-import { plan as planCase, type Plan } from '../../engine/case/plan';
-import { createSimulation, advance, type Simulation } from '../../engine/simulation';
+import type { Plan } from '../../engine/case/plan';
+import type { Simulation } from '../../engine/simulation';
+import { runToEnd } from '../support/planOrThrow';
 import { summarize, averageOverCells, type SimulationResult, type FieldTable } from '../../engine/results/summarize';
 
 export interface GapRun {
@@ -17,14 +17,9 @@ export interface GapRun {
 export const knudsenOf = (delta: number) => Math.sqrt(Math.PI) / (2 * delta);
 
 export function runGapPreset(name: 'couette' | 'fourier', overrides: Record<string, string>): GapRun {
-  const parsed = parseCase(buildPreset(name, overrides));
-  if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
-  const p = planCase(parsed.value);
-  if (!p.ok) throw new Error(p.errors.join('\n'));
-  const sim = createSimulation(p.plan);
-  advance(sim, p.plan.transientSteps + p.plan.sampleSteps);
+  const sim = runToEnd(buildPreset(name, overrides));
   const all = Array.from({ length: sim.state.cells }, (_, c) => c);
-  return { plan: p.plan, sim, result: summarize(sim), gapAverage: averageOverCells(sim, all) };
+  return { plan: sim.plan, sim, result: summarize(sim), gapAverage: averageOverCells(sim, all) };
 }
 
 export function field(table: FieldTable, name: string, row = 0): { mean: number; ci95: number } {

@@ -4,21 +4,15 @@
  */
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
-import { parseCase, type CaseInput } from '../../engine/case/schema';
-import { plan } from '../../engine/case/plan';
-import { createSimulation, advance } from '../../engine/simulation';
+import type { CaseInput } from '../../engine/case/schema';
+import { runToEnd } from '../support/planOrThrow';
 import { summarize, averageOverCells } from '../../engine/results/summarize';
 import { field, knudsenOf } from './runGapPreset';
 
 function run(input: CaseInput) {
-  const parsed = parseCase(input);
-  if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
-  const p = plan(parsed.value);
-  if (!p.ok) throw new Error(p.errors.join('\n'));
-  const sim = createSimulation(p.plan);
-  advance(sim, p.plan.transientSteps + p.plan.sampleSteps);
+  const sim = runToEnd(input);
   const all = Array.from({ length: sim.state.cells }, (_, c) => c);
-  return { result: summarize(sim), gap: averageOverCells(sim, all), plan: p.plan };
+  return { result: summarize(sim), gap: averageOverCells(sim, all), plan: sim.plan };
 }
 
 type WallInput = Extract<CaseInput['boundaries']['bottom'], { type: 'wall' }>;
