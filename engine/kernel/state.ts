@@ -9,10 +9,10 @@
  * numbers, not objects. Wall sums: per wall bin, SUMS_PER_WALL_BIN running sums of the current batch.
  */
 import type { Plan } from '../case/plan';
-import { SIDE_NAMES } from '../case/schema';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { createRng, uniform, standardNormal, rotationalEnergyOverKT, type RngState } from '../particles/rng';
 import { sigmaCrCoefficient } from '../gas/molecularModel';
+import { buildSideTable } from './sideTable';
 
 export const SIDE_LEFT = 0;
 export const SIDE_RIGHT = 1;
@@ -124,35 +124,6 @@ export interface SimState {
   readonly wallBinTotal: number;
 }
 
-function sideRow(plan: Plan, side: (typeof SIDE_NAMES)[number], binOffset: number, bins: number): number[] {
-  const b = plan.boundaries[side];
-  const row = new Array<number>(SIDE_STRIDE).fill(0);
-  row[SIDE_BIN_OFFSET] = binOffset;
-  row[SIDE_BIN_COUNT] = bins;
-  if (b.type === 'periodic') {
-    row[SIDE_TYPE] = BOUNDARY_PERIODIC;
-    return row;
-  }
-  if (b.type === 'symmetry') {
-    row[SIDE_TYPE] = BOUNDARY_SPECULAR;
-    return row;
-  }
-  row[SIDE_TYPE] = BOUNDARY_WALL;
-  row[SIDE_MODEL] = { diffuse: WALL_DIFFUSE, specular: WALL_SPECULAR, maxwell: WALL_MAXWELL, cercignaniLampis: WALL_CERCIGNANI_LAMPIS }[b.model];
-  row[SIDE_TEMPERATURE] = b.temperatureK;
-  row[SIDE_UX] = b.velocityMPerS[0];
-  row[SIDE_UY] = b.velocityMPerS[1];
-  row[SIDE_UZ] = b.velocityMPerS[2];
-  if (b.model === 'maxwell') row[SIDE_ACCOMMODATION] = b.accommodation ?? 1;
-  if (b.model === 'cercignaniLampis') {
-    row[SIDE_ACCOMMODATION] = b.normalAccommodation ?? 1;
-    const sigmaT = b.tangentialAccommodation ?? 1;
-    row[SIDE_TANGENTIAL_ENERGY_ACCOMMODATION] = sigmaT * (2 - sigmaT);
-  }
-  row[SIDE_THERMAL_SPEED] = Math.sqrt((K_B * b.temperatureK) / plan.gas.model.massKg);
-  return row;
-}
-
 /**
  * Key tables (see SimState.columnKey): column gx of nx·s lies in cell column floor(gx/s), sub-column gx mod s;
  * row gy likewise, with the cell row weighted by nx·S and the sub-row by s.
@@ -198,13 +169,7 @@ export function createState(plan: Plan, stream = 0): SimState {
   const main = particleArrays(capacity);
   const rng = createRng(plan.seed, stream);
 
-  const binCounts = SIDE_NAMES.map((s) => plan.wallBins[s]);
-  const table: number[] = [];
-  let offset = 0;
-  SIDE_NAMES.forEach((side, k) => {
-    table.push(...sideRow(plan, side, offset, binCounts[k]));
-    offset += binCounts[k];
-  });
+  const { sideTable, wallBinTotal } = buildSideTable(plan);
 
   const m = plan.gas.model;
   const st: SimState = {
@@ -235,7 +200,7 @@ export function createState(plan: Plan, stream = 0): SimState {
     viscosityIndex: m.viscosityIndex,
     scatteringExponent: m.scatteringExponent,
     sigmaCrCoefficient: sigmaCrCoefficient(m),
-    sideTable: Float64Array.from(table),
+    sideTable,
     periodicX: plan.boundaries.left.type === 'periodic',
     periodicY: plan.boundaries.bottom.type === 'periodic',
     sigmaCrMax: new Float64Array(cells),
@@ -249,8 +214,8 @@ export function createState(plan: Plan, stream = 0): SimState {
     particleSteps: 0,
     cellSums: new Float64Array(cells * RAW_CELL_SUMS),
     cellSumSteps: 0,
-    wallSums: new Float64Array(offset * SUMS_PER_WALL_BIN),
-    wallBinTotal: offset,
+    wallSums: new Float64Array(wallBinTotal * SUMS_PER_WALL_BIN),
+    wallBinTotal,
   };
   fillInitialGas(st, plan);
   return st;

@@ -56,6 +56,7 @@ const NUMERICS_EXPORT: { readonly [K in keyof Numerics]: ExportName } = {
   sampleSteps: { name: 'sampleSteps', unit: 'step' },
   batchSteps: { name: 'batchSteps', unit: 'step' },
   seed: { name: 'seed', unit: '1' },
+  replicas: { name: 'replicas', unit: '1' },
   cellSizeOverMeanFreePath: { name: 'cellSizeOverMeanFreePath', unit: '1' },
   timeStepOverCollisionTime: { name: 'timeStepOverCollisionTime', unit: '1' },
   timeStepOverCellTransitTime: { name: 'timeStepOverCellTransitTime', unit: '1' },

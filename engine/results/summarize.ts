@@ -1,32 +1,28 @@
 /**
- * Reduces a simulation's sums to estimates with 95 % confidence half-widths:
- * - integral quantities (whole-wall stresses and fluxes): blocking analysis of the per-batch series;
- * - cell fields, row-averaged profiles and wall bins: batch-level values over the doubling batch store
+ * Reduces sampled sums (a SampleSet: one replica, or several merged) to estimates with 95 % confidence half-widths:
+ * - integral quantities (whole-wall stresses and fluxes): blocking analysis of each replica's per-batch series,
+ *   replicas combined with Welch–Satterthwaite degrees of freedom (stats/replicaBlocking.ts);
+ * - cell fields, row-averaged profiles and wall bins: batch-level values over the complete batches of every replica
  *   (batch-level ratios for ratio quantities), t interval with batches − 1 degrees of freedom.
+ * Means use every sampled step, including those not yet in a complete batch.
  */
 import type { Plan, ReferenceState } from '../case/plan';
 import type { SideName } from '../case/schema';
 import type { Simulation } from '../simulation';
 import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN, SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT } from '../kernel/state';
-import { totalOf, batchView, batchSteps, storedSteps, type DoublingBatchStore } from '../stats/doublingBatches';
-import { blockingAnalysis } from '../stats/blocking';
+import { totalOf, batchView, batchSteps, storedSteps, type BatchSums } from '../stats/doublingBatches';
 import { tQuantile975 } from '../stats/studentT';
-import { seriesView } from '../stats/series';
+import { sampleSetOf, type SampleSet } from './sampleSet';
+import { replicaIntegralEstimate, type IntegralEstimate } from './integralEstimate';
 import { CELL_FIELDS, CELL_FIELD_COUNT, deriveCellFields, type CellFieldConstants } from './cellFields';
 import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, wallQuantitiesFromSums, sideIndex, wallLengthM, type WallQuantityName } from './wallQuantities';
+
+export type { IntegralEstimate };
 
 export interface Estimate {
   mean: number;
   /** 95 % confidence half-width; NaN when there were too few batches to say. */
   ci95: number;
-}
-
-export interface IntegralEstimate extends Estimate {
-  standardError: number;
-  effectiveSamples: number;
-  correlationTimeSteps: number;
-  /** False when the blocking analysis found no plateau: the error bar is then a lower bound. */
-  plateauFound: boolean;
 }
 
 /** Values for `rows` items × names.length quantities, row-major. */
@@ -42,6 +38,7 @@ export interface FieldTable {
 
 export interface SimulationResult {
   reference: ReferenceState;
+  /** Counts (particles, steps, sampleSteps …) are summed over replicas; seed is NaN if replicas had different seeds. */
   numerics: {
     cellsX: number;
     cellsY: number;
@@ -54,6 +51,8 @@ export interface SimulationResult {
     sampleSteps: number;
     batchSteps: number;
     seed: number;
+    /** Independent replicas whose samples the estimates combine (1 for a single run). */
+    replicas: number;
     cellSizeOverMeanFreePath: number;
     timeStepOverCollisionTime: number;
     timeStepOverCellTransitTime: number;
@@ -73,19 +72,19 @@ export interface SimulationResult {
   warnings: string[];
 }
 
-function fieldConstants(sim: Simulation): CellFieldConstants {
-  const st = sim.state;
-  return { massKg: st.massKg, moleculesPerParticle: st.moleculesPerParticle, rotationalDof: st.rotationalDof };
+function fieldConstants(set: SampleSet): CellFieldConstants {
+  const g = set.geometry;
+  return { massKg: g.massKg, moleculesPerParticle: g.moleculesPerParticle, rotationalDof: g.rotationalDof };
 }
 
 /**
  * Groups cells (group g = sum of member cells' raw sums) and derives fields per group: the mean from all samples
  * (including the still-open batch), the half-width from the complete batches.
  */
-function groupedFields(sim: Simulation, groupOf: Int32Array, groups: number, volumes: Float64Array): FieldTable {
-  const st = sim.state;
-  const store = sim.cellStore;
-  const k = fieldConstants(sim);
+function groupedFields(set: SampleSet, groupOf: Int32Array, groups: number, volumes: Float64Array): FieldTable {
+  const st = set.geometry;
+  const store = set.cellStore;
+  const k = fieldConstants(set);
   const group = (raw: Float64Array): Float64Array => {
     const g = new Float64Array(groups * RAW_CELL_SUMS);
     for (let c = 0; c < st.cells; c++) {
@@ -95,8 +94,8 @@ function groupedFields(sim: Simulation, groupOf: Int32Array, groups: number, vol
     return g;
   };
   const total = totalOf(store);
-  for (let q = 0; q < total.length; q++) total[q] += st.cellSums[q];
-  const totalSteps = storedSteps(store) + sim.batchStepsDone;
+  for (let q = 0; q < total.length; q++) total[q] += set.pendingCellSums[q];
+  const totalSteps = storedSteps(store) + set.pendingSteps;
   const mean = new Float64Array(groups * CELL_FIELD_COUNT);
   const gt = group(total);
   for (let g = 0; g < groups; g++) deriveCellFields(gt, g * RAW_CELL_SUMS, totalSteps, volumes[g], k, mean, g * CELL_FIELD_COUNT);
@@ -116,7 +115,7 @@ function groupedFields(sim: Simulation, groupOf: Int32Array, groups: number, vol
 }
 
 /** 95 % half-widths over the store's complete batches of values produced by `derive` for each batch. */
-function batchHalfWidths(store: DoublingBatchStore, width: number, derive: (batch: number, out: Float64Array) => void): Float64Array {
+function batchHalfWidths(store: BatchSums, width: number, derive: (batch: number, out: Float64Array) => void): Float64Array {
   const nb = store.batches;
   const ci = new Float64Array(width).fill(NaN);
   if (nb < 2) return ci;
@@ -142,9 +141,9 @@ function batchHalfWidths(store: DoublingBatchStore, width: number, derive: (batc
   return ci;
 }
 
-function wallBinTable(sim: Simulation, name: SideName): { position: Float64Array; table: FieldTable } {
-  const st = sim.state;
-  const store = sim.wallStore;
+function wallBinTable(set: SampleSet, name: SideName): { position: Float64Array; table: FieldTable } {
+  const st = set.geometry;
+  const store = set.wallStore;
   const side = sideIndex(name);
   const row = side * SIDE_STRIDE;
   const first = st.sideTable[row + SIDE_BIN_OFFSET];
@@ -161,8 +160,8 @@ function wallBinTable(sim: Simulation, name: SideName): { position: Float64Array
     }
   };
   const total = totalOf(store);
-  for (let q = 0; q < total.length; q++) total[q] += st.wallSums[q];
-  const totalSteps = storedSteps(store) + sim.batchStepsDone;
+  for (let q = 0; q < total.length; q++) total[q] += set.pendingWallSums[q];
+  const totalSteps = storedSteps(store) + set.pendingSteps;
   const mean = new Float64Array(bins * nq);
   if (totalSteps > 0) fill(total, totalSteps, mean);
   const ci95 = batchHalfWidths(store, bins * nq, (b, out) => fill(batchView(store, b), batchSteps(store), out));
@@ -173,49 +172,53 @@ function wallBinTable(sim: Simulation, name: SideName): { position: Float64Array
   };
 }
 
-function integralEstimate(values: Float64Array, batchSteps: number): IntegralEstimate {
-  if (values.length < 2) return { mean: values.length ? values[0] : NaN, ci95: NaN, standardError: NaN, effectiveSamples: values.length, correlationTimeSteps: NaN, plateauFound: false };
-  const b = blockingAnalysis(values);
-  return {
-    mean: b.mean,
-    ci95: b.ci95,
-    standardError: b.standardError,
-    effectiveSamples: b.effectiveSamples,
-    correlationTimeSteps: b.correlationTime * batchSteps,
-    plateauFound: b.plateauFound,
-  };
-}
-
 /**
  * Fields averaged over a set of cells (e.g. the whole gap: in steady planar Couette and Fourier flow the shear stress
  * and heat flux are uniform across it, and averaging every particle gives a far less noisy estimate than wall hits).
  */
-export function averageOverCells(sim: Simulation, cellIndices: ArrayLike<number>): FieldTable {
-  const st = sim.state;
+export function averageSamplesOverCells(set: SampleSet, cellIndices: ArrayLike<number>): FieldTable {
+  const st = set.geometry;
   const groupOf = new Int32Array(st.cells).fill(1);
   for (let k = 0; k < cellIndices.length; k++) groupOf[cellIndices[k]] = 0;
-  const table = groupedFields(sim, groupOf, 2, Float64Array.of(st.cellVolume * cellIndices.length, st.cellVolume * (st.cells - cellIndices.length)));
+  const table = groupedFields(set, groupOf, 2, Float64Array.of(st.cellVolume * cellIndices.length, st.cellVolume * (st.cells - cellIndices.length)));
   const f = CELL_FIELD_COUNT;
   return { ...table, rows: 1, mean: table.mean.slice(0, f), ci95: table.ci95.slice(0, f) };
 }
 
+/** averageSamplesOverCells of a live simulation's samples so far. */
+export function averageOverCells(sim: Simulation, cellIndices: ArrayLike<number>): FieldTable {
+  return averageSamplesOverCells(sampleSetOf(sim), cellIndices);
+}
+
+/** The result of a live simulation's samples so far (it can go on running). */
 export function summarize(sim: Simulation): SimulationResult {
-  const st = sim.state;
-  const plan: Plan = sim.plan;
+  return summarizeSamples(sampleSetOf(sim));
+}
+
+/** Estimates with 95 % half-widths from a set of samples (one replica or several merged). */
+export function summarizeSamples(set: SampleSet): SimulationResult {
+  const st = set.geometry;
+  const counters = set.counters;
+  const plan: Plan = set.plan;
   const warnings = [...plan.warnings];
   const walls: SimulationResult['walls'] = {};
   let longestCorrelationSteps = 0;
-  for (const name of sim.wallNames) {
+  let leftOutReplicas = 0;
+  for (const name of set.wallNames) {
     const entry = {} as Record<WallQuantityName, IntegralEstimate>;
     for (const q of WALL_QUANTITIES) {
-      const e = integralEstimate(seriesView(sim.series.get(`${name}.${q}`)!), plan.batchSteps);
+      const { estimate: e, leftOut } = replicaIntegralEstimate(set.series.get(`${name}.${q}`) ?? [], plan.batchSteps);
+      leftOutReplicas = Math.max(leftOutReplicas, leftOut);
       entry[q] = e;
       if (Number.isFinite(e.correlationTimeSteps)) longestCorrelationSteps = Math.max(longestCorrelationSteps, e.correlationTimeSteps);
       if (q === 'shearStress' || q === 'heatFlux') {
-        if (!e.plateauFound && sim.sampledSteps > 0) warnings.push(`walls.${name}.${q}: no plateau in the blocking analysis; its error bar may be too small — sample longer`);
+        if (!e.plateauFound && counters.sampledSteps > 0) warnings.push(`walls.${name}.${q}: no plateau in the blocking analysis; its error bar may be too small — sample longer`);
       }
     }
     walls[name] = entry;
+  }
+  if (leftOutReplicas > 0) {
+    warnings.push(`${leftOutReplicas} of ${set.replicas} replicas sampled fewer than 2 base batches and are left out of the wall quantities (their cell samples are kept)`);
   }
 
   const cellX = new Float64Array(st.cells);
@@ -230,22 +233,22 @@ export function summarize(sim: Simulation): SimulationResult {
     identity[c] = c;
     rowOf[c] = Math.floor(c / st.cellsX);
   }
-  const cells = groupedFields(sim, identity, st.cells, new Float64Array(st.cells).fill(st.cellVolume));
-  const profile = groupedFields(sim, rowOf, st.cellsY, new Float64Array(st.cellsY).fill(st.cellVolume * st.cellsX));
+  const cells = groupedFields(set, identity, st.cells, new Float64Array(st.cells).fill(st.cellVolume));
+  const profile = groupedFields(set, rowOf, st.cellsY, new Float64Array(st.cellsY).fill(st.cellVolume * st.cellsX));
   const profileY = Float64Array.from({ length: st.cellsY }, (_, r) => (r + 0.5) * dy);
 
   const wallBins: SimulationResult['wallBins'] = {};
-  for (const name of sim.wallNames) wallBins[name] = wallBinTable(sim, name);
+  for (const name of set.wallNames) wallBins[name] = wallBinTable(set, name);
 
   if (cells.batches > 0 && longestCorrelationSteps > 0 && cells.batchLengthSteps < 10 * longestCorrelationSteps) {
     warnings.push(
       `field batches are ${cells.batchLengthSteps} steps long but wall quantities stay correlated for about ${longestCorrelationSteps.toFixed(0)} steps; profile error bars may be too small — sample at least ${Math.ceil((10 * longestCorrelationSteps * 16) / 1000) * 1000} steps`,
     );
   }
-  if (cells.batches < 2 && sim.sampledSteps > 0) warnings.push('fewer than 2 complete batches: profile error bars are not available — sample longer');
+  if (cells.batches < 2 && counters.sampledSteps > 0) warnings.push('fewer than 2 complete batches: profile error bars are not available — sample longer');
 
   const lambda = plan.reference.meanFreePathM;
-  const separation = st.collisionCount > 0 ? st.separationSum / st.collisionCount : NaN;
+  const separation = counters.collisionCount > 0 ? counters.separationSum / counters.collisionCount : NaN;
   const mcsRatio = separation / lambda;
   if (mcsRatio > 0.2) warnings.push(`mean collision separation is ${mcsRatio.toFixed(2)} mean free paths; keep it below about 0.2 (more particles per cell or smaller cells)`);
 
@@ -255,17 +258,19 @@ export function summarize(sim: Simulation): SimulationResult {
       cellsX: st.cellsX,
       cellsY: st.cellsY,
       cells: st.cells,
-      particles: st.count,
+      particles: counters.particles,
       moleculesPerParticle: st.moleculesPerParticle,
       timeStep: st.timeStep,
-      steps: st.step,
-      transientSteps: Math.min(st.step, plan.transientSteps),
-      sampleSteps: sim.sampledSteps,
+      steps: counters.steps,
+      // Steps before sampling began, summed over replicas (for one run: min(steps, plan.transientSteps)).
+      transientSteps: counters.steps - counters.sampledSteps,
+      sampleSteps: counters.sampledSteps,
       batchSteps: plan.batchSteps,
-      seed: plan.seed,
+      seed: set.seeds.every((s) => s === set.seeds[0]) ? set.seeds[0] : NaN,
+      replicas: set.replicas,
       ...plan.ratios,
       collisionSeparationOverMeanFreePath: mcsRatio,
-      collisionsPerParticlePerStep: st.particleSteps > 0 ? (2 * st.collisionCount) / st.particleSteps : 0,
+      collisionsPerParticlePerStep: counters.particleSteps > 0 ? (2 * counters.collisionCount) / counters.particleSteps : 0,
     },
     walls,
     cellX,

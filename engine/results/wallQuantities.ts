@@ -8,7 +8,7 @@
  * - heatFlux: energy per area per time from the gas into the wall, in the wall's own frame;
  * - numberFlux: molecules striking the wall per area per time.
  */
-import type { SimState } from '../kernel/state';
+import type { SamplingGeometry } from './samplingGeometry';
 import {
   SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT, SIDE_LEFT, SIDE_BOTTOM, SIDE_RIGHT,
   SUMS_PER_WALL_BIN, WALL_HITS, WALL_PX, WALL_PY, WALL_ENERGY,
@@ -28,8 +28,9 @@ export function sideIndex(name: SideName): number {
   return SIDE_NAMES.indexOf(name);
 }
 
-export function wallLengthM(st: SimState, side: number): number {
-  return side === SIDE_LEFT || side === SIDE_RIGHT ? st.lengthY : st.lengthX;
+/** Length of a side (m; its area per metre of depth, m²). */
+export function wallLengthM(g: SamplingGeometry, side: number): number {
+  return side === SIDE_LEFT || side === SIDE_RIGHT ? g.lengthY : g.lengthX;
 }
 
 /**
@@ -37,9 +38,9 @@ export function wallLengthM(st: SimState, side: number): number {
  * written into out[0..3] in WALL_QUANTITIES order.
  */
 export function wallQuantitiesFromSums(
-  st: SimState, side: number, sums: Float64Array, o: number, areaM2: number, timeS: number, out: Float64Array,
+  g: SamplingGeometry, side: number, sums: Float64Array, o: number, areaM2: number, timeS: number, out: Float64Array,
 ): void {
-  const scale = st.moleculesPerParticle / (areaM2 * timeS);
+  const scale = g.moleculesPerParticle / (areaM2 * timeS);
   const normalIsX = side === SIDE_LEFT || side === SIDE_RIGHT;
   const inward = side === SIDE_LEFT || side === SIDE_BOTTOM ? 1 : -1;
   const pNormal = normalIsX ? sums[o + WALL_PX] : sums[o + WALL_PY];
@@ -53,9 +54,12 @@ export function wallQuantitiesFromSums(
 const scratch = new Float64Array(4);
 const scratchSums = new Float64Array(SUMS_PER_WALL_BIN);
 
-/** Whole-wall totals of one batch of `steps` steps, keyed `${wall}.${quantity}`. */
+/**
+ * Whole-wall totals of one batch of `steps` steps, keyed `${wall}.${quantity}`. `sim.state` is any SamplingGeometry
+ * (a live SimState is one).
+ */
 export function wallTotalsOfBatch(
-  sim: { state: SimState; wallNames: readonly SideName[] }, sums: Float64Array, steps: number,
+  sim: { state: SamplingGeometry; wallNames: readonly SideName[] }, sums: Float64Array, steps: number,
 ): [string, number][] {
   const st = sim.state;
   const out: [string, number][] = [];

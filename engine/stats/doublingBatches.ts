@@ -11,17 +11,30 @@
 
 export const FIELD_BATCH_CAPACITY = 32;
 
-export interface DoublingBatchStore {
+/**
+ * What estimates read from batch sums: complete batches of equal length (any number of them) and the sums not in a
+ * complete batch. Both the doubling store below and a merged BatchList (stats/batchList.ts) are BatchSums.
+ */
+export interface BatchSums {
   /** Numbers per batch (e.g. cells × raw sums). */
   readonly width: number;
-  /** Complete batches, batch-major: values[b * width + k]. */
-  values: Float64Array;
-  batches: number;
+  /** Complete batches, batch-major: values[b * width + k]; may be longer than batches × width. */
+  readonly values: Float64Array;
+  readonly batches: number;
   /** Steps in one base unit (one call of addToBatches). */
   readonly unitSteps: number;
   /** Base units per complete batch. */
+  readonly batchLength: number;
+  /** Sums of the base units not in a complete batch, and how many units they hold. */
+  readonly pending: Float64Array;
+  readonly pendingLength: number;
+}
+
+export interface DoublingBatchStore extends BatchSums {
+  values: Float64Array;
+  batches: number;
   batchLength: number;
-  /** The batch being filled, and how many base units it holds. */
+  /** The batch being filled, and how many base units it holds (always fewer than batchLength). */
   pending: Float64Array;
   pendingLength: number;
 }
@@ -71,7 +84,7 @@ function mergePairs(store: DoublingBatchStore): void {
 }
 
 /** Sum over every complete batch and the pending one: the run's total, for the mean. */
-export function totalOf(store: DoublingBatchStore): Float64Array {
+export function totalOf(store: BatchSums): Float64Array {
   const w = store.width;
   const out = Float64Array.from(store.pending);
   for (let b = 0; b < store.batches; b++) {
@@ -82,16 +95,16 @@ export function totalOf(store: DoublingBatchStore): Float64Array {
 }
 
 /** Steps in each complete batch. */
-export function batchSteps(store: DoublingBatchStore): number {
+export function batchSteps(store: BatchSums): number {
   return store.batchLength * store.unitSteps;
 }
 
 /** Steps in all complete batches and the pending one. */
-export function storedSteps(store: DoublingBatchStore): number {
+export function storedSteps(store: BatchSums): number {
   return (store.batches * store.batchLength + store.pendingLength) * store.unitSteps;
 }
 
 /** View of complete batch b. */
-export function batchView(store: DoublingBatchStore, b: number): Float64Array {
+export function batchView(store: BatchSums, b: number): Float64Array {
   return store.values.subarray(b * store.width, (b + 1) * store.width);
 }

@@ -1,0 +1,81 @@
+/**
+ * SampleSet: everything summarizeSamples needs, detached from particles — the plan, the sampling geometry, the batch
+ * sums of cells and wall bins, the integral-quantity series of each replica, the sums not yet closed into a batch and
+ * the run's counters. One replica's set comes from a live simulation (sampleSetOf); sets of replicas of one case
+ * merge into one (mergeSamples.ts); a set is saved and read back as a sample file (io/sampleFile.ts).
+ */
+import type { Plan } from '../case/plan';
+import type { SideName } from '../case/schema';
+import type { Simulation } from '../simulation';
+import { batchListOf, type BatchList } from '../stats/batchList';
+import { seriesView } from '../stats/series';
+import { copyGeometry, type SamplingGeometry } from './samplingGeometry';
+
+export { geometryOf, type SamplingGeometry } from './samplingGeometry';
+
+/** Counts over a run, summed over replicas when sets merge. */
+export interface SampleCounters {
+  /** Time steps done, transient included. */
+  readonly steps: number;
+  /** Time steps sampled (after the transient). */
+  readonly sampledSteps: number;
+  /** Simulated particles at the end. */
+  readonly particles: number;
+  /** Particle moves done (particles × steps, summed over steps). */
+  readonly particleSteps: number;
+  readonly collisionCount: number;
+  /** Summed separation of collision pairs, m. */
+  readonly separationSum: number;
+}
+
+export interface SampleSet {
+  /** The plan of the case (of the first replica when merged: replicas differ only in seed or stream). */
+  readonly plan: Plan;
+  readonly geometry: SamplingGeometry;
+  /** Sides that are walls, in SIDE_NAMES order. */
+  readonly wallNames: readonly SideName[];
+  /** Complete batches of the raw cell sums (RAW_CELL_SUMS per cell) and wall-bin sums (SUMS_PER_WALL_BIN per bin). */
+  readonly cellStore: BatchList;
+  readonly wallStore: BatchList;
+  /** Integral quantities, key `${wall}.${quantity}`: one series (a value per base batch) per replica. */
+  readonly series: ReadonlyMap<string, readonly Float64Array[]>;
+  /** Sums of steps sampled but not yet closed into a base batch, and how many steps they hold. */
+  readonly pendingCellSums: Float64Array;
+  readonly pendingWallSums: Float64Array;
+  readonly pendingSteps: number;
+  readonly counters: SampleCounters;
+  readonly replicas: number;
+  /** The case seed of each replica (replicas of one seed differ in their random stream instead). */
+  readonly seeds: readonly number[];
+}
+
+/**
+ * One replica's samples, copied out of a live simulation (so it can go on running, and the set stays as it was).
+ * Cost: a copy of the batch stores, about (FIELD_BATCH_CAPACITY + 2) × (cells × 15 + wall bins × 5) numbers.
+ */
+export function sampleSetOf(sim: Simulation): SampleSet {
+  const st = sim.state;
+  const series = new Map<string, Float64Array[]>();
+  for (const [key, s] of sim.series) series.set(key, [seriesView(s).slice()]);
+  return {
+    plan: sim.plan,
+    geometry: copyGeometry(st),
+    wallNames: [...sim.wallNames],
+    cellStore: batchListOf(sim.cellStore),
+    wallStore: batchListOf(sim.wallStore),
+    series,
+    pendingCellSums: Float64Array.from(st.cellSums),
+    pendingWallSums: Float64Array.from(st.wallSums),
+    pendingSteps: sim.batchStepsDone,
+    counters: {
+      steps: st.step,
+      sampledSteps: sim.sampledSteps,
+      particles: st.count,
+      particleSteps: st.particleSteps,
+      collisionCount: st.collisionCount,
+      separationSum: st.separationSum,
+    },
+    replicas: 1,
+    seeds: [sim.plan.seed],
+  };
+}

@@ -1,0 +1,86 @@
+/**
+ * SamplingGeometry: the numbers that turn sampled sums into fields and wall quantities — grid, time step, particle
+ * weight, molecular mass and the side table — without particles. SimState has the same names, so a live state is a
+ * SamplingGeometry as it stands, and a plan gives one without running anything (geometryOf).
+ */
+import type { Plan } from '../case/plan';
+import { buildSideTable } from '../kernel/sideTable';
+import { SIDE_STRIDE, SIDE_BIN_COUNT } from '../kernel/state';
+
+export interface SamplingGeometry {
+  readonly cells: number;
+  readonly cellsX: number;
+  readonly cellsY: number;
+  /** Domain size, m. */
+  readonly lengthX: number;
+  readonly lengthY: number;
+  /** Volume of one cell, m³ per metre of depth (planar cells have unit depth). */
+  readonly cellVolume: number;
+  /** s. */
+  readonly timeStep: number;
+  /** Mass of one molecule, kg. */
+  readonly massKg: number;
+  /** Real molecules per simulated particle (per metre of depth). */
+  readonly moleculesPerParticle: number;
+  readonly rotationalDof: number;
+  /** SIDE_STRIDE numbers per side; columns are the SIDE_* constants of kernel/state.ts. */
+  readonly sideTable: Float64Array;
+}
+
+/** The scalar members of SamplingGeometry, typed over every key so a new member fails to compile until listed here. */
+const GEOMETRY_SCALAR_TABLE: { readonly [K in Exclude<keyof SamplingGeometry, 'sideTable'>]: true } = {
+  cells: true, cellsX: true, cellsY: true, lengthX: true, lengthY: true, cellVolume: true, timeStep: true,
+  massKg: true, moleculesPerParticle: true, rotationalDof: true,
+};
+export const GEOMETRY_SCALARS = Object.keys(GEOMETRY_SCALAR_TABLE) as (keyof typeof GEOMETRY_SCALAR_TABLE)[];
+
+/** The sampling geometry a simulation of this plan has (the same numbers createState puts into SimState). */
+export function geometryOf(plan: Plan): SamplingGeometry {
+  const g = plan.grid;
+  const m = plan.gas.model;
+  return {
+    cells: g.cellsX * g.cellsY,
+    cellsX: g.cellsX,
+    cellsY: g.cellsY,
+    lengthX: g.lengthXM,
+    lengthY: g.lengthYM,
+    cellVolume: g.cellVolumeM3,
+    timeStep: plan.timeStepS,
+    massKg: m.massKg,
+    moleculesPerParticle: plan.moleculesPerParticle,
+    rotationalDof: m.rotationalDof,
+    sideTable: buildSideTable(plan).sideTable,
+  };
+}
+
+/** A detached copy (the side table copied), e.g. of a live SimState. */
+export function copyGeometry(g: SamplingGeometry): SamplingGeometry {
+  return {
+    cells: g.cells,
+    cellsX: g.cellsX,
+    cellsY: g.cellsY,
+    lengthX: g.lengthX,
+    lengthY: g.lengthY,
+    cellVolume: g.cellVolume,
+    timeStep: g.timeStep,
+    massKg: g.massKg,
+    moleculesPerParticle: g.moleculesPerParticle,
+    rotationalDof: g.rotationalDof,
+    sideTable: Float64Array.from(g.sideTable),
+  };
+}
+
+/** Number of wall bins over all sides, from the side table. */
+export function wallBinTotalOf(g: SamplingGeometry): number {
+  let total = 0;
+  for (let row = 0; row < g.sideTable.length; row += SIDE_STRIDE) total += g.sideTable[row + SIDE_BIN_COUNT];
+  return total;
+}
+
+/** Names and values of the scalar fields that differ between two geometries (and "sideTable" if that does). */
+export function geometryDifferences(a: SamplingGeometry, b: SamplingGeometry): string[] {
+  const out: string[] = [];
+  for (const key of GEOMETRY_SCALARS) if (a[key] !== b[key]) out.push(`${key}: ${a[key]} vs ${b[key]}`);
+  if (a.sideTable.length !== b.sideTable.length || a.sideTable.some((v, k) => v !== b.sideTable[k])) out.push('sideTable (boundary conditions or wall bins)');
+  return out;
+}
