@@ -8,6 +8,7 @@ import { MAIN_USAGE } from './usage';
 import type { CommandIO } from './commands/io';
 import { presetCommand } from './commands/preset';
 import { runCommand } from './commands/run';
+import { mergeCommand } from './commands/merge';
 import { checkCommand } from './commands/check';
 import { schemaCommand } from './commands/schema';
 import { helpCommand } from './commands/help';
@@ -17,6 +18,7 @@ type Command = (args: string[], io: CommandIO) => number | Promise<number>;
 const COMMANDS: Readonly<Record<string, Command>> = {
   preset: presetCommand,
   run: runCommand,
+  merge: mergeCommand,
   check: checkCommand,
   schema: schemaCommand,
   help: helpCommand,

@@ -8,13 +8,23 @@ export const PRESET_USAGE = `Usage:
 Values may carry units: --set gap=2mm --set temperature=25C --set knudsen=0.5`;
 
 export const RUN_USAGE = `Usage:
-  tenuis run CASE.json --out DIR [--seed N] [--quiet]
+  tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE] [--quiet]
 
 Runs the case and writes summary.json, profiles.csv, fields.csv, surfaces.csv and case.json (the case as run,
-complete and explicit) into DIR. The files appear only when the run succeeds: an error or Ctrl-C leaves DIR as it was.
-  --out, -o DIR   output folder (created if needed; files of the same names in it are replaced)
-  --seed N        random seed, overriding the case's
-  --quiet, -q     no progress line and no summary (warnings and errors are still printed)`;
+complete and explicit) into DIR. The files appear only when the run has ended: an error leaves DIR as it was.
+  --out, -o DIR         output folder (created if needed; files of the same names in it are replaced)
+  --seed N              random seed, overriding the case's
+  --replicas, -r N      N independent replicas on N worker threads (one per core), merged into one result;
+                        replicas.json lists each replica's status. With replicas, Ctrl-C stops them and writes what
+                        was sampled (exit code 130); with one, Ctrl-C writes nothing.
+  --save-samples FILE   also write the raw batch sums as a sample file, for tenuis merge
+  --quiet, -q           no progress line and no summary (warnings and errors are still printed)`;
+
+export const MERGE_USAGE = `Usage:
+  tenuis merge FILE... --out DIR [--quiet]
+
+Combines sample files written by tenuis run --save-samples (replicas of one case, e.g. run on many machines with
+different seeds) into one result with error bars from all of them, written into DIR like tenuis run does.`;
 
 export const CHECK_USAGE = `Usage:
   tenuis check CASE.json
@@ -32,8 +42,9 @@ export const MAIN_USAGE = `tenuis: rarefied gas flows by direct simulation Monte
 Usage:
   tenuis preset NAME [--set key=value ...]   print a case file built from a preset (--list, NAME --help)
   tenuis check CASE.json                     validate a case and show its plan
-  tenuis run CASE.json --out DIR [--seed N] [--quiet]
+  tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE] [--quiet]
                                              run a case and write the results into DIR
+  tenuis merge FILE... --out DIR             merge saved sample files of one case into one result
   tenuis schema                              print the case file's JSON Schema
   tenuis help [COMMAND]                      this text, or a command's
 
@@ -43,6 +54,7 @@ Exit codes: 0 success, 1 bad input, 2 wrong usage, 130 interrupted.`;
 export const COMMAND_USAGE: Readonly<Record<string, string>> = {
   preset: PRESET_USAGE,
   run: RUN_USAGE,
+  merge: MERGE_USAGE,
   check: CHECK_USAGE,
   schema: SCHEMA_USAGE,
 };

@@ -45,3 +45,17 @@ export function writeResultsAtomically(dir: string, files: Readonly<Record<strin
     throw new CliError(`could not write the results into ${dir}: ${(e as Error).message}`);
   }
 }
+
+/** Writes one binary file via a temporary sibling and a rename, so it is either complete or absent. */
+export function writeBinaryAtomically(path: string, data: ArrayBuffer): void {
+  const target = resolve(path);
+  mkdirSync(dirname(target), { recursive: true });
+  const temp = `${target}.partial-${process.pid}`;
+  try {
+    writeFileSync(temp, new Uint8Array(data));
+    renameSync(temp, target);
+  } catch (e) {
+    rmSync(temp, { force: true });
+    throw new CliError(`could not write ${path}: ${(e as Error).message}`);
+  }
+}

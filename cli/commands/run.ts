@@ -4,7 +4,12 @@
  */
 import { parseArgs } from 'node:util';
 import { createSimulation } from '../../engine/simulation';
-import { summarize } from '../../engine/results/summarize';
+import { summarizeSamples } from '../../engine/results/summarize';
+import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
+import { encodeSampleSet } from '../../engine/io/sampleFile';
+import { runReplicas, replicaReportJson } from '../runReplicas';
+import { writeBinaryAtomically } from '../writeResults';
+import { CliError } from '../errors';
 import { resultFiles, type Performance } from '../../engine/results/exports';
 import { UsageError, EXIT_OK, EXIT_INTERRUPTED } from '../errors';
 import { RUN_USAGE } from '../usage';
@@ -31,6 +36,12 @@ function watchInterrupt(): { readonly interrupted: boolean; dispose(): void } {
   };
 }
 
+function parseReplicasOption(text: string): number {
+  const n = Number(text);
+  if (!Number.isInteger(n) || n < 1 || n > 256) throw new UsageError(`--replicas ${text}: give a whole number from 1 to 256 (one per core is the useful maximum)`, RUN_USAGE);
+  return n;
+}
+
 export async function runCommand(args: string[], io: CommandIO): Promise<number> {
   let parsed;
   try {
@@ -40,6 +51,8 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
       options: {
         out: { type: 'string', short: 'o' },
         seed: { type: 'string' },
+        replicas: { type: 'string', short: 'r' },
+        'save-samples': { type: 'string' },
         quiet: { type: 'boolean', short: 'q' },
         help: { type: 'boolean', short: 'h' },
       },
@@ -62,37 +75,68 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
   checkOutputDir(outDir);
   for (const w of plan.warnings) io.stderr.write(`warning: ${w}\n`);
 
-  const sim = createSimulation(plan);
+  const replicas = values.replicas === undefined ? 1 : parseReplicasOption(values.replicas);
+  const savePath = values['save-samples'];
   const progress = quiet
     ? undefined
     : createProgress({ stream: io.stderr, totalSteps: plan.transientSteps + plan.sampleSteps, transientSteps: plan.transientSteps });
   const interrupt = watchInterrupt();
-  let outcome;
+  let samples: SampleSet | null;
+  let wallSeconds: number;
+  let particleSteps: number;
+  let interrupted: boolean;
+  const extraFiles: Record<string, string> = {};
+  const lostWarnings: string[] = [];
   try {
-    outcome = await advanceInChunks(sim, { onProgress: (d) => progress?.update(d), shouldStop: () => interrupt.interrupted });
+    if (replicas === 1) {
+      const sim = createSimulation(plan);
+      const outcome = await advanceInChunks(sim, { onProgress: (d) => progress?.update(d), shouldStop: () => interrupt.interrupted });
+      if (!outcome.completed) {
+        progress?.clear();
+        io.stderr.write(`interrupted at step ${outcome.stepsDone}: nothing was written\n`);
+        return EXIT_INTERRUPTED;
+      }
+      progress?.finish(outcome.stepsDone);
+      samples = sampleSetOf(sim);
+      wallSeconds = outcome.wallSeconds;
+      particleSteps = sim.state.particleSteps;
+      interrupted = false;
+    } else {
+      const outcome = await runReplicas(caseData, replicas, { progress, isInterrupted: () => interrupt.interrupted });
+      progress?.finish(plan.transientSteps + plan.sampleSteps);
+      samples = outcome.merged;
+      wallSeconds = outcome.wallSeconds;
+      particleSteps = outcome.particleSteps;
+      interrupted = outcome.cancelled;
+      extraFiles['replicas.json'] = `${prettyJson({ replicas: outcome.replicas.map(replicaReportJson) })}\n`;
+      for (const r of outcome.replicas) {
+        if (r.status === 'lost') {
+          lostWarnings.push(`replica ${r.stream} was lost (${r.reason}); ${r.samples ? `its ${r.samples.counters.sampledSteps} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`);
+        }
+      }
+      if (!samples) throw new CliError(`no replica sampled anything:\n${outcome.replicas.map((r) => `  replica ${r.stream}: ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('\n')}`);
+    }
   } finally {
     interrupt.dispose();
   }
-  if (!outcome.completed) {
-    progress?.clear();
-    io.stderr.write(`interrupted at step ${outcome.stepsDone}: nothing was written\n`);
-    return EXIT_INTERRUPTED;
-  }
-  progress?.finish(outcome.stepsDone);
 
-  const result = summarize(sim);
-  const particleSteps = sim.state.particleSteps;
+  const result = summarizeSamples(samples);
+  result.warnings.push(...lostWarnings);
+  if (interrupted) result.warnings.push(`interrupted by the user: the result holds the ${samples.counters.sampledSteps} steps sampled until then`);
   const performance: Performance = {
-    wallSeconds: outcome.wallSeconds,
+    wallSeconds,
     particleSteps,
-    particleStepsPerSecond: outcome.wallSeconds > 0 ? particleSteps / outcome.wallSeconds : NaN,
+    particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN,
   };
   const files = {
     ...resultFiles(result, { performance, caseName: caseData.name }),
     'case.json': `${prettyJson(caseData)}\n`,
+    ...extraFiles,
   };
   writeResultsAtomically(outDir, files);
+  if (savePath) writeBinaryAtomically(savePath, encodeSampleSet(samples));
   for (const w of result.warnings) if (!plan.warnings.includes(w)) io.stderr.write(`warning: ${w}\n`);
   if (!quiet) io.stderr.write(`${runSummary(result, performance, outDir)}\n`);
+  if (interrupted) return EXIT_INTERRUPTED;
   return EXIT_OK;
 }

@@ -1,0 +1,73 @@
+/**
+ * Replicas where they really run: worker threads executing the built dist-cli/replica.node.mjs (made by the vitest
+ * global setup), talking comlink over real MessagePorts.
+ */
+import { describe, expect, it } from 'vitest';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { runReplicaPool } from '../../workers/replicaPool';
+import { nodeReplicaFactory } from '../../workers/nodeReplica';
+import { buildPreset } from '../../engine/case/presets';
+import { planOrThrow } from '../support/planOrThrow';
+import { createSimulation, advance } from '../../engine/simulation';
+import { sampleSetOf } from '../../engine/results/sampleSet';
+import { mergeSampleSets } from '../../engine/results/mergeSamples';
+import { summarizeSamples } from '../../engine/results/summarize';
+import { parseCase } from '../../engine/case/schema';
+
+const workerUrl = pathToFileURL(join(__dirname, '..', '..', 'dist-cli', 'replica.node.mjs'));
+const smallCouette = (sampleSteps: number) => {
+  const parsed = parseCase(buildPreset('couette', { knudsen: '0.5', cellsY: '10', particlesPerCell: '30', transientSteps: '200', sampleSteps: String(sampleSteps), seed: '9' }));
+  if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
+  return parsed.value;
+};
+
+describe('replica pool on worker threads', () => {
+  it('two replicas in workers give exactly the merged result of the same two streams run in this thread', async () => {
+    const caseData = smallCouette(3000);
+    const pool = runReplicaPool({ caseInput: caseData, replicas: 2, createReplica: nodeReplicaFactory(workerUrl) });
+    const outcome = await pool.done;
+    expect(outcome.replicas.map((r) => r.status)).toEqual(['completed', 'completed']);
+    const plan = planOrThrow(caseData);
+    const local = [0, 1].map((stream) => {
+      const sim = createSimulation(plan, { stream });
+      advance(sim, plan.transientSteps + plan.sampleSteps);
+      return sampleSetOf(sim);
+    });
+    const expected = summarizeSamples(mergeSampleSets(local));
+    const got = summarizeSamples(outcome.merged!);
+    expect(got.numerics.replicas).toBe(2);
+    expect(got.walls.bottom!.shearStress).toEqual(expected.walls.bottom!.shearStress);
+    expect(Array.from(got.profile.mean)).toEqual(Array.from(expected.profile.mean));
+    expect(Array.from(got.profile.ci95)).toEqual(Array.from(expected.profile.ci95));
+  });
+
+  it('a worker killed mid-run is reported as lost with its reason; the others finish and its snapshot is kept', async () => {
+    const workers: { terminate(): Promise<number> }[] = [];
+    const pool = runReplicaPool({
+      caseInput: smallCouette(200_000),
+      replicas: 2,
+      snapshotEveryMs: 200,
+      chunkMilliseconds: 20,
+      createReplica: nodeReplicaFactory(workerUrl, (w) => workers.push(w)),
+      onProgress: (p) => {
+        // Kill replica 1 once it has sampled for a while, then stop the other soon after.
+        const r1 = p.replicas[1];
+        if (r1 && r1.phase === 'sampling' && r1.stepsDone > 3000 && workers[1]) {
+          void workers[1].terminate();
+          workers[1] = undefined as never;
+          setTimeout(() => pool.cancel(), 1500);
+        }
+      },
+    });
+    const outcome = await pool.done;
+    const [r0, r1] = outcome.replicas;
+    expect(r0.status).toBe('cancelled');
+    expect(r1.status).toBe('lost');
+    expect(r1.reason).toMatch(/exited/);
+    expect(r1.samples?.counters.sampledSteps ?? 0).toBeGreaterThan(0);
+    // Both replicas' samples are in the merged result: nothing sampled was dropped silently.
+    expect(outcome.merged!.replicas).toBe(2);
+    expect(outcome.merged!.counters.sampledSteps).toBe(r0.samples!.counters.sampledSteps + r1.samples!.counters.sampledSteps);
+  });
+});

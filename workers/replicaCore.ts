@@ -1,0 +1,96 @@
+/**
+ * The replica worker's logic, independent of the thread API around it (Web Worker in the browser, worker_threads in
+ * Node): plan the case, run it in chunks of about chunkMilliseconds, report progress, honour pause/resume/cancel
+ * between chunks, and hand back everything sampled as a transferable sample file.
+ */
+import { transfer } from 'comlink';
+import { planFromInput } from '../engine/case/plan';
+import { createSimulation, advance, type Simulation } from '../engine/simulation';
+import { sampleSetOf } from '../engine/results/sampleSet';
+import { encodeSampleSet } from '../engine/io/sampleFile';
+import type { ReplicaApi, ReplicaOutcome, ReplicaProgress, ReplicaStartRequest } from './protocol';
+
+const DEFAULT_CHUNK_MS = 100;
+const DEFAULT_PROGRESS_MS = 250;
+
+/** Lets queued messages (pause, cancel, snapshot) run between chunks. */
+const yieldToMessages = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
+
+export function createReplicaApi(clock: () => number = Date.now): ReplicaApi {
+  let sim: Simulation | null = null;
+  let cancelled = false;
+  let paused = false;
+  let wake: (() => void) | null = null;
+
+  const encode = (s: Simulation): ArrayBuffer => encodeSampleSet(sampleSetOf(s));
+
+  return {
+    async start(request: ReplicaStartRequest, onProgress: (p: ReplicaProgress) => void): Promise<ReplicaOutcome> {
+      if (sim) throw new Error('this replica worker is already running a case; start a new worker for another');
+      const planned = planFromInput(request.caseInput);
+      if (!planned.ok) throw new Error(`the case was refused:\n${planned.errors.join('\n')}`);
+      const plan = planned.plan;
+      const s = createSimulation(plan, { stream: request.stream });
+      sim = s;
+      const totalSteps = plan.transientSteps + plan.sampleSteps;
+      const chunkMs = request.chunkMilliseconds ?? DEFAULT_CHUNK_MS;
+      const progressMs = request.progressMilliseconds ?? DEFAULT_PROGRESS_MS;
+      const t0 = clock();
+      let stepsPerChunk = 1;
+      let lastReport = -Infinity;
+      const report = (now: number) => {
+        lastReport = now;
+        onProgress({
+          stream: request.stream,
+          phase: s.state.step < plan.transientSteps ? 'transient' : 'sampling',
+          stepsDone: s.state.step,
+          totalSteps,
+          particleSteps: s.state.particleSteps,
+          elapsedSeconds: (now - t0) / 1000,
+        });
+      };
+      while (s.state.step < totalSteps && !cancelled) {
+        const steps = Math.min(stepsPerChunk, totalSteps - s.state.step);
+        const c0 = clock();
+        advance(s, steps);
+        const took = clock() - c0;
+        // Aim each chunk at chunkMs, growing at most fourfold at a time so a slow start never overshoots far.
+        stepsPerChunk = Math.max(1, Math.min(stepsPerChunk * 4, Math.round((steps * chunkMs) / Math.max(took, 1))));
+        const now = clock();
+        if (now - lastReport >= progressMs) report(now);
+        await yieldToMessages();
+        while (paused && !cancelled) await new Promise<void>((resolve) => (wake = resolve));
+      }
+      const end = clock();
+      report(end);
+      const samples = encode(s);
+      const outcome: ReplicaOutcome = {
+        stream: request.stream,
+        end: cancelled ? 'cancelled' : 'completed',
+        stepsDone: s.state.step,
+        wallSeconds: (end - t0) / 1000,
+        particleSteps: s.state.particleSteps,
+        samples,
+      };
+      return transfer(outcome, [samples]);
+    },
+    pause() {
+      paused = true;
+    },
+    resume() {
+      paused = false;
+      wake?.();
+      wake = null;
+    },
+    cancel() {
+      cancelled = true;
+      wake?.();
+      wake = null;
+    },
+    async snapshot(): Promise<ArrayBuffer> {
+      if (!sim) throw new Error('nothing to snapshot: the replica has not started');
+      const buffer = encode(sim);
+      return transfer(buffer, [buffer]);
+    },
+  };
+}

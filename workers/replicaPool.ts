@@ -1,0 +1,141 @@
+/**
+ * Runs R replicas of one case side by side, one per worker, and merges what they sampled.
+ *
+ * Independent of the thread API: a ReplicaFactory makes one worker-backed replica (Web Worker in the browser,
+ * worker_threads in Node). Faults: if a worker dies or throws, the others carry on; the lost replica is reported
+ * with its reason, and whatever it had sampled up to its last periodic snapshot is kept and merged — nothing
+ * sampled is dropped silently. Cancelling stops every replica after its current chunk and keeps all samples.
+ */
+import { proxy, type Remote } from 'comlink';
+import type { ReplicaApi, ReplicaProgress } from './protocol';
+import { decodeSampleSet } from '../engine/io/sampleFile';
+import { mergeSampleSets } from '../engine/results/mergeSamples';
+import type { SampleSet } from '../engine/results/sampleSet';
+
+export interface ReplicaHandle {
+  readonly api: Remote<ReplicaApi>;
+  /** Registers a listener called once if the worker dies or fails outside a call. */
+  onFailure(listener: (reason: string) => void): void;
+  terminate(): void;
+}
+
+export type ReplicaFactory = (stream: number) => ReplicaHandle;
+
+export interface PoolProgress {
+  /** Latest report of each replica (undefined before its first report). */
+  readonly replicas: readonly (ReplicaProgress | undefined)[];
+  readonly lost: readonly number[];
+  readonly particleSteps: number;
+}
+
+export type ReplicaStatus = 'completed' | 'cancelled' | 'lost';
+
+export interface ReplicaReport {
+  readonly stream: number;
+  readonly status: ReplicaStatus;
+  /** Why a replica was lost, or why it failed to start. */
+  readonly reason?: string;
+  readonly stepsDone: number;
+  readonly particleSteps: number;
+  readonly wallSeconds: number;
+  /** Its samples: final ones, or for a lost replica its last snapshot (null if it never took one). */
+  readonly samples: SampleSet | null;
+}
+
+export interface PoolOutcome {
+  readonly replicas: readonly ReplicaReport[];
+  /** All replicas' samples merged; null when no replica sampled anything. */
+  readonly merged: SampleSet | null;
+}
+
+export interface PoolOptions {
+  readonly caseInput: unknown;
+  readonly replicas: number;
+  readonly createReplica: ReplicaFactory;
+  readonly onProgress?: (p: PoolProgress) => void;
+  /** Interval of the safety snapshots taken from every replica (ms). */
+  readonly snapshotEveryMs?: number;
+  readonly chunkMilliseconds?: number;
+}
+
+export interface ReplicaPoolRun {
+  readonly done: Promise<PoolOutcome>;
+  pause(): void;
+  resume(): void;
+  cancel(): void;
+}
+
+export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
+  if (!Number.isInteger(options.replicas) || options.replicas < 1) throw new Error(`replicas must be a whole number of at least 1, got ${options.replicas}`);
+  const handles: ReplicaHandle[] = [];
+  const latest: (ReplicaProgress | undefined)[] = new Array(options.replicas).fill(undefined);
+  const lost: number[] = [];
+  const lastSnapshot: (ArrayBuffer | null)[] = new Array(options.replicas).fill(null);
+  const emit = () => {
+    const particleSteps = latest.reduce((s, p) => s + (p?.particleSteps ?? 0), 0);
+    options.onProgress?.({ replicas: latest, lost, particleSteps });
+  };
+
+  const runOne = async (stream: number): Promise<ReplicaReport> => {
+    let handle: ReplicaHandle;
+    try {
+      handle = options.createReplica(stream);
+    } catch (e) {
+      lost.push(stream);
+      return { stream, status: 'lost', reason: `could not start a worker: ${(e as Error).message}`, stepsDone: 0, particleSteps: 0, wallSeconds: 0, samples: null };
+    }
+    handles[stream] = handle;
+    const failure = new Promise<string>((resolve) => handle.onFailure(resolve));
+    const snapshots = setInterval(() => {
+      handle.api.snapshot().then((b) => (lastSnapshot[stream] = b), () => undefined);
+    }, options.snapshotEveryMs ?? 5000);
+    try {
+      const started = handle.api.start(
+        { caseInput: options.caseInput, stream, chunkMilliseconds: options.chunkMilliseconds },
+        proxy((p: ReplicaProgress) => {
+          latest[stream] = p;
+          emit();
+        }),
+      );
+      const result = await Promise.race([started.then((o) => ({ ok: true as const, o })), failure.then((reason) => ({ ok: false as const, reason }))]);
+      if (result.ok) {
+        const o = result.o;
+        return { stream, status: o.end, stepsDone: o.stepsDone, particleSteps: o.particleSteps, wallSeconds: o.wallSeconds, samples: decodeSampleSet(o.samples) };
+      }
+      return lostReport(stream, result.reason);
+    } catch (e) {
+      return lostReport(stream, (e as Error).message ?? String(e));
+    } finally {
+      clearInterval(snapshots);
+      handle.terminate();
+    }
+  };
+
+  const lostReport = (stream: number, reason: string): ReplicaReport => {
+    lost.push(stream);
+    emit();
+    const p = latest[stream];
+    const snap = lastSnapshot[stream];
+    return {
+      stream,
+      status: 'lost',
+      reason,
+      stepsDone: p?.stepsDone ?? 0,
+      particleSteps: p?.particleSteps ?? 0,
+      wallSeconds: p?.elapsedSeconds ?? 0,
+      samples: snap ? decodeSampleSet(snap) : null,
+    };
+  };
+
+  const done = Promise.all(Array.from({ length: options.replicas }, (_, k) => runOne(k))).then((replicas) => {
+    const sets = replicas.map((r) => r.samples).filter((s): s is SampleSet => s !== null && s.counters.sampledSteps > 0);
+    return { replicas, merged: sets.length ? mergeSampleSets(sets) : null };
+  });
+  const each = (f: (api: Remote<ReplicaApi>) => Promise<void>) => handles.forEach((h) => h && f(h.api).catch(() => undefined));
+  return {
+    done,
+    pause: () => each((a) => a.pause()),
+    resume: () => each((a) => a.resume()),
+    cancel: () => each((a) => a.cancel()),
+  };
+}
