@@ -11,9 +11,10 @@
  * is reported next to the figures (item 9), everything is written to bench-results.json at the repository root, and
  * the process ends explicitly (item 10).
  *
- * Options: --sizes 1e5,1e6   --steps 300,40 (one per size)   --repeats 3   --out <file>
+ * Options: --sizes 1e5,1e6   --steps 300,40 (one per size)   --repeats 3   --out <file>   --scaling no (skip replicas)
  */
 import { writeFileSync } from 'node:fs';
+import { measureReplicaScaling } from './replicaScaling';
 import os from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { couetteBenchCase } from './couetteBenchCase';
@@ -122,7 +123,7 @@ function printTable(results: SizeResult[]): void {
   console.log(' per-cell sampling, which runs inside the collision pass; sample is the batch bookkeeping)');
 }
 
-function main(): void {
+async function main(): Promise<void> {
   const sizes = option('sizes', '1e5,1e6').split(',').map(Number);
   const stepsList = option('steps', '300,40').split(',').map(Number);
   const repeats = Number(option('repeats', '3'));
@@ -139,17 +140,23 @@ function main(): void {
     results.push(measure(n, steps, repeats));
   });
   printTable(results);
+  const scaling = option('scaling', 'yes') === 'no' ? null : await measureReplicaScaling();
+  if (scaling) {
+    const [one, many] = scaling.runs;
+    console.log(`replicas on worker threads: 1 → ${one.mParticleStepsPerS.toFixed(1)} M p-steps/s, ${many.replicas} → ${many.mParticleStepsPerS.toFixed(1)} M p-steps/s in total: ${scaling.speedup.toFixed(2)}× (wall time includes worker start-up)`);
+  }
   const report = {
     benchmark: 'hard-sphere argon Couette, ~20 particles per cell, one thread',
     date: new Date().toISOString(),
     machineBefore: idleBefore,
     loadAvgAfter: os.loadavg(),
     results,
+    replicaScaling: scaling,
   };
   writeFileSync(out, JSON.stringify(report, null, 2) + '\n');
   console.log(`written ${out}`);
 }
 
-main();
+await main();
 // A Node process occasionally stayed alive after its work (performance guide, item 10).
 process.exit(0);
