@@ -3,13 +3,24 @@
  * dist-cli/replica.node.mjs next to the bundle that imports this module (Node 20 cannot run .ts in a worker).
  */
 import { Worker } from 'node:worker_threads';
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 import { wrap } from 'comlink';
 import nodeEndpoint from 'comlink/dist/esm/node-adapter';
 import type { ReplicaApi } from './protocol';
 import type { ReplicaFactory, ReplicaHandle } from './replicaPool';
 
+/**
+ * The built worker entry: next to this module when the bundler inlined it into an entry file, one folder up when it
+ * went into a shared chunk (dist-cli/chunks/).
+ */
+function defaultWorkerUrl(): URL {
+  const candidates = [new URL('./replica.node.mjs', import.meta.url), new URL('../replica.node.mjs', import.meta.url)];
+  return candidates.find((u) => existsSync(fileURLToPath(u))) ?? candidates[0];
+}
+
 export function nodeReplicaFactory(
-  workerUrl: URL = new URL('./replica.node.mjs', import.meta.url),
+  workerUrl: URL = defaultWorkerUrl(),
   /** Sees each worker as it starts (diagnostics, and the fault tests that kill one). */
   onWorker?: (worker: Worker, stream: number) => void,
 ): ReplicaFactory {
