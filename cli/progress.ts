@@ -23,6 +23,8 @@ export interface Progress {
   finish(stepsDone: number): void;
   /** Ends an in-place line without drawing again (before printing something else). */
   clear(): void;
+  /** Text appended to the line from now on (e.g. the precision reached and the time to the target). */
+  setNote(text: string): void;
 }
 
 export function progressText(stepsDone: number, o: { totalSteps: number; transientSteps: number }, elapsedS: number): string {
@@ -41,8 +43,9 @@ export function createProgress(o: ProgressOptions): Progress {
   const start = now();
   let last = tty ? start : start - interval; // a log gets its first line at once
   let open = false;
+  let note = '';
   const draw = (stepsDone: number) => {
-    const text = progressText(stepsDone, o, (now() - start) / 1000);
+    const text = progressText(stepsDone, o, (now() - start) / 1000) + (note ? `  ${note}` : '');
     if (tty) {
       o.stream.write(`\r${text}\x1b[K`);
       open = true;
@@ -64,6 +67,9 @@ export function createProgress(o: ProgressOptions): Progress {
     clear() {
       if (open) o.stream.write('\n');
       open = false;
+    },
+    setNote(text) {
+      note = text;
     },
   };
 }

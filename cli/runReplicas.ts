@@ -6,6 +6,9 @@
 import type { Case } from '../engine/case/schema';
 import type { SampleSet } from '../engine/results/sampleSet';
 import { runReplicaPool, type ReplicaReport } from '../workers/replicaPool';
+import { summarizeSamples } from '../engine/results/summarize';
+import { evaluateStop, relativeHalfWidthOf, estimateRemaining, type PrecisionTarget } from '../engine/stats/stopping';
+import { duration } from './format';
 import { nodeReplicaFactory } from '../workers/nodeReplica';
 import type { Progress } from './progress';
 
@@ -13,6 +16,8 @@ export interface ReplicaRunOutcome {
   readonly merged: SampleSet | null;
   readonly replicas: readonly ReplicaReport[];
   readonly cancelled: boolean;
+  /** The stopping rule that ended the run early, or null. */
+  readonly stoppedBy: string | null;
   readonly wallSeconds: number;
   readonly particleSteps: number;
 }
@@ -20,13 +25,17 @@ export interface ReplicaRunOutcome {
 export async function runReplicas(
   caseData: Case,
   replicas: number,
-  o: { progress?: Progress; isInterrupted: () => boolean; workerUrl?: URL },
+  o: { progress?: Progress; isInterrupted: () => boolean; workerUrl?: URL; stopping?: StoppingOptions },
 ): Promise<ReplicaRunOutcome> {
   const t0 = performance.now();
+  const stopping = o.stopping;
   const pool = runReplicaPool({
     caseInput: caseData,
     replicas,
     createReplica: nodeReplicaFactory(o.workerUrl),
+    sampleSteps: stopping?.maxSampleSteps,
+    snapshotEveryMs: stopping && (stopping.target || stopping.maxSeconds !== undefined) ? 2000 : 5000,
+    check: stopping ? (merged, elapsed) => checkStop(merged, elapsed, stopping, o.progress) : undefined,
     onProgress: (p) => {
       const live = p.replicas.filter((r, k) => r && !p.lost.includes(k));
       if (live.length) o.progress?.update(Math.round(live.reduce((s, r) => s + r!.stepsDone, 0) / live.length));
@@ -45,12 +54,46 @@ export async function runReplicas(
       merged: outcome.merged,
       replicas: outcome.replicas,
       cancelled,
+      stoppedBy: outcome.stoppedBy,
       wallSeconds: (performance.now() - t0) / 1000,
       particleSteps: outcome.replicas.reduce((s, r) => s + r.particleSteps, 0),
     };
   } finally {
     clearInterval(watch);
   }
+}
+
+export interface StoppingOptions {
+  readonly target?: PrecisionTarget;
+  readonly maxSeconds?: number;
+  /** Sampling steps per replica (the step budget). */
+  readonly maxSampleSteps?: number;
+}
+
+/** Reads `walls.top.shearStress` style paths from a result: the estimate, or undefined. */
+export function estimateAt(result: unknown, path: string): { mean: number; ci95: number } | undefined {
+  let node: unknown = result;
+  for (const key of path.split('.')) {
+    if (node === null || typeof node !== 'object' || !Object.hasOwn(node, key)) return undefined;
+    node = (node as Record<string, unknown>)[key];
+  }
+  const e = node as { mean?: unknown; ci95?: unknown };
+  return typeof e?.mean === 'number' && typeof e.ci95 === 'number' ? { mean: e.mean, ci95: e.ci95 } : undefined;
+}
+
+function checkStop(merged: SampleSet, elapsedSeconds: number, s: StoppingOptions, progress?: Progress): string | null {
+  const estimate = s.target ? estimateAt(summarizeSamples(merged), s.target.path) : undefined;
+  const decision = evaluateStop({ stepsDone: 0, elapsedSeconds, maxSeconds: s.maxSeconds, target: s.target, estimate });
+  if (s.target && estimate && Number.isFinite(estimate.ci95)) {
+    const rel = relativeHalfWidthOf(estimate);
+    let note = `${s.target.path} ±${(100 * rel).toPrecision(2)} % (target ${(100 * s.target.relativeHalfWidth).toPrecision(2)} %)`;
+    if (Number.isFinite(rel) && rel > s.target.relativeHalfWidth && merged.counters.sampledSteps > 0) {
+      const left = estimateRemaining(rel, s.target.relativeHalfWidth, merged.counters.sampledSteps, elapsedSeconds);
+      if (left.additionalSeconds !== undefined) note += `, ~${duration(left.additionalSeconds)} to go`;
+    }
+    progress?.setNote(note);
+  }
+  return decision.stop ? decision.reason : null;
 }
 
 /** What replicas.json says of each replica. */

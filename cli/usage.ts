@@ -8,7 +8,8 @@ export const PRESET_USAGE = `Usage:
 Values may carry units: --set gap=2mm --set temperature=25C --set knudsen=0.5`;
 
 export const RUN_USAGE = `Usage:
-  tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE] [--quiet]
+  tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE]
+             [--target Q=F] [--max-steps N] [--max-seconds S] [--quiet]
 
 Runs the case and writes summary.json, profiles.csv, fields.csv, surfaces.csv and case.json (the case as run,
 complete and explicit) into DIR. The files appear only when the run has ended: an error leaves DIR as it was.
@@ -18,6 +19,12 @@ complete and explicit) into DIR. The files appear only when the run has ended: a
                         replicas.json lists each replica's status. With replicas, Ctrl-C stops them and writes what
                         was sampled (exit code 130); with one, Ctrl-C writes nothing.
   --save-samples FILE   also write the raw batch sums as a sample file, for tenuis merge
+  --target Q=F          stop when quantity Q's 95 % half-width is within fraction F of its mean, e.g.
+                        walls.top.shearStress=0.01 (or =1%); the progress line shows the precision reached and the
+                        estimated time to the target. Without --max-steps, sampling may run to 50 × the case's
+                        sampleSteps per replica.
+  --max-steps N         sampling steps per replica (overrides the case's sampleSteps)
+  --max-seconds S       stop sampling after S seconds of wall time
   --quiet, -q           no progress line and no summary (warnings and errors are still printed)`;
 
 export const MERGE_USAGE = `Usage:

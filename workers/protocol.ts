@@ -11,6 +11,8 @@ export interface ReplicaStartRequest {
   readonly caseInput: unknown;
   /** Replica number: selects the random stream, so replicas of one seed are independent. */
   readonly stream: number;
+  /** Sampling steps to run, overriding the plan's (e.g. a step budget when a precision target decides the end). */
+  readonly sampleSteps?: number;
   /** Target wall time of one uninterrupted chunk of steps (ms); controls how quickly pause and cancel act. */
   readonly chunkMilliseconds?: number;
   /** Minimum interval between progress reports (ms). */

@@ -32,7 +32,8 @@ export function createReplicaApi(clock: () => number = Date.now): ReplicaApi {
       const plan = planned.plan;
       const s = createSimulation(plan, { stream: request.stream });
       sim = s;
-      const totalSteps = plan.transientSteps + plan.sampleSteps;
+      const sampleSteps = request.sampleSteps === undefined ? plan.sampleSteps : Math.ceil(request.sampleSteps / plan.batchSteps) * plan.batchSteps;
+      const totalSteps = plan.transientSteps + sampleSteps;
       const chunkMs = request.chunkMilliseconds ?? DEFAULT_CHUNK_MS;
       const progressMs = request.progressMilliseconds ?? DEFAULT_PROGRESS_MS;
       const t0 = clock();

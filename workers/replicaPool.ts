@@ -44,6 +44,8 @@ export interface ReplicaReport {
 
 export interface PoolOutcome {
   readonly replicas: readonly ReplicaReport[];
+  /** Why the pool stopped the replicas early (a stopping rule), or null. */
+  readonly stoppedBy: string | null;
   /** All replicas' samples merged; null when no replica sampled anything. */
   readonly merged: SampleSet | null;
 }
@@ -53,9 +55,16 @@ export interface PoolOptions {
   readonly replicas: number;
   readonly createReplica: ReplicaFactory;
   readonly onProgress?: (p: PoolProgress) => void;
-  /** Interval of the safety snapshots taken from every replica (ms). */
+  /** Interval of the snapshots taken from every replica (ms): for fault safety and for `check`. */
   readonly snapshotEveryMs?: number;
   readonly chunkMilliseconds?: number;
+  /** Sampling steps per replica, overriding the plan's. */
+  readonly sampleSteps?: number;
+  /**
+   * Called with all replicas' samples merged after each round of snapshots; returning a reason stops every
+   * replica (keeping all samples), e.g. when a precision target is met.
+   */
+  readonly check?: (merged: SampleSet, elapsedSeconds: number) => string | null;
 }
 
 export interface ReplicaPoolRun {
@@ -71,6 +80,32 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
   const latest: (ReplicaProgress | undefined)[] = new Array(options.replicas).fill(undefined);
   const lost: number[] = [];
   const lastSnapshot: (ArrayBuffer | null)[] = new Array(options.replicas).fill(null);
+  const finished: boolean[] = new Array(options.replicas).fill(false);
+  const t0 = Date.now();
+  let stoppedBy: string | null = null;
+  let checking = false;
+  // One round of snapshots from every running replica: kept for fault safety, merged for the stopping check.
+  const snapshotRound = async () => {
+    if (checking || stoppedBy) return;
+    checking = true;
+    try {
+      await Promise.all(
+        handles.map((h, k) => (h && !finished[k] ? h.api.snapshot().then((b) => void (lastSnapshot[k] = b), () => undefined) : undefined)),
+      );
+      if (!options.check) return;
+      const sets = lastSnapshot.filter((b): b is ArrayBuffer => b !== null).map((b) => decodeSampleSet(b.slice(0)));
+      const sampled = sets.filter((x) => x.counters.sampledSteps > 0);
+      if (!sampled.length) return;
+      const reason = options.check(mergeSampleSets(sampled), (Date.now() - t0) / 1000);
+      if (reason && !stoppedBy) {
+        stoppedBy = reason;
+        handles.forEach((h) => h && h.api.cancel().catch(() => undefined));
+      }
+    } finally {
+      checking = false;
+    }
+  };
+  const snapshotTimer = setInterval(() => void snapshotRound(), options.snapshotEveryMs ?? 5000);
   const emit = () => {
     const particleSteps = latest.reduce((s, p) => s + (p?.particleSteps ?? 0), 0);
     options.onProgress?.({ replicas: latest, lost, particleSteps });
@@ -86,12 +121,9 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
     }
     handles[stream] = handle;
     const failure = new Promise<string>((resolve) => handle.onFailure(resolve));
-    const snapshots = setInterval(() => {
-      handle.api.snapshot().then((b) => (lastSnapshot[stream] = b), () => undefined);
-    }, options.snapshotEveryMs ?? 5000);
     try {
       const started = handle.api.start(
-        { caseInput: options.caseInput, stream, chunkMilliseconds: options.chunkMilliseconds },
+        { caseInput: options.caseInput, stream, chunkMilliseconds: options.chunkMilliseconds, sampleSteps: options.sampleSteps },
         proxy((p: ReplicaProgress) => {
           latest[stream] = p;
           emit();
@@ -106,7 +138,7 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
     } catch (e) {
       return lostReport(stream, (e as Error).message ?? String(e));
     } finally {
-      clearInterval(snapshots);
+      finished[stream] = true;
       handle.terminate();
     }
   };
@@ -128,8 +160,9 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
   };
 
   const done = Promise.all(Array.from({ length: options.replicas }, (_, k) => runOne(k))).then((replicas) => {
+    clearInterval(snapshotTimer);
     const sets = replicas.map((r) => r.samples).filter((s): s is SampleSet => s !== null && s.counters.sampledSteps > 0);
-    return { replicas, merged: sets.length ? mergeSampleSets(sets) : null };
+    return { replicas, merged: sets.length ? mergeSampleSets(sets) : null, stoppedBy };
   });
   const each = (f: (api: Remote<ReplicaApi>) => Promise<void>) => handles.forEach((h) => h && f(h.api).catch(() => undefined));
   return {

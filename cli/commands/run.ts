@@ -7,7 +7,11 @@ import { createSimulation } from '../../engine/simulation';
 import { summarizeSamples } from '../../engine/results/summarize';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
 import { encodeSampleSet } from '../../engine/io/sampleFile';
-import { runReplicas, replicaReportJson } from '../runReplicas';
+import { runReplicas, replicaReportJson, type StoppingOptions } from '../runReplicas';
+import { parseTarget } from '../../engine/stats/stopping';
+import { WALL_QUANTITIES } from '../../engine/results/wallQuantities';
+import type { Plan } from '../../engine/case/plan';
+import { SIDE_NAMES } from '../../engine/case/schema';
 import { writeBinaryAtomically } from '../writeResults';
 import { CliError } from '../errors';
 import { resultFiles, type Performance } from '../../engine/results/exports';
@@ -36,6 +40,29 @@ function watchInterrupt(): { readonly interrupted: boolean; dispose(): void } {
   };
 }
 
+/** --target, --max-steps, --max-seconds → the pool's stopping options (undefined when none is given). */
+function stoppingOptions(values: { target?: string; 'max-steps'?: string; 'max-seconds'?: string }, plan: Plan): StoppingOptions | undefined {
+  if (values.target === undefined && values['max-steps'] === undefined && values['max-seconds'] === undefined) return undefined;
+  const walls = SIDE_NAMES.filter((side) => plan.boundaries[side].type === 'wall');
+  const knownPaths = walls.flatMap((w) => WALL_QUANTITIES.map((q) => `walls.${w}.${q}`));
+  let target;
+  try {
+    target = values.target === undefined ? undefined : parseTarget(values.target, knownPaths);
+  } catch (e) {
+    throw new UsageError(`--target: ${(e as Error).message}`, RUN_USAGE);
+  }
+  const positive = (name: string, text: string | undefined, integer: boolean): number | undefined => {
+    if (text === undefined) return undefined;
+    const v = Number(text);
+    if (!Number.isFinite(v) || v <= 0 || (integer && !Number.isInteger(v))) throw new UsageError(`--${name} ${text}: give a ${integer ? 'whole ' : ''}number above 0`, RUN_USAGE);
+    return v;
+  };
+  const maxSteps = positive('max-steps', values['max-steps'], true);
+  // With a target and no step budget, allow up to 50 times the planned sampling (a safety cap, documented in --help).
+  const maxSampleSteps = maxSteps ?? (target ? 50 * plan.sampleSteps : undefined);
+  return { target, maxSeconds: positive('max-seconds', values['max-seconds'], false), maxSampleSteps };
+}
+
 function parseReplicasOption(text: string): number {
   const n = Number(text);
   if (!Number.isInteger(n) || n < 1 || n > 256) throw new UsageError(`--replicas ${text}: give a whole number from 1 to 256 (one per core is the useful maximum)`, RUN_USAGE);
@@ -53,6 +80,9 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
         seed: { type: 'string' },
         replicas: { type: 'string', short: 'r' },
         'save-samples': { type: 'string' },
+        target: { type: 'string' },
+        'max-steps': { type: 'string' },
+        'max-seconds': { type: 'string' },
         quiet: { type: 'boolean', short: 'q' },
         help: { type: 'boolean', short: 'h' },
       },
@@ -76,10 +106,11 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
   for (const w of plan.warnings) io.stderr.write(`warning: ${w}\n`);
 
   const replicas = values.replicas === undefined ? 1 : parseReplicasOption(values.replicas);
+  const stopping = stoppingOptions(values, plan);
   const savePath = values['save-samples'];
   const progress = quiet
     ? undefined
-    : createProgress({ stream: io.stderr, totalSteps: plan.transientSteps + plan.sampleSteps, transientSteps: plan.transientSteps });
+    : createProgress({ stream: io.stderr, totalSteps: plan.transientSteps + (stopping?.maxSampleSteps ?? plan.sampleSteps), transientSteps: plan.transientSteps });
   const interrupt = watchInterrupt();
   let samples: SampleSet | null;
   let wallSeconds: number;
@@ -87,8 +118,9 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
   let interrupted: boolean;
   const extraFiles: Record<string, string> = {};
   const lostWarnings: string[] = [];
+  let stopNote: string | null = null;
   try {
-    if (replicas === 1) {
+    if (replicas === 1 && !stopping) {
       const sim = createSimulation(plan);
       const outcome = await advanceInChunks(sim, { onProgress: (d) => progress?.update(d), shouldStop: () => interrupt.interrupted });
       if (!outcome.completed) {
@@ -102,12 +134,13 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
       particleSteps = sim.state.particleSteps;
       interrupted = false;
     } else {
-      const outcome = await runReplicas(caseData, replicas, { progress, isInterrupted: () => interrupt.interrupted });
-      progress?.finish(plan.transientSteps + plan.sampleSteps);
+      const outcome = await runReplicas(caseData, replicas, { progress, isInterrupted: () => interrupt.interrupted, stopping });
+      progress?.finish(Math.round(outcome.replicas.reduce((sum, r) => sum + r.stepsDone, 0) / outcome.replicas.length));
       samples = outcome.merged;
       wallSeconds = outcome.wallSeconds;
       particleSteps = outcome.particleSteps;
       interrupted = outcome.cancelled;
+      if (outcome.stoppedBy) stopNote = `stopped: ${outcome.stoppedBy}`;
       extraFiles['replicas.json'] = `${prettyJson({ replicas: outcome.replicas.map(replicaReportJson) })}\n`;
       for (const r of outcome.replicas) {
         if (r.status === 'lost') {
@@ -136,6 +169,7 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
   writeResultsAtomically(outDir, files);
   if (savePath) writeBinaryAtomically(savePath, encodeSampleSet(samples));
   for (const w of result.warnings) if (!plan.warnings.includes(w)) io.stderr.write(`warning: ${w}\n`);
+  if (stopNote && !quiet) io.stderr.write(`${stopNote}\n`);
   if (!quiet) io.stderr.write(`${runSummary(result, performance, outDir)}\n`);
   if (interrupted) return EXIT_INTERRUPTED;
   return EXIT_OK;

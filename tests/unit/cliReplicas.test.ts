@@ -54,6 +54,20 @@ describe('tenuis run --replicas and tenuis merge', () => {
     expect(existsSync(join(work, 'bad'))).toBe(false);
   });
 
+  it('--target stops sampling once the quantity is precise enough, and says so', () => {
+    const out = join(work, 'target');
+    const r = tenuis('run', casePath, '--out', out, '--target', 'walls.bottom.normalStress=0.01', '--max-steps', '200000');
+    expect(r.code, r.stderr).toBe(0);
+    expect(r.stderr).toMatch(/reached its target/);
+    const s = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
+    const p = s.walls.bottom.normalStress;
+    expect(p.ci95 / p.mean).toBeLessThanOrEqual(0.01);
+    expect(s.numerics.sampleSteps).toBeLessThan(200000);
+    const bad = tenuis('run', casePath, '--out', join(work, 'never2'), '--target', 'walls.left.shearStress=0.01');
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toMatch(/did you mean/);
+  });
+
   it('refuses a damaged sample file with a message naming the file', () => {
     const damaged = join(work, 'damaged.samples');
     writeFileSync(damaged, Buffer.from('not a sample file at all'));
