@@ -9,6 +9,8 @@ export interface ChunkOptions {
   readonly targetChunkMs?: number;
   readonly now?: () => number;
   readonly onProgress?: (stepsDone: number) => void;
+  /** Chunks also end at every multiple of this many steps (e.g. so a checkpoint is due exactly there). */
+  readonly breakEvery?: number;
   /** Checked between chunks; true stops the run early. */
   readonly shouldStop?: () => boolean;
 }
@@ -21,19 +23,20 @@ export interface ChunkOutcome {
 
 const yieldToEventLoop = () => new Promise<void>((resolve) => setImmediate(resolve));
 
-/** Advances `sim` by transientSteps + sampleSteps of its plan, or until shouldStop() says so. */
+/** Advances `sim` to transientSteps + sampleSteps of its plan, or until shouldStop() says so. */
 export async function advanceInChunks(sim: Simulation, o: ChunkOptions = {}): Promise<ChunkOutcome> {
   const now = o.now ?? (() => performance.now());
   const target = o.targetChunkMs ?? 250;
   const transient = sim.plan.transientSteps;
   const total = transient + sim.plan.sampleSteps;
   const start = now();
-  let done = 0;
+  let done = sim.state.step; // a resumed simulation continues where it stopped
   let chunk = 1; // grows to about `target` ms of work after the first few chunks
   while (done < total) {
     if (o.shouldStop?.()) return { completed: false, stepsDone: done, wallSeconds: (now() - start) / 1000 };
     // Chunks end at the transient/sampling boundary so the progress line shows the phase change on time.
-    const end = done < transient ? transient : total;
+    let end = done < transient ? transient : total;
+    if (o.breakEvery) end = Math.min(end, (Math.floor(done / o.breakEvery) + 1) * o.breakEvery);
     const n = Math.min(chunk, end - done);
     const t0 = now();
     advance(sim, n);

@@ -9,7 +9,8 @@ Values may carry units: --set gap=2mm --set temperature=25C --set knudsen=0.5`;
 
 export const RUN_USAGE = `Usage:
   tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE]
-             [--target Q=F] [--max-steps N] [--max-seconds S] [--quiet]
+             [--target Q=F] [--max-steps N] [--max-seconds S] [--checkpoint FILE] [--quiet]
+  tenuis run --resume FILE --out DIR [--checkpoint FILE] [--quiet]
 
 Runs the case and writes summary.json, profiles.csv, fields.csv, surfaces.csv and case.json (the case as run,
 complete and explicit) into DIR. The files appear only when the run has ended: an error leaves DIR as it was.
@@ -25,6 +26,10 @@ complete and explicit) into DIR. The files appear only when the run has ended: a
                         sampleSteps per replica.
   --max-steps N         sampling steps per replica (overrides the case's sampleSteps)
   --max-seconds S       stop sampling after S seconds of wall time
+  --checkpoint FILE     keep a checkpoint of the whole run in FILE (every --checkpoint-every N steps, by default
+                        every twentieth of the run, and on Ctrl-C); single replica only
+  --resume FILE         continue a checkpointed run (no case file): the result is exactly that of an
+                        uninterrupted run
   --quiet, -q           no progress line and no summary (warnings and errors are still printed)`;
 
 export const MERGE_USAGE = `Usage:

@@ -3,7 +3,9 @@
  * run the transient and sampling steps with a progress line, then summarise and write all result files at once.
  */
 import { parseArgs } from 'node:util';
-import { createSimulation } from '../../engine/simulation';
+import { readFileSync } from 'node:fs';
+import { createSimulation, type Simulation } from '../../engine/simulation';
+import { encodeCheckpoint, decodeCheckpoint } from '../../engine/io/checkpoint';
 import { summarizeSamples } from '../../engine/results/summarize';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
 import { encodeSampleSet } from '../../engine/io/sampleFile';
@@ -63,6 +65,26 @@ function stoppingOptions(values: { target?: string; 'max-steps'?: string; 'max-s
   return { target, maxSeconds: positive('max-seconds', values['max-seconds'], false), maxSampleSteps };
 }
 
+function parseCheckpointEvery(text: string): number {
+  const n = Number(text);
+  if (!Number.isInteger(n) || n < 1) throw new UsageError(`--checkpoint-every ${text}: give a whole number of steps, at least 1`, RUN_USAGE);
+  return n;
+}
+
+function readCheckpoint(path: string): { sim: Simulation } {
+  let bytes: Buffer;
+  try {
+    bytes = readFileSync(path);
+  } catch (e) {
+    throw new CliError(`--resume ${path}: cannot read it (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`);
+  }
+  try {
+    return decodeCheckpoint(bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength) as ArrayBuffer);
+  } catch (e) {
+    throw new CliError(`--resume ${path}: ${(e as Error).message}`);
+  }
+}
+
 function parseReplicasOption(text: string): number {
   const n = Number(text);
   if (!Number.isInteger(n) || n < 1 || n > 256) throw new UsageError(`--replicas ${text}: give a whole number from 1 to 256 (one per core is the useful maximum)`, RUN_USAGE);
@@ -83,6 +105,9 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
         target: { type: 'string' },
         'max-steps': { type: 'string' },
         'max-seconds': { type: 'string' },
+        checkpoint: { type: 'string' },
+        'checkpoint-every': { type: 'string' },
+        resume: { type: 'string' },
         quiet: { type: 'boolean', short: 'q' },
         help: { type: 'boolean', short: 'h' },
       },
@@ -95,18 +120,25 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
     io.stdout.write(`${RUN_USAGE}\n`);
     return EXIT_OK;
   }
-  if (positionals.length !== 1) throw new UsageError('run needs exactly one case file', RUN_USAGE);
+  const resumed = values.resume === undefined ? undefined : readCheckpoint(values.resume);
+  if (resumed ? positionals.length > 1 : positionals.length !== 1) throw new UsageError('run needs exactly one case file (none with --resume)', RUN_USAGE);
   if (!values.out) throw new UsageError('run needs an output folder: --out DIR', RUN_USAGE);
   const outDir = values.out;
   const quiet = values.quiet === true;
+  if (resumed && values.seed !== undefined) throw new UsageError('--seed cannot change a resumed run: its random stream is in the checkpoint', RUN_USAGE);
 
   const seed = values.seed === undefined ? undefined : parseSeedOption(values.seed);
-  const { caseData, plan } = loadCase(positionals[0], { seed });
+  const { caseData, plan } = resumed ? { caseData: resumed.sim.plan.caseData, plan: resumed.sim.plan } : loadCase(positionals[0], { seed });
   checkOutputDir(outDir);
   for (const w of plan.warnings) io.stderr.write(`warning: ${w}\n`);
 
   const replicas = values.replicas === undefined ? 1 : parseReplicasOption(values.replicas);
   const stopping = stoppingOptions(values, plan);
+  const checkpointPath = values.checkpoint;
+  if ((checkpointPath || resumed) && (replicas > 1 || stopping)) {
+    throw new UsageError('--checkpoint and --resume work with a single replica and the case\'s own step count (no --replicas, --target, --max-steps or --max-seconds)', RUN_USAGE);
+  }
+  const checkpointEvery = values['checkpoint-every'] === undefined ? undefined : parseCheckpointEvery(values['checkpoint-every']);
   const savePath = values['save-samples'];
   const progress = quiet
     ? undefined
@@ -121,11 +153,29 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
   let stopNote: string | null = null;
   try {
     if (replicas === 1 && !stopping) {
-      const sim = createSimulation(plan);
-      const outcome = await advanceInChunks(sim, { onProgress: (d) => progress?.update(d), shouldStop: () => interrupt.interrupted });
+      const sim = resumed ? resumed.sim : createSimulation(plan);
+      const total = plan.transientSteps + plan.sampleSteps;
+      // Default interval: about every twentieth of the run.
+      const every = checkpointEvery ?? Math.max(1, Math.ceil(total / 20));
+      let nextCheckpoint = sim.state.step + every;
+      const saveCheckpoint = () => writeBinaryAtomically(checkpointPath!, encodeCheckpoint(sim, 0));
+      const outcome = await advanceInChunks(sim, {
+        onProgress: (d) => {
+          progress?.update(d);
+          if (checkpointPath && d >= nextCheckpoint && d < total) {
+            saveCheckpoint();
+            nextCheckpoint = d + every;
+          }
+        },
+        shouldStop: () => interrupt.interrupted,
+        breakEvery: checkpointPath ? every : undefined,
+      });
       if (!outcome.completed) {
         progress?.clear();
-        io.stderr.write(`interrupted at step ${outcome.stepsDone}: nothing was written\n`);
+        if (checkpointPath) {
+          saveCheckpoint();
+          io.stderr.write(`interrupted at step ${outcome.stepsDone}: checkpoint written to ${checkpointPath}; continue with tenuis run --resume ${checkpointPath} --out ${outDir}\n`);
+        } else io.stderr.write(`interrupted at step ${outcome.stepsDone}: nothing was written\n`);
         return EXIT_INTERRUPTED;
       }
       progress?.finish(outcome.stepsDone);
