@@ -2,7 +2,7 @@
  * Drives a simulation through its transient and sampling steps in chunks of about `targetChunkMs` of work, yielding
  * to the event loop between chunks so that Ctrl-C (SIGINT) and progress output are handled while it runs.
  */
-import { advance, type Simulation } from '../engine/simulation';
+import { advance, isFinished, nextChunk, type Simulation } from '../engine/simulation';
 
 export interface ChunkOptions {
   /** Wall-clock work per chunk, ms (default 250). */
@@ -23,21 +23,17 @@ export interface ChunkOutcome {
 
 const yieldToEventLoop = () => new Promise<void>((resolve) => setImmediate(resolve));
 
-/** Advances `sim` to transientSteps + sampleSteps of its plan, or until shouldStop() says so. */
+/** Advances `sim` through its transient and sampling steps (isFinished), or until shouldStop() says so. */
 export async function advanceInChunks(sim: Simulation, o: ChunkOptions = {}): Promise<ChunkOutcome> {
   const now = o.now ?? (() => performance.now());
   const target = o.targetChunkMs ?? 250;
-  const transient = sim.plan.transientSteps;
-  const total = transient + sim.plan.sampleSteps;
   const start = now();
   let done = sim.state.step; // a resumed simulation continues where it stopped
   let chunk = 1; // grows to about `target` ms of work after the first few chunks
-  while (done < total) {
+  while (!isFinished(sim)) {
     if (o.shouldStop?.()) return { completed: false, stepsDone: done, wallSeconds: (now() - start) / 1000 };
-    // Chunks end at the transient/sampling boundary so the progress line shows the phase change on time.
-    let end = done < transient ? transient : total;
-    if (o.breakEvery) end = Math.min(end, (Math.floor(done / o.breakEvery) + 1) * o.breakEvery);
-    const n = Math.min(chunk, end - done);
+    let n = nextChunk(sim, chunk);
+    if (o.breakEvery) n = Math.min(n, (Math.floor(done / o.breakEvery) + 1) * o.breakEvery - done);
     const t0 = now();
     advance(sim, n);
     const ms = now() - t0;

@@ -25,6 +25,8 @@ export interface Progress {
   clear(): void;
   /** Text appended to the line from now on (e.g. the precision reached and the time to the target). */
   setNote(text: string): void;
+  /** New totals, when the end of an automatic transient (and so the run's length) becomes known or is re-estimated. */
+  setTotals(totalSteps: number, transientSteps: number): void;
 }
 
 export function progressText(stepsDone: number, o: { totalSteps: number; transientSteps: number }, elapsedS: number): string {
@@ -36,7 +38,8 @@ export function progressText(stepsDone: number, o: { totalSteps: number; transie
   return `${phase.padEnd(9)} step ${String(stepsDone).padStart(width)}/${o.totalSteps}  ${pct.toFixed(0).padStart(3)}%  elapsed ${duration(elapsedS)}  remaining ~${duration(remaining)}`;
 }
 
-export function createProgress(o: ProgressOptions): Progress {
+export function createProgress(options: ProgressOptions): Progress {
+  const o = { ...options };
   const now = o.now ?? (() => performance.now());
   const tty = o.stream.isTTY === true;
   const interval = tty ? (o.ttyIntervalMs ?? 200) : (o.lineIntervalMs ?? 5000);
@@ -70,6 +73,10 @@ export function createProgress(o: ProgressOptions): Progress {
     },
     setNote(text) {
       note = text;
+    },
+    setTotals(totalSteps, transientSteps) {
+      o.totalSteps = totalSteps;
+      o.transientSteps = transientSteps;
     },
   };
 }

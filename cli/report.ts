@@ -31,7 +31,12 @@ export function planReport(p: Plan): string {
       ['cells', `${g.cellsX} × ${g.cellsY}, each ${sig(g.cellSizeXM)} m × ${sig(g.cellSizeYM)} m`],
       ['time step', `${sig(p.timeStepS)} s`],
       ['particles', `${p.initialParticles} (${sig(p.particlesPerCell)} per cell), ${sig(p.moleculesPerParticle)} molecules each`],
-      ['steps', `${p.transientSteps} transient + ${p.sampleSteps} sampled = ${total}`],
+      [
+        'steps',
+        p.transientMode === 'auto'
+          ? `transient ends when steady (estimate ${p.transientSteps}, at most ${5 * p.transientSteps}) + ${p.sampleSteps} sampled`
+          : `${p.transientSteps} transient + ${p.sampleSteps} sampled = ${total}`,
+      ],
       ['memory', `about ${bytes(p.memoryBytesEstimate)}`],
       ['seed', String(p.seed)],
     ]),

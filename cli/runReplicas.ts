@@ -38,7 +38,10 @@ export async function runReplicas(
     check: stopping ? (merged, elapsed) => checkStop(merged, elapsed, stopping, o.progress) : undefined,
     onProgress: (p) => {
       const live = p.replicas.filter((r, k) => r && !p.lost.includes(k));
-      if (live.length) o.progress?.update(Math.round(live.reduce((s, r) => s + r!.stepsDone, 0) / live.length));
+      if (!live.length) return;
+      const mean = (f: (r: NonNullable<(typeof live)[number]>) => number) => Math.round(live.reduce((s, r) => s + f(r!), 0) / live.length);
+      o.progress?.setTotals(mean((r) => r.totalSteps), live.some((r) => r!.phase === 'transient') ? Infinity : 0);
+      o.progress?.update(mean((r) => r.stepsDone));
     },
   });
   let cancelled = false;

@@ -16,6 +16,7 @@ import { collideParticles } from './kernel/collide';
 import { createBatchStore, addToBatches, type DoublingBatchStore } from './stats/doublingBatches';
 import { wallTotalsOfBatch, WALL_QUANTITIES, type WallQuantityName } from './results/wallQuantities';
 import { createSeries, pushSeries, type GrowableSeries } from './stats/series';
+import { createTransientMonitor, monitorValues, pushMonitor, type TransientMonitor } from './run/transientMonitor';
 
 /**
  * Steps between physical reorders of particle memory into cell order (performance guide, item 1). Measured on the
@@ -48,6 +49,10 @@ export interface Simulation {
   readonly wallNames: readonly SideName[];
   batchStepsDone: number;
   sampledSteps: number;
+  /** First sampled step: the plan's fixed transient, or Infinity until the monitor declares steady state. */
+  transientEndStep: number;
+  /** Watches the transient when the case leaves its length to the run (plan.transientMode 'auto'); else null. */
+  monitor: TransientMonitor | null;
   readonly phaseMs: PhaseTimes;
   readonly clock: Clock;
   timePhases: boolean;
@@ -75,6 +80,8 @@ export function createSimulation(plan: Plan, options: CreateOptions = {}): Simul
     wallNames,
     batchStepsDone: 0,
     sampledSteps: 0,
+    transientEndStep: plan.transientMode === 'auto' ? Infinity : plan.transientSteps,
+    monitor: plan.transientMode === 'auto' ? createTransientMonitor(plan.transientSteps) : null,
     phaseMs: { move: 0, index: 0, collide: 0, sample: 0 },
     clock: options.clock ?? Date.now,
     timePhases: options.timePhases ?? false,
@@ -85,12 +92,14 @@ export function createSimulation(plan: Plan, options: CreateOptions = {}): Simul
 export function advance(sim: Simulation, steps: number): void {
   const st = sim.state;
   const dt = st.timeStep;
-  const transient = sim.plan.transientSteps;
   const timed = sim.timePhases;
   const clock = sim.clock;
   const ph = sim.phaseMs;
   for (let s = 0; s < steps; s++) {
-    st.sampling = st.step >= transient;
+    if (sim.monitor && st.step < sim.transientEndStep && st.step % sim.monitor.every === 0) {
+      if (pushMonitor(sim.monitor, monitorValues(st))) sim.transientEndStep = st.step;
+    }
+    st.sampling = st.step >= sim.transientEndStep;
     let t0 = timed ? clock() : 0;
     moveParticles(st, dt);
     if (timed) { const t = clock(); ph.move += t - t0; t0 = t; }
@@ -124,7 +133,37 @@ function closeBatch(sim: Simulation): void {
 }
 
 export function isSampling(sim: Simulation): boolean {
-  return sim.state.step >= sim.plan.transientSteps;
+  return sim.state.step >= sim.transientEndStep;
+}
+
+/** True when the transient is over and the plan's sampling steps are done. */
+export function isFinished(sim: Simulation): boolean {
+  return sim.sampledSteps >= sim.plan.sampleSteps;
+}
+
+/**
+ * Steps still to run: exact once the transient has ended; before that, the planner's transient estimate stands in
+ * for the unknown end (for progress and time estimates only).
+ */
+export function stepsRemaining(sim: Simulation): number {
+  const st = sim.state;
+  if (Number.isFinite(sim.transientEndStep)) return Math.max(0, sim.plan.sampleSteps - sim.sampledSteps);
+  return Math.max(1, sim.plan.transientSteps - st.step) + sim.plan.sampleSteps;
+}
+
+/**
+ * How many steps a driver may advance next without running past the end of sampling: at most `wanted`, at most what
+ * remains, and while the transient's end is still open at most one monitor interval (the end may come at any check).
+ */
+export function nextChunk(sim: Simulation, wanted: number): number {
+  let n = Math.min(wanted, stepsRemaining(sim));
+  if (sim.monitor && !Number.isFinite(sim.transientEndStep)) n = Math.min(n, sim.monitor.every);
+  return Math.max(1, n);
+}
+
+/** Runs the simulation to the end of its sampling (the transient ending by the plan or by the monitor). */
+export function runToCompletion(sim: Simulation, chunk = 1000): void {
+  while (!isFinished(sim)) advance(sim, nextChunk(sim, chunk));
 }
 
 export type { WallQuantityName };

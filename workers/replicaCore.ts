@@ -5,7 +5,7 @@
  */
 import { transfer } from 'comlink';
 import { planFromInput } from '../engine/case/plan';
-import { createSimulation, advance, type Simulation } from '../engine/simulation';
+import { createSimulation, advance, isFinished, isSampling, nextChunk, stepsRemaining, type Simulation } from '../engine/simulation';
 import { sampleSetOf } from '../engine/results/sampleSet';
 import { encodeSampleSet } from '../engine/io/sampleFile';
 import type { ReplicaApi, ReplicaOutcome, ReplicaProgress, ReplicaStartRequest } from './protocol';
@@ -29,11 +29,11 @@ export function createReplicaApi(clock: () => number = Date.now): ReplicaApi {
       if (sim) throw new Error('this replica worker is already running a case; start a new worker for another');
       const planned = planFromInput(request.caseInput);
       if (!planned.ok) throw new Error(`the case was refused:\n${planned.errors.join('\n')}`);
-      const plan = planned.plan;
+      const planned0 = planned.plan;
+      const sampleSteps = request.sampleSteps === undefined ? planned0.sampleSteps : Math.ceil(request.sampleSteps / planned0.batchSteps) * planned0.batchSteps;
+      const plan = { ...planned0, sampleSteps };
       const s = createSimulation(plan, { stream: request.stream });
       sim = s;
-      const sampleSteps = request.sampleSteps === undefined ? plan.sampleSteps : Math.ceil(request.sampleSteps / plan.batchSteps) * plan.batchSteps;
-      const totalSteps = plan.transientSteps + sampleSteps;
       const chunkMs = request.chunkMilliseconds ?? DEFAULT_CHUNK_MS;
       const progressMs = request.progressMilliseconds ?? DEFAULT_PROGRESS_MS;
       const t0 = clock();
@@ -43,15 +43,15 @@ export function createReplicaApi(clock: () => number = Date.now): ReplicaApi {
         lastReport = now;
         onProgress({
           stream: request.stream,
-          phase: s.state.step < plan.transientSteps ? 'transient' : 'sampling',
+          phase: isSampling(s) ? 'sampling' : 'transient',
           stepsDone: s.state.step,
-          totalSteps,
+          totalSteps: s.state.step + stepsRemaining(s),
           particleSteps: s.state.particleSteps,
           elapsedSeconds: (now - t0) / 1000,
         });
       };
-      while (s.state.step < totalSteps && !cancelled) {
-        const steps = Math.min(stepsPerChunk, totalSteps - s.state.step);
+      while (!isFinished(s) && !cancelled) {
+        const steps = nextChunk(s, stepsPerChunk);
         const c0 = clock();
         advance(s, steps);
         const took = clock() - c0;

@@ -4,7 +4,7 @@
  */
 import { parseArgs } from 'node:util';
 import { readFileSync } from 'node:fs';
-import { createSimulation, type Simulation } from '../../engine/simulation';
+import { createSimulation, stepsRemaining, type Simulation } from '../../engine/simulation';
 import { encodeCheckpoint, decodeCheckpoint } from '../../engine/io/checkpoint';
 import { summarizeSamples } from '../../engine/results/summarize';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
@@ -161,6 +161,7 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
       const saveCheckpoint = () => writeBinaryAtomically(checkpointPath!, encodeCheckpoint(sim, 0));
       const outcome = await advanceInChunks(sim, {
         onProgress: (d) => {
+          progress?.setTotals(sim.state.step + stepsRemaining(sim), Number.isFinite(sim.transientEndStep) ? sim.transientEndStep : Infinity);
           progress?.update(d);
           if (checkpointPath && d >= nextCheckpoint && d < total) {
             saveCheckpoint();

@@ -70,6 +70,12 @@ export interface Plan {
   readonly particlesPerCell: number;
   readonly moleculesPerParticle: number;
   readonly initialParticles: number;
+  /**
+   * 'fixed' when the case sets sampling.transientSteps; 'auto' when the run decides (engine/run/transientMonitor.ts),
+   * and transientSteps is then the planner's estimate, which scales the monitor (sampled every estimate/40 steps,
+   * ended at 5 estimates at the latest).
+   */
+  readonly transientMode: 'auto' | 'fixed';
   readonly transientSteps: number;
   readonly sampleSteps: number;
   /** Steps per base batch of the integral-quantity series (the finest level of the blocking analysis). */
@@ -250,6 +256,7 @@ export function plan(c: Case): PlanResult {
       particlesPerCell,
       moleculesPerParticle,
       initialParticles,
+      transientMode: c.sampling.transientSteps === undefined ? 'auto' : 'fixed',
       transientSteps,
       sampleSteps,
       batchSteps,

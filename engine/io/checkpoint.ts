@@ -16,6 +16,7 @@ import { planFromInput } from '../case/plan';
 import { createSimulation, type Simulation } from '../simulation';
 import { growParticles } from '../kernel/state';
 import { createSeries } from '../stats/series';
+import { replayTransientMonitor, MONITOR_NAMES } from '../run/transientMonitor';
 
 export const CHECKPOINT_MAGIC = Uint8Array.of(0x89, 0x54, 0x4e, 0x43, 0x0d, 0x0a, 0x1a, 0x0a);
 export const CHECKPOINT_VERSION = 1;
@@ -54,6 +55,8 @@ export function encodeCheckpoint(sim: Simulation, stream: number): ArrayBuffer {
     ['cellStore.values', sim.cellStore.values], ['cellStore.pending', sim.cellStore.pending],
     ['wallStore.values', sim.wallStore.values], ['wallStore.pending', sim.wallStore.pending],
   ];
+  // The transient monitor's samples, 5 per row: replaying them rebuilds its detector exactly.
+  arrays.push(['monitorHistory', Float64Array.from((sim.monitor?.history ?? []).flat())]);
   const seriesKeys = [...sim.series.keys()];
   for (const k of seriesKeys) {
     const s = sim.series.get(k)!;
@@ -68,6 +71,7 @@ export function encodeCheckpoint(sim: Simulation, stream: number): ArrayBuffer {
   const scalars: Record<string, number> = { batchStepsDone: sim.batchStepsDone, sampledSteps: sim.sampledSteps };
   for (const k of STATE_SCALARS) scalars[k] = st[k];
   scalars.sampling = st.sampling ? 1 : 0;
+  scalars.transientEndStep = Number.isFinite(sim.transientEndStep) ? sim.transientEndStep : -1;
   const store = (s: Simulation['cellStore']) => ({ batches: s.batches, batchLength: s.batchLength, pendingLength: s.pendingLength });
   const header: CheckpointHeader = {
     format: 'tenuis-checkpoint',
@@ -151,6 +155,14 @@ export function decodeCheckpoint(buffer: ArrayBuffer): { sim: Simulation; stream
   for (const k of STATE_SCALARS) if (k !== 'count') st[k] = header.scalars[k];
   st.sampling = header.scalars.sampling === 1;
   sim.batchStepsDone = header.scalars.batchStepsDone;
+  sim.transientEndStep = header.scalars.transientEndStep < 0 ? Infinity : header.scalars.transientEndStep;
+  if (sim.monitor) {
+    const flat = read('monitorHistory');
+    const width = MONITOR_NAMES.length;
+    const rows: number[][] = [];
+    for (let i = 0; i + width <= flat.length; i += width) rows.push(Array.from(flat.subarray(i, i + width)));
+    sim.monitor = replayTransientMonitor(planned.plan.transientSteps, rows);
+  }
   sim.sampledSteps = header.scalars.sampledSteps;
   for (const which of ['cellStore', 'wallStore'] as const) {
     const store = sim[which];

@@ -1,5 +1,5 @@
 import { planFromInput, type Plan } from '../../engine/case/plan';
-import { createSimulation, advance, type Simulation } from '../../engine/simulation';
+import { createSimulation, runToCompletion, type Simulation } from '../../engine/simulation';
 
 /** Parses and plans a case a test built itself; any refusal is a bug in the test, so it throws. */
 export function planOrThrow(input: unknown): Plan {
@@ -8,10 +8,9 @@ export function planOrThrow(input: unknown): Plan {
   return r.plan;
 }
 
-/** Plans a case and runs its transient and sampling steps. */
+/** Plans a case and runs its transient (fixed, or until steady state is detected) and its sampling steps. */
 export function runToEnd(input: unknown): Simulation {
-  const plan = planOrThrow(input);
-  const sim = createSimulation(plan);
-  advance(sim, plan.transientSteps + plan.sampleSteps);
+  const sim = createSimulation(planOrThrow(input));
+  runToCompletion(sim);
   return sim;
 }

@@ -5,12 +5,14 @@
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { planOrThrow } from '../support/planOrThrow';
-import { createSimulation, advance } from '../../engine/simulation';
+import { createSimulation, advance, runToCompletion } from '../../engine/simulation';
 import { summarize } from '../../engine/results/summarize';
 import { encodeCheckpoint, decodeCheckpoint } from '../../engine/io/checkpoint';
 
-function nitrogenCouette() {
-  const input = buildPreset('couette', { gas: 'N2', model: 'VSS', knudsen: '0.3', cellsY: '12', particlesPerCell: '25', transientSteps: '300', sampleSteps: '1200', seed: '21' });
+function nitrogenCouette(transient: 'fixed' | 'auto' = 'fixed') {
+  const settings: Record<string, string> = { gas: 'N2', model: 'VSS', knudsen: '0.3', cellsY: '12', particlesPerCell: '25', sampleSteps: '1200', seed: '21' };
+  if (transient === 'fixed') settings.transientSteps = '300';
+  const input = buildPreset('couette', settings);
   const b = input.boundaries as Record<string, Record<string, unknown>>;
   b.top = { ...b.top, model: 'cercignaniLampis', normalAccommodation: 0.7, tangentialAccommodation: 0.8 };
   return planOrThrow(input);
@@ -33,6 +35,25 @@ describe('checkpoints', () => {
       const got = JSON.stringify(summarize(sim), (_, v) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v));
       expect(got).toBe(expected);
     }
+  });
+
+  it('resume is exact also when saved while the automatic transient is still open', () => {
+    const plan = nitrogenCouette('auto');
+    expect(plan.transientMode).toBe('auto');
+    const straight = createSimulation(plan, { stream: 1 });
+    runToCompletion(straight);
+    // The monitor decided: between its minimum (20 samples) and its maximum (200 samples).
+    const every = straight.monitor!.every;
+    expect(straight.transientEndStep).toBeGreaterThanOrEqual(20 * every);
+    expect(straight.transientEndStep).toBeLessThanOrEqual(200 * every);
+    const first = createSimulation(plan, { stream: 1 });
+    advance(first, 10 * every + 3);
+    expect(Number.isFinite(first.transientEndStep)).toBe(false);
+    const { sim } = decodeCheckpoint(encodeCheckpoint(first, 1));
+    runToCompletion(sim);
+    expect(sim.transientEndStep).toBe(straight.transientEndStep);
+    const text = (x: typeof sim) => JSON.stringify(summarize(x), (_, v) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v));
+    expect(text(sim)).toBe(text(straight));
   });
 
   it('refuses a file that is not a checkpoint, a future version and a truncated one', () => {
