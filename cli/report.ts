@@ -3,6 +3,37 @@ import type { Plan } from '../engine/case/plan';
 import type { SimulationResult } from '../engine/results/summarize';
 import type { Performance } from '../engine/results/exports';
 import { sig, plusMinus, duration, bytes, table } from './format';
+import { independentSamples, densityRelativeError, temperatureRelativeError, velocityStandardErrorMPerS } from '../engine/stats/expectedNoise';
+
+/**
+ * Expected relative errors of one cell's density, temperature and velocity after the plan's sampling, assuming
+ * samples decorrelate after one mean collision time (a planning estimate; common practice).
+ */
+function expectedErrorRows(p: Plan): [string, string][] {
+  const between = Math.max(1, p.reference.meanCollisionTimeS / p.timeStepS);
+  const m = independentSamples(p.sampleSteps, between);
+  const n = p.particlesPerCell;
+  const pct = (x: number) => `±${sig(100 * x, 2)} % (1σ)`;
+  const rows: [string, string][] = [
+    ['density', pct(densityRelativeError(n, m))],
+    ['translational temperature', pct(temperatureRelativeError(n, m))],
+  ];
+  const speed = flowSpeedOf(p);
+  if (speed > 0) {
+    const u = velocityStandardErrorMPerS(p.gas.model.massKg, p.reference.temperatureK, n, m);
+    rows.push(['velocity', `±${sig(u, 2)} m/s (1σ), ${sig((100 * u) / speed, 2)} % of the fastest wall or inflow speed ${sig(speed, 3)} m/s`]);
+  }
+  return rows;
+}
+
+function flowSpeedOf(p: Plan): number {
+  let u = Math.hypot(...p.caseData.initial.velocityMPerS);
+  for (const side of ['left', 'right', 'bottom', 'top'] as const) {
+    const b = p.boundaries[side];
+    if (b.type === 'wall') u = Math.max(u, Math.hypot(...b.velocityMPerS));
+  }
+  return u;
+}
 
 /** Reference state, grid, time step, particles, schedule and advisor ratios of a plan. */
 export function planReport(p: Plan): string {
@@ -40,6 +71,8 @@ export function planReport(p: Plan): string {
       ['memory', `about ${bytes(p.memoryBytesEstimate)}`],
       ['seed', String(p.seed)],
     ]),
+    'expected statistical error per cell after the planned sampling (Hadjiconstantinou et al. 2003):',
+    table(expectedErrorRows(p)),
     'advisor:',
     table([
       ['cell size / mean free path', `${sig(a.cellSizeOverMeanFreePath, 3)}  (keep below about 1/3)`],
