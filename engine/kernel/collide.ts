@@ -21,6 +21,28 @@ import { sampleCell } from './sampleCells';
 const U32 = 2.3283064365386963e-10;
 
 /**
+ * Scratch list of colliding pairs (i, j, i, j, …) whose separations are summed after the pass or when it is full.
+ * Positions are not otherwise read by the collision pass, so in the loop each collision waited for two cold cache
+ * lines (x and y); summed later in a loop that does nothing else, those misses overlap: 3–4 ns per particle-step
+ * faster at 10^5 and 10^6 particles (measured on the benchmark case). Shared by all simulations of a thread, which
+ * is safe because a pass runs to its end without yielding. The additions are the same, in the same order.
+ */
+const PAIR_LIST_LENGTH = 4096;
+const PAIR_LIST = new Int32Array(PAIR_LIST_LENGTH);
+
+/** sum + Σ |r_i − r_j| (m) over the first `length` / 2 pairs of the list, added one by one as the pairs collided. */
+function addPairSeparations(sum: number, x: Float64Array, y: Float64Array, list: Int32Array, length: number): number {
+  for (let k = 0; k < length; k += 2) {
+    const i = list[k];
+    const j = list[k + 1];
+    const dx = x[i] - x[j];
+    const dy = y[i] - y[j];
+    sum += Math.sqrt(dx * dx + dy * dy);
+  }
+  return sum;
+}
+
+/**
  * Collides the particles of every cell once (one time step). Needs st.order and st.keyStart from indexParticles.
  * With `sample`, each cell's moment sums are added to st.cellSums right after its collisions (the same sums as
  * sampleCells; the cell's particles are then in cache and the sequential pass keeps the hardware prefetcher ahead
@@ -59,9 +81,12 @@ export function collideParticles(st: SimState, sample = false): void {
   const lbTranslational = 2.5 - omega;
   const lbRotational = 0.5 * st.rotationalDof;
   const quarterMass = 0.25 * st.massKg;
+  const deflected = DEFLECTED;
   let collisions = 0;
   let candidates = 0;
   let separation = 0;
+  const pairList = PAIR_LIST;
+  let listed = 0;
   // Generator state. One draw, spelled out at each use (Blackman & Vigna 2018):
   //   m = imul(s1, 5); u = (imul(rotl(m, 7), 9) >>> 0) · 2^-32 + 2^-33;
   //   t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = rotl(s3, 11).
@@ -125,9 +150,12 @@ export function collideParticles(st: SimState, sample = false): void {
       if (u3 * sigmaCrMax >= sigmaCr) continue;
 
       collisions++;
-      const sepX = x[i] - x[j];
-      const sepY = y[i] - y[j];
-      separation += Math.sqrt(sepX * sepX + sepY * sepY);
+      if (listed === PAIR_LIST_LENGTH) {
+        separation = addPairSeparations(separation, x, y, pairList, listed);
+        listed = 0;
+      }
+      pairList[listed++] = i;
+      pairList[listed++] = j;
       let cr = Math.sqrt(cr2);
       if (rotational) {
         rng[0] = s0; rng[1] = s1; rng[2] = s2; rng[3] = s3;
@@ -142,8 +170,34 @@ export function collideParticles(st: SimState, sample = false): void {
       m = Math.imul(s1, 5);
       const u5 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
       t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = (s3 << 11) | (s3 >>> 21);
-      const cosChi = isotropic ? 2 * u4 - 1 : 2 * Math.pow(u4, invAlpha) - 1;
-      scatterPair(vx, vy, vz, i, j, crx, cry, crz, Math.sqrt(cr2), cr, cosChi, 2 * Math.PI * u5, isotropic);
+      // Post-collision velocities: centre-of-mass velocity kept, relative velocity of magnitude cr (differs from
+      // |c_r| after a Larsen–Borgnakke exchange) in the new direction. Isotropic scattering (HS, VHS) is written
+      // out here: as a call, each of its float arguments was boxed on the heap, every collision.
+      let nx: number;
+      let ny: number;
+      let nz: number;
+      if (isotropic) {
+        const cosChi = 2 * u4 - 1;
+        const sinChi = Math.sqrt(1 - cosChi * cosChi);
+        const eps = 2 * Math.PI * u5;
+        nx = cr * cosChi;
+        ny = cr * sinChi * Math.cos(eps);
+        nz = cr * sinChi * Math.sin(eps);
+      } else {
+        deflectVss(deflected, crx, cry, crz, Math.sqrt(cr2), cr, 2 * Math.pow(u4, invAlpha) - 1, 2 * Math.PI * u5);
+        nx = deflected[0];
+        ny = deflected[1];
+        nz = deflected[2];
+      }
+      const cmx = 0.5 * (vx[i] + vx[j]);
+      const cmy = 0.5 * (vy[i] + vy[j]);
+      const cmz = 0.5 * (vz[i] + vz[j]);
+      vx[i] = cmx + 0.5 * nx;
+      vy[i] = cmy + 0.5 * ny;
+      vz[i] = cmz + 0.5 * nz;
+      vx[j] = cmx - 0.5 * nx;
+      vy[j] = cmy - 0.5 * ny;
+      vz[j] = cmz - 0.5 * nz;
     }
     if (sample) sampleCell(sums, c * RAW_CELL_SUMS, order, first, first + nCell, vx, vy, vz, erot, rotational);
   }
@@ -154,56 +208,39 @@ export function collideParticles(st: SimState, sample = false): void {
   if (sample) st.cellSumSteps++;
   st.collisionCount += collisions;
   st.candidateCount += candidates;
-  st.separationSum += separation;
+  st.separationSum += addPairSeparations(separation, x, y, pairList, listed);
 }
 
+/** Output of deflectVss (three numbers without an allocation). */
+const DEFLECTED = new Float64Array(3);
+
 /**
- * Post-collision velocities of pair (i, j): centre-of-mass velocity kept, relative velocity of magnitude crNew
- * (m/s; differs from |c_r| = crOld after a Larsen–Borgnakke exchange) turned by the deflection angle χ at azimuth
- * eps (rad). Isotropic (HS, VHS): the new direction is independent of the old one. VSS: χ is measured from the old
- * direction (Bird 1994 eq. 2.22).
+ * VSS deflection: writes to out the new relative velocity (m/s), of magnitude crNew (differs from |c_r| = crOld
+ * after a Larsen–Borgnakke exchange), turned from the old direction (crx, cry, crz) by the deflection angle χ at
+ * azimuth eps (rad) (Bird 1994 eq. 2.22).
  */
-function scatterPair(
-  vx: Float64Array, vy: Float64Array, vz: Float64Array, i: number, j: number,
-  crx: number, cry: number, crz: number, crOld: number, crNew: number, cosChi: number, eps: number, isotropic: boolean,
+function deflectVss(
+  out: Float64Array, crx: number, cry: number, crz: number, crOld: number, crNew: number, cosChi: number, eps: number,
 ): void {
   const sinChi = Math.sqrt(1 - cosChi * cosChi);
   const cosEps = Math.cos(eps);
   const sinEps = Math.sin(eps);
-  let nx: number;
-  let ny: number;
-  let nz: number;
-  if (isotropic) {
-    nx = crNew * cosChi;
-    ny = crNew * sinChi * cosEps;
-    nz = crNew * sinChi * sinEps;
+  // Scale the old relative velocity to the new speed first, then turn it.
+  const scale = crOld > 0 ? crNew / crOld : 0;
+  const ax = crx * scale;
+  const ay = cry * scale;
+  const az = crz * scale;
+  const perp = Math.sqrt(ay * ay + az * az);
+  if (perp > 1e-12 * crNew) {
+    out[0] = cosChi * ax + sinChi * sinEps * perp;
+    out[1] = cosChi * ay + (sinChi * (crNew * az * cosEps - ax * ay * sinEps)) / perp;
+    out[2] = cosChi * az - (sinChi * (crNew * ay * cosEps + ax * az * sinEps)) / perp;
   } else {
-    // Scale the old relative velocity to the new speed first, then turn it.
-    const scale = crOld > 0 ? crNew / crOld : 0;
-    const ax = crx * scale;
-    const ay = cry * scale;
-    const az = crz * scale;
-    const perp = Math.sqrt(ay * ay + az * az);
-    if (perp > 1e-12 * crNew) {
-      nx = cosChi * ax + sinChi * sinEps * perp;
-      ny = cosChi * ay + (sinChi * (crNew * az * cosEps - ax * ay * sinEps)) / perp;
-      nz = cosChi * az - (sinChi * (crNew * ay * cosEps + ax * az * sinEps)) / perp;
-    } else {
-      // Relative velocity along x: any perpendicular basis will do.
-      nx = cosChi * ax;
-      ny = crNew * sinChi * cosEps;
-      nz = crNew * sinChi * sinEps;
-    }
+    // Relative velocity along x: any perpendicular basis will do.
+    out[0] = cosChi * ax;
+    out[1] = crNew * sinChi * cosEps;
+    out[2] = crNew * sinChi * sinEps;
   }
-  const cmx = 0.5 * (vx[i] + vx[j]);
-  const cmy = 0.5 * (vy[i] + vy[j]);
-  const cmz = 0.5 * (vz[i] + vz[j]);
-  vx[i] = cmx + 0.5 * nx;
-  vy[i] = cmy + 0.5 * ny;
-  vz[i] = cmz + 0.5 * nz;
-  vx[j] = cmx - 0.5 * nx;
-  vy[j] = cmy - 0.5 * ny;
-  vz[j] = cmz - 0.5 * nz;
 }
 
 /**
