@@ -8,11 +8,17 @@ export function QuickCheck() {
   const [state, setState] = useState<State>({ kind: 'idle' });
   const start = async () => {
     setState({ kind: 'running', fraction: 0 });
+    // A progress message can arrive after the result (it crosses the thread boundary on its own): ignore it then.
+    let finished = false;
     try {
       const { runQuickCheck } = await import('./demo/quickCheck');
-      const result = await runQuickCheck((fraction) => setState({ kind: 'running', fraction }));
+      const result = await runQuickCheck((fraction) => {
+        if (!finished) setState({ kind: 'running', fraction });
+      });
+      finished = true;
       setState({ kind: 'done', result });
     } catch (e) {
+      finished = true;
       setState({ kind: 'failed', message: (e as Error).message });
     }
   };

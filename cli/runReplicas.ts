@@ -7,6 +7,7 @@ import type { Case } from '../engine/case/schema';
 import type { SampleSet } from '../engine/results/sampleSet';
 import { runReplicaPool, type ReplicaReport } from '../workers/replicaPool';
 import { summarizeSamples } from '../engine/results/summarize';
+import { summaryJson } from '../engine/results/exports';
 import { evaluateStop, relativeHalfWidthOf, estimateRemaining, type PrecisionTarget } from '../engine/stats/stopping';
 import { duration } from './format';
 import { nodeReplicaFactory } from '../workers/nodeReplica';
@@ -99,8 +100,9 @@ function checkStop(merged: SampleSet, elapsedSeconds: number, s: StoppingOptions
   return decision.stop ? decision.reason : null;
 }
 
-/** What replicas.json says of each replica. */
-export function replicaReportJson(r: ReplicaReport) {
+/** What replicas.json says of each replica: its status and, when it sampled, its own wall estimates. */
+export function replicaReportJson(r: ReplicaReport, caseName: string) {
+  const own = r.samples && r.samples.counters.sampledSteps > 0 ? summaryJson(summarizeSamples(r.samples), { caseName, performance: { wallSeconds: r.wallSeconds, particleSteps: r.particleSteps, particleStepsPerSecond: r.wallSeconds > 0 ? r.particleSteps / r.wallSeconds : NaN } }) : null;
   return {
     stream: r.stream,
     status: r.status,
@@ -109,5 +111,6 @@ export function replicaReportJson(r: ReplicaReport) {
     sampledSteps: r.samples?.counters.sampledSteps ?? 0,
     particleSteps: r.particleSteps,
     wallSeconds: r.wallSeconds,
+    walls: own?.walls ?? null,
   };
 }

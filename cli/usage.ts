@@ -13,12 +13,12 @@ export const RUN_USAGE = `Usage:
   tenuis run --resume FILE --out DIR [--checkpoint FILE] [--quiet]
 
 Runs the case and writes summary.json, profiles.csv, fields.csv, surfaces.csv and case.json (the case as run,
-complete and explicit) into DIR. The files appear only when the run has ended: an error leaves DIR as it was.
+complete and explicit) into DIR. The files appear only when the run has ended: an error leaves DIR as it was;
+Ctrl-C stops the run and writes what was sampled so far (exit code 130).
   --out, -o DIR         output folder (created if needed; files of the same names in it are replaced)
   --seed N              random seed, overriding the case's
   --replicas, -r N      N independent replicas on N worker threads (one per core), merged into one result;
-                        replicas.json lists each replica's status. With replicas, Ctrl-C stops them and writes what
-                        was sampled (exit code 130); with one, Ctrl-C writes nothing.
+                        replicas.json lists each replica's status and its own wall estimates.
   --save-samples FILE   also write the raw batch sums as a sample file, for tenuis merge
   --target Q=F          stop when quantity Q's 95 % half-width is within fraction F of its mean, e.g.
                         walls.top.shearStress=0.01 (or =1%); the progress line shows the precision reached and the

@@ -147,7 +147,9 @@ export function isFinished(sim: Simulation): boolean {
  */
 export function stepsRemaining(sim: Simulation): number {
   const st = sim.state;
-  if (Number.isFinite(sim.transientEndStep)) return Math.max(0, sim.plan.sampleSteps - sim.sampledSteps);
+  if (Number.isFinite(sim.transientEndStep)) {
+    return Math.max(0, sim.transientEndStep - st.step) + Math.max(0, sim.plan.sampleSteps - sim.sampledSteps);
+  }
   return Math.max(1, sim.plan.transientSteps - st.step) + sim.plan.sampleSteps;
 }
 

@@ -106,7 +106,11 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
     }
   };
   const snapshotTimer = setInterval(() => void snapshotRound(), options.snapshotEveryMs ?? 5000);
+  let settled = false;
   const emit = () => {
+    // Progress messages cross the thread boundary on their own and may arrive after a replica's result: once the
+    // pool has settled, they are stale and are not passed on.
+    if (settled) return;
     const particleSteps = latest.reduce((s, p) => s + (p?.particleSteps ?? 0), 0);
     options.onProgress?.({ replicas: latest, lost, particleSteps });
   };
@@ -161,6 +165,7 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
 
   const done = Promise.all(Array.from({ length: options.replicas }, (_, k) => runOne(k))).then((replicas) => {
     clearInterval(snapshotTimer);
+    settled = true;
     const sets = replicas.map((r) => r.samples).filter((s): s is SampleSet => s !== null && s.counters.sampledSteps > 0);
     return { replicas, merged: sets.length ? mergeSampleSets(sets) : null, stoppedBy };
   });

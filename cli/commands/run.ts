@@ -175,15 +175,18 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
         progress?.clear();
         if (checkpointPath) {
           saveCheckpoint();
-          io.stderr.write(`interrupted at step ${outcome.stepsDone}: checkpoint written to ${checkpointPath}; continue with tenuis run --resume ${checkpointPath} --out ${outDir}\n`);
-        } else io.stderr.write(`interrupted at step ${outcome.stepsDone}: nothing was written\n`);
-        return EXIT_INTERRUPTED;
-      }
-      progress?.finish(outcome.stepsDone);
+          io.stderr.write(`checkpoint written to ${checkpointPath}; continue with tenuis run --resume ${checkpointPath} --out ${outDir}\n`);
+        }
+        if (sim.sampledSteps === 0) {
+          io.stderr.write(`interrupted at step ${outcome.stepsDone}, still in the transient: nothing was sampled, nothing was written\n`);
+          return EXIT_INTERRUPTED;
+        }
+        io.stderr.write(`interrupted at step ${outcome.stepsDone}: writing the ${sim.sampledSteps} steps sampled so far\n`);
+      } else progress?.finish(outcome.stepsDone);
       samples = sampleSetOf(sim);
       wallSeconds = outcome.wallSeconds;
       particleSteps = sim.state.particleSteps;
-      interrupted = false;
+      interrupted = !outcome.completed;
     } else {
       const outcome = await runReplicas(caseData, replicas, { progress, isInterrupted: () => interrupt.interrupted, stopping });
       progress?.finish(Math.round(outcome.replicas.reduce((sum, r) => sum + r.stepsDone, 0) / outcome.replicas.length));
@@ -192,7 +195,7 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
       particleSteps = outcome.particleSteps;
       interrupted = outcome.cancelled;
       if (outcome.stoppedBy) stopNote = `stopped: ${outcome.stoppedBy}`;
-      extraFiles['replicas.json'] = `${prettyJson({ replicas: outcome.replicas.map(replicaReportJson) })}\n`;
+      extraFiles['replicas.json'] = `${prettyJson({ replicas: outcome.replicas.map((r) => replicaReportJson(r, caseData.name)) })}\n`;
       for (const r of outcome.replicas) {
         if (r.status === 'lost') {
           lostWarnings.push(`replica ${r.stream} was lost (${r.reason}); ${r.samples ? `its ${r.samples.counters.sampledSteps} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`);

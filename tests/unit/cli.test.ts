@@ -204,9 +204,10 @@ describe('tenuis run', () => {
     expect(readFileSync(join(out, 'profiles.csv'), 'utf8')).toMatch(/^y \[m\],/);
   });
 
-  it('Ctrl-C (SIGINT) stops a run, writes nothing and exits 130', async () => {
+  it('Ctrl-C (SIGINT) stops a run, writes what was sampled (saying so) and exits 130', async () => {
     const longCase = structuredClone(tinyCase);
     longCase.sampling.sampleSteps = 50_000_000;
+    longCase.sampling.transientSteps = 0;
     const file = join(work, 'long.json');
     writeFileSync(file, JSON.stringify(longCase));
     const out = join(work, 'interrupted');
@@ -217,7 +218,9 @@ describe('tenuis run', () => {
     await new Promise<void>((resolve) => child.stderr.on('data', (d) => { stderr += d; if (/step /.test(stderr)) resolve(); }));
     child.kill('SIGINT');
     expect(await exit).toBe(130);
-    expect(stderr).toMatch(/interrupted at step \d+: nothing was written/);
-    expect(existsSync(out)).toBe(false);
+    expect(stderr).toMatch(/interrupted at step \d+: writing the \d+ steps sampled so far/);
+    const summary = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
+    expect(summary.warnings.join('\n')).toMatch(/interrupted by the user/);
+    expect(summary.numerics.sampleSteps).toBeGreaterThan(0);
   });
 });
