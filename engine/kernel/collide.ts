@@ -23,9 +23,10 @@ const U32 = 2.3283064365386963e-10;
 /**
  * Scratch list of colliding pairs (i, j, i, j, …) whose separations are summed after the pass or when it is full.
  * Positions are not otherwise read by the collision pass, so in the loop each collision waited for two cold cache
- * lines (x and y); summed later in a loop that does nothing else, those misses overlap: 3–4 ns per particle-step
- * faster at 10^5 and 10^6 particles (measured on the benchmark case). Shared by all simulations of a thread, which
- * is safe because a pass runs to its end without yielding. The additions are the same, in the same order.
+ * lines (x and y); summed later in a loop that does nothing else, those misses overlap: 1–3 ns per particle-step
+ * faster at 10^5 particles and 4–5 ns at 10^6 (benchmark case, measured alternately in one process). Shared by all
+ * simulations of a thread, which is safe because a pass runs to its end without yielding. The additions are the
+ * same, in the same order.
  */
 const PAIR_LIST_LENGTH = 4096;
 const PAIR_LIST = new Int32Array(PAIR_LIST_LENGTH);
