@@ -17,15 +17,11 @@ import { createSimulation, type Simulation } from '../simulation';
 import { growParticles } from '../kernel/state';
 import { createSeries } from '../stats/series';
 import { replayTransientMonitor, MONITOR_NAMES } from '../run/transientMonitor';
+import { TextEncoder, TextDecoder } from './utf8';
 
 export const CHECKPOINT_MAGIC = Uint8Array.of(0x89, 0x54, 0x4e, 0x43, 0x0d, 0x0a, 0x1a, 0x0a);
 export const CHECKPOINT_VERSION = 1;
 
-interface Utf8Codec {
-  TextEncoder: new () => { encode(text: string): Uint8Array };
-  TextDecoder: new (label: string, options: { fatal: boolean }) => { decode(bytes: Uint8Array): string };
-}
-const { TextEncoder, TextDecoder } = globalThis as unknown as Utf8Codec;
 
 type Dtype = 'f64' | 'u32';
 interface ArrayEntry { name: string; dtype: Dtype; offset: number; length: number }

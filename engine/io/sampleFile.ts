@@ -23,18 +23,12 @@ import { WALL_QUANTITIES } from '../results/wallQuantities';
 import { geometryOf, geometryDifferences, wallBinTotalOf } from '../results/samplingGeometry';
 import type { SampleSet } from '../results/sampleSet';
 import { parseSampleFileHeader, SAMPLE_FILE_FORMAT, SAMPLE_FILE_DTYPE, type SampleFileHeader, type BatchStoreHeader } from './sampleFileHeader';
+import { TextEncoder, TextDecoder } from './utf8';
 
 export const SAMPLE_FILE_MAGIC = Uint8Array.of(0x89, 0x54, 0x4e, 0x53, 0x0d, 0x0a, 0x1a, 0x0a);
 export const SAMPLE_FILE_VERSION = 1;
 const PREAMBLE_BYTES = 16;
 
-// TextEncoder and TextDecoder exist in every place the engine runs (browsers, workers, Node ≥ 11) but are not part of
-// the ES2022 library the engine type-checks against, so they are typed here, narrowly.
-interface Utf8Codec {
-  TextEncoder: new () => { encode(text: string): Uint8Array };
-  TextDecoder: new (label: string, options: { fatal: boolean }) => { decode(bytes: Uint8Array): string };
-}
-const { TextEncoder, TextDecoder } = globalThis as unknown as Utf8Codec;
 
 /** True on every platform we know of; the big-endian path is there so the format never depends on it. */
 const HOST_LITTLE_ENDIAN = new Uint8Array(Float64Array.of(1).buffer)[7] === 0x3f;

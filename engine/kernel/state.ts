@@ -13,6 +13,7 @@ import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { createRng, uniform, standardNormal, rotationalEnergyOverKT, type RngState } from '../particles/rng';
 import { sigmaCrCoefficient } from '../gas/molecularModel';
 import { buildSideTable } from './sideTable';
+import type { SamplingGeometry } from '../results/samplingGeometry';
 
 export const SIDE_LEFT = 0;
 export const SIDE_RIGHT = 1;
@@ -53,7 +54,8 @@ export const WALL_PZ = 3;
 export const WALL_ENERGY = 4;
 export const SUMS_PER_WALL_BIN = 5;
 
-export interface SimState {
+/** The sampling geometry (cells, lengths, time step, weights, side table) plus the particles and kernel scratch. */
+export interface SimState extends SamplingGeometry {
   count: number;
   capacity: number;
   x: Float64Array;
@@ -74,9 +76,6 @@ export interface SimState {
   /** Particles whose straight move crossed a non-periodic side (or a periodic one in y): handled after the move loop. */
   boundaryList: Int32Array;
 
-  readonly cellsX: number;
-  readonly cellsY: number;
-  readonly cells: number;
   readonly subcellsPerSide: number;
   readonly subcellsPerCell: number;
   /**
@@ -89,19 +88,11 @@ export interface SimState {
   readonly subrowsPerM: number;
   readonly columnKey: Int32Array;
   readonly rowKey: Int32Array;
-  readonly lengthX: number;
-  readonly lengthY: number;
-  readonly cellVolume: number;
-  readonly timeStep: number;
-  readonly massKg: number;
-  readonly moleculesPerParticle: number;
-  readonly rotationalDof: number;
   readonly rotationalCollisionNumber: number;
   readonly viscosityIndex: number;
   readonly scatteringExponent: number;
   /** σ_T·c_r = sigmaCrCoefficient · c_r^(2−2ω). */
   readonly sigmaCrCoefficient: number;
-  readonly sideTable: Float64Array;
   readonly periodicX: boolean;
   readonly periodicY: boolean;
 

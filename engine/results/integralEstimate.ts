@@ -14,9 +14,11 @@ export interface IntegralEstimate extends Estimate {
   plateauFound: boolean;
 }
 
-function integralEstimate(values: Float64Array, batchSteps: number): IntegralEstimate {
-  if (values.length < 2) return { mean: values.length ? values[0] : NaN, ci95: NaN, standardError: NaN, effectiveSamples: values.length, correlationTimeSteps: NaN, plateauFound: false };
-  const b = blockingAnalysis(values);
+/** A blocking result (one replica or combined) as the estimate reported, with its correlation time in steps. */
+function fromBlocking(
+  b: { mean: number; ci95: number; standardError: number; effectiveSamples: number; correlationTime: number; plateauFound: boolean },
+  batchSteps: number,
+): IntegralEstimate {
   return {
     mean: b.mean,
     ci95: b.ci95,
@@ -25,6 +27,11 @@ function integralEstimate(values: Float64Array, batchSteps: number): IntegralEst
     correlationTimeSteps: b.correlationTime * batchSteps,
     plateauFound: b.plateauFound,
   };
+}
+
+function integralEstimate(values: Float64Array, batchSteps: number): IntegralEstimate {
+  if (values.length < 2) return { mean: values.length ? values[0] : NaN, ci95: NaN, standardError: NaN, effectiveSamples: values.length, correlationTimeSteps: NaN, plateauFound: false };
+  return fromBlocking(blockingAnalysis(values), batchSteps);
 }
 
 /**
@@ -43,14 +50,5 @@ export function replicaIntegralEstimate(series: readonly Float64Array[], batchSt
   }
   const leftOut = filled.length - usable.length;
   if (usable.length <= 1) return { estimate: integralEstimate(usable[0] ?? filled[0] ?? new Float64Array(0), batchSteps), leftOut };
-  const b = replicaBlockingAnalysis(usable);
-  const estimate = {
-    mean: b.mean,
-    ci95: b.ci95,
-    standardError: b.standardError,
-    effectiveSamples: b.effectiveSamples,
-    correlationTimeSteps: b.correlationTime * batchSteps,
-    plateauFound: b.plateauFound,
-  };
-  return { estimate, leftOut };
+  return { estimate: fromBlocking(replicaBlockingAnalysis(usable), batchSteps), leftOut };
 }
