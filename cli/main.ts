@@ -12,6 +12,7 @@ import { mergeCommand } from './commands/merge';
 import { checkCommand } from './commands/check';
 import { schemaCommand } from './commands/schema';
 import { helpCommand } from './commands/help';
+import { continuumCommand } from './commands/continuum';
 
 type Command = (args: string[], io: CommandIO) => number | Promise<number>;
 
@@ -21,6 +22,7 @@ const COMMANDS: Readonly<Record<string, Command>> = {
   merge: mergeCommand,
   check: checkCommand,
   schema: schemaCommand,
+  continuum: continuumCommand,
   help: helpCommand,
 };
 

@@ -49,6 +49,24 @@ export const SCHEMA_USAGE = `Usage:
 
 Prints the JSON Schema (draft 2020-12) of the case file.`;
 
+export const CONTINUUM_USAGE = `Usage:
+  tenuis continuum cavity --reynolds R [--grid N] [--slip none|first --knudsen K [--accommodation S]] --out DIR
+                          [--tolerance T] [--max-iterations N] [--pseudo-time-step D] [--quiet]
+
+Solves the steady incompressible Navier–Stokes equations for the lid-driven unit square cavity (lid at y = 1 moving
+in +x) and writes centerlines.csv (u on x = 0.5 against y, v on y = 0.5 against x) and summary.json (iterations,
+residual, centreline extrema) into DIR. Dimensionless: lengths in cavity sides, velocities in lid speeds.
+  --reynolds R          Reynolds number U·L/ν, above 0
+  --grid N              grid points per side, at least 9 (default 129; 33, 65, 129, 257 … solve fastest)
+  --slip none|first     no-slip walls (default) or first-order Maxwell slip u_s − u_w = ((2−σ)/σ)·Kn·∂u/∂n on all walls
+  --knudsen K           Kn = λ/L with the viscosity-based mean free path, at least 0 (with --slip first)
+  --accommodation S     tangential momentum accommodation σ of the walls, above 0 and at most 1 (default 1)
+  --tolerance T         residual to stop at (default 1e-10: the largest point-relaxation change left in ω and ψ)
+  --max-iterations N    pseudo-time steps at most (default 20000)
+  --pseudo-time-step D  pseudo-time step in L/U (default min(Re·h/8, 25h), h = 1/(N−1))
+  --out, -o DIR         output folder (created if needed; files of the same names in it are replaced)
+  --quiet, -q           no summary line`;
+
 export const MAIN_USAGE = `tenuis: rarefied gas flows by direct simulation Monte Carlo, from the command line
 
 Usage:
@@ -58,6 +76,7 @@ Usage:
                                              run a case and write the results into DIR
   tenuis merge FILE... --out DIR             merge saved sample files of one case into one result
   tenuis schema                              print the case file's JSON Schema
+  tenuis continuum cavity --reynolds R --out DIR   steady Navier–Stokes lid-driven cavity (no-slip or slip walls)
   tenuis help [COMMAND]                      this text, or a command's
 
 Case files are JSON with SI units; the field names carry the unit (pressurePa, lengthYM).
@@ -69,4 +88,5 @@ export const COMMAND_USAGE: Readonly<Record<string, string>> = {
   merge: MERGE_USAGE,
   check: CHECK_USAGE,
   schema: SCHEMA_USAGE,
+  continuum: CONTINUUM_USAGE,
 };

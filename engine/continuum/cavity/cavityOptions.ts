@@ -57,7 +57,7 @@ export function cavityOptionProblems(o: CavityOptions): CavityOptionProblem[] {
     problems.push({ field: 'grid', allowed: `give a whole number of points per side, at least ${CAVITY_MIN_GRID}` });
   }
   if (o.slip !== undefined && !CAVITY_SLIP_MODELS.includes(o.slip)) {
-    problems.push({ field: 'slip', allowed: `one of ${CAVITY_SLIP_MODELS.join(', ')}` });
+    problems.push({ field: 'slip', allowed: `give one of ${CAVITY_SLIP_MODELS.join(', ')}` });
   }
   const slip = o.slip ?? 'none';
   if (o.knudsen !== undefined) {
@@ -66,7 +66,7 @@ export function cavityOptionProblems(o: CavityOptions): CavityOptionProblem[] {
       problems.push({ field: 'knudsen', allowed: 'give a number of at least 0' });
     }
   } else if (slip === 'first') {
-    problems.push({ field: 'knudsen', allowed: 'slip "first" needs a Knudsen number (at least 0)' });
+    problems.push({ field: 'knudsen', allowed: 'required with slip "first": give a number of at least 0' });
   }
   if (o.accommodation !== undefined) {
     if (slip !== 'first') problems.push({ field: 'accommodation', allowed: 'only with slip "first"' });

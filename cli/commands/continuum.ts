@@ -1,0 +1,155 @@
+/**
+ * `tenuis continuum cavity --reynolds R --grid N --out DIR`: the steady lid-driven cavity by the continuum
+ * (Navier–Stokes) solver of engine/continuum/cavity, with no-slip or first-order slip walls, for comparison with
+ * particle runs and published tables. Every option is checked (by the engine's own rules, named here by their
+ * command-line spelling) before anything is solved or created; the two result files appear together or not at all.
+ */
+import { parseArgs } from 'node:util';
+import { solveCavity, type CavityResult } from '../../engine/continuum/cavity/solveCavity';
+import { cavityOptionProblems, type CavityOptions, type CavitySlipModel } from '../../engine/continuum/cavity/cavityOptions';
+import { csvDocument } from '../../engine/results/exports';
+import { CliError, UsageError, EXIT_OK } from '../errors';
+import { CONTINUUM_USAGE } from '../usage';
+import { checkOutputDir, writeResultsAtomically } from '../writeResults';
+import { duration, sig } from '../format';
+import { prettyJson } from '../prettyJson';
+import type { CommandIO } from './io';
+
+const PROBLEMS = ['cavity'] as const;
+
+/** Command-line spelling of each solver option, for messages. */
+const OPTION_NAMES: Readonly<Record<keyof CavityOptions, string>> = {
+  reynolds: '--reynolds',
+  grid: '--grid',
+  slip: '--slip',
+  knudsen: '--knudsen',
+  accommodation: '--accommodation',
+  tolerance: '--tolerance',
+  maxIterations: '--max-iterations',
+  pseudoTimeStep: '--pseudo-time-step',
+};
+
+/** A number given on the command line; a text that is not a number stays NaN so the range check names it. */
+function numberOption(text: string | undefined): number | undefined {
+  if (text === undefined) return undefined;
+  return text.trim() === '' ? Number.NaN : Number(text);
+}
+
+/**
+ * `--knudsen -1` as `--knudsen=-1`: parseArgs refuses a value that starts with a dash, but a negative number given to
+ * a numeric option should reach the range check and get its message (what is allowed), not a parser complaint.
+ */
+function joinNegativeValues(args: readonly string[]): string[] {
+  const numeric = new Set(Object.values(OPTION_NAMES).filter((name) => name !== '--slip'));
+  const out: string[] = [];
+  for (let k = 0; k < args.length; k++) {
+    if (numeric.has(args[k]) && k + 1 < args.length && /^-[\d.]/.test(args[k + 1])) out.push(`${args[k]}=${args[++k]}`);
+    else out.push(args[k]);
+  }
+  return out;
+}
+
+export function continuumCommand(args: string[], io: CommandIO): number {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: joinNegativeValues(args),
+      allowPositionals: true,
+      options: {
+        reynolds: { type: 'string' },
+        grid: { type: 'string' },
+        slip: { type: 'string' },
+        knudsen: { type: 'string' },
+        accommodation: { type: 'string' },
+        tolerance: { type: 'string' },
+        'max-iterations': { type: 'string' },
+        'pseudo-time-step': { type: 'string' },
+        out: { type: 'string', short: 'o' },
+        quiet: { type: 'boolean', short: 'q' },
+        help: { type: 'boolean', short: 'h' },
+      },
+    });
+  } catch (e) {
+    throw new UsageError((e as Error).message, CONTINUUM_USAGE);
+  }
+  const { values, positionals } = parsed;
+  if (values.help) {
+    io.stdout.write(`${CONTINUUM_USAGE}\n`);
+    return EXIT_OK;
+  }
+  const [problem, ...extra] = positionals;
+  if (problem === undefined) throw new UsageError(`continuum needs a problem: ${PROBLEMS.join(', ')}`, CONTINUUM_USAGE);
+  if (problem !== 'cavity') throw new UsageError(`unknown continuum problem "${problem}": give one of ${PROBLEMS.join(', ')}`, CONTINUUM_USAGE);
+  if (extra.length > 0) throw new UsageError(`unexpected argument "${extra[0]}"`, CONTINUUM_USAGE);
+  if (values.reynolds === undefined) throw new UsageError('continuum cavity needs --reynolds R (a number above 0)', CONTINUUM_USAGE);
+  if (!values.out) throw new UsageError('continuum cavity needs an output folder: --out DIR', CONTINUUM_USAGE);
+
+  const options: CavityOptions = {
+    reynolds: numberOption(values.reynolds) as number,
+    grid: numberOption(values.grid) ?? 129,
+    slip: values.slip as CavitySlipModel | undefined,
+    knudsen: numberOption(values.knudsen),
+    accommodation: numberOption(values.accommodation),
+    tolerance: numberOption(values.tolerance),
+    maxIterations: numberOption(values['max-iterations']),
+    pseudoTimeStep: numberOption(values['pseudo-time-step']),
+  };
+  const problems = cavityOptionProblems(options);
+  if (problems.length > 0) {
+    const given = (field: keyof CavityOptions): string => {
+      const text = (values as Record<string, unknown>)[OPTION_NAMES[field].slice(2)];
+      return typeof text === 'string' ? ` ${text}` : '';
+    };
+    const lines = problems.map((p) => `${OPTION_NAMES[p.field]}${given(p.field)}: ${p.allowed.replace('slip "first"', '--slip first')}`);
+    throw new UsageError(lines.join('\n'), CONTINUUM_USAGE);
+  }
+  checkOutputDir(values.out);
+
+  const started = performance.now();
+  const result = solveCavity(options);
+  const seconds = (performance.now() - started) / 1000;
+  if (!result.converged) {
+    throw new CliError(
+      `cavity did not converge: residual ${sig(result.residual)} after ${result.iterations} pseudo-time steps ` +
+        `(tolerance ${sig(options.tolerance ?? 1e-10)}); nothing was written. Try a larger --max-iterations, a finer ` +
+        '--grid (a coarse grid at high Re may have no smooth steady solution) or a smaller --pseudo-time-step.',
+    );
+  }
+  writeResultsAtomically(values.out, cavityFiles(result));
+  if (!values.quiet) {
+    const c = result.centerline;
+    io.stderr.write(
+      `cavity Re = ${result.reynolds} on ${result.grid}×${result.grid}: converged in ${result.iterations} pseudo-time steps ` +
+        `(residual ${sig(result.residual, 2)}, ${duration(seconds)}); uMin ${sig(c.uMin.value)} at y = ${sig(c.uMin.y)}, ` +
+        `vMax ${sig(c.vMax.value)} at x = ${sig(c.vMax.x)}, vMin ${sig(c.vMin.value)} at x = ${sig(c.vMin.x)}; results in ${values.out}\n`,
+    );
+  }
+  return EXIT_OK;
+}
+
+/**
+ * centerlines.csv (u on x = 1/2 against y, v on y = 1/2 against x, one row per grid point; both lines share the
+ * grid positions) and summary.json, dimensionless: lengths in sides, velocities in lid speeds. Deterministic (no
+ * timings), so two runs of the same options write identical files.
+ */
+export function cavityFiles(r: CavityResult): Record<string, string> {
+  const c = r.centerline;
+  const rows: number[][] = [];
+  for (let k = 0; k < c.position.length; k++) rows.push([c.position[k], c.u[k], c.position[k], c.v[k]]);
+  const summary = {
+    problem: 'lid-driven cavity',
+    units: { length: 'side', velocity: 'lid speed' },
+    reynolds: r.reynolds,
+    grid: r.grid,
+    slip: r.slip,
+    iterations: r.iterations,
+    residual: r.residual,
+    converged: r.converged,
+    pseudoTimeStep: r.pseudoTimeStep,
+    centerline: { uMin: c.uMin, vMax: c.vMax, vMin: c.vMin },
+  };
+  return {
+    'centerlines.csv': csvDocument(['y [side]', 'u [lid speed]', 'x [side]', 'v [lid speed]'], rows),
+    'summary.json': `${prettyJson(summary)}\n`,
+  };
+}
