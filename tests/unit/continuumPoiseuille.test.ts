@@ -77,6 +77,16 @@ describe('force-driven Poiseuille flow, closed forms', () => {
     expect(tubeReducedFlowRate(1, { kind: 'freeMolecular' }, 0.5)).toBeCloseTo(3 * 8 / (3 * Math.sqrt(Math.PI)), 14);
   });
 
+  it('free-molecular tube with Maxwell walls: (2 − σ)/σ matches the BGK ratio G_P(σ)/G_P(1) at δ = 0.01 within 3 %', () => {
+    // Karniadakis, Beskok & Aluru 2005, Table 15.5 (BGK, Porodnov et al. 1978–79; published, read in a stored copy of
+    // the book's page): δ = 0.01, G_P = 1.4768 (σ = 1), 2.187 (σ = 0.8), 3.374 (σ = 0.6). At δ = 0.01 the diffuse value
+    // is itself 1.8 % below the free-molecular limit, so the ratio is compared.
+    for (const [sigma, gp] of [[0.8, 2.187], [0.6, 3.374]] as const) {
+      const model = tubeReducedFlowRate(0.01, { kind: 'freeMolecular' }, sigma) / tubeReducedFlowRate(0.01, { kind: 'freeMolecular' });
+      expect(relativeError(model, gp / 1.4768)).toBeLessThan(0.03);
+    }
+  });
+
   it('second order adds (π/2)a2/δ (channel) and (π/4)a2/δ (tube) to first order with the same C1', () => {
     for (const set of SECOND_ORDER_SLIP_SETS) {
       const model = { kind: 'secondOrder', coefficients: set } as const;
