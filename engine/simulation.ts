@@ -8,13 +8,14 @@
  * integral-quantity series that the blocking analysis reads.
  */
 import type { Plan } from './case/plan';
-import { SIDE_NAMES, type SideName } from './case/schema';
-import { createState, type SimState, SIDE_STRIDE, SIDE_TYPE, BOUNDARY_WALL, RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from './kernel/state';
+import { createState, type SimState, RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from './kernel/state';
+import { wallNamesOf } from './kernel/sideTable';
+import { seriesKeysOf, sectionSeriesKey } from './results/seriesKeys';
 import { moveParticles } from './kernel/move';
 import { indexParticles, reorderParticles } from './kernel/indexCells';
 import { collideParticles } from './kernel/collide';
 import { createBatchStore, addToBatches, type DoublingBatchStore } from './stats/doublingBatches';
-import { wallTotalsOfBatch, WALL_QUANTITIES, type WallQuantityName } from './results/wallQuantities';
+import { wallTotalsOfBatch, type WallQuantityName } from './results/wallQuantities';
 import { createSeries, pushSeries, type GrowableSeries } from './stats/series';
 import { createTransientMonitor, monitorValues, pushMonitor, type TransientMonitor } from './run/transientMonitor';
 
@@ -44,9 +45,10 @@ export interface Simulation {
   readonly state: SimState;
   readonly cellStore: DoublingBatchStore;
   readonly wallStore: DoublingBatchStore;
-  /** Integral quantities, one value per base batch: key `${wall}.${quantity}`. */
+  /** Integral quantities, one value per base batch, keyed as results/seriesKeys.ts says. */
   readonly series: Map<string, GrowableSeries>;
-  readonly wallNames: readonly SideName[];
+  /** Surfaces that are walls (sides, then block faces), in side-table order. */
+  readonly wallNames: readonly string[];
   batchStepsDone: number;
   sampledSteps: number;
   /** First sampled step: the plan's fixed transient, or Infinity until the monitor declares steady state. */
@@ -68,9 +70,9 @@ export interface CreateOptions {
 
 export function createSimulation(plan: Plan, options: CreateOptions = {}): Simulation {
   const state = createState(plan, options.stream ?? 0);
-  const wallNames = SIDE_NAMES.filter((_, k) => state.sideTable[k * SIDE_STRIDE + SIDE_TYPE] === BOUNDARY_WALL);
+  const wallNames = wallNamesOf(plan);
   const series = new Map<string, GrowableSeries>();
-  for (const w of wallNames) for (const q of WALL_QUANTITIES) series.set(`${w}.${q}`, createSeries());
+  for (const key of seriesKeysOf(wallNames, state.sectionNames)) series.set(key, createSeries());
   return {
     plan,
     state,
@@ -124,10 +126,14 @@ function closeBatch(sim: Simulation): void {
   const steps = sim.batchStepsDone;
   const totals = wallTotalsOfBatch(sim, st.wallSums, steps);
   for (const [k, v] of totals) pushSeries(sim.series.get(k)!, v);
+  // Mass flow rate through each section: net weighted crossings × molecules per particle × m over the batch time.
+  const massPerCrossing = (st.moleculesPerParticle * st.massKg) / (steps * st.timeStep);
+  for (let s = 0; s < st.sectionCount; s++) pushSeries(sim.series.get(sectionSeriesKey(st.sectionNames[s]))!, st.sectionSums[s] * massPerCrossing);
   addToBatches(sim.cellStore, st.cellSums);
   addToBatches(sim.wallStore, st.wallSums);
   st.cellSums.fill(0);
   st.wallSums.fill(0);
+  st.sectionSums.fill(0);
   st.cellSumSteps = 0;
   sim.batchStepsDone = 0;
 }

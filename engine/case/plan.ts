@@ -5,6 +5,8 @@
  */
 import type { Case, SideName, BoundarySpec } from './schema';
 import { SIDE_NAMES, parseCase } from './schema';
+import { cellGeometryOf, type BlockRectangle, type CellGeometry } from '../geometry/cellGeometry';
+import { surfacesOf, type SurfacePlan } from '../geometry/surfaces';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import {
   type MolecularModel,
@@ -39,9 +41,15 @@ export interface GridPlan {
   readonly lengthYM: number;
   readonly cellSizeXM: number;
   readonly cellSizeYM: number;
-  /** Planar cells have unit depth (1 m), so volumes are m³ per metre of depth. */
+  /**
+   * Volume of a whole cell of particle weight 1 (m³): planar cells have unit depth (m³ per metre of depth);
+   * axisymmetric, the ring of the row next to the axis. Per-cell gas volumes and weights are in `cells`.
+   */
   readonly cellVolumeM3: number;
   readonly subcellsPerCellSide: number;
+  readonly axisymmetric: boolean;
+  readonly cells: CellGeometry;
+  readonly blocks: readonly BlockRectangle[];
 }
 
 export interface GasPlan {
@@ -66,6 +74,10 @@ export interface Plan {
   readonly reference: ReferenceState;
   readonly grid: GridPlan;
   readonly boundaries: Readonly<Record<SideName, BoundarySpec>>;
+  /** Sides then block faces, in side-table row order (geometry/surfaces.ts). */
+  readonly surfaces: readonly SurfacePlan[];
+  /** Uniform body acceleration along x, m/s². */
+  readonly bodyAccelerationXMPerS2: number;
   readonly timeStepS: number;
   readonly particlesPerCell: number;
   readonly moleculesPerParticle: number;
@@ -140,22 +152,37 @@ export function referenceStateOf(c: Case, model: MolecularModel): ReferenceState
   };
 }
 
-function fastestFlowSpeed(c: Case): number {
-  let u = Math.hypot(...c.initial.velocityMPerS);
+/** Every wall and reservoir state of the case: sides and block faces. */
+function boundaryStates(c: Case): { temperatureK: number; velocityMPerS: readonly number[] }[] {
+  const out: { temperatureK: number; velocityMPerS: readonly number[] }[] = [];
   for (const side of SIDE_NAMES) {
     const b = c.boundaries[side];
-    if (b.type === 'wall') u = Math.max(u, Math.hypot(...b.velocityMPerS));
+    if (b.type === 'wall' || b.type === 'reservoir') out.push(b);
   }
+  for (const k of c.blocks) for (const w of [k.wall, k.faces?.left, k.faces?.right, k.faces?.bottom, k.faces?.top]) if (w) out.push(w);
+  return out;
+}
+
+function fastestFlowSpeed(c: Case): number {
+  let u = Math.hypot(...c.initial.velocityMPerS);
+  for (const b of boundaryStates(c)) u = Math.max(u, Math.hypot(...b.velocityMPerS));
   return u;
 }
 
 function hottestTemperature(c: Case): number {
   let t = c.initial.temperatureK;
+  for (const b of boundaryStates(c)) t = Math.max(t, b.temperatureK);
+  return t;
+}
+
+/** The densest state the gas is held at (initial fill or a reservoir): it sets the cell size and time step. */
+function densestState(c: Case): { pressurePa: number; temperatureK: number } {
+  let best = { pressurePa: c.initial.pressurePa, temperatureK: c.initial.temperatureK };
   for (const side of SIDE_NAMES) {
     const b = c.boundaries[side];
-    if (b.type === 'wall') t = Math.max(t, b.temperatureK);
+    if (b.type === 'reservoir' && b.pressurePa / b.temperatureK > best.pressurePa / best.temperatureK) best = b;
   }
-  return t;
+  return best;
 }
 
 /** A direction is resolved unless it has one cell between periodic ends (then it is homogeneous, e.g. 1D Couette). */
@@ -173,11 +200,15 @@ export function plan(c: Case): PlanResult {
     return { ok: false, errors: [`gas: ${(e as Error).message}`] };
   }
   const ref = referenceStateOf(c, gas.model);
+  const dense = densestState(c);
+  const denseRef = referenceStateOf({ ...c, initial: { ...c.initial, ...dense } }, gas.model);
   const { lengthXM: lx, lengthYM: ly } = c.domain;
   const b = c.boundaries;
+  const axisymmetric = c.domain.geometry === 'axisymmetric';
 
-  // Cells: at most λ/3 and at least 20 across the larger side, unless the user chose (common practice, Bird 1994).
-  const autoCell = Math.min(ref.meanFreePathM / 3, Math.max(lx, ly) / 20);
+  // Cells: at most λ/3 (at the densest state held) and at least 20 across the larger side, unless the user chose
+  // (common practice, Bird 1994).
+  const autoCell = Math.min(denseRef.meanFreePathM / 3, Math.max(lx, ly) / 20);
   const cellsX = c.numerics.cellsX ?? Math.max(1, Math.ceil(lx / autoCell - 1e-9));
   const cellsY = c.numerics.cellsY ?? Math.max(1, Math.ceil(ly / autoCell - 1e-9));
   const dx = lx / cellsX;
@@ -186,18 +217,22 @@ export function plan(c: Case): PlanResult {
   if (resolved(cellsX, b.left, b.right)) resolvedSizes.push(dx);
   if (resolved(cellsY, b.bottom, b.top)) resolvedSizes.push(dy);
   const largestCell = resolvedSizes.length ? Math.max(...resolvedSizes) : Math.max(dx, dy);
+  const blocks: BlockRectangle[] = c.blocks.map((k) => ({ x0: k.xMinM, x1: k.xMaxM, y0: k.yMinM, y1: k.yMaxM }));
+  const cellGeometry = cellGeometryOf(cellsX, cellsY, lx, ly, blocks, axisymmetric);
+  const surfaces = surfacesOf(c, dx, dy);
   const smallestCell = resolvedSizes.length ? Math.min(...resolvedSizes) : Math.min(dx, dy);
 
   const vHot = mostProbableSpeedMPerS(gas.model.massKg, hottestTemperature(c));
   const transitSpeed = vHot + fastestFlowSpeed(c);
   const transitTime = smallestCell / transitSpeed;
-  const timeStepS = c.numerics.timeStepS ?? 0.25 * Math.min(ref.meanCollisionTimeS, transitTime);
+  const timeStepS = c.numerics.timeStepS ?? 0.25 * Math.min(denseRef.meanCollisionTimeS, transitTime);
 
   const cells = cellsX * cellsY;
   const particlesPerCell = c.numerics.particlesPerCell ?? 30;
-  const initialParticles = Math.round(particlesPerCell * cells);
-  const domainVolume = lx * ly;
-  const moleculesPerParticle = (ref.numberDensityPerM3 * domainVolume) / Math.max(1, initialParticles);
+  // particlesPerCell refers to a whole cell of weight 1 at the initial state; cells cut by blocks hold fewer.
+  const initialParticles = Math.round(particlesPerCell * cellGeometry.gasCellEquivalent);
+  const moleculesPerParticle = (ref.numberDensityPerM3 * cellGeometry.referenceVolumeM3) / particlesPerCell;
+  if (cellGeometry.gasCellEquivalent <= 0) errors.push('blocks: the blocks fill the whole domain; leave room for gas');
 
   if (initialParticles > c.numerics.maxParticles) {
     errors.push(
@@ -218,12 +253,7 @@ export function plan(c: Case): PlanResult {
   const batchSteps = Math.max(10, Math.ceil(requestedSampleSteps / 8192));
   // Whole batches only, so every sampled step reaches the integral-quantity series.
   const sampleSteps = Math.ceil(requestedSampleSteps / batchSteps) * batchSteps;
-  const wallBins = {
-    left: c.sampling.wallBins ?? cellsY,
-    right: c.sampling.wallBins ?? cellsY,
-    bottom: c.sampling.wallBins ?? cellsX,
-    top: c.sampling.wallBins ?? cellsX,
-  };
+  const wallBins = { left: surfaces[0].bins, right: surfaces[1].bins, bottom: surfaces[2].bins, top: surfaces[3].bins };
 
   const ratios: AdvisorRatios = {
     cellSizeOverMeanFreePath: largestCell / ref.meanFreePathM,
@@ -231,15 +261,17 @@ export function plan(c: Case): PlanResult {
     timeStepOverCellTransitTime: timeStepS / transitTime,
     particlesPerCell,
   };
-  if (ratios.cellSizeOverMeanFreePath > 1 / 3 + 1e-9)
-    warnings.push(`cell size is ${ratios.cellSizeOverMeanFreePath.toFixed(2)} mean free paths; keep it below about 1/3 (set numerics.cellsX/cellsY higher)`);
-  if (ratios.timeStepOverCollisionTime > 0.25 + 1e-9)
-    warnings.push(`time step is ${ratios.timeStepOverCollisionTime.toFixed(2)} mean collision times; keep it below about 1/4 (lower numerics.timeStepS)`);
+  const denseCellRatio = largestCell / denseRef.meanFreePathM;
+  const denseStepRatio = timeStepS / denseRef.meanCollisionTimeS;
+  if (Math.max(ratios.cellSizeOverMeanFreePath, denseCellRatio) > 1 / 3 + 1e-9)
+    warnings.push(`cell size is ${Math.max(ratios.cellSizeOverMeanFreePath, denseCellRatio).toFixed(2)} mean free paths${denseCellRatio > ratios.cellSizeOverMeanFreePath ? ' (at the densest reservoir)' : ''}; keep it below about 1/3 (set numerics.cellsX/cellsY higher)`);
+  if (Math.max(ratios.timeStepOverCollisionTime, denseStepRatio) > 0.25 + 1e-9)
+    warnings.push(`time step is ${Math.max(ratios.timeStepOverCollisionTime, denseStepRatio).toFixed(2)} mean collision times${denseStepRatio > ratios.timeStepOverCollisionTime ? ' (at the densest reservoir)' : ''}; keep it below about 1/4 (lower numerics.timeStepS)`);
   if (ratios.timeStepOverCellTransitTime > 0.25 + 1e-9)
     warnings.push(`time step is ${ratios.timeStepOverCellTransitTime.toFixed(2)} cell transit times; keep it below about 1/4 (lower numerics.timeStepS)`);
   if (particlesPerCell < 20) warnings.push(`${particlesPerCell} particles per cell; at least about 20 are advised (numerics.particlesPerCell)`);
 
-  const wallBinTotal = SIDE_NAMES.reduce((s, side) => s + wallBins[side], 0);
+  const wallBinTotal = surfaces.reduce((s, f) => s + f.bins, 0);
   const memoryBytesEstimate =
     initialParticles * 1.25 * BYTES_PER_PARTICLE + cells * RAW_CELL_SUMS * 8 * (FIELD_BATCH_CAPACITY + 3) + wallBinTotal * 5 * 8 * (FIELD_BATCH_CAPACITY + 3);
 
@@ -250,8 +282,13 @@ export function plan(c: Case): PlanResult {
       caseData: c,
       gas,
       reference: ref,
-      grid: { cellsX, cellsY, lengthXM: lx, lengthYM: ly, cellSizeXM: dx, cellSizeYM: dy, cellVolumeM3: dx * dy, subcellsPerCellSide: c.numerics.subcellsPerCellSide },
+      grid: {
+        cellsX, cellsY, lengthXM: lx, lengthYM: ly, cellSizeXM: dx, cellSizeYM: dy, cellVolumeM3: cellGeometry.referenceVolumeM3,
+        subcellsPerCellSide: c.numerics.subcellsPerCellSide, axisymmetric, cells: cellGeometry, blocks,
+      },
       boundaries: b,
+      surfaces,
+      bodyAccelerationXMPerS2: c.bodyAccelerationXMPerS2,
       timeStepS,
       particlesPerCell,
       moleculesPerParticle,

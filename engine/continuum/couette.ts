@@ -9,7 +9,7 @@
  * 1/(δ + 2σ_P), the large-δ limit of the linearized BGK solution (reference notes §2).
  * Free-molecular: Π = σ/((2 − σ)√π) for Maxwell walls of accommodation σ (reference notes §2; 1/√π for diffuse walls).
  */
-import { densityKgPerM3, equivalentPathOf, mostProbableSpeedOf, viscosityPathOf, type GasState } from './gasState';
+import { checkedGasState, densityKgPerM3, equivalentPathOf, mostProbableSpeedOf, viscosityPathOf, type GasState } from './gasState';
 import { rarefactionOf } from './meanFreePath';
 import {
   checkedAccommodation,
@@ -65,7 +65,8 @@ export function freeMolecularCouetteReducedShear(accommodation: number): number 
  * CouetteInput). Source of each limit in the file header.
  */
 export function couetteFlow(input: CouetteInput): CouetteSolution {
-  const { gas, gapM: h, bottomWallSpeedMPerS: ub, topWallSpeedMPerS: ut, slip } = input;
+  const { gapM: h, bottomWallSpeedMPerS: ub, topWallSpeedMPerS: ut, slip } = input;
+  const gas = checkedGasState(input.gas);
   if (!(Number.isFinite(h) && h > 0)) throw new Error(`Couette gap (m) = ${h}: must be a finite number > 0`);
   if (!(Number.isFinite(ub) && Number.isFinite(ut))) {
     throw new Error(`Couette wall speeds (m/s) = ${ub}, ${ut}: must be finite`);

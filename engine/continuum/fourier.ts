@@ -15,7 +15,7 @@
  * i.e. q* = 1 for a monatomic gas (reference notes §2). With thermal accommodation σ_T at both walls the exchange is
  * reduced to σ_T/(2 − σ_T) of it (Knudsen's series of partial accommodations; from memory), and q* = (1 + ζ/4)σ_T/(2 − σ_T).
  */
-import { equivalentPathOf, mostProbableSpeedOf, type GasState } from './gasState';
+import { checkedGasState, equivalentPathOf, mostProbableSpeedOf, type GasState } from './gasState';
 import { rarefactionOf } from './meanFreePath';
 import {
   checkedAccommodation,
@@ -77,7 +77,8 @@ export function freeMolecularReducedHeatFlux(thermalAccommodation: number, rotat
 
 /** Heat conduction for the given gas (κ, μ, p, T0, m, ζ), gap (m), wall temperatures (K) and jump model. */
 export function fourierFlow(input: FourierInput): FourierSolution {
-  const { gas, gapM: h, bottomWallTemperatureK: t1, topWallTemperatureK: t2, jump } = input;
+  const { gapM: h, bottomWallTemperatureK: t1, topWallTemperatureK: t2, jump } = input;
+  const gas = checkedGasState(input.gas);
   if (!(Number.isFinite(h) && h > 0)) throw new Error(`Fourier gap (m) = ${h}: must be a finite number > 0`);
   if (!(Number.isFinite(t1) && t1 > 0 && Number.isFinite(t2) && t2 > 0)) {
     throw new Error(`Fourier wall temperatures (K) = ${t1}, ${t2}: must be finite numbers > 0`);

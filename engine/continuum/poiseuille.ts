@@ -19,7 +19,7 @@
  * Maxwell walls (Smoluchowski 1910; from memory). The channel has no free-molecular limit (G_P grows like
  * (1/√π) ln(1/δ), reference notes §2), so its slip model excludes 'freeMolecular'.
  */
-import { densityKgPerM3, equivalentPathOf, mostProbableSpeedOf, viscosityPathOf, type GasState } from './gasState';
+import { checkedGasState, densityKgPerM3, equivalentPathOf, mostProbableSpeedOf, viscosityPathOf, type GasState } from './gasState';
 import { VISCOSITY_PER_EQUIVALENT_PATH, rarefactionOf } from './meanFreePath';
 import {
   checkedAccommodation,
@@ -114,7 +114,8 @@ export function tubeReducedFlowRate(delta: number, slip: VelocitySlipModel, acco
 
 /** Force-driven channel flow in SI (see ForceDrivenChannelInput for units; formulas in the file header). */
 export function forceDrivenChannelFlow(input: ForceDrivenChannelInput): ForceDrivenChannelFlow {
-  const { gas, gapM: h, accelerationMPerS2: a, slip } = input;
+  const { gapM: h, accelerationMPerS2: a, slip } = input;
+  const gas = checkedGasState(input.gas);
   requirePositive(h, 'channel gap (m)');
   requireFinite(a, 'body acceleration (m/s²)');
   const { first, second } = slipLengthCoefficients(slip, input.accommodation ?? 1);
@@ -138,7 +139,8 @@ export function forceDrivenChannelFlow(input: ForceDrivenChannelInput): ForceDri
 
 /** Force-driven tube flow in SI (see ForceDrivenTubeInput for units; formulas in the file header). */
 export function forceDrivenTubeFlow(input: ForceDrivenTubeInput): ForceDrivenTubeFlow {
-  const { gas, radiusM: r, accelerationMPerS2: a, slip } = input;
+  const { radiusM: r, accelerationMPerS2: a, slip } = input;
+  const gas = checkedGasState(input.gas);
   requirePositive(r, 'tube radius (m)');
   requireFinite(a, 'body acceleration (m/s²)');
   const sigma = input.accommodation ?? 1;

@@ -20,7 +20,7 @@
  * rate between infinite plates grows like (1/√π) ln(1/δ) (reference notes §2): it is 17 % below the BGK value at
  * δ = 1 and cannot follow it into the free-molecular regime. Use it for tubes, or for channels only at δ ≳ 10.
  */
-import { densityKgPerM3, mostProbableSpeedOf, equivalentPathOf, viscosityPathOf, type GasState } from './gasState';
+import { checkedGasState, densityKgPerM3, mostProbableSpeedOf, equivalentPathOf, viscosityPathOf, type GasState } from './gasState';
 import { knudsenNumber, rarefactionOf } from './meanFreePath';
 import { checkedAccommodation, maxwellFactor, type ReferenceFlag } from './slipCoefficients';
 
@@ -118,7 +118,8 @@ export type UnifiedFlow =
 
 /** The unified model's local flow rate in SI for a gas state and pressure gradient (units in UnifiedFlowInput). */
 export function unifiedFlow(input: UnifiedFlowInput): UnifiedFlow {
-  const { gas, geometry, pressureGradientPaPerM: gradient } = input;
+  const { geometry, pressureGradientPaPerM: gradient } = input;
+  const gas = checkedGasState(input.gas);
   if (!Number.isFinite(gradient)) throw new Error(`pressure gradient (Pa/m) = ${gradient}: must be a finite number`);
   const length = geometry.kind === 'channel' ? geometry.heightM : geometry.radiusM;
   requirePositive(length, geometry.kind === 'channel' ? 'channel height (m)' : 'tube radius (m)');

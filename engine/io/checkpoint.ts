@@ -37,7 +37,7 @@ interface CheckpointHeader {
 
 const align8 = (n: number) => Math.ceil(n / 8) * 8;
 /** The state's scalars that a step reads or accumulates. */
-const STATE_SCALARS = ['count', 'step', 'collisionCount', 'candidateCount', 'separationSum', 'particleSteps', 'cellSumSteps'] as const;
+const STATE_SCALARS = ['count', 'step', 'collisionCount', 'candidateCount', 'separationSum', 'particleSteps', 'cellSumSteps', 'leaks'] as const;
 
 /** The simulation at this moment as a checkpoint (a fresh ArrayBuffer). `stream` is the replica's random stream. */
 export function encodeCheckpoint(sim: Simulation, stream: number): ArrayBuffer {
@@ -47,7 +47,7 @@ export function encodeCheckpoint(sim: Simulation, stream: number): ArrayBuffer {
     ['x', st.x.subarray(0, n)], ['y', st.y.subarray(0, n)],
     ['vx', st.vx.subarray(0, n)], ['vy', st.vy.subarray(0, n)], ['vz', st.vz.subarray(0, n)], ['erot', st.erot.subarray(0, n)],
     ['rng', st.rng], ['sigmaCrMax', st.sigmaCrMax], ['collisionRemainder', st.collisionRemainder],
-    ['cellSums', st.cellSums], ['wallSums', st.wallSums],
+    ['cellSums', st.cellSums], ['wallSums', st.wallSums], ['sectionSums', st.sectionSums], ['inflowRemainder', st.inflowRemainder],
     ['cellStore.values', sim.cellStore.values], ['cellStore.pending', sim.cellStore.pending],
     ['wallStore.values', sim.wallStore.values], ['wallStore.pending', sim.wallStore.pending],
   ];
@@ -148,7 +148,9 @@ export function decodeCheckpoint(buffer: ArrayBuffer): { sim: Simulation; stream
   into(st.collisionRemainder, 'collisionRemainder');
   into(st.cellSums, 'cellSums');
   into(st.wallSums, 'wallSums');
-  for (const k of STATE_SCALARS) if (k !== 'count') st[k] = header.scalars[k];
+  into(st.sectionSums, 'sectionSums');
+  into(st.inflowRemainder, 'inflowRemainder');
+  for (const k of STATE_SCALARS) if (k !== 'count') st[k] = header.scalars[k] ?? 0;
   st.sampling = header.scalars.sampling === 1;
   sim.batchStepsDone = header.scalars.batchStepsDone;
   sim.transientEndStep = header.scalars.transientEndStep < 0 ? Infinity : header.scalars.transientEndStep;

@@ -15,11 +15,12 @@
  * 0x1A stops a text display. Reading the file validates everything once and re-plans its case, so a file from another
  * machine or an older version is refused with a message rather than misread.
  */
-import { parseCase, SIDE_NAMES } from '../case/schema';
+import { parseCase } from '../case/schema';
 import { plan as planCase } from '../case/plan';
-import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN, SIDE_STRIDE, SIDE_TYPE, BOUNDARY_WALL } from '../kernel/state';
+import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from '../kernel/state';
+import { wallNamesOf } from '../kernel/sideTable';
 import type { BatchList } from '../stats/batchList';
-import { WALL_QUANTITIES } from '../results/wallQuantities';
+import { seriesKeysOf } from '../results/seriesKeys';
 import { geometryOf, geometryDifferences, wallBinTotalOf } from '../results/samplingGeometry';
 import type { SampleSet } from '../results/sampleSet';
 import { parseSampleFileHeader, SAMPLE_FILE_FORMAT, SAMPLE_FILE_DTYPE, type SampleFileHeader, type BatchStoreHeader } from './sampleFileHeader';
@@ -86,6 +87,7 @@ export function encodeSampleSet(set: SampleSet): ArrayBuffer {
     geometry: {
       cells: g.cells, cellsX: g.cellsX, cellsY: g.cellsY, lengthX: g.lengthX, lengthY: g.lengthY, cellVolume: g.cellVolume,
       timeStep: g.timeStep, massKg: g.massKg, moleculesPerParticle: g.moleculesPerParticle, rotationalDof: g.rotationalDof,
+      axisymmetric: g.axisymmetric,
     },
     wallNames: [...set.wallNames],
     replicas: set.replicas,
@@ -214,20 +216,17 @@ export function decodeSampleSet(buffer: ArrayBuffer): SampleSet {
   const stored = { ...header.geometry, sideTable: arrayOf(arrays, 'sideTable', geometry.sideTable.length) };
   const differs = geometryDifferences(stored, geometry);
   if (differs.length) fail(`this version of Tenuis plans its case differently from the one that wrote it: ${differs.join('; ')}`);
-  const wallNames = SIDE_NAMES.filter((_, k) => geometry.sideTable[k * SIDE_STRIDE + SIDE_TYPE] === BOUNDARY_WALL);
+  const wallNames = wallNamesOf(plan);
   if (header.wallNames.join() !== wallNames.join()) fail(`header.wallNames is [${header.wallNames.join(', ')}]; its case has walls [${wallNames.join(', ')}]`);
 
   if (header.seeds.length !== header.replicas) fail(`header.seeds lists ${header.seeds.length} seeds for ${header.replicas} replicas`);
   const series = new Map<string, Float64Array[]>();
-  for (const w of wallNames) {
-    for (const q of WALL_QUANTITIES) {
-      const key = `${w}.${q}`;
-      series.set(key, Array.from({ length: header.replicas }, (_, r) => {
-        const a = arrays.get(seriesArrayName(key, r));
-        if (!a) fail(`array ${seriesArrayName(key, r)} is missing (header.replicas is ${header.replicas})`);
-        return a;
-      }));
-    }
+  for (const key of seriesKeysOf(wallNames, geometry.sectionNames)) {
+    series.set(key, Array.from({ length: header.replicas }, (_, r) => {
+      const a = arrays.get(seriesArrayName(key, r));
+      if (!a) fail(`array ${seriesArrayName(key, r)} is missing (header.replicas is ${header.replicas})`);
+      return a;
+    }));
   }
   const cellWidth = geometry.cells * RAW_CELL_SUMS;
   const wallWidth = wallBinTotalOf(geometry) * SUMS_PER_WALL_BIN;

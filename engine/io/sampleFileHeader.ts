@@ -51,8 +51,9 @@ export const sampleFileHeaderSchema = z.object({
     massKg: positive,
     moleculesPerParticle: positive,
     rotationalDof: count,
+    axisymmetric: z.boolean().default(false),
   }),
-  wallNames: z.array(z.enum(['left', 'right', 'bottom', 'top'])),
+  wallNames: z.array(z.string()),
   replicas: z.number().int().min(1),
   /** The case seed of each replica. */
   seeds: z.array(z.number().int().min(0)),

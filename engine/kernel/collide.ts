@@ -1,8 +1,8 @@
 /**
  * Binary collisions by Bird's no-time-counter (NTC) scheme with sub-cell partner selection.
  *
- * Per cell and step, N_sel = ½ N (N−1) F_N (σ_T c_r)_max Δt / V_c candidate pairs (Bird 1994, eq. 11.3 in its
- * N(N−1) form, from memory); a pair collides with probability σ_T c_r / (σ_T c_r)_max. The fractional part of N_sel is
+ * Per cell and step, N_sel = ½ N (N−1) F_N w_c (σ_T c_r)_max Δt / V_c candidate pairs (Bird 1994, eq. 11.3 in its
+ * N(N−1) form, from memory; w_c the cell's particle weight, V_c its gas volume: st.selectionFactor); a pair collides with probability σ_T c_r / (σ_T c_r)_max. The fractional part of N_sel is
  * carried to the next step so the mean rate is exact. The first particle is drawn from the whole cell, the second
  * from its sub-cell when that holds another particle (else from the cell), which keeps the mean collision
  * separation a small fraction of the cell size (Bird 1994, §11.1); the separation is summed for the report.
@@ -70,7 +70,8 @@ export function collideParticles(st: SimState, sample = false): void {
   const rng = st.rng;
   const subcells = st.subcellsPerCell;
   const cells = st.cells;
-  const coefSel = (0.5 * st.moleculesPerParticle * st.timeStep) / st.cellVolume;
+  const selection = st.selectionFactor;
+  const weights = st.cellWeights;
   const coefSigma = st.sigmaCrCoefficient;
   const omega = st.viscosityIndex;
   const hardSphereLike = omega === 0.5;
@@ -105,7 +106,7 @@ export function collideParticles(st: SimState, sample = false): void {
     let sigmaCrMax = maxArr[c];
     let pairs = 0;
     if (nCell > 1) {
-      const selected = coefSel * nCell * (nCell - 1) * sigmaCrMax + rem[c];
+      const selected = selection[c] * nCell * (nCell - 1) * sigmaCrMax + rem[c];
       pairs = Math.floor(selected);
       rem[c] = selected - pairs;
       candidates += pairs;
@@ -200,7 +201,7 @@ export function collideParticles(st: SimState, sample = false): void {
       vy[j] = cmy - 0.5 * ny;
       vz[j] = cmz - 0.5 * nz;
     }
-    if (sample) sampleCell(sums, c * RAW_CELL_SUMS, order, first, first + nCell, vx, vy, vz, erot, rotational);
+    if (sample) sampleCell(sums, c * RAW_CELL_SUMS, order, first, first + nCell, vx, vy, vz, erot, rotational, weights[c]);
   }
   rng[0] = s0;
   rng[1] = s1;

@@ -2,25 +2,38 @@
  * Free flight for one time step, boundary interactions, and the sub-cell key and occupancy count of every particle.
  *
  * Hot path. The main loop moves every particle in a straight line and only wraps periodic sides in x inline;
- * particles that end outside the domain otherwise are put on a short list and re-flown afterwards from their old
- * position with exact times of flight, so a particle may hit several sides in one step (corners, thin domains).
- * Counting occupancy inside the move loop saves the index step one pass (performance guide, item 4).
+ * particles that end outside the domain, end in a cell next to a block, or move more than a cell (they could jump a
+ * thin block) are put on a short list and flown exactly afterwards (kernel/flight.ts), so a particle may hit several
+ * surfaces in one step. Counting occupancy inside the move loop saves the index step one pass (performance guide,
+ * item 4). After the loop, kernel/boundaryPass.ts flies the listed particles, applies radial weighting, lets
+ * reservoir molecules in and removes the particles that left.
+ *
+ * A body acceleration a along x is applied as two half kicks around the drift (v += a Δt/2; x += v Δt; v += a Δt/2),
+ * second-order accurate in free flight; a wall met during the flight sees the velocity after the first half kick,
+ * an error of order a Δt, far below thermal speeds in the linear regime where force-driven flow is used.
  */
-import {
-  type SimState,
-  SIDE_STRIDE,
-  SIDE_TYPE,
-  SIDE_LEFT,
-  SIDE_RIGHT,
-  SIDE_BOTTOM,
-  SIDE_TOP,
-  BOUNDARY_PERIODIC,
-  BOUNDARY_SPECULAR,
-} from './state';
-import { reflectAtWall } from './wallReflection';
+import { type SimState } from './state';
+import { finishMove } from './boundaryPass';
 
 /** Moves all particles by dt (s); fills st.key and st.keyCount. */
 export function moveParticles(st: SimState, dt: number): void {
+  st.keyCount.fill(0);
+  const listed = st.axisymmetric ? moveAxisymmetric(st, dt) : movePlanar(st, dt);
+  st.particleSteps += st.count;
+  finishMove(st, dt, listed);
+}
+
+/** Sub-cell key of a position inside the domain (clamped so round-off on a side never leaves the grid). */
+export function keyOf(st: SimState, xi: number, yi: number): number {
+  let gx = Math.floor(xi * st.subcolumnsPerM);
+  gx = gx < 0 ? 0 : gx >= st.columnKey.length ? st.columnKey.length - 1 : gx;
+  let gy = Math.floor(yi * st.subrowsPerM);
+  gy = gy < 0 ? 0 : gy >= st.rowKey.length ? st.rowKey.length - 1 : gy;
+  return st.columnKey[gx] + st.rowKey[gy];
+}
+
+/** Planar main loop; returns the number of particles put on st.boundaryList. */
+function movePlanar(st: SimState, dt: number): number {
   const n = st.count;
   const x = st.x;
   const y = st.y;
@@ -35,113 +48,169 @@ export function moveParticles(st: SimState, dt: number): void {
   const perY = st.subrowsPerM;
   const lx = st.lengthX;
   const ly = st.lengthY;
-  const periodicX = st.periodicX;
+  const near = st.nearSolid;
+  const solids = st.blockCount > 0;
+  const cx = st.cellSizeX;
+  const cy = st.cellSizeY;
+  const sec = st.sectionTable;
+  // Sections are counted only while sampling; a periodic wrap then goes to the exact flight, which counts it right.
+  const sections = st.sampling ? st.sectionCount : 0;
+  const sectionSums = st.sectionSums;
+  const periodicX = st.periodicX && sections === 0;
   // A float64 copy of the argument: used directly, V8 re-checks the parameter's representation every iteration.
   const h = dt * 1;
-  count.fill(0);
+  const halfKick = 0.5 * st.bodyAccelerationX * dt;
   let listed = 0;
   for (let i = 0; i < n; i++) {
-    let xi = x[i] + vx[i] * h;
-    const yi = y[i] + vy[i] * h;
+    const u = vx[i] + halfKick;
+    const xo = x[i];
+    const yo = y[i];
+    let xi = xo + u * h;
+    const yi = yo + vy[i] * h;
     if (yi < 0 || yi >= ly) {
+      vx[i] = u;
       list[listed++] = i;
       continue;
     }
     if (xi < 0 || xi >= lx) {
       if (!periodicX) {
+        vx[i] = u;
         list[listed++] = i;
         continue;
       }
       xi = xi < 0 ? xi + lx : xi - lx;
       if (xi >= lx || xi < 0) {
+        vx[i] = u;
         list[listed++] = i; // crossed the periodic pair more than once: fly it exactly
         continue;
       }
     }
-    x[i] = xi;
-    y[i] = yi;
     // 0 <= xi < lx, so the truncation is a floor and at most lands on the tables' extra last entry.
     const k = (columnKey[(xi * perX) | 0] + rowKey[(yi * perY) | 0]) | 0;
+    if (solids && (near[k] === 1 || Math.abs(xi - xo) > cx || Math.abs(yi - yo) > cy)) {
+      vx[i] = u;
+      list[listed++] = i;
+      continue;
+    }
+    for (let s = 0; s < sections; s++) {
+      const xs = sec[3 * s];
+      if ((xo < xs) !== (xi < xs)) {
+        const yc = yo + ((yi - yo) * (xs - xo)) / (xi - xo);
+        if (yc >= sec[3 * s + 1] && yc <= sec[3 * s + 2]) sectionSums[s] += xi >= xs ? 1 : -1;
+      }
+    }
+    x[i] = xi;
+    y[i] = yi;
+    vx[i] = u + halfKick;
     key[i] = k;
     count[k] = (count[k] + 1) | 0;
   }
-  for (let k = 0; k < listed; k++) flyWithBoundaries(st, list[k], dt);
-  st.particleSteps += n;
-}
-
-/** Sub-cell key of a position inside the domain (clamped so round-off on a side never leaves the grid). */
-export function keyOf(st: SimState, xi: number, yi: number): number {
-  let gx = Math.floor(xi * st.subcolumnsPerM);
-  gx = gx < 0 ? 0 : gx >= st.columnKey.length ? st.columnKey.length - 1 : gx;
-  let gy = Math.floor(yi * st.subrowsPerM);
-  gy = gy < 0 ? 0 : gy >= st.rowKey.length ? st.rowKey.length - 1 : gy;
-  return st.columnKey[gx] + st.rowKey[gy];
+  return listed;
 }
 
 /**
- * Flies particle i for dt from its stored (pre-move) position, interacting with every side it reaches in time
- * order. Positions are snapped onto the side at each hit so round-off can never leak a particle out.
+ * Axisymmetric main loop: x is the axis and y the radius r ≥ 0. Each particle flies in 3D from (x, r, 0); the new
+ * radius is |(r + v_r Δt, v_θ Δt)| and the velocity is turned into the meridional plane through the new position
+ * (Bird 1994, §15.1). A particle that changes row is listed for radial weighting (boundaryPass.ts). Since r² is convex
+ * along the line, a flight that starts and ends inside r < R stays inside.
  */
-function flyWithBoundaries(st: SimState, i: number, dt: number): void {
+function moveAxisymmetric(st: SimState, dt: number): number {
+  const n = st.count;
+  const x = st.x;
+  const y = st.y;
+  const vx = st.vx;
+  const vy = st.vy;
+  const vz = st.vz;
+  const key = st.key;
+  const count = st.keyCount;
+  const list = st.boundaryList;
+  const weightList = st.weightList;
+  const weightFrom = st.weightFromRow;
+  const rowWeight = st.rowWeight;
+  const columnKey = st.columnKey;
+  const rowKey = st.rowKey;
+  const perX = st.subcolumnsPerM;
+  const perY = st.subrowsPerM;
+  const rowsPerM = st.cellsY / st.lengthY;
+  const lastRow = st.cellsY - 1;
   const lx = st.lengthX;
-  const ly = st.lengthY;
-  const tab = st.sideTable;
-  let px = st.x[i];
-  let py = st.y[i];
-  let remaining = dt;
-  // A particle hits at most a handful of sides per step; the bound only guards against a zero-speed trap.
-  for (let hits = 0; hits < 64; hits++) {
-    const vxi = st.vx[i];
-    const vyi = st.vy[i];
-    let tHit = remaining;
-    let side = -1;
-    if (vxi > 0) {
-      const t = (lx - px) / vxi;
-      if (t < tHit) { tHit = t; side = SIDE_RIGHT; }
-    } else if (vxi < 0) {
-      const t = -px / vxi;
-      if (t < tHit) { tHit = t; side = SIDE_LEFT; }
+  const ly2 = st.lengthY * st.lengthY;
+  const near = st.nearSolid;
+  const solids = st.blockCount > 0;
+  const cx = st.cellSizeX;
+  const cy2 = st.cellSizeY * st.cellSizeY;
+  const sec = st.sectionTable;
+  const sections = st.sampling ? st.sectionCount : 0;
+  const sectionSums = st.sectionSums;
+  const periodicX = st.periodicX && sections === 0;
+  const h = dt * 1;
+  const halfKick = 0.5 * st.bodyAccelerationX * dt;
+  let listed = 0;
+  let reweighted = st.weightCount;
+  for (let i = 0; i < n; i++) {
+    const u = vx[i] + halfKick;
+    const v = vy[i];
+    const w = vz[i];
+    const xo = x[i];
+    const ro = y[i];
+    let xi = xo + u * h;
+    const yy = ro + v * h;
+    const zz = w * h;
+    const r2 = yy * yy + zz * zz;
+    if (r2 >= ly2) {
+      vx[i] = u;
+      list[listed++] = i;
+      continue;
     }
-    if (vyi > 0) {
-      const t = (ly - py) / vyi;
-      if (t < tHit) { tHit = t; side = SIDE_TOP; }
-    } else if (vyi < 0) {
-      const t = -py / vyi;
-      if (t < tHit) { tHit = t; side = SIDE_BOTTOM; }
+    if (xi < 0 || xi >= lx) {
+      if (!periodicX) {
+        vx[i] = u;
+        list[listed++] = i;
+        continue;
+      }
+      xi = xi < 0 ? xi + lx : xi - lx;
+      if (xi >= lx || xi < 0) {
+        vx[i] = u;
+        list[listed++] = i;
+        continue;
+      }
     }
-    if (side < 0) {
-      px += vxi * remaining;
-      py += vyi * remaining;
-      break;
+    const r = Math.sqrt(r2);
+    const k = (columnKey[(xi * perX) | 0] + rowKey[(r * perY) | 0]) | 0;
+    if (solids && (near[k] === 1 || Math.abs(xi - xo) > cx || (v * v + w * w) * h * h > cy2)) {
+      vx[i] = u;
+      list[listed++] = i;
+      continue;
     }
-    if (tHit < 0) tHit = 0;
-    px += vxi * tHit;
-    py += vyi * tHit;
-    remaining -= tHit;
-    if (side === SIDE_LEFT) px = 0;
-    else if (side === SIDE_RIGHT) px = lx;
-    else if (side === SIDE_BOTTOM) py = 0;
-    else py = ly;
-    const type = tab[side * SIDE_STRIDE + SIDE_TYPE];
-    if (type === BOUNDARY_PERIODIC) {
-      if (side === SIDE_LEFT) px = lx;
-      else if (side === SIDE_RIGHT) px = 0;
-      else if (side === SIDE_BOTTOM) py = ly;
-      else py = 0;
-    } else if (type === BOUNDARY_SPECULAR) {
-      if (side === SIDE_LEFT || side === SIDE_RIGHT) st.vx[i] = -vxi;
-      else st.vy[i] = -vyi;
-    } else {
-      reflectAtWall(st, i, side, side === SIDE_LEFT || side === SIDE_RIGHT ? py : px);
+    let rowOld = (ro * rowsPerM) | 0;
+    if (rowOld > lastRow) rowOld = lastRow;
+    for (let s = 0; s < sections; s++) {
+      const xs = sec[3 * s];
+      if ((xo < xs) !== (xi < xs)) {
+        const tc = (h * (xs - xo)) / (xi - xo);
+        const a = ro + v * tc;
+        const b = w * tc;
+        const rc = Math.sqrt(a * a + b * b);
+        if (rc >= sec[3 * s + 1] && rc <= sec[3 * s + 2]) sectionSums[s] += xi >= xs ? rowWeight[rowOld] : -rowWeight[rowOld];
+      }
+    }
+    if (r > 0) {
+      vy[i] = (v * yy + w * zz) / r;
+      vz[i] = (w * yy - v * zz) / r;
+    }
+    x[i] = xi;
+    y[i] = r;
+    vx[i] = u + halfKick;
+    key[i] = k;
+    count[k] = (count[k] + 1) | 0;
+    let rowNew = (r * rowsPerM) | 0;
+    if (rowNew > lastRow) rowNew = lastRow;
+    if (rowNew !== rowOld) {
+      weightList[reweighted] = i;
+      weightFrom[reweighted] = rowOld;
+      reweighted++;
     }
   }
-  // Keep the particle inside [0, L): a particle resting exactly on the far side is moved onto the near one only for
-  // periodic sides; on walls it stays on the side, and keyOf clamps its cell.
-  if (px >= lx && st.periodicX) px -= lx;
-  if (py >= ly && st.periodicY) py -= ly;
-  st.x[i] = px;
-  st.y[i] = py;
-  const k = keyOf(st, px, py);
-  st.key[i] = k;
-  st.keyCount[k]++;
+  st.weightCount = reweighted;
+  return listed;
 }

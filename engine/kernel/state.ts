@@ -14,6 +14,8 @@ import { createRng, uniform, standardNormal, rotationalEnergyOverKT, type RngSta
 import { sigmaCrCoefficient } from '../gas/molecularModel';
 import { buildSideTable } from './sideTable';
 import type { SamplingGeometry } from '../results/samplingGeometry';
+import { insideBlock, type BlockRectangle } from '../geometry/cellGeometry';
+import { inflowTableOf, INFLOW_STRIDE } from '../geometry/inflow';
 
 export const SIDE_LEFT = 0;
 export const SIDE_RIGHT = 1;
@@ -23,6 +25,10 @@ export const SIDE_TOP = 3;
 export const BOUNDARY_PERIODIC = 0;
 export const BOUNDARY_SPECULAR = 1; // symmetry planes and specular walls
 export const BOUNDARY_WALL = 2;
+/** Open to a vessel: molecules leave freely and enter with the reservoir's Maxwellian influx (kernel/inflow.ts). */
+export const BOUNDARY_RESERVOIR = 3;
+/** The axis of an axisymmetric domain: never reached by a 3D flight, so nothing happens there. */
+export const BOUNDARY_AXIS = 4;
 
 export const WALL_DIFFUSE = 0;
 export const WALL_SPECULAR = 1;
@@ -44,7 +50,32 @@ export const SIDE_BIN_OFFSET = 8;
 export const SIDE_BIN_COUNT = 9;
 /** Thermal speed sqrt(kT_w/m) of the wall (m/s). */
 export const SIDE_THERMAL_SPEED = 10;
-export const SIDE_STRIDE = 11;
+/** 1 when the surface is normal to x (a line x = SIDE_PLANE), 0 when normal to y. */
+export const SIDE_NORMAL_IS_X = 11;
+/** +1 or −1: direction along the normal axis pointing into the gas. */
+export const SIDE_INWARD = 12;
+/** Position of the surface's line (m) and its extent along the surface (m). */
+export const SIDE_PLANE = 13;
+export const SIDE_FROM = 14;
+export const SIDE_TO = 15;
+/** Reservoirs: number density (1/m³); temperature and drift are in SIDE_TEMPERATURE and SIDE_UX…. */
+export const SIDE_NUMBER_DENSITY = 16;
+export const SIDE_STRIDE = 17;
+/** Rows of the domain's sides; block faces follow from row 4, four per block (left, right, bottom, top). */
+export const DOMAIN_SIDES = 4;
+
+/** Block table columns (one row per block): the solid rectangle [x0, x1] × [y0, y1], m. */
+export const BLOCK_X0 = 0;
+export const BLOCK_X1 = 1;
+export const BLOCK_Y0 = 2;
+export const BLOCK_Y1 = 3;
+export const BLOCK_STRIDE = 4;
+
+/** Flow-section table columns: the line x = SECTION_X from SECTION_Y0 to SECTION_Y1, m. */
+export const SECTION_X = 0;
+export const SECTION_Y0 = 1;
+export const SECTION_Y1 = 2;
+export const SECTION_STRIDE = 3;
 
 /** Per wall bin: incident count, momentum given to the wall (x, y, z), energy given to the wall in its own frame. */
 export const WALL_HITS = 0;
@@ -75,6 +106,42 @@ export interface SimState extends SamplingGeometry {
   keyCount: Int32Array;
   /** Particles whose straight move crossed a non-periodic side (or a periodic one in y): handled after the move loop. */
   boundaryList: Int32Array;
+  /** Particles to remove at the end of the move (left through a reservoir, or deleted by radial weighting). */
+  removeList: Int32Array;
+  removeCount: number;
+  /** Axisymmetric: particles that changed row in the move, and the row each came from (radial weighting). */
+  weightList: Int32Array;
+  weightFromRow: Int32Array;
+  weightCount: number;
+
+  /** Axisymmetric domain: x the axis, y the radius; flights in 3D, projected back onto (x, r). */
+  readonly axisymmetric: boolean;
+  readonly cellSizeX: number;
+  readonly cellSizeY: number;
+  /** Particle weight of each row (2j + 1 when axisymmetric, else 1). */
+  readonly rowWeight: Float64Array;
+  /** Per cell: ½ F_N w_c Δt / V_c of the NTC selection (0 for cells without gas). */
+  readonly selectionFactor: Float64Array;
+  /** Solid blocks, BLOCK_STRIDE numbers each; their faces are side-table rows DOMAIN_SIDES + 4·b + face. */
+  readonly blockTable: Float64Array;
+  readonly blockCount: number;
+  /**
+   * Per sub-cell key: 1 when the cell or one of its eight neighbours touches a block. A straight move of at most one
+   * cell in each direction that ends in an unflagged cell cannot have met a block (it stays in the 3 × 3 cells around
+   * its end), so only flagged ends and longer moves are flown exactly.
+   */
+  readonly nearSolid: Uint8Array;
+  readonly sectionTable: Float64Array;
+  readonly sectionCount: number;
+  /** Per flow section: weighted particles crossing it towards +x minus those crossing towards −x, pending batch. */
+  sectionSums: Float64Array;
+  /** Reservoir inflow segments (geometry/inflow.ts columns) and the fractional particles carried between steps. */
+  readonly inflowTable: Float64Array;
+  inflowRemainder: Float64Array;
+  /** Uniform body acceleration along x, m/s². */
+  readonly bodyAccelerationX: number;
+  /** Particles found inside a solid after a flight (must stay 0; reported so a test can hold it to that). */
+  leaks: number;
 
   readonly subcellsPerSide: number;
   readonly subcellsPerCell: number;
@@ -161,6 +228,9 @@ export function createState(plan: Plan, stream = 0): SimState {
   const rng = createRng(plan.seed, stream);
 
   const { sideTable, wallBinTotal } = buildSideTable(plan);
+  const cg = g.cells;
+  const inflowTable = inflowTableOf(plan);
+  const sections = plan.caseData.flowSections;
 
   const m = plan.gas.model;
   const st: SimState = {
@@ -172,6 +242,30 @@ export function createState(plan: Plan, stream = 0): SimState {
     keyStart: new Int32Array(cells * subcellsPerCell + 1),
     keyCount: new Int32Array(cells * subcellsPerCell),
     boundaryList: new Int32Array(capacity),
+    removeList: new Int32Array(capacity),
+    removeCount: 0,
+    weightList: new Int32Array(capacity),
+    weightFromRow: new Int32Array(capacity),
+    weightCount: 0,
+    axisymmetric: g.axisymmetric,
+    cellSizeX: g.cellSizeXM,
+    cellSizeY: g.cellSizeYM,
+    rowWeight: cg.rowWeights,
+    cellWeights: cg.weights,
+    cellVolumes: cg.gasVolumesM3,
+    selectionFactor: cg.gasVolumesM3.map((v, c) => (v > 0 ? (0.5 * plan.moleculesPerParticle * cg.weights[c] * plan.timeStepS) / v : 0)),
+    blockTable: Float64Array.from(g.blocks.flatMap((b) => [b.x0, b.x1, b.y0, b.y1])),
+    blockCount: g.blocks.length,
+    nearSolid: nearSolidTable(g.cellsX, g.cellsY, g.cellSizeXM, g.cellSizeYM, g.subcellsPerCellSide, g.blocks),
+    sectionTable: Float64Array.from(sections.flatMap((x) => [x.xM, x.yMinM ?? 0, x.yMaxM ?? g.lengthYM])),
+    sectionCount: sections.length,
+    sectionSums: new Float64Array(sections.length),
+    surfaceNames: plan.surfaces.map((f) => f.name),
+    sectionNames: sections.map((x) => x.name),
+    inflowTable,
+    inflowRemainder: new Float64Array(inflowTable.length / INFLOW_STRIDE),
+    bodyAccelerationX: plan.bodyAccelerationXMPerS2,
+    leaks: 0,
     cellsX: g.cellsX,
     cellsY: g.cellsY,
     cells,
@@ -212,6 +306,30 @@ export function createState(plan: Plan, stream = 0): SimState {
   return st;
 }
 
+/**
+ * Flags (per sub-cell key) the cells that touch a block or neighbour one that does: see SimState.nearSolid. A cell is
+ * flagged when its closed rectangle grown by one cell on every side meets a block's closed rectangle.
+ */
+function nearSolidTable(nx: number, ny: number, dx: number, dy: number, s: number, blocks: readonly BlockRectangle[]): Uint8Array {
+  const subcells = s * s;
+  const flags = new Uint8Array(nx * ny * subcells);
+  for (let j = 0; j < ny; j++) {
+    for (let i = 0; i < nx; i++) {
+      const x0 = (i - 1) * dx;
+      const x1 = (i + 2) * dx;
+      const y0 = (j - 1) * dy;
+      const y1 = (j + 2) * dy;
+      if (blocks.some((b) => b.x0 <= x1 && b.x1 >= x0 && b.y0 <= y1 && b.y1 >= y0)) flags.fill(1, (j * nx + i) * subcells, (j * nx + i + 1) * subcells);
+    }
+  }
+  return flags;
+}
+
+/**
+ * The initial gas: particlesPerCell × (gas volume / whole-cell volume) particles per cell on average, uniform in the
+ * gas part of the cell (uniform in r² within an axisymmetric cell, so uniform in volume), Maxwellian at the initial
+ * state.
+ */
 function fillInitialGas(st: SimState, plan: Plan): void {
   const { rng } = st;
   const t = plan.caseData.initial.temperatureK;
@@ -219,17 +337,28 @@ function fillInitialGas(st: SimState, plan: Plan): void {
   const sd = Math.sqrt((K_B * t) / st.massKg);
   const dx = st.lengthX / st.cellsX;
   const dy = st.lengthY / st.cellsY;
+  const blocks = plan.grid.blocks;
   // sigmaCrMax starts at a few times the equilibrium mean so the first steps select enough pairs (Bird 1994 practice).
   const initialSigmaCr = st.sigmaCrCoefficient * Math.pow(3 * sd, 2 - 2 * st.viscosityIndex);
   st.sigmaCrMax.fill(initialSigmaCr);
   const ppc = plan.particlesPerCell;
+  const cellVolumes = plan.grid.cells.gasVolumesM3;
   for (let iy = 0; iy < st.cellsY; iy++) {
+    const wholeVolume = plan.grid.cellVolumeM3 * st.rowWeight[iy];
     for (let ix = 0; ix < st.cellsX; ix++) {
-      const n = Math.floor(ppc + uniform(rng));
+      const gasShare = cellVolumes[iy * st.cellsX + ix] / wholeVolume;
+      if (gasShare <= 0) continue;
+      const n = Math.floor(ppc * gasShare + uniform(rng));
       for (let k = 0; k < n; k++) {
+        let px: number;
+        let py: number;
+        do {
+          px = (ix + uniform(rng)) * dx;
+          py = st.axisymmetric ? dy * Math.sqrt(iy * iy + uniform(rng) * (2 * iy + 1)) : (iy + uniform(rng)) * dy;
+        } while (insideBlock(blocks, px, py));
         const i = addParticle(st);
-        st.x[i] = (ix + uniform(rng)) * dx;
-        st.y[i] = (iy + uniform(rng)) * dy;
+        st.x[i] = px;
+        st.y[i] = py;
         st.vx[i] = u + sd * standardNormal(rng);
         st.vy[i] = v + sd * standardNormal(rng);
         st.vz[i] = w + sd * standardNormal(rng);
@@ -248,7 +377,7 @@ export function addParticle(st: SimState): number {
 export function growParticles(st: SimState, capacity: number): void {
   const grow = <T extends Float64Array | Int32Array>(a: T, make: (n: number) => T): T => {
     const b = make(capacity);
-    b.set(a.subarray(0, st.count) as never);
+    b.set(a as never);
     return b;
   };
   const f64 = (n: number) => new Float64Array(n);
@@ -262,6 +391,10 @@ export function growParticles(st: SimState, capacity: number): void {
   st.key = grow(st.key, i32);
   st.spare = spareArrays(capacity);
   st.order = new Int32Array(capacity);
-  st.boundaryList = new Int32Array(capacity);
+  // The lists may be in use when a clone or an inflow particle needs room: keep their contents.
+  st.boundaryList = grow(st.boundaryList, i32);
+  st.removeList = grow(st.removeList, i32);
+  st.weightList = grow(st.weightList, i32);
+  st.weightFromRow = grow(st.weightFromRow, i32);
   st.capacity = capacity;
 }

@@ -21,9 +21,10 @@ import {
   SIDE_BIN_OFFSET,
   SIDE_BIN_COUNT,
   SIDE_THERMAL_SPEED,
-  SIDE_LEFT,
-  SIDE_RIGHT,
-  SIDE_BOTTOM,
+  SIDE_NORMAL_IS_X,
+  SIDE_INWARD,
+  SIDE_FROM,
+  SIDE_TO,
   WALL_DIFFUSE,
   WALL_SPECULAR,
   WALL_MAXWELL,
@@ -36,8 +37,10 @@ import {
 } from './state';
 
 /**
- * Re-emits particle i from side `side` at position `along` (m) measured along the side (x for bottom/top, y for
- * left/right). Formulas:
+ * Re-emits particle i from surface `side` (a side-table row) at position `along` (m) measured along it (x for
+ * surfaces normal to y, y for surfaces normal to x), and books its momentum and energy, times the particle weight
+ * `weight` (1 in planar domains), to the wall bin there. In axisymmetric domains the velocity is already in the
+ * meridional frame of the hit, where y is radial. Formulas:
  * - diffuse: flux-weighted half-Maxwellian at T_w: c_n = sqrt(−2 kT_w/m · ln R), tangential components Gaussian
  *   with variance kT_w/m; rotational energy from the equilibrium distribution at T_w (Bird 1994, §12.2);
  * - Maxwell: diffuse with probability α, specular otherwise (Maxwell 1879);
@@ -48,7 +51,7 @@ import {
  *   2-D "velocity" with α_n; for 3 rotational degrees of freedom it is re-drawn at T_w with probability α_n
  *   (a simplification, documented in DEVELOPERS.md).
  */
-export function reflectAtWall(st: SimState, i: number, side: number, along: number): void {
+export function reflectAtWall(st: SimState, i: number, side: number, along: number, weight: number): void {
   const tab = st.sideTable;
   const row = side * SIDE_STRIDE;
   const model = tab[row + SIDE_MODEL];
@@ -59,8 +62,8 @@ export function reflectAtWall(st: SimState, i: number, side: number, along: numb
   const rng = st.rng;
 
   // Local basis: component indices (0 = x, 1 = y) of the normal, and its sign pointing into the gas.
-  const normalIsX = side === SIDE_LEFT || side === SIDE_RIGHT;
-  const inward = side === SIDE_LEFT || side === SIDE_BOTTOM ? 1 : -1;
+  const normalIsX = tab[row + SIDE_NORMAL_IS_X] === 1;
+  const inward = tab[row + SIDE_INWARD];
   const vx0 = st.vx[i];
   const vy0 = st.vy[i];
   const vz0 = st.vz[i];
@@ -119,16 +122,17 @@ export function reflectAtWall(st: SimState, i: number, side: number, along: numb
 
   if (st.sampling) {
     const bins = tab[row + SIDE_BIN_COUNT];
-    const length = normalIsX ? st.lengthY : st.lengthX;
-    let b = Math.floor((along / length) * bins);
+    const from = tab[row + SIDE_FROM];
+    let b = Math.floor(((along - from) / (tab[row + SIDE_TO] - from)) * bins);
     if (b < 0) b = 0;
     else if (b >= bins) b = bins - 1;
     const o = (tab[row + SIDE_BIN_OFFSET] + b) * SUMS_PER_WALL_BIN;
     const ws = st.wallSums;
-    ws[o + WALL_HITS] += 1;
-    ws[o + WALL_PX] += m * (vx0 - vx1);
-    ws[o + WALL_PY] += m * (vy0 - vy1);
-    ws[o + WALL_PZ] += m * (vz0 - vz1);
-    ws[o + WALL_ENERGY] += incidentEnergy - (0.5 * m * (cn * cn + ct1 * ct1 + ct2 * ct2) + erot);
+    const wm = weight * m;
+    ws[o + WALL_HITS] += weight;
+    ws[o + WALL_PX] += wm * (vx0 - vx1);
+    ws[o + WALL_PY] += wm * (vy0 - vy1);
+    ws[o + WALL_PZ] += wm * (vz0 - vz1);
+    ws[o + WALL_ENERGY] += weight * (incidentEnergy - (0.5 * m * (cn * cn + ct1 * ct1 + ct2 * ct2) + erot));
   }
 }

@@ -12,7 +12,7 @@
  * `temperature ci95 [K]`.
  */
 import type { ReferenceState } from '../case/plan';
-import type { SideName } from '../case/schema';
+import { FLOW_QUANTITIES, flowQuantityUnits, type FlowResult } from './flowQuantities';
 import type { SimulationResult, FieldTable, IntegralEstimate } from './summarize';
 import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, type WallQuantityName } from './wallQuantities';
 
@@ -97,11 +97,44 @@ export interface SummaryJson {
   caseName: string;
   reference: Record<string, JsonNumber>;
   numerics: Record<string, JsonNumber>;
-  walls: Partial<Record<SideName, Record<WallQuantityName, WallEstimateJson>>>;
+  walls: Partial<Record<string, Record<WallQuantityName, WallEstimateJson>>>;
+  /**
+   * Flow numbers of cases with flow sections: the section they come from, each section's mass flow rate, and each
+   * flow quantity as {mean, ci95} (results/flowQuantities.ts; units in `units`).
+   */
+  flow?: FlowJson;
   /** SI unit of every quantity named in this file; a wall estimate's mean and ci95 share its quantity's unit. */
   units: Record<string, string>;
   warnings: string[];
   performance: Record<keyof Performance, JsonNumber>;
+}
+
+export interface FlowJson {
+  section: string;
+  sections: Record<string, { massFlowRate: WallEstimateJson }>;
+  upstreamPressure: JsonNumber;
+  downstreamPressure: JsonNumber;
+  temperature: JsonNumber;
+  [quantity: string]: unknown;
+}
+
+function flowJson(flow: FlowResult, units: Record<string, string>, planar: boolean): FlowJson {
+  const out: FlowJson = {
+    section: flow.section,
+    sections: Object.fromEntries(Object.entries(flow.sections).map(([name, e]) => [name, { massFlowRate: wallEstimateJson(e) }])),
+    upstreamPressure: jsonNumber(flow.upstreamPressurePa),
+    downstreamPressure: jsonNumber(flow.downstreamPressurePa),
+    temperature: jsonNumber(flow.temperatureK),
+  };
+  const flowUnits = flowQuantityUnits(planar);
+  for (const q of FLOW_QUANTITIES) {
+    const e = flow.values[q];
+    if (e) out[q] = { mean: jsonNumber(e.mean), ci95: jsonNumber(e.ci95) };
+    units[q] = flowUnits[q];
+  }
+  units.upstreamPressure = 'Pa';
+  units.downstreamPressure = 'Pa';
+  return out;
 }
 
 function jsonNumber(x: number): JsonNumber {
@@ -134,7 +167,7 @@ export function summaryJson(result: SimulationResult, extra: { performance: Perf
     units[name] = unit;
   }
   const walls: SummaryJson['walls'] = {};
-  for (const [side, estimates] of Object.entries(result.walls) as [SideName, Record<WallQuantityName, IntegralEstimate>][]) {
+  for (const [side, estimates] of Object.entries(result.walls) as [string, Record<WallQuantityName, IntegralEstimate>][]) {
     const entry = {} as Record<WallQuantityName, WallEstimateJson>;
     for (const q of WALL_QUANTITIES) entry[q] = wallEstimateJson(estimates[q]);
     walls[side] = entry;
@@ -147,6 +180,7 @@ export function summaryJson(result: SimulationResult, extra: { performance: Perf
     performance[key] = jsonNumber(extra.performance[key]);
     units[key] = PERFORMANCE_UNITS[key];
   }
+  const flow = result.flow ? flowJson(result.flow, units, !result.axisymmetric) : undefined;
   return {
     format: SUMMARY_FORMAT,
     formatVersion: SUMMARY_FORMAT_VERSION,
@@ -154,6 +188,7 @@ export function summaryJson(result: SimulationResult, extra: { performance: Perf
     reference,
     numerics,
     walls,
+    ...(flow ? { flow } : {}),
     units,
     warnings: [...result.warnings],
     performance,
@@ -213,13 +248,13 @@ export function fieldsCsv(result: SimulationResult): string {
 }
 
 /**
- * surfaces.csv: one row per wall bin. `position [m]` is the bin centre measured along the wall from its low end:
- * along x for the bottom and top walls, along y for the left and right walls.
+ * surfaces.csv: one row per wall bin. `position [m]` is the bin centre's coordinate along the wall: x for walls
+ * normal to y (bottom, top, block bottom and top faces), y (the radius when axisymmetric) for walls normal to x.
  */
 export function surfacesCsv(result: SimulationResult): string {
   let header: string[] | undefined;
   const rows: (number | string)[][] = [];
-  for (const [wall, bins] of Object.entries(result.wallBins) as [SideName, { position: Float64Array; table: FieldTable }][]) {
+  for (const [wall, bins] of Object.entries(result.wallBins) as [string, { position: Float64Array; table: FieldTable }][]) {
     header ??= ['wall', 'position [m]', ...fieldHeaders(bins.table)];
     for (let b = 0; b < bins.table.rows; b++) rows.push([wall, bins.position[b], ...fieldValues(bins.table, b)]);
   }

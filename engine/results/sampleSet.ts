@@ -5,7 +5,6 @@
  * merge into one (mergeSamples.ts); a set is saved and read back as a sample file (io/sampleFile.ts).
  */
 import type { Plan } from '../case/plan';
-import type { SideName } from '../case/schema';
 import type { Simulation } from '../simulation';
 import { batchListOf, type BatchList } from '../stats/batchList';
 import { seriesView } from '../stats/series';
@@ -32,12 +31,12 @@ export interface SampleSet {
   /** The plan of the case (of the first replica when merged: replicas differ only in seed or stream). */
   readonly plan: Plan;
   readonly geometry: SamplingGeometry;
-  /** Sides that are walls, in SIDE_NAMES order. */
-  readonly wallNames: readonly SideName[];
+  /** Surfaces that are walls (sides, then block faces), in side-table order. */
+  readonly wallNames: readonly string[];
   /** Complete batches of the raw cell sums (RAW_CELL_SUMS per cell) and wall-bin sums (SUMS_PER_WALL_BIN per bin). */
   readonly cellStore: BatchList;
   readonly wallStore: BatchList;
-  /** Integral quantities, key `${wall}.${quantity}`: one series (a value per base batch) per replica. */
+  /** Integral quantities (keys from results/seriesKeys.ts): one series (a value per base batch) per replica. */
   readonly series: ReadonlyMap<string, readonly Float64Array[]>;
   /** Sums of steps sampled but not yet closed into a base batch, and how many steps they hold. */
   readonly pendingCellSums: Float64Array;

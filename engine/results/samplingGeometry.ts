@@ -14,8 +14,10 @@ export interface SamplingGeometry {
   /** Domain size, m. */
   readonly lengthX: number;
   readonly lengthY: number;
-  /** Volume of one cell, m³ per metre of depth (planar cells have unit depth). */
+  /** Volume of a whole cell of particle weight 1, m³ (per metre of depth when planar). */
   readonly cellVolume: number;
+  /** x is the axis and y the radius; surfaces and cells are rings and cylinders. */
+  readonly axisymmetric: boolean;
   /** s. */
   readonly timeStep: number;
   /** Mass of one molecule, kg. */
@@ -23,14 +25,24 @@ export interface SamplingGeometry {
   /** Real molecules per simulated particle (per metre of depth). */
   readonly moleculesPerParticle: number;
   readonly rotationalDof: number;
-  /** SIDE_STRIDE numbers per side; columns are the SIDE_* constants of kernel/state.ts. */
+  /** SIDE_STRIDE numbers per surface (sides, then block faces); columns are the SIDE_* constants of kernel/state.ts. */
   readonly sideTable: Float64Array;
+  /** Name of each side-table row. */
+  readonly surfaceNames: readonly string[];
+  /** Names of the flow sections, in case order. */
+  readonly sectionNames: readonly string[];
+  /** Gas volume of each cell (m³, per metre of depth when planar) and its particle weight (derived from the plan). */
+  readonly cellVolumes: Float64Array;
+  readonly cellWeights: Float64Array;
 }
 
+/** Members that are not scalars: compared and copied on their own. */
+type GeometryArrays = 'sideTable' | 'surfaceNames' | 'sectionNames' | 'cellVolumes' | 'cellWeights';
+
 /** The scalar members of SamplingGeometry, typed over every key so a new member fails to compile until listed here. */
-const GEOMETRY_SCALAR_TABLE: { readonly [K in Exclude<keyof SamplingGeometry, 'sideTable'>]: true } = {
+const GEOMETRY_SCALAR_TABLE: { readonly [K in Exclude<keyof SamplingGeometry, GeometryArrays>]: true } = {
   cells: true, cellsX: true, cellsY: true, lengthX: true, lengthY: true, cellVolume: true, timeStep: true,
-  massKg: true, moleculesPerParticle: true, rotationalDof: true,
+  massKg: true, moleculesPerParticle: true, rotationalDof: true, axisymmetric: true,
 };
 export const GEOMETRY_SCALARS = Object.keys(GEOMETRY_SCALAR_TABLE) as (keyof typeof GEOMETRY_SCALAR_TABLE)[];
 
@@ -49,7 +61,12 @@ export function geometryOf(plan: Plan): SamplingGeometry {
     massKg: m.massKg,
     moleculesPerParticle: plan.moleculesPerParticle,
     rotationalDof: m.rotationalDof,
+    axisymmetric: g.axisymmetric,
     sideTable: buildSideTable(plan).sideTable,
+    surfaceNames: plan.surfaces.map((f) => f.name),
+    sectionNames: plan.caseData.flowSections.map((s) => s.name),
+    cellVolumes: g.cells.gasVolumesM3,
+    cellWeights: g.cells.weights,
   };
 }
 
@@ -66,7 +83,12 @@ export function copyGeometry(g: SamplingGeometry): SamplingGeometry {
     massKg: g.massKg,
     moleculesPerParticle: g.moleculesPerParticle,
     rotationalDof: g.rotationalDof,
+    axisymmetric: g.axisymmetric,
     sideTable: Float64Array.from(g.sideTable),
+    surfaceNames: [...g.surfaceNames],
+    sectionNames: [...g.sectionNames],
+    cellVolumes: Float64Array.from(g.cellVolumes),
+    cellWeights: Float64Array.from(g.cellWeights),
   };
 }
 
@@ -77,10 +99,15 @@ export function wallBinTotalOf(g: SamplingGeometry): number {
   return total;
 }
 
-/** Names and values of the scalar fields that differ between two geometries (and "sideTable" if that does). */
-export function geometryDifferences(a: SamplingGeometry, b: SamplingGeometry): string[] {
+/**
+ * Names and values of the scalar fields that differ between two geometries (and "sideTable" if that does). The
+ * per-cell arrays and names follow from the case, which callers compare on their own.
+ */
+export function geometryDifferences(
+  a: Pick<SamplingGeometry, (typeof GEOMETRY_SCALARS)[number] | 'sideTable'>, b: Pick<SamplingGeometry, (typeof GEOMETRY_SCALARS)[number] | 'sideTable'>,
+): string[] {
   const out: string[] = [];
-  for (const key of GEOMETRY_SCALARS) if (a[key] !== b[key]) out.push(`${key}: ${a[key]} vs ${b[key]}`);
+  for (const key of GEOMETRY_SCALARS) if ((a[key] ?? false) !== (b[key] ?? false)) out.push(`${key}: ${a[key]} vs ${b[key]}`);
   if (a.sideTable.length !== b.sideTable.length || a.sideTable.some((v, k) => v !== b.sideTable[k])) out.push('sideTable (boundary conditions or wall bins)');
   return out;
 }

@@ -7,15 +7,16 @@
  * Means use every sampled step, including those not yet in a complete batch.
  */
 import type { Plan, ReferenceState } from '../case/plan';
-import type { SideName } from '../case/schema';
 import type { Simulation } from '../simulation';
-import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN, SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT } from '../kernel/state';
+import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN, SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT, SIDE_FROM } from '../kernel/state';
 import { totalOf, batchView, batchSteps, storedSteps, type BatchSums } from '../stats/doublingBatches';
 import { tQuantile975 } from '../stats/studentT';
 import { sampleSetOf, type SampleSet } from './sampleSet';
+import { flowResultOf, type FlowResult } from './flowQuantities';
+import { sectionSeriesKey } from './seriesKeys';
 import { replicaIntegralEstimate, type IntegralEstimate } from './integralEstimate';
 import { CELL_FIELDS, CELL_FIELD_COUNT, deriveCellFields, type CellFieldConstants } from './cellFields';
-import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, wallQuantitiesFromSums, sideIndex, wallLengthM, type WallQuantityName } from './wallQuantities';
+import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, wallQuantitiesFromSums, sideIndex, wallLengthM, wallBinAreaM2, type WallQuantityName } from './wallQuantities';
 
 export type { IntegralEstimate };
 
@@ -38,6 +39,8 @@ export interface FieldTable {
 
 export interface SimulationResult {
   reference: ReferenceState;
+  /** x the axis and y the radius: flow numbers are totals, not per metre of depth. */
+  axisymmetric: boolean;
   /** Counts (particles, steps, sampleSteps …) are summed over replicas; seed is NaN if replicas had different seeds. */
   numerics: {
     cellsX: number;
@@ -60,7 +63,7 @@ export interface SimulationResult {
     collisionSeparationOverMeanFreePath: number;
     collisionsPerParticlePerStep: number;
   };
-  walls: Partial<Record<SideName, Record<WallQuantityName, IntegralEstimate>>>;
+  walls: Partial<Record<string, Record<WallQuantityName, IntegralEstimate>>>;
   /** Cell centres (m), cell index = ix + cellsX·iy. */
   cellX: Float64Array;
   cellY: Float64Array;
@@ -68,7 +71,9 @@ export interface SimulationResult {
   /** Averages over each row of cells (constant y): the profile across a gap. */
   profileY: Float64Array;
   profile: FieldTable;
-  wallBins: Partial<Record<SideName, { position: Float64Array; table: FieldTable }>>;
+  wallBins: Partial<Record<string, { position: Float64Array; table: FieldTable }>>;
+  /** Flow numbers of cases with flow sections (results/flowQuantities.ts). */
+  flow?: FlowResult;
   warnings: string[];
 }
 
@@ -141,21 +146,22 @@ function batchHalfWidths(store: BatchSums, width: number, derive: (batch: number
   return ci;
 }
 
-function wallBinTable(set: SampleSet, name: SideName): { position: Float64Array; table: FieldTable } {
+function wallBinTable(set: SampleSet, name: string): { position: Float64Array; table: FieldTable } {
   const st = set.geometry;
   const store = set.wallStore;
-  const side = sideIndex(name);
+  const side = sideIndex(st, name);
   const row = side * SIDE_STRIDE;
   const first = st.sideTable[row + SIDE_BIN_OFFSET];
   const bins = st.sideTable[row + SIDE_BIN_COUNT];
   const length = wallLengthM(st, side);
-  const binArea = length / bins;
+  const binLength = length / bins;
+  const binAreas = Float64Array.from({ length: bins }, (_, b) => wallBinAreaM2(st, side, b, bins));
   const dt = st.timeStep;
   const nq = WALL_QUANTITIES.length;
   const scratch = new Float64Array(nq);
   const fill = (sums: Float64Array, steps: number, out: Float64Array) => {
     for (let b = 0; b < bins; b++) {
-      wallQuantitiesFromSums(st, side, sums, (first + b) * SUMS_PER_WALL_BIN, binArea, steps * dt, scratch);
+      wallQuantitiesFromSums(st, side, sums, (first + b) * SUMS_PER_WALL_BIN, binAreas[b], steps * dt, scratch);
       out.set(scratch, b * nq);
     }
   };
@@ -165,7 +171,7 @@ function wallBinTable(set: SampleSet, name: SideName): { position: Float64Array;
   const mean = new Float64Array(bins * nq);
   if (totalSteps > 0) fill(total, totalSteps, mean);
   const ci95 = batchHalfWidths(store, bins * nq, (b, out) => fill(batchView(store, b), batchSteps(store), out));
-  const position = Float64Array.from({ length: bins }, (_, b) => (b + 0.5) * binArea);
+  const position = Float64Array.from({ length: bins }, (_, b) => st.sideTable[row + SIDE_FROM] + (b + 0.5) * binLength);
   return {
     position,
     table: { names: [...WALL_QUANTITIES], units: WALL_QUANTITIES.map((q) => WALL_QUANTITY_UNITS[q]), rows: bins, mean, ci95, batches: store.batches, batchLengthSteps: batchSteps(store) },
@@ -180,7 +186,11 @@ export function averageSamplesOverCells(set: SampleSet, cellIndices: ArrayLike<n
   const st = set.geometry;
   const groupOf = new Int32Array(st.cells).fill(1);
   for (let k = 0; k < cellIndices.length; k++) groupOf[cellIndices[k]] = 0;
-  const table = groupedFields(set, groupOf, 2, Float64Array.of(st.cellVolume * cellIndices.length, st.cellVolume * (st.cells - cellIndices.length)));
+  let inside = 0;
+  let total = 0;
+  for (let c = 0; c < st.cells; c++) total += st.cellVolumes[c];
+  for (let k = 0; k < cellIndices.length; k++) inside += st.cellVolumes[cellIndices[k]];
+  const table = groupedFields(set, groupOf, 2, Float64Array.of(inside, total - inside));
   const f = CELL_FIELD_COUNT;
   return { ...table, rows: 1, mean: table.mean.slice(0, f), ci95: table.ci95.slice(0, f) };
 }
@@ -233,12 +243,22 @@ export function summarizeSamples(set: SampleSet): SimulationResult {
     identity[c] = c;
     rowOf[c] = Math.floor(c / st.cellsX);
   }
-  const cells = groupedFields(set, identity, st.cells, new Float64Array(st.cells).fill(st.cellVolume));
-  const profile = groupedFields(set, rowOf, st.cellsY, new Float64Array(st.cellsY).fill(st.cellVolume * st.cellsX));
+  const rowVolumes = new Float64Array(st.cellsY);
+  for (let c = 0; c < st.cells; c++) rowVolumes[rowOf[c]] += st.cellVolumes[c];
+  const cells = groupedFields(set, identity, st.cells, st.cellVolumes);
+  const profile = groupedFields(set, rowOf, st.cellsY, rowVolumes);
   const profileY = Float64Array.from({ length: st.cellsY }, (_, r) => (r + 0.5) * dy);
 
   const wallBins: SimulationResult['wallBins'] = {};
   for (const name of set.wallNames) wallBins[name] = wallBinTable(set, name);
+
+  const sections: Record<string, IntegralEstimate> = {};
+  for (const name of st.sectionNames) {
+    const { estimate } = replicaIntegralEstimate(set.series.get(sectionSeriesKey(name)) ?? [], plan.batchSteps);
+    sections[name] = estimate;
+    if (!estimate.plateauFound && counters.sampledSteps > 0) warnings.push(`flow.sections.${name}.massFlowRate: no plateau in the blocking analysis; its error bar may be too small — sample longer`);
+  }
+  const flow = flowResultOf(plan, sections);
 
   if (cells.batches > 0 && longestCorrelationSteps > 0 && cells.batchLengthSteps < 10 * longestCorrelationSteps) {
     warnings.push(
@@ -254,6 +274,7 @@ export function summarizeSamples(set: SampleSet): SimulationResult {
 
   return {
     reference: plan.reference,
+    axisymmetric: st.axisymmetric,
     numerics: {
       cellsX: st.cellsX,
       cellsY: st.cellsY,
@@ -279,6 +300,7 @@ export function summarizeSamples(set: SampleSet): SimulationResult {
     profileY,
     profile,
     wallBins,
+    ...(flow ? { flow } : {}),
     warnings,
   };
 }

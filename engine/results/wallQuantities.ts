@@ -2,18 +2,18 @@
  * Wall quantities from the per-bin momentum and energy sums booked by reflectAtWall.
  *
  * Sign conventions (SI, per unit area of the wall):
- * - shearStress: tangential force per area exerted by the gas on the wall, along +x for the bottom and top sides
- *   and along +y for the left and right sides;
+ * - shearStress: tangential force per area exerted by the gas on the wall, along +x for surfaces normal to y (bottom
+ *   and top sides, block bottom and top faces) and along +y (axisymmetric: outward radial) for surfaces normal to x;
  * - normalStress: normal force per area pushing the wall outward (the gas pressure on it, positive);
  * - heatFlux: energy per area per time from the gas into the wall, in the wall's own frame;
  * - numberFlux: molecules striking the wall per area per time.
  */
 import type { SamplingGeometry } from './samplingGeometry';
 import {
-  SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT, SIDE_LEFT, SIDE_BOTTOM, SIDE_RIGHT,
+  SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT, SIDE_NORMAL_IS_X, SIDE_INWARD, SIDE_PLANE, SIDE_FROM, SIDE_TO,
   SUMS_PER_WALL_BIN, WALL_HITS, WALL_PX, WALL_PY, WALL_ENERGY,
 } from '../kernel/state';
-import { SIDE_NAMES, type SideName } from '../case/schema';
+import { surfaceAreaM2 } from '../geometry/surfaces';
 
 export const WALL_QUANTITIES = ['shearStress', 'normalStress', 'heatFlux', 'numberFlux'] as const;
 export type WallQuantityName = (typeof WALL_QUANTITIES)[number];
@@ -24,13 +24,26 @@ export const WALL_QUANTITY_UNITS: Record<WallQuantityName, string> = {
   numberFlux: '1/(m^2 s)',
 };
 
-export function sideIndex(name: SideName): number {
-  return SIDE_NAMES.indexOf(name);
+/** Side-table row of a surface by name (−1 if there is none). */
+export function sideIndex(g: SamplingGeometry, name: string): number {
+  return g.surfaceNames.indexOf(name);
 }
 
-/** Length of a side (m; its area per metre of depth, m²). */
+/** Length of a surface along itself (m). */
 export function wallLengthM(g: SamplingGeometry, side: number): number {
-  return side === SIDE_LEFT || side === SIDE_RIGHT ? g.lengthY : g.lengthX;
+  const row = side * SIDE_STRIDE;
+  return g.sideTable[row + SIDE_TO] - g.sideTable[row + SIDE_FROM];
+}
+
+/**
+ * Area (m²; per metre of depth when planar) of bin `bin` of `bins` equal bins along a surface, or of the whole
+ * surface with bin = 0, bins = 1. Axisymmetric surfaces are rings or cylinders (geometry/surfaces.ts).
+ */
+export function wallBinAreaM2(g: SamplingGeometry, side: number, bin: number, bins: number): number {
+  const row = side * SIDE_STRIDE;
+  const from = g.sideTable[row + SIDE_FROM];
+  const length = g.sideTable[row + SIDE_TO] - from;
+  return surfaceAreaM2(g.sideTable[row + SIDE_NORMAL_IS_X] === 1, g.sideTable[row + SIDE_PLANE], from + (bin * length) / bins, from + ((bin + 1) * length) / bins, g.axisymmetric);
 }
 
 /**
@@ -41,8 +54,8 @@ export function wallQuantitiesFromSums(
   g: SamplingGeometry, side: number, sums: Float64Array, o: number, areaM2: number, timeS: number, out: Float64Array,
 ): void {
   const scale = g.moleculesPerParticle / (areaM2 * timeS);
-  const normalIsX = side === SIDE_LEFT || side === SIDE_RIGHT;
-  const inward = side === SIDE_LEFT || side === SIDE_BOTTOM ? 1 : -1;
+  const normalIsX = g.sideTable[side * SIDE_STRIDE + SIDE_NORMAL_IS_X] === 1;
+  const inward = g.sideTable[side * SIDE_STRIDE + SIDE_INWARD];
   const pNormal = normalIsX ? sums[o + WALL_PX] : sums[o + WALL_PY];
   const pTangential = normalIsX ? sums[o + WALL_PY] : sums[o + WALL_PX];
   out[0] = pTangential * scale;
@@ -59,12 +72,12 @@ const scratchSums = new Float64Array(SUMS_PER_WALL_BIN);
  * (a live SimState is one).
  */
 export function wallTotalsOfBatch(
-  sim: { state: SamplingGeometry; wallNames: readonly SideName[] }, sums: Float64Array, steps: number,
+  sim: { state: SamplingGeometry; wallNames: readonly string[] }, sums: Float64Array, steps: number,
 ): [string, number][] {
   const st = sim.state;
   const out: [string, number][] = [];
   for (const name of sim.wallNames) {
-    const side = sideIndex(name);
+    const side = sideIndex(st, name);
     const row = side * SIDE_STRIDE;
     const first = st.sideTable[row + SIDE_BIN_OFFSET];
     const bins = st.sideTable[row + SIDE_BIN_COUNT];
@@ -73,7 +86,7 @@ export function wallTotalsOfBatch(
       const o = (first + b) * SUMS_PER_WALL_BIN;
       for (let k = 0; k < SUMS_PER_WALL_BIN; k++) scratchSums[k] += sums[o + k];
     }
-    wallQuantitiesFromSums(st, side, scratchSums, 0, wallLengthM(st, side), steps * st.timeStep, scratch);
+    wallQuantitiesFromSums(st, side, scratchSums, 0, wallBinAreaM2(st, side, 0, 1), steps * st.timeStep, scratch);
     WALL_QUANTITIES.forEach((q, k) => out.push([`${name}.${q}`, scratch[k]]));
   }
   return out;

@@ -44,6 +44,7 @@ describe('replica pool on worker threads', () => {
 
   it('a worker killed mid-run is reported as lost with its reason; the others finish and its snapshot is kept', async () => {
     const workers: { terminate(): Promise<number> }[] = [];
+    let samplingSince: number | undefined;
     const pool = runReplicaPool({
       caseInput: smallCouette(200_000),
       replicas: 2,
@@ -51,9 +52,11 @@ describe('replica pool on worker threads', () => {
       chunkMilliseconds: 20,
       createReplica: nodeReplicaFactory(workerUrl, (w) => workers.push(w)),
       onProgress: (p) => {
-        // Kill replica 1 once it has sampled for a while, then stop the other soon after.
+        // Kill replica 1 once it has sampled for ten snapshot intervals (so a safety snapshot holds samples even on
+        // a loaded machine), then stop the other soon after.
         const r1 = p.replicas[1];
-        if (r1 && r1.phase === 'sampling' && r1.stepsDone > 3000 && workers[1]) {
+        if (r1 && r1.phase === 'sampling' && samplingSince === undefined) samplingSince = Date.now();
+        if (r1 && samplingSince !== undefined && Date.now() - samplingSince > 2000 && workers[1]) {
           void workers[1].terminate();
           workers[1] = undefined as never;
           setTimeout(() => pool.cancel(), 1500);

@@ -1,0 +1,77 @@
+/**
+ * What happens to a particle after an exact flight: removal when it left through a reservoir, radial weighting when
+ * it changed row in an axisymmetric domain, and its sub-cell key and count for the index step. Rare work (a few per
+ * cent of particles per step), so it may call helpers.
+ */
+import { uniform } from '../particles/rng';
+import { type SimState, addParticle } from './state';
+import { flyParticle, FLIGHT_LEFT_DOMAIN } from './flight';
+import { keyOf } from './move';
+
+/** Row of the cell holding radius/height y (clamped onto the grid). */
+export function rowOf(st: SimState, y: number): number {
+  const row = Math.floor((y * st.cellsY) / st.lengthY);
+  return row < 0 ? 0 : row >= st.cellsY ? st.cellsY - 1 : row;
+}
+
+function index(st: SimState, i: number): void {
+  const k = keyOf(st, st.x[i], st.y[i]);
+  st.key[i] = k;
+  st.keyCount[k]++;
+}
+
+/**
+ * Radial weighting (Bird 1994, §15.2): a particle moving from a row of weight w_from to one of weight w_to stands for
+ * w_from / w_to particles there. It is deleted with probability 1 − w_from/w_to when that is below 1, else it gains
+ * floor(w_from/w_to − 1 + U) clones, copies of itself that separate in later collisions. `indexed` says whether
+ * particle i is already counted in the index (then its deletion un-counts it and clones are counted).
+ */
+export function reweight(st: SimState, i: number, fromRow: number, toRow: number, indexed: boolean): void {
+  const ratio = st.rowWeight[fromRow] / st.rowWeight[toRow];
+  if (ratio < 1) {
+    if (uniform(st.rng) >= ratio) {
+      if (indexed) st.keyCount[st.key[i]]--;
+      st.removeList[st.removeCount++] = i;
+    }
+    return;
+  }
+  const copies = Math.floor(ratio - 1 + uniform(st.rng));
+  for (let c = 0; c < copies; c++) {
+    const j = addParticle(st);
+    st.x[j] = st.x[i];
+    st.y[j] = st.y[i];
+    st.vx[j] = st.vx[i];
+    st.vy[j] = st.vy[i];
+    st.vz[j] = st.vz[i];
+    st.erot[j] = st.erot[i];
+    if (indexed) {
+      st.key[j] = st.key[i];
+      st.keyCount[st.key[j]]++;
+    }
+  }
+}
+
+/**
+ * Flies particle i exactly for time t (kernel/flight.ts), gives it the second half kick of a body acceleration,
+ * then removes, reweights and indexes it as needed. The particle weight is that of the row it starts in.
+ */
+export function flyAndSettle(st: SimState, i: number, t: number, halfKick: number): void {
+  const fromRow = st.axisymmetric ? rowOf(st, st.y[i]) : 0;
+  const gone = flyParticle(st, i, t, st.rowWeight[fromRow]) === FLIGHT_LEFT_DOMAIN;
+  if (gone) {
+    st.removeList[st.removeCount++] = i;
+    return;
+  }
+  st.vx[i] += halfKick;
+  if (st.axisymmetric) {
+    const toRow = rowOf(st, st.y[i]);
+    if (toRow !== fromRow) {
+      const removed = st.removeCount;
+      const first = st.count;
+      reweight(st, i, fromRow, toRow, false);
+      if (st.removeCount > removed) return;
+      for (let j = first; j < st.count; j++) index(st, j);
+    }
+  }
+  index(st, i);
+}
