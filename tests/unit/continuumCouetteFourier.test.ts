@@ -106,6 +106,9 @@ describe('couetteFlow()', () => {
     expect(() => couetteFlow({ gas, gapM: 0, bottomWallSpeedMPerS: 0, topWallSpeedMPerS: 1, slip: { kind: 'noSlip' } }))
       .toThrow(/Couette gap \(m\) = 0/);
     expect(() => couette(1, { kind: 'firstOrder' }, 1.2)).toThrow(/velocity accommodation = 1.2/);
+    expect(() => couetteFlow({
+      gas: { ...gas, viscosityPaS: 0 }, gapM: 1, bottomWallSpeedMPerS: 0, topWallSpeedMPerS: 1, slip: { kind: 'noSlip' },
+    })).toThrow(/gas viscosity \(Pa·s\) = 0/);
   });
 });
 
