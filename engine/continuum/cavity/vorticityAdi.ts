@@ -26,6 +26,7 @@ export interface AdiScratch {
   readonly dp: Float64Array;
 }
 
+/** Scratch for an n × n grid (n: points per side, including the walls). */
 export function createAdiScratch(n: number): AdiScratch {
   return { delta: new Float64Array(n * n), cp: new Float64Array(n), dp: new Float64Array(n) };
 }
