@@ -15,76 +15,15 @@ import { modelFromSpecies, viscosityPaS, type CollisionModelKind, type Molecular
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { parseQuantity, formatQuantity, unitsOf, type QuantityKind } from '../units/engineeringUnits';
 
-// ─── Numerics defaults: the one place to tune accuracy against speed ────────────────────────────────────────────
-/**
- * Default numerics of the gap presets for a Knudsen number (λ/H).
- * cellsY: at least 20 cells, and cells no larger than λ/3 (3/Kn cells across the gap; with 2×2 sub-cells the mean
- * collision separation stays near 0.1 λ). 100 particles per cell, and about 8·10^8 particle-steps of sampling: on the
- * 2-core reference machine that is under a minute and gives wall shear and heat flux to a few per cent (the
- * validation tests record what each Knudsen number reaches).
- */
-export function defaultNumerics(knudsen: number): { cellsY: number; particlesPerCell: number; sampleSteps: number } {
-  const cellsY = Math.max(20, Math.ceil(3 / knudsen - 1e-9));
-  const particlesPerCell = 100;
-  const sampleSteps = Math.min(400_000, Math.max(20_000, Math.round(8e8 / (cellsY * particlesPerCell) / 1000) * 1000));
-  return { cellsY, particlesPerCell, sampleSteps };
-}
-// ────────────────────────────────────────────────────────────────────────────────────────────────────────────────
 
-/** 'count': a whole number ≥ 0; 'choice': one of `choices`; otherwise a quantity kind parsed with units. */
-export type ParameterKind = QuantityKind | 'count' | 'choice';
+import {
+  type Preset, type PresetParameter, type PresetValues, gasParameter, modelParameter, knudsenParameter, gapParameter,
+  numericsParameters, pressureForKnudsenPa, defaultGapNumerics,
+} from './presetParameters';
+import { DUCT_PRESETS } from './ductPresets';
 
-export interface PresetParameter {
-  /** Key used in `--set name=value` and in build()'s values. */
-  readonly name: string;
-  readonly kind: ParameterKind;
-  /** Unit in which help and forms show the value ('' for counts and choices). */
-  readonly unitShown: string;
-  /** SI value (or choice); null = derived from the other parameters (the description says how). */
-  readonly default: number | string | null;
-  readonly choices?: readonly string[];
-  /** Smallest allowed SI value, exclusive when `exclusiveMin`; absent = any finite number. */
-  readonly min?: number;
-  readonly exclusiveMin?: boolean;
-  readonly description: string;
-}
-
-/** Parameter values after parsing: SI numbers, chosen strings, or undefined for a derived parameter left unset. */
-export type PresetValues = Readonly<Record<string, number | string | undefined>>;
-
-export interface Preset {
-  readonly name: string;
-  readonly description: string;
-  readonly parameters: readonly PresetParameter[];
-  /** Builds the case from SI values; every parameter with a non-null default is present. */
-  build(values: PresetValues): CaseInput;
-}
-
-const gasParameter: PresetParameter = {
-  name: 'gas', kind: 'choice', unitShown: '', default: 'Ar', choices: SPECIES_IDS, description: 'table gas',
-};
-const modelParameter: PresetParameter = {
-  name: 'model', kind: 'choice', unitShown: '', default: 'VHS', choices: COLLISION_MODELS, description: 'collision model',
-};
-const knudsenParameter: PresetParameter = {
-  name: 'knudsen', kind: 'dimensionless', unitShown: '', default: 0.1, min: 0, exclusiveMin: true,
-  description: 'Knudsen number λ/H, λ = (μ/p)·sqrt(πkT/(2m)) the viscosity-based mean free path; sets the pressure',
-};
-const gapParameter: PresetParameter = {
-  name: 'gap', kind: 'length', unitShown: 'mm', default: 1e-3, min: 0, exclusiveMin: true, description: 'distance H between the walls',
-};
-const numericsParameters: readonly PresetParameter[] = [
-  { name: 'cellsY', kind: 'count', unitShown: '', default: null, min: 1, description: 'cells across the gap; default max(20, ceil(3/Kn))' },
-  { name: 'particlesPerCell', kind: 'count', unitShown: '', default: null, min: 1, description: 'simulated particles per cell at the start; default 100' },
-  { name: 'transientSteps', kind: 'count', unitShown: '', default: null, min: 0, description: 'steps before sampling starts; default chosen by the planner' },
-  { name: 'sampleSteps', kind: 'count', unitShown: '', default: null, min: 1, description: 'sampled steps; default about 8e8 particle-steps of sampling (8e8 / (cellsY × particlesPerCell)), between 20000 and 400000' },
-  { name: 'seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
-];
-
-/** p = μ(T)·sqrt(πkT/(2m)) / (Kn·H), Pa: the pressure at which λ (viscosity-based) equals Kn·H. */
-export function pressureForKnudsenPa(model: MolecularModel, temperatureK: number, knudsen: number, gapM: number): number {
-  return (viscosityPaS(model, temperatureK) * Math.sqrt((Math.PI * K_B * temperatureK) / (2 * model.massKg))) / (knudsen * gapM);
-}
+export type { ParameterKind, Preset, PresetParameter, PresetValues } from './presetParameters';
+export { pressureForKnudsenPa, defaultGapNumerics as defaultNumerics } from './presetParameters';
 
 interface GapSetup {
   name: string;
@@ -103,7 +42,7 @@ function gapCase(s: GapSetup): CaseInput {
   const knudsen = v.knudsen as number;
   const gapM = v.gap as number;
   const model = modelFromSpecies(species, kind);
-  const auto = defaultNumerics(knudsen);
+  const auto = defaultGapNumerics(knudsen);
   const cellsY = (v.cellsY as number | undefined) ?? auto.cellsY;
   const wall = (w: GapSetup['bottom']) => ({
     type: 'wall' as const,
@@ -185,7 +124,7 @@ const fourier: Preset = {
 };
 
 /** All presets by name. */
-export const PRESETS = Object.freeze({ couette, fourier } as const satisfies Record<string, Preset>);
+export const PRESETS = Object.freeze({ couette, fourier, ...DUCT_PRESETS } as const satisfies Record<string, Preset>);
 export type PresetName = keyof typeof PRESETS;
 
 export function presetNames(): PresetName[] {

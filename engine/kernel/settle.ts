@@ -3,7 +3,6 @@
  * it changed row in an axisymmetric domain, and its sub-cell key and count for the index step. Rare work (a few per
  * cent of particles per step), so it may call helpers.
  */
-import { uniform } from '../particles/rng';
 import { type SimState, addParticle } from './state';
 import { flyParticle, FLIGHT_LEFT_DOMAIN } from './flight';
 import { keyOf } from './move';
@@ -22,21 +21,24 @@ function index(st: SimState, i: number): void {
 
 /**
  * Radial weighting (Bird 1994, §15.2): a particle moving from a row of weight w_from to one of weight w_to stands for
- * w_from / w_to particles there. It is deleted with probability 1 − w_from/w_to when that is below 1, else it gains
- * floor(w_from/w_to − 1 + U) clones, copies of itself that separate in later collisions. `indexed` says whether
- * particle i is already counted in the index (then its deletion un-counts it and clones are counted).
+ * r = w_from / w_to particles there. Bird draws the number kept at random (deleted with probability 1 − r, or
+ * floor(r − 1 + U) clones); in a closed domain that makes the real mass a random walk — a closed tube lost 12 % of its
+ * gas in 800 steps in our tests. Here each row carries the fraction not yet made whole (error diffusion): the copies
+ * kept are floor(carry + r), and the rest stays in the row's carry, so the real mass of every row is kept to within one
+ * particle and no drift can build up. Which particle is kept or deleted does not depend on its velocity, so the
+ * velocity distribution is not biased. `indexed` says whether particle i is already counted in the index (then its
+ * deletion un-counts it and clones are counted).
  */
 export function reweight(st: SimState, i: number, fromRow: number, toRow: number, indexed: boolean): void {
-  const ratio = st.rowWeight[fromRow] / st.rowWeight[toRow];
-  if (ratio < 1) {
-    if (uniform(st.rng) >= ratio) {
-      if (indexed) st.keyCount[st.key[i]]--;
-      st.removeList[st.removeCount++] = i;
-    }
+  const carry = st.weightCarry[toRow] + st.rowWeight[fromRow] / st.rowWeight[toRow];
+  const kept = Math.floor(carry);
+  st.weightCarry[toRow] = carry - kept;
+  if (kept === 0) {
+    if (indexed) st.keyCount[st.key[i]]--;
+    st.removeList[st.removeCount++] = i;
     return;
   }
-  const copies = Math.floor(ratio - 1 + uniform(st.rng));
-  for (let c = 0; c < copies; c++) {
+  for (let c = 1; c < kept; c++) {
     const j = addParticle(st);
     st.x[j] = st.x[i];
     st.y[j] = st.y[i];

@@ -72,7 +72,12 @@ export function buildSideTable(plan: Plan): { sideTable: Float64Array; wallBinTo
   return { sideTable: Float64Array.from(table), wallBinTotal: offset };
 }
 
-/** Names of the surfaces that are walls, in row order: what `walls.NAME` in the results lists. */
+/**
+ * Names of the surfaces that are walls, in row order: what `walls.NAME` in the results lists. A block face that lies
+ * on the domain's boundary can never be reached by a molecule and is left out.
+ */
 export function wallNamesOf(plan: Plan): string[] {
-  return plan.surfaces.filter((f) => f.spec.type === 'wall').map((f) => f.name);
+  const { lengthXM: lx, lengthYM: ly } = plan.caseData.domain;
+  const onBoundary = (f: SurfacePlan) => f.block >= 0 && (f.planeM === 0 || f.planeM === (f.normalIsX ? lx : ly));
+  return plan.surfaces.filter((f) => f.spec.type === 'wall' && !onBoundary(f)).map((f) => f.name);
 }

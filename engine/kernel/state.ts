@@ -113,6 +113,8 @@ export interface SimState extends SamplingGeometry {
   weightList: Int32Array;
   weightFromRow: Int32Array;
   weightCount: number;
+  /** Per row: the fraction of a particle owed to or by the row under radial weighting (kernel/settle.ts). */
+  weightCarry: Float64Array;
 
   /** Axisymmetric domain: x the axis, y the radius; flights in 3D, projected back onto (x, r). */
   readonly axisymmetric: boolean;
@@ -247,6 +249,7 @@ export function createState(plan: Plan, stream = 0): SimState {
     weightList: new Int32Array(capacity),
     weightFromRow: new Int32Array(capacity),
     weightCount: 0,
+    weightCarry: new Float64Array(g.cellsY),
     axisymmetric: g.axisymmetric,
     cellSizeX: g.cellSizeXM,
     cellSizeY: g.cellSizeYM,

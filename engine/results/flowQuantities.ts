@@ -2,8 +2,8 @@
  * The engineering flow numbers of a run, from the mass flow rate counted at the flow sections:
  * - massFlowRate ṁ (kg/s; planar cases per metre of depth, kg/(s·m));
  * - throughput Q = ṁ k T / m (Pa·m³/s; planar Pa·m²/s), the pV flow at the upstream temperature T;
- * - molarFlow in sccm: molecules per second over those in a cubic centimetre per minute at 0 °C and 101 325 Pa
- *   (the usual standard state of sccm; common practice, no source);
+ * - molarFlow in sccm: molecules per second over those of one standard cubic centimetre per minute
+ *   (units/engineeringUnits.ts states the standard state);
  * - conductance C = Q / (p_up − p_down) (m³/s; planar m²/s);
  * - transmissionProbability W = ṁ / ṁ_fm, ṁ_fm = A (p_up − p_down) sqrt(m / (2π k T)) the free-molecular flow through
  *   the entrance area A (H per metre of depth for a channel or slit, π R² for a tube or orifice): the quantity that
@@ -15,11 +15,9 @@
  */
 import type { Plan } from '../case/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
+import { MOLECULES_PER_S_PER_SCCM } from '../units/engineeringUnits';
 import type { Estimate } from './summarize';
 import type { IntegralEstimate } from './integralEstimate';
-
-/** Molecules per second in 1 sccm: 101 325 Pa × 1e-6 m³ / (k × 273.15 K) / 60 s. */
-export const MOLECULES_PER_SECOND_PER_SCCM = (101_325 * 1e-6) / (K_B * 273.15) / 60;
 
 export const FLOW_QUANTITIES = ['massFlowRate', 'throughput', 'molarFlow', 'conductance', 'transmissionProbability', 'reducedFlowRate'] as const;
 export type FlowQuantityName = (typeof FLOW_QUANTITIES)[number];
@@ -68,7 +66,7 @@ export function flowResultOf(plan: Plan, sections: Record<string, IntegralEstima
   const values: Partial<Record<FlowQuantityName, Estimate>> = {
     massFlowRate: { mean: mdot.mean, ci95: mdot.ci95 },
     throughput: scaled((K_B * t) / m),
-    molarFlow: scaled(1 / (m * MOLECULES_PER_SECOND_PER_SCCM)),
+    molarFlow: scaled(1 / (m * MOLECULES_PER_S_PER_SCCM)),
   };
   if (dp > 0) values.conductance = scaled((K_B * t) / (m * dp));
   const r = c.flowReport;

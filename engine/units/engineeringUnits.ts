@@ -19,7 +19,7 @@ import {
 } from '../physics/constants';
 
 export const QUANTITY_KINDS = [
-  'dimensionless', 'length', 'pressure', 'temperature', 'speed', 'massFlow', 'throughput', 'conductance',
+  'dimensionless', 'length', 'pressure', 'temperature', 'speed', 'acceleration', 'massFlow', 'throughput', 'conductance',
 ] as const;
 export type QuantityKind = (typeof QUANTITY_KINDS)[number];
 
@@ -73,6 +73,7 @@ const UNITS: readonly UnitRow[] = [
   { kind: 'temperature', symbol: 'K', aliases: [], factor: 1 },
   { kind: 'temperature', symbol: '°C', aliases: ['C', 'degC', 'ºC'], factor: 1, offset: KELVIN_AT_ZERO_CELSIUS },
   { kind: 'speed', symbol: 'm/s', aliases: [], factor: 1 },
+  { kind: 'acceleration', symbol: 'm/s²', aliases: ['m/s^2', 'm/s2'], factor: 1 },
   { kind: 'massFlow', symbol: 'kg/s', aliases: [], factor: 1 },
   { kind: 'massFlow', symbol: 'sccm', aliases: [], factor: MOLECULES_PER_S_PER_SCCM, perMolecule: true },
   { kind: 'throughput', symbol: 'Pa·m³/s', aliases: [], factor: 1 },
@@ -89,6 +90,7 @@ export const SI_UNIT: Readonly<Record<QuantityKind, string>> = {
   pressure: 'Pa',
   temperature: 'K',
   speed: 'm/s',
+  acceleration: 'm/s²',
   massFlow: 'kg/s',
   throughput: 'Pa·m³/s',
   conductance: 'm³/s',
