@@ -1,0 +1,190 @@
+/**
+ * Parameter sweeps (`tenuis sweep`): what a point of a sweep is, and the table of a finished sweep. Pure: no DOM, no
+ * Node, so the browser can offer the same sweeps later.
+ *
+ * A point changes only the pressures of the case. With the viscosity-based mean free path λ = (μ/p)·sqrt(πkT/(2m))
+ * (engine/gas/molecularModel.ts) μ depends on T alone, so at fixed temperature and geometry Kn = λ/L ∝ 1/p exactly:
+ * multiplying every pressure by f gives Kn/f and δ·f, and keeps every pressure ratio. Hence
+ * - `knudsen` K: every pressure × Kn_case / K, Kn_case being the case's own reference Knudsen number;
+ * - `pressure` P (Pa): every pressure × P / p_case, p_case the reference (initial) pressure.
+ * The pressures are initial.pressurePa, every reservoir side's pressurePa and flowReport's upstream and downstream
+ * pressures when set. Nothing else changes: numerics the case fixes (cells, time step, steps) stay fixed, and the
+ * planner re-derives those it leaves open for each point; a body acceleration is kept as it is.
+ */
+import type { Case } from './schema';
+import { SIDE_NAMES } from './schema';
+import { gasModelOf, referenceStateOf } from './plan';
+import type { QuantityKind } from '../units/engineeringUnits';
+import { csvDocument, type SummaryJson, type JsonNumber } from '../results/exports';
+import { FLOW_QUANTITIES, flowQuantityUnits } from '../results/flowQuantities';
+import { WALL_QUANTITY_UNITS } from '../results/wallQuantities';
+
+export const SWEEP_PARAMETERS = ['knudsen', 'pressure'] as const;
+export type SweepParameter = (typeof SWEEP_PARAMETERS)[number];
+
+/** How each parameter is read on the command line (unit kind for parseQuantity) and its SI unit in exports. */
+export const SWEEP_PARAMETER_UNITS: Readonly<Record<SweepParameter, { readonly kind: QuantityKind; readonly unit: string }>> = {
+  knudsen: { kind: 'dimensionless', unit: '1' },
+  pressure: { kind: 'pressure', unit: 'Pa' },
+};
+
+export type SweepSpacing = 'linear' | 'log';
+
+/**
+ * `points` values from `from` to `to`, both included: equal steps ('linear') or equal ratios ('log', geometric:
+ * from · (to/from)^(k/(points−1)), which needs from and to of the same sign). One point is just `from`. The ends are
+ * exactly `from` and `to`, not the rounded result of the formula.
+ */
+export function sweepValues(from: number, to: number, points: number, spacing: SweepSpacing): number[] {
+  if (points === 1) return [from];
+  const out: number[] = [];
+  const logFrom = Math.log(from);
+  const logTo = Math.log(to);
+  for (let k = 0; k < points; k++) {
+    const t = k / (points - 1);
+    out.push(spacing === 'log' ? Math.exp(logFrom + t * (logTo - logFrom)) : from + t * (to - from));
+  }
+  out[0] = from;
+  out[points - 1] = to;
+  return out;
+}
+
+/** The case's own value of the swept parameter: its reference Knudsen number (as plan() gives it) or pressure (Pa). */
+export function caseValueOf(c: Case, parameter: SweepParameter): number {
+  const reference = referenceStateOf(c, gasModelOf(c).model);
+  return parameter === 'knudsen' ? reference.knudsen : reference.pressurePa;
+}
+
+/** The case with every pressure multiplied by `factor` (> 0): initial, reservoirs, flowReport's pressures. */
+export function scalePressures(c: Case, factor: number): Case {
+  const boundaries = { ...c.boundaries };
+  for (const side of SIDE_NAMES) {
+    const b = boundaries[side];
+    if (b.type === 'reservoir') boundaries[side] = { ...b, pressurePa: b.pressurePa * factor };
+  }
+  const r = c.flowReport;
+  const flowReport = r && {
+    ...r,
+    ...(r.upstreamPressurePa !== undefined ? { upstreamPressurePa: r.upstreamPressurePa * factor } : {}),
+    ...(r.downstreamPressurePa !== undefined ? { downstreamPressurePa: r.downstreamPressurePa * factor } : {}),
+  };
+  return {
+    ...c,
+    initial: { ...c.initial, pressurePa: c.initial.pressurePa * factor },
+    boundaries,
+    ...(flowReport ? { flowReport } : {}),
+  };
+}
+
+/** The factor every pressure of `c` is multiplied by to put `parameter` at `value`. */
+export function pressureFactorFor(c: Case, parameter: SweepParameter, value: number): number {
+  const own = caseValueOf(c, parameter);
+  return parameter === 'knudsen' ? own / value : value / own;
+}
+
+/**
+ * The case of one sweep point: `c` with its pressures scaled to put `parameter` at `value` (SI), named after the
+ * point so its summary says which point it is. A pressure sweep sets the initial pressure to `value` exactly.
+ */
+export function caseAtSweepPoint(c: Case, parameter: SweepParameter, value: number): Case {
+  const scaled = scalePressures(c, pressureFactorFor(c, parameter, value));
+  const unit = SWEEP_PARAMETER_UNITS[parameter].unit;
+  return {
+    ...scaled,
+    name: `${c.name}, ${parameter} ${Number(value.toPrecision(6))}${unit === '1' ? '' : ` ${unit}`}`,
+    ...(parameter === 'pressure' ? { initial: { ...scaled.initial, pressurePa: value } } : {}),
+  };
+}
+
+/** Folder of point k (from 1) inside the sweep's output folder: points/001, points/002 … */
+export function sweepPointFolder(point: number): string {
+  return `points/${String(point).padStart(3, '0')}`;
+}
+
+// ─── The sweep's table ─────────────────────────────────────────────────────────────────────────────────────────
+
+/** complete: ran to the end; interrupted: stopped by the user (summary of what was sampled, or null); failed: null. */
+export type SweepPointStatus = 'complete' | 'interrupted' | 'failed';
+
+export interface SweepRow {
+  /** Point number, from 1. */
+  readonly point: number;
+  /** The swept value as requested (SI). */
+  readonly value: number;
+  readonly status: SweepPointStatus;
+  /** The point's summary.json, or null when nothing was sampled. */
+  readonly summary: SummaryJson | null;
+}
+
+export interface SweepTableOptions {
+  readonly parameter: SweepParameter;
+  /** Planar cases give flow numbers per metre of depth (flowQuantityUnits). */
+  readonly planar: boolean;
+  /** Cases with flow sections get the flow columns, the others every wall's shear stress and heat flux. */
+  readonly hasFlow: boolean;
+}
+
+const REFERENCE_COLUMNS = [
+  ['knudsen', '1'],
+  ['rarefaction', '1'],
+  ['pressure', 'Pa'],
+] as const;
+const WALL_COLUMNS = ['shearStress', 'heatFlux'] as const;
+
+const estimateOf = (x: unknown): { mean: JsonNumber; ci95: JsonNumber } | undefined =>
+  x !== null && typeof x === 'object' && 'mean' in x && 'ci95' in x ? (x as { mean: JsonNumber; ci95: JsonNumber }) : undefined;
+const num = (x: JsonNumber | undefined): number => (typeof x === 'number' ? x : NaN);
+
+/**
+ * sweep.csv: one row per point — point, swept value, status, the point's reference Knudsen number, rarefaction δ and
+ * pressure, then each flow quantity (or each wall's shear stress and heat flux) with its 95 % half-width, all taken
+ * from the point's summary.json. Units in every header; a number that is not available is an empty field.
+ */
+export function sweepCsv(rows: readonly SweepRow[], o: SweepTableOptions): string {
+  const header: string[] = ['point [1]', `${o.parameter} [${SWEEP_PARAMETER_UNITS[o.parameter].unit}]`, 'status'];
+  for (const [name, unit] of REFERENCE_COLUMNS) header.push(`reference ${name} [${unit}]`);
+  const pairs: { label: string; unit: string; pick: (s: SummaryJson) => unknown }[] = [];
+  if (o.hasFlow) {
+    const units = flowQuantityUnits(o.planar);
+    for (const q of FLOW_QUANTITIES) pairs.push({ label: q, unit: units[q], pick: (s) => s.flow?.[q] });
+  } else {
+    const walls: string[] = [];
+    for (const r of rows) for (const w of Object.keys(r.summary?.walls ?? {})) if (!walls.includes(w)) walls.push(w);
+    for (const w of walls) for (const q of WALL_COLUMNS) pairs.push({ label: `${w} ${q}`, unit: WALL_QUANTITY_UNITS[q], pick: (s) => s.walls[w]?.[q] });
+  }
+  for (const p of pairs) header.push(`${p.label} [${p.unit}]`, `${p.label} ci95 [${p.unit}]`);
+  const body = rows.map((r) => {
+    const s = r.summary;
+    const cells: (number | string)[] = [r.point, r.value, r.status];
+    for (const [name] of REFERENCE_COLUMNS) cells.push(num(s?.reference[name] ?? null));
+    for (const p of pairs) {
+      const e = s ? estimateOf(p.pick(s)) : undefined;
+      cells.push(num(e?.mean), num(e?.ci95));
+    }
+    return cells;
+  });
+  return csvDocument(header, body);
+}
+
+export const SWEEP_FORMAT = 'tenuis-sweep';
+export const SWEEP_FORMAT_VERSION = 1;
+
+/** sweep.json: what was asked for, whether it was interrupted, and every point's summary.json in one array. */
+export function sweepJson(
+  rows: readonly SweepRow[],
+  o: { caseName: string; parameter: SweepParameter; from: number; to: number; points: number; spacing: SweepSpacing; interrupted: boolean },
+) {
+  return {
+    format: SWEEP_FORMAT,
+    formatVersion: SWEEP_FORMAT_VERSION,
+    caseName: o.caseName,
+    parameter: o.parameter,
+    unit: SWEEP_PARAMETER_UNITS[o.parameter].unit,
+    from: o.from,
+    to: o.to,
+    pointsRequested: o.points,
+    spacing: o.spacing,
+    interrupted: o.interrupted,
+    points: rows.map((r) => ({ point: r.point, value: r.value, status: r.status, folder: r.summary ? sweepPointFolder(r.point) : null, summary: r.summary })),
+  };
+}
