@@ -9,6 +9,7 @@ import type { CommandIO } from './commands/io';
 import { presetCommand } from './commands/preset';
 import { runCommand } from './commands/run';
 import { mergeCommand } from './commands/merge';
+import { sweepCommand } from './commands/sweep';
 import { checkCommand } from './commands/check';
 import { schemaCommand } from './commands/schema';
 import { helpCommand } from './commands/help';
@@ -20,6 +21,7 @@ const COMMANDS: Readonly<Record<string, Command>> = {
   preset: presetCommand,
   run: runCommand,
   merge: mergeCommand,
+  sweep: sweepCommand,
   check: checkCommand,
   schema: schemaCommand,
   continuum: continuumCommand,

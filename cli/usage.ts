@@ -67,6 +67,27 @@ residual, centreline extrema) into DIR. Dimensionless: lengths in cavity sides, 
   --out, -o DIR         output folder (created if needed; files of the same names in it are replaced)
   --quiet, -q           no summary line`;
 
+export const SWEEP_USAGE = `Usage:
+  tenuis sweep CASE.json --param knudsen|pressure --from A --to B --points N [--log] --out DIR
+               [--replicas R] [--seed S] [--quiet]
+
+Runs the case at N values of a parameter from A to B and writes DIR/sweep.csv (per point: the swept value, the
+reference Knudsen number, rarefaction δ and pressure, and every flow quantity with its 95 % half-width — or, for
+cases without flow sections, each wall's shear stress and heat flux; units in every header), DIR/sweep.json (every
+point's summary) and each point's full result in DIR/points/NNN/ (as tenuis run writes it). A point changes only the
+pressures: all of them are scaled by the same factor (Kn ∝ 1/p at fixed temperature and geometry), so pressure
+ratios are kept. Cells and time step the case leaves unset are planned again for each point; those it fixes are kept
+(the planner's warnings then say when cells grow beyond the mean free path). Every point is planned before anything
+runs; Ctrl-C stops the running point, keeps what it sampled and writes the table so far, marked interrupted (exit 130).
+  --param knudsen|pressure  knudsen: the case's reference Knudsen number; pressure: its reference (initial) pressure
+  --from A, --to B          the ends of the range, above 0; pressures may carry a unit (10Pa, 0.1mbar, 1Torr)
+  --points N                a whole number from 1 to 999 (1: just A)
+  --log                     geometric spacing (equal ratios) instead of equal steps
+  --out, -o DIR             output folder (created if needed; files of the same names in it are replaced)
+  --replicas, -r R          R replicas per point on R worker threads, merged (as tenuis run --replicas)
+  --seed S                  random seed of every point, overriding the case's
+  --quiet, -q               no progress lines (warnings and errors are still printed)`;
+
 export const MAIN_USAGE = `tenuis: rarefied gas flows by direct simulation Monte Carlo, from the command line
 
 Usage:
@@ -75,6 +96,8 @@ Usage:
   tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE] [--quiet]
                                              run a case and write the results into DIR
   tenuis merge FILE... --out DIR             merge saved sample files of one case into one result
+  tenuis sweep CASE.json --param knudsen --from A --to B --points N [--log] --out DIR
+                                             run a case over a range of Knudsen numbers or pressures
   tenuis schema                              print the case file's JSON Schema
   tenuis continuum cavity --reynolds R --out DIR   steady Navier–Stokes lid-driven cavity (no-slip or slip walls)
   tenuis help [COMMAND]                      this text, or a command's
@@ -86,6 +109,7 @@ export const COMMAND_USAGE: Readonly<Record<string, string>> = {
   preset: PRESET_USAGE,
   run: RUN_USAGE,
   merge: MERGE_USAGE,
+  sweep: SWEEP_USAGE,
   check: CHECK_USAGE,
   schema: SCHEMA_USAGE,
   continuum: CONTINUUM_USAGE,
