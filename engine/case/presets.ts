@@ -21,6 +21,7 @@ import {
   numericsParameters, pressureForKnudsenPa, defaultGapNumerics,
 } from './presetParameters';
 import { DUCT_PRESETS } from './ductPresets';
+import { cavity } from './cavityPreset';
 
 export type { ParameterKind, Preset, PresetParameter, PresetValues } from './presetParameters';
 export { pressureForKnudsenPa, defaultGapNumerics as defaultNumerics } from './presetParameters';
@@ -124,7 +125,7 @@ const fourier: Preset = {
 };
 
 /** All presets by name. */
-export const PRESETS = Object.freeze({ couette, fourier, ...DUCT_PRESETS } as const satisfies Record<string, Preset>);
+export const PRESETS = Object.freeze({ couette, fourier, ...DUCT_PRESETS, cavity } as const satisfies Record<string, Preset>);
 export type PresetName = keyof typeof PRESETS;
 
 export function presetNames(): PresetName[] {
