@@ -33,7 +33,8 @@ export type SweepSpacing = 'linear' | 'log';
 /**
  * `points` values from `from` to `to`, both included: equal steps ('linear') or equal ratios ('log', geometric:
  * from · (to/from)^(k/(points−1)), which needs from and to of the same sign). One point is just `from`. The ends are
- * exactly `from` and `to`, not the rounded result of the formula.
+ * exactly `from` and `to`; points between are rounded to 15 significant digits (a relative change below 1e-15), so
+ * that round numbers come out round (0.5 to 4 on a log scale: 1 and 2, not 0.9999999999999999 and 1.9999999999999996).
  */
 export function sweepValues(from: number, to: number, points: number, spacing: SweepSpacing): number[] {
   if (points === 1) return [from];
@@ -42,7 +43,8 @@ export function sweepValues(from: number, to: number, points: number, spacing: S
   const logTo = Math.log(to);
   for (let k = 0; k < points; k++) {
     const t = k / (points - 1);
-    out.push(spacing === 'log' ? Math.exp(logFrom + t * (logTo - logFrom)) : from + t * (to - from));
+    const value = spacing === 'log' ? Math.exp(logFrom + t * (logTo - logFrom)) : from + t * (to - from);
+    out.push(Number(value.toPrecision(15)));
   }
   out[0] = from;
   out[points - 1] = to;

@@ -136,18 +136,20 @@ describe('caseAtSweepPoint()', () => {
 describe('sweepValues()', () => {
   it('linear: equal steps with exact ends; one point is just from; a range may run downwards', () => {
     expect(sweepValues(1, 3, 3, 'linear')).toEqual([1, 2, 3]);
-    expect(sweepValues(0.1, 0.7, 4, 'linear')).toEqual([0.1, expect.closeTo(0.3, 15), expect.closeTo(0.5, 15), 0.7]);
+    expect(sweepValues(0.1, 0.7, 4, 'linear')).toEqual([0.1, 0.3, 0.5, 0.7]); // not 0.30000000000000004
     expect(sweepValues(5, 9, 1, 'linear')).toEqual([5]);
     expect(sweepValues(5, 9, 1, 'log')).toEqual([5]);
     expect(sweepValues(3, 1, 3, 'linear')).toEqual([3, 2, 1]);
   });
 
-  it('log: equal ratios with exact ends', () => {
+  it('log: equal ratios with exact ends, rounded to 15 significant digits in between', () => {
     const v = sweepValues(0.01, 10, 4, 'log');
     expect(v[0]).toBe(0.01);
     expect(v[3]).toBe(10);
-    expect(v[1] / 0.1 - 1).toBeLessThan(1e-14);
-    expect(v[2] / 1 - 1).toBeLessThan(1e-14);
+    expect(v).toEqual([0.01, 0.1, 1, 10]);
+    expect(sweepValues(0.5, 4, 4, 'log')).toEqual([0.5, 1, 2, 4]); // round numbers come out round
+    const odd = sweepValues(1, 7, 5, 'log');
+    for (let k = 1; k < 5; k++) expect(Math.abs(odd[k] / odd[k - 1] / 7 ** 0.25 - 1)).toBeLessThan(1e-14);
     const down = sweepValues(100, 1, 5, 'log');
     for (let k = 1; k < 5; k++) expect(down[k - 1] / down[k]).toBeCloseTo(Math.sqrt(10), 12);
   });
