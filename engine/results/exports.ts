@@ -10,8 +10,15 @@
  * a spreadsheet would evaluate as a formula (starting with = + - @, tab or CR) get a leading apostrophe (OWASP,
  * "CSV Injection"; common practice). Headers carry the SI unit in brackets: `temperature [K]`,
  * `temperature ci95 [K]`.
+ *
+ * With a continuum comparison (engine/continuum/comparison.ts) summary.json gains `continuum` (each model's integral
+ * quantities), `verdict` (per quantity: best model, deviation, text and the numbers behind it) and
+ * `continuumModels` (what each model is); a case no model applies to gets `continuumNote` (why). profiles.csv gains
+ * one column per model after each DSMC quantity a model predicts: `velocityX noSlip [m/s]`.
  */
-import type { ReferenceState } from '../case/plan';
+import type { Plan, ReferenceState } from '../case/plan';
+import { continuumComparisonOf, type ContinuumComparisonResult } from '../continuum/comparison';
+import type { QuantityVerdict } from '../continuum/verdict';
 import { FLOW_QUANTITIES, flowQuantityUnits, type FlowResult } from './flowQuantities';
 import type { SimulationResult, FieldTable, IntegralEstimate } from './summarize';
 import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, type WallQuantityName } from './wallQuantities';
@@ -103,10 +110,73 @@ export interface SummaryJson {
    * flow quantity as {mean, ci95} (results/flowQuantities.ts; units in `units`).
    */
   flow?: FlowJson;
+  /** Integral quantities each continuum model predicts: {MODEL: {`walls.bottom.shearStress`: value, …}}. */
+  continuum?: Record<string, Record<string, JsonNumber>>;
+  /** Per compared quantity or profile: which model is good enough, and the numbers behind it (continuum/verdict.ts). */
+  verdict?: Record<string, VerdictJson>;
+  /** The analytic problem recognised and what each model means. */
+  continuumModels?: { problem: string; description: string; meanFreePath: { kind: string; value: JsonNumber }; knudsen: JsonNumber; models: Record<string, string> };
+  /** Why no continuum model is compared, when none applies. */
+  continuumNote?: string;
   /** SI unit of every quantity named in this file; a wall estimate's mean and ci95 share its quantity's unit. */
   units: Record<string, string>;
   warnings: string[];
   performance: Record<keyof Performance, JsonNumber>;
+}
+
+export interface VerdictJson {
+  bestModel: string | null;
+  /** The best model's relative deviation from DSMC (profiles: RMS over the points). */
+  deviation: JsonNumber;
+  text: string;
+  category: QuantityVerdict['category'];
+  kind: QuantityVerdict['kind'];
+  /** DSMC 95 % half-width over the scale, the threshold for "adequate", and the scale (in the quantity's unit). */
+  relativeHalfWidth: JsonNumber;
+  threshold: JsonNumber;
+  scale: JsonNumber;
+  models: Record<string, { deviation: JsonNumber; maxDeviation: JsonNumber; normalizedDeviation: JsonNumber; adequate: boolean }>;
+}
+
+/** What summaryJson and resultFiles take besides the result; `comparison` adds the continuum sections. */
+export interface SummaryExtra {
+  performance: Performance;
+  caseName: string;
+  comparison?: ContinuumComparisonResult;
+}
+
+function verdictJson(v: QuantityVerdict): VerdictJson {
+  return {
+    bestModel: v.bestModel,
+    deviation: jsonNumber(v.deviation),
+    text: v.text,
+    category: v.category,
+    kind: v.kind,
+    relativeHalfWidth: jsonNumber(v.relativeHalfWidth),
+    threshold: jsonNumber(v.threshold),
+    scale: jsonNumber(v.scale),
+    models: Object.fromEntries(v.models.map((d) => [d.model, {
+      deviation: jsonNumber(d.deviation), maxDeviation: jsonNumber(d.maxDeviation), normalizedDeviation: jsonNumber(d.normalizedDeviation), adequate: d.adequate,
+    }])),
+  };
+}
+
+/** The continuum sections of summary.json (see the file header); units of their quantities go into `units`. */
+function continuumJson(c: ContinuumComparisonResult, units: Record<string, string>): Pick<SummaryJson, 'continuum' | 'verdict' | 'continuumModels' | 'continuumNote'> {
+  if (!c.recognised) return { continuumNote: c.reason };
+  const continuum: Record<string, Record<string, JsonNumber>> = {};
+  for (const [model, values] of Object.entries(c.continuum)) continuum[model] = Object.fromEntries(Object.entries(values!).map(([k, x]) => [k, jsonNumber(x)]));
+  Object.assign(units, c.units);
+  units.deviation = '1';
+  const p = c.predictions;
+  return {
+    continuum,
+    verdict: Object.fromEntries(Object.entries(c.verdict).map(([k, v]) => [k, verdictJson(v)])),
+    continuumModels: {
+      problem: p.problem, description: p.description, meanFreePath: { kind: p.meanFreePath.kind, value: jsonNumber(p.meanFreePath.valueM) },
+      knudsen: jsonNumber(p.knudsen), models: { ...p.models } as Record<string, string>,
+    },
+  };
 }
 
 export interface FlowJson {
@@ -152,7 +222,7 @@ function wallEstimateJson(e: IntegralEstimate): WallEstimateJson {
 }
 
 /** The summary of a run as a JSON-ready object (no NaN anywhere: see JsonNumber). */
-export function summaryJson(result: SimulationResult, extra: { performance: Performance; caseName: string }): SummaryJson {
+export function summaryJson(result: SimulationResult, extra: SummaryExtra): SummaryJson {
   const units: Record<string, string> = {};
   const reference: Record<string, JsonNumber> = {};
   for (const key of Object.keys(REFERENCE_EXPORT) as (keyof ReferenceState)[]) {
@@ -181,6 +251,7 @@ export function summaryJson(result: SimulationResult, extra: { performance: Perf
     units[key] = PERFORMANCE_UNITS[key];
   }
   const flow = result.flow ? flowJson(result.flow, units, !result.axisymmetric) : undefined;
+  const continuum = extra.comparison ? continuumJson(extra.comparison, units) : {};
   return {
     format: SUMMARY_FORMAT,
     formatVersion: SUMMARY_FORMAT_VERSION,
@@ -189,6 +260,7 @@ export function summaryJson(result: SimulationResult, extra: { performance: Perf
     numerics,
     walls,
     ...(flow ? { flow } : {}),
+    ...continuum,
     units,
     warnings: [...result.warnings],
     performance,
@@ -196,7 +268,7 @@ export function summaryJson(result: SimulationResult, extra: { performance: Perf
 }
 
 /** summary.json's text: two-space indented, LF line ends, a final newline. */
-export function summaryJsonText(result: SimulationResult, extra: { performance: Performance; caseName: string }): string {
+export function summaryJsonText(result: SimulationResult, extra: SummaryExtra): string {
   return `${JSON.stringify(summaryJson(result, extra), null, 2)}\n`;
 }
 
@@ -231,12 +303,30 @@ function fieldValues(t: FieldTable, r: number): number[] {
   return out;
 }
 
-/** profiles.csv: one row per row of cells (the profile across the gap), at result.profileY. */
-export function profilesCsv(result: SimulationResult): string {
+/**
+ * profiles.csv: one row per row of cells (the profile across the gap), at result.profileY. With a comparison, each
+ * DSMC quantity's mean and ci95 columns are followed by one column per model that predicts its row profile
+ * (`velocityX firstOrder [m/s]`).
+ */
+export function profilesCsv(result: SimulationResult, comparison?: ContinuumComparisonResult): string {
   const t = result.profile;
+  const width = t.names.length;
+  const models: [string, Float64Array][][] = t.names.map((name) => {
+    if (!comparison?.recognised) return [];
+    const key = `profile.${name}`;
+    return Object.entries(comparison.profiles)
+      .filter(([, p]) => p?.[key]?.length === t.rows)
+      .map(([model, p]) => [model, p![key]] as [string, Float64Array]);
+  });
+  const header = ['y [m]'];
+  t.names.forEach((name, f) => header.push(`${name} [${t.units[f]}]`, `${name} ci95 [${t.units[f]}]`, ...models[f].map(([m]) => `${name} ${m} [${t.units[f]}]`)));
   const rows: (number | string)[][] = [];
-  for (let r = 0; r < t.rows; r++) rows.push([result.profileY[r], ...fieldValues(t, r)]);
-  return csvDocument(['y [m]', ...fieldHeaders(t)], rows);
+  for (let r = 0; r < t.rows; r++) {
+    const row: number[] = [result.profileY[r]];
+    for (let f = 0; f < width; f++) row.push(t.mean[r * width + f], t.ci95[r * width + f], ...models[f].map(([, v]) => v[r]));
+    rows.push(row);
+  }
+  return csvDocument(header, rows);
 }
 
 /** fields.csv: one row per cell (cell index ix + cellsX·iy, so x varies fastest), at the cell centre. */
@@ -265,11 +355,16 @@ export function surfacesCsv(result: SimulationResult): string {
   return csvDocument(header, rows);
 }
 
-/** The four result files of a run by file name, in the order they are written. */
-export function resultFiles(result: SimulationResult, extra: { performance: Performance; caseName: string }): Record<string, string> {
+/**
+ * The four result files of a run by file name, in the order they are written. Given the run's plan (or a comparison
+ * already made), summary.json and profiles.csv carry the continuum comparison.
+ */
+export function resultFiles(result: SimulationResult, extra: SummaryExtra & { plan?: Plan }): Record<string, string> {
+  const comparison = extra.comparison ?? (extra.plan ? continuumComparisonOf(extra.plan, result) : undefined);
+  const summaryExtra = { performance: extra.performance, caseName: extra.caseName, ...(comparison ? { comparison } : {}) };
   return {
-    'summary.json': summaryJsonText(result, extra),
-    'profiles.csv': profilesCsv(result),
+    'summary.json': summaryJsonText(result, summaryExtra),
+    'profiles.csv': profilesCsv(result, comparison),
     'fields.csv': fieldsCsv(result),
     'surfaces.csv': surfacesCsv(result),
   };
