@@ -1,19 +1,101 @@
-// Placeholder until the workbench interface lands.
-import { QuickCheck } from './QuickCheck';
+/** The workbench: views for set-up, run, results and saved runs, a drop target for case files, the caution. */
+import { useEffect, useState } from 'react';
+import { bootstrap } from './bootstrap';
+import type { ExampleEntry } from './io/examples';
+import { appStore, useApp } from './store/appStore';
+import type { ViewName } from './store/types';
+import { ExamplePicker } from './panels/ExamplePicker';
+import { GeometryForm } from './panels/GeometryForm';
+import { WallForm } from './panels/WallForm';
+import { CaseJsonPanel } from './panels/CaseJsonPanel';
+import { PlanReview } from './panels/PlanReview';
+import { RunLauncher } from './panels/RunLauncher';
+import { RunProgress } from './panels/RunProgress';
+import { LiveProfile, ResultPanels } from './panels/ResultPanels';
+import { SavedRunsView } from './panels/SavedRunsView';
+import { DropTarget } from './panels/DropTarget';
+import { Footer } from './panels/Footer';
+
+const VIEWS: readonly { id: ViewName; label: string }[] = [
+  { id: 'setup', label: '1 Set up and check' },
+  { id: 'run', label: '2 Run' },
+  { id: 'results', label: '3 Results' },
+  { id: 'saved', label: 'Saved runs' },
+];
+
+function RunBadge() {
+  const status = useApp((s) => s.status);
+  const fraction = useApp((s) => s.progress?.fraction ?? 0);
+  if (status === 'idle') return null;
+  const busy = status === 'running' || status === 'paused' || status === 'starting' || status === 'stopping';
+  return <span className="run-badge" role="status" data-testid="run-badge">run {status}{busy ? ` ${(100 * fraction).toFixed(0)} %` : ''}</span>;
+}
+
+function ViewTabs() {
+  const view = useApp((s) => s.view);
+  const saved = useApp((s) => s.savedRuns.length);
+  return (
+    <nav className="tabs" aria-label="views">
+      {VIEWS.map((v) => (
+        <button key={v.id} type="button" role="tab" aria-selected={view === v.id} onClick={() => appStore.getState().setView(v.id)}>
+          {v.label}{v.id === 'saved' && saved ? ` (${saved})` : ''}
+        </button>
+      ))}
+    </nav>
+  );
+}
+
+function SetupView({ examples }: { examples: readonly ExampleEntry[] }) {
+  return (
+    <div className="columns">
+      <div className="column">
+        <ExamplePicker examples={examples} />
+        <GeometryForm />
+        <WallForm />
+        <CaseJsonPanel />
+      </div>
+      <div className="column">
+        <RunLauncher />
+        <PlanReview />
+      </div>
+    </div>
+  );
+}
 
 export function App() {
+  const view = useApp((s) => s.view);
+  const ready = useApp((s) => s.engineReady);
+  const [examples, setExamples] = useState<ExampleEntry[]>([]);
+  const [failure, setFailure] = useState<string | null>(null);
+  useEffect(() => {
+    let cancelled = false;
+    bootstrap(appStore).then((e) => !cancelled && setExamples(e)).catch((e: Error) => !cancelled && setFailure(e.message));
+    return () => {
+      cancelled = true;
+    };
+  }, []);
   return (
-    <main style={{ maxWidth: '42rem', margin: '3rem auto', padding: '0 1rem', fontFamily: 'system-ui, sans-serif', lineHeight: 1.5 }}>
-      <h1>Tenuis — rarefied gas workbench</h1>
-      <p>
-        The workbench interface is being built. Until it lands, run cases from the command line:{' '}
-        <code>npx tenuis preset couette &gt; case.json</code>, then <code>npx tenuis run case.json --out results</code>
-      </p>
-      <QuickCheck />
-      <p role="note" data-testid="caution">
-        Results are model estimates. Verify them against measurement, and defer to local codes, standards and licensed
-        engineering practice for vacuum vessels, pressurised parts and toxic gases.
-      </p>
-    </main>
+    <>
+      <header className="header">
+        <h1>Tenuis — rarefied gas workbench</h1>
+        {ready && <ViewTabs />}
+        <RunBadge />
+      </header>
+      <main className="main">
+        {failure && <p className="message message-error" role="alert">The workbench could not start: {failure}</p>}
+        {!ready && !failure && <p role="status">Loading the engine…</p>}
+        {ready && view === 'setup' && <SetupView examples={examples} />}
+        {ready && view === 'run' && (
+          <div className="columns">
+            <div className="column"><RunProgress /></div>
+            <div className="column"><LiveProfile /></div>
+          </div>
+        )}
+        {ready && view === 'results' && <ResultPanels />}
+        {ready && view === 'saved' && <SavedRunsView />}
+      </main>
+      <DropTarget />
+      <Footer />
+    </>
   );
 }

@@ -1,0 +1,292 @@
+/**
+ * The run side of the engine on the main thread, loaded by dynamic import into its own chunk: replicas in Web Workers
+ * (workers/replicaPool.ts), live and final summaries, sample files for saved runs, and the exports the command line
+ * writes (engine/results/exports.ts), so a CSV from the page and one from `tenuis run` hold the same numbers.
+ */
+import { wrap, type Remote } from 'comlink';
+import { runReplicaPool, type PoolProgress, type ReplicaFactory, type ReplicaReport } from '../../workers/replicaPool';
+import type { ReplicaApi } from '../../workers/protocol';
+import type { LiveSummaryApi } from './liveSummary.worker';
+import { browserReplicaFactory, defaultReplicaCount } from '../../workers/browserReplica';
+import { planFromInput } from '../../engine/case/plan';
+import { summarizeSamples, type SimulationResult } from '../../engine/results/summarize';
+import { decodeSampleSet } from '../../engine/io/sampleFile';
+import type { Performance } from '../../engine/results/exports';
+import type { TenuisTestHooks } from '../testing/testHooks';
+
+export { profilesCsv, fieldsCsv, surfacesCsv, summaryJsonText } from '../../engine/results/exports';
+export { defaultReplicaCount };
+export { flowQuantityUnits } from '../../engine/results/flowQuantities';
+
+export interface ReplicaView {
+  readonly stream: number;
+  readonly state: 'starting' | 'transient' | 'sampling' | 'lost';
+  readonly stepsDone: number;
+  readonly totalSteps: number;
+  readonly reason?: string;
+}
+
+export interface RunProgressView {
+  /** Means over the replicas still running. */
+  readonly stepsDone: number;
+  readonly totalSteps: number;
+  /** Sampled steps, summed over replicas. */
+  readonly sampledSteps: number;
+  readonly plannedSampleSteps: number;
+  readonly fraction: number;
+  readonly elapsedSeconds: number;
+  /** From the rate so far; NaN until there is a rate. An estimate while a transient of open length runs. */
+  readonly remainingSeconds: number;
+  readonly inTransient: boolean;
+  readonly replicas: readonly ReplicaView[];
+}
+
+export interface RunRequest {
+  readonly caseInput: unknown;
+  readonly replicas: number;
+  /** Interval of the live views (merged snapshots of every replica), ms. */
+  readonly liveEveryMs: number;
+  readonly hooks?: TenuisTestHooks;
+}
+
+export interface RunCallbacks {
+  onProgress(p: RunProgressView): void;
+  onLive(result: SimulationResult): void;
+  onReplicaLost(stream: number, reason: string): void;
+}
+
+export interface ReplicaEnd {
+  readonly stream: number;
+  readonly status: ReplicaReport['status'];
+  readonly reason?: string;
+  readonly stepsDone: number;
+  readonly sampledSteps: number;
+}
+
+export interface FinishedRun {
+  readonly result: SimulationResult;
+  /** The merged samples as a sample file (engine/io/sampleFile.ts): what a saved run keeps. */
+  readonly samples: ArrayBuffer;
+  readonly replicas: readonly ReplicaEnd[];
+  readonly performance: Performance;
+  /** Warnings about the run itself (lost replicas, stopped early), also inside result.warnings. */
+  readonly runWarnings: readonly string[];
+  readonly cancelled: boolean;
+}
+
+export type RunEnd = { ok: true; run: FinishedRun } | { ok: false; message: string };
+
+export interface RunHandle {
+  readonly done: Promise<RunEnd>;
+  pause(): void;
+  resume(): void;
+  cancel(): void;
+}
+
+/** Replicas whose workers are up, for the live snapshots: stream → its remote API. */
+type LiveReplicas = Map<number, Remote<ReplicaApi>>;
+
+/**
+ * Wraps the browser factory: reports a lost worker at once, lists running replicas for the live views, and applies
+ * the test hook that fails one on purpose.
+ */
+function observedFactory(onLost: (stream: number, reason: string) => void, hooks: TenuisTestHooks | undefined, live: LiveReplicas): ReplicaFactory {
+  const base = browserReplicaFactory();
+  return (stream) => {
+    const handle = base(stream);
+    live.set(stream, handle.api);
+    const listeners: ((reason: string) => void)[] = [];
+    let failed = false;
+    const fail = (reason: string) => {
+      if (failed) return;
+      failed = true;
+      live.delete(stream);
+      onLost(stream, reason);
+      for (const l of listeners) l(reason);
+    };
+    handle.onFailure(fail);
+    const forced = hooks?.failReplica;
+    if (forced && forced.stream === stream) {
+      setTimeout(() => {
+        handle.terminate();
+        fail('its worker was stopped by the test hook failReplica');
+      }, forced.afterMs);
+    }
+    return {
+      api: handle.api,
+      onFailure: (l) => void listeners.push(l),
+      terminate: () => {
+        live.delete(stream);
+        handle.terminate();
+      },
+    };
+  };
+}
+
+/** Longest wait for one replica's snapshot (ms): a worker that ends meanwhile never answers. */
+const SNAPSHOT_TIMEOUT_MS = 3000;
+
+/**
+ * Every `everyMs`, takes a snapshot of each running replica and has a worker of its own merge and summarise them
+ * (engine/liveSummary.worker.ts); a replica that has ended keeps contributing its last snapshot. Returns a stop function.
+ */
+function startLiveViews(replicas: LiveReplicas, everyMs: number, onLive: (r: SimulationResult) => void): { stop(): void; summary: Remote<LiveSummaryApi>; close(): void } {
+  const worker = new Worker(new URL('./liveSummary.worker.ts', import.meta.url), { type: 'module', name: 'tenuis-live-summary' });
+  const summary = wrap<LiveSummaryApi>(worker);
+  const last = new Map<number, ArrayBuffer>();
+  let stopped = false;
+  let busy = false;
+  const within = <T,>(p: Promise<T>): Promise<T | null> =>
+    Promise.race([p, new Promise<null>((resolve) => setTimeout(() => resolve(null), SNAPSHOT_TIMEOUT_MS))]);
+  const round = async () => {
+    if (busy || stopped) return;
+    busy = true;
+    try {
+      await Promise.all([...replicas].map(async ([stream, api]) => {
+        const b = await within(api.snapshot()).catch(() => null);
+        if (b) last.set(stream, b);
+      }));
+      if (stopped || !last.size) return;
+      // Copies cross (structured clone): the last snapshots stay here for the next round.
+      const result = await summary.summarize([...last.values()]);
+      if (result && !stopped) onLive(result);
+    } catch {
+      // A live view is a convenience: a failed round is simply skipped.
+    } finally {
+      busy = false;
+    }
+  };
+  const timer = setInterval(() => void round(), everyMs);
+  return {
+    stop: () => {
+      stopped = true;
+      clearInterval(timer);
+    },
+    summary,
+    close: () => worker.terminate(),
+  };
+}
+
+export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandle {
+  const planned = planFromInput(request.caseInput);
+  if (!planned.ok) return { done: Promise.resolve({ ok: false, message: planned.errors.join('\n') }), pause() {}, resume() {}, cancel() {} };
+  const plannedSampleSteps = planned.plan.sampleSteps;
+  const t0 = performance.now();
+  let pausedAt: number | null = null;
+  let pausedMs = 0;
+  let cancelled = false;
+  const lostReasons = new Map<number, string>();
+  const running = () => (performance.now() - t0 - pausedMs - (pausedAt === null ? 0 : performance.now() - pausedAt)) / 1000;
+
+  const progressView = (p: PoolProgress): RunProgressView => {
+    const replicas: ReplicaView[] = [];
+    let steps = 0;
+    let total = 0;
+    let sampled = 0;
+    let live = 0;
+    let inTransient = false;
+    for (let k = 0; k < request.replicas; k++) {
+      const r = p.replicas[k];
+      const lost = p.lost.includes(k) || lostReasons.has(k);
+      if (lost) {
+        replicas.push({ stream: k, state: 'lost', stepsDone: r?.stepsDone ?? 0, totalSteps: r?.totalSteps ?? 0, reason: lostReasons.get(k) });
+        continue;
+      }
+      if (!r) {
+        replicas.push({ stream: k, state: 'starting', stepsDone: 0, totalSteps: 0 });
+        inTransient = true;
+        continue;
+      }
+      replicas.push({ stream: k, state: r.phase, stepsDone: r.stepsDone, totalSteps: r.totalSteps });
+      live++;
+      steps += r.stepsDone;
+      total += r.totalSteps;
+      if (r.phase === 'sampling') sampled += Math.max(0, plannedSampleSteps - (r.totalSteps - r.stepsDone));
+      else inTransient = true;
+    }
+    const stepsDone = live ? steps / live : 0;
+    const totalSteps = live ? total / live : 0;
+    const elapsed = running();
+    const fraction = totalSteps > 0 ? Math.min(1, stepsDone / totalSteps) : 0;
+    return {
+      stepsDone, totalSteps, sampledSteps: sampled, plannedSampleSteps, fraction, elapsedSeconds: elapsed,
+      remainingSeconds: stepsDone > 0 ? (elapsed * (totalSteps - stepsDone)) / stepsDone : NaN,
+      inTransient, replicas,
+    };
+  };
+
+  const liveReplicas: LiveReplicas = new Map();
+  const pool = runReplicaPool({
+    caseInput: request.caseInput,
+    replicas: request.replicas,
+    createReplica: observedFactory((stream, reason) => {
+      lostReasons.set(stream, reason);
+      callbacks.onReplicaLost(stream, reason);
+    }, request.hooks, liveReplicas),
+    // Safety snapshots for lost workers; no stopping check, so the pool merges nothing on this thread meanwhile.
+    snapshotEveryMs: Math.max(1000, request.liveEveryMs),
+    onProgress: (p) => callbacks.onProgress(progressView(p)),
+  });
+  const liveViews = startLiveViews(liveReplicas, request.liveEveryMs, callbacks.onLive);
+
+  const done = pool.done.then(async (outcome): Promise<RunEnd> => {
+    liveViews.stop();
+    const wallSeconds = (performance.now() - t0) / 1000;
+    if (!outcome.merged) {
+      liveViews.close();
+      return { ok: false, message: `no replica sampled anything: ${outcome.replicas.map((r) => `replica ${r.stream} ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('; ')}` };
+    }
+    // Summarised and encoded off this thread (the merged set crosses as a structured clone).
+    let finished: { result: SimulationResult; samples: ArrayBuffer };
+    try {
+      finished = await liveViews.summary.finish(outcome.merged);
+    } finally {
+      liveViews.close();
+    }
+    const { result, samples } = finished;
+    const runWarnings: string[] = [];
+    for (const r of outcome.replicas) {
+      if (r.status === 'lost') {
+        runWarnings.push(`replica ${r.stream} was lost (${r.reason}); ${r.samples ? `its ${r.samples.counters.sampledSteps} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`);
+      }
+    }
+    if (cancelled) runWarnings.push(`stopped by the user: the result holds the ${outcome.merged.counters.sampledSteps} steps sampled until then`);
+    result.warnings.push(...runWarnings);
+    const particleSteps = outcome.replicas.reduce((s, r) => s + r.particleSteps, 0);
+    return {
+      ok: true,
+      run: {
+        result,
+        samples,
+        replicas: outcome.replicas.map((r) => ({ stream: r.stream, status: r.status, reason: r.reason, stepsDone: r.stepsDone, sampledSteps: r.samples?.counters.sampledSteps ?? 0 })),
+        performance: { wallSeconds, particleSteps, particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN },
+        runWarnings,
+        cancelled,
+      },
+    };
+  });
+  return {
+    done,
+    pause: () => {
+      if (pausedAt === null) pausedAt = performance.now();
+      pool.pause();
+    },
+    resume: () => {
+      if (pausedAt !== null) pausedMs += performance.now() - pausedAt;
+      pausedAt = null;
+      pool.resume();
+    },
+    cancel: () => {
+      cancelled = true;
+      if (pausedAt !== null) pool.resume();
+      pool.cancel();
+    },
+  };
+}
+
+/** A saved run's result again from its sample file: the same estimates as when it finished. */
+export function resultFromSamples(samples: ArrayBuffer, runWarnings: readonly string[]): SimulationResult {
+  const result = summarizeSamples(decodeSampleSet(samples.slice(0)));
+  result.warnings.push(...runWarnings);
+  return result;
+}

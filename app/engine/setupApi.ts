@@ -1,0 +1,10 @@
+/**
+ * The part of the engine the set-up needs on the main thread: presets, case validation, the planner, units and the
+ * expected-noise formulas. Loaded by dynamic import only (engine/loadEngine.ts), so it lands in its own chunk and the
+ * page's main bundle holds no engine code.
+ */
+export { PRESETS, buildPreset, presetNames } from '../../engine/case/presets';
+export { parseCase, SIDE_NAMES, WALL_MODELS } from '../../engine/case/schema';
+export { unitsOf, convertFromSI, formatQuantity } from '../../engine/units/engineeringUnits';
+export { describePlan } from '../setup/planView';
+export { deriveCase, checkCaseText } from '../setup/deriveCase';

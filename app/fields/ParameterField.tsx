@@ -1,0 +1,52 @@
+/** One preset parameter: a number with a unit selector, a whole number, or a choice; its message shown beneath. */
+import type { PresetParameter } from '../../engine/case/presets';
+import { setupApi } from '../engine/loadEngine';
+import { unitChoices } from '../setup/formModel';
+import { appStore, useApp } from '../store/appStore';
+
+function allowedText(p: PresetParameter): string {
+  if (p.kind === 'count') return p.default === null ? 'whole number; empty = automatic' : 'whole number';
+  if (p.min === undefined) return '';
+  return p.exclusiveMin ? `greater than ${p.min}` : `at least ${p.min}`;
+}
+
+export function ParameterField({ p }: { p: PresetParameter }) {
+  const entry = useApp((s) => s.params[p.name]);
+  const error = useApp((s) => s.derived?.fieldErrors[`param:${p.name}`]);
+  const st = appStore.getState();
+  const id = `param-${p.name}`;
+  const units = unitChoices(p.kind, setupApi());
+  const hint = allowedText(p);
+  return (
+    <div className={`field${error ? ' field-invalid' : ''}`}>
+      <label htmlFor={id} title={p.description}>
+        {p.name}
+        <span className="field-description">{p.description}</span>
+      </label>
+      <div className="field-input">
+        {p.kind === 'choice' ? (
+          <select id={id} value={entry?.text ?? ''} onChange={(e) => st.setParamText(p.name, e.target.value)}>
+            {(p.choices ?? []).map((c) => <option key={c} value={c}>{c}</option>)}
+          </select>
+        ) : (
+          <input
+            id={id}
+            inputMode="decimal"
+            value={entry?.text ?? ''}
+            placeholder={p.default === null ? 'auto' : ''}
+            aria-invalid={error ? true : undefined}
+            aria-describedby={error ? `${id}-error` : undefined}
+            onChange={(e) => st.setParamText(p.name, e.target.value)}
+          />
+        )}
+        {units.length > 0 && (
+          <select aria-label={`${p.name} unit`} value={entry?.unit ?? ''} onChange={(e) => st.setParamUnit(p.name, e.target.value)}>
+            {units.map((u) => <option key={u} value={u}>{u}</option>)}
+          </select>
+        )}
+        {units.length === 0 && p.kind !== 'choice' && <span className="unit-fixed">{p.kind === 'count' ? '' : '1'}</span>}
+      </div>
+      {error && <p className="field-error" id={`${id}-error`} role="alert">{error}{hint && !error.includes(hint) ? ` (allowed: ${hint})` : ''}</p>}
+    </div>
+  );
+}

@@ -1,0 +1,32 @@
+/**
+ * Flow numbers and the model verdict, shown when the engine's result carries `flow` or `verdict`
+ * (results/extensions.ts); nothing is shown, and nothing is made up, while it does not.
+ */
+import type { ResultExtensions } from '../results/extensions';
+import { estimateText } from '../format';
+
+export function FlowNumbersCard({ ext }: { ext: ResultExtensions }) {
+  if (!ext.flow.length) return null;
+  return (
+    <section className="panel" aria-labelledby="flow-title" data-testid="flow-numbers">
+      <h2 id="flow-title">Flow numbers (mean ± 95 % half-width)</h2>
+      {ext.flowContext && <p className="hint">{ext.flowContext}</p>}
+      <table className="kv">
+        <tbody>
+          {ext.flow.map((f) => <tr key={f.name}><th scope="row">{f.label}{f.unit ? ` [${f.unit}]` : ''}</th><td>{estimateText(f.mean, f.ci95)}</td></tr>)}
+        </tbody>
+      </table>
+    </section>
+  );
+}
+
+export function VerdictCard({ ext }: { ext: ResultExtensions }) {
+  if (!ext.verdict) return null;
+  return (
+    <section className="panel" aria-labelledby="verdict-title" data-testid="verdict">
+      <h2 id="verdict-title">Which model is good enough</h2>
+      <p>{ext.verdict.text}</p>
+      {ext.verdict.reasons.length > 0 && <ul>{ext.verdict.reasons.map((r) => <li key={r}>{r}</li>)}</ul>}
+    </section>
+  );
+}

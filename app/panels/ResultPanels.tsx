@@ -1,0 +1,70 @@
+/** The result of a run (live or finished): numbers, warnings, plots, extension cards and exports. */
+import { useMemo } from 'react';
+import { extensionsOf } from '../results/extensions';
+import { runApiIfLoaded } from '../engine/loadEngine';
+import { useComparedResult, useShownResult } from '../results/useResult';
+import { countText, durationText } from '../format';
+import { WallNumbersCard } from './WallNumbersCard';
+import { FlowNumbersCard, VerdictCard } from './ResultExtensionCards';
+import { ProfilePanel } from './ProfilePanel';
+import { FieldMapPanel } from './FieldMapPanel';
+import { WallDistributionPanel } from './WallDistributionPanel';
+import { ExportPanel } from './ExportPanel';
+import { WarningsList } from './WarningsList';
+import { CompareSelect } from './CompareSelect';
+import { LiveProfilePanel } from './LiveProfilePanel';
+
+/** The run view's live profile and wall numbers (plain SVG while live; the plotly panel once final). */
+export function LiveProfile() {
+  const { entry, live } = useShownResult();
+  if (!entry) return <section className="panel"><p className="hint">Live profiles appear here once the replicas have sampled.</p></section>;
+  return (
+    <div className="results">
+      {live ? <LiveProfilePanel result={entry.result} /> : <ProfilePanel result={entry.result} live={false} />}
+      <WallNumbersCard result={entry.result} />
+    </div>
+  );
+}
+
+export function ResultPanels() {
+  const { entry, live, id } = useShownResult();
+  const compared = useComparedResult();
+  const ext = useMemo(() => {
+    if (!entry) return null;
+    const units = runApiIfLoaded()?.flowQuantityUnits(!(entry.result as { axisymmetric?: boolean }).axisymmetric) ?? {};
+    return extensionsOf(entry.result, units);
+  }, [entry?.result]);
+  if (!entry || !ext) return <p className="hint">No result yet: run a case, or open a saved run.</p>;
+  const r = entry.result;
+  const n = r.numerics;
+  if (live) {
+    return (
+      <div className="results" data-testid="results" data-result-id={id ?? ''}>
+        <p className="note">The run is still going: these are live estimates. Plots, field maps and exports appear when it ends.</p>
+        <LiveProfilePanel result={r} />
+        <WallNumbersCard result={r} />
+      </div>
+    );
+  }
+  return (
+    <div className="results" data-testid="results" data-result-id={id ?? ''}>
+      <section className="panel" aria-labelledby="result-head">
+        <h2 id="result-head">{entry.caseName}{live ? ' (live, run still going)' : ''}</h2>
+        <p data-testid="result-facts">
+          Kn = {r.reference.knudsen.toPrecision(4)}, {n.replicas} replica{n.replicas === 1 ? '' : 's'}, {countText(n.sampleSteps)} sampled steps in all,{' '}
+          {countText(n.particles)} particles at the end{entry.performance ? `, ${durationText(entry.performance.wallSeconds)} wall time` : ''}.
+        </p>
+        <CompareSelect />
+      </section>
+      <FlowNumbersCard ext={ext} />
+      <VerdictCard ext={ext} />
+      <WallNumbersCard result={r} />
+      <WarningsList warnings={r.warnings} />
+      <ProfilePanel result={r} live={live} compare={compared.entry ? { result: compared.entry.result, name: compared.name } : undefined} continuum={ext.continuum} />
+      {ext.continuum.length === 0 && <p className="hint">Continuum overlays (no-slip and slip predictions) appear here when the engine's result provides them.</p>}
+      <FieldMapPanel result={r} />
+      <WallDistributionPanel result={r} />
+      {!live && <ExportPanel entry={entry} />}
+    </div>
+  );
+}

@@ -1,0 +1,145 @@
+/**
+ * Starts, pauses, resumes and stops runs, outside React: loads the run chunk, feeds progress and live results into
+ * the store (progress at most five times a second), and keeps every finished or stopped run in IndexedDB.
+ */
+import { loadRunApi } from '../engine/loadEngine';
+import type { RunHandle, FinishedRun } from '../engine/runApi';
+import { putResult } from '../results/resultCache';
+import { readTestHooks } from '../testing/testHooks';
+import { putRun, listRuns, saveSpeed } from '../io/db';
+import type { SavedRunRecord } from '../io/savedRun';
+import type { AppStore } from '../store/store';
+import type { CaseInput } from '../../engine/case/schema';
+
+const PROGRESS_EVERY_MS = 200;
+
+/** Live views: merged snapshots about twice a second, less often for big grids (each round is merged on this thread). */
+function liveIntervalMs(cells: number): number {
+  return cells <= 5_000 ? 500 : cells <= 50_000 ? 2_000 : 5_000;
+}
+
+let active: RunHandle | null = null;
+let counter = 0;
+
+function newRunId(): string {
+  counter += 1;
+  return `run-${Date.now().toString(36)}-${counter}`;
+}
+
+export async function startRun(store: AppStore): Promise<void> {
+  const s = store.getState();
+  const caseInput = s.derived?.caseInput;
+  if (!caseInput || !s.plan || active || ['starting', 'running', 'paused', 'stopping'].includes(s.status)) return;
+  const id = newRunId();
+  const caseName = String((caseInput as CaseInput).name);
+  s.setRunState({ status: 'starting', progress: null, notices: [], runError: null });
+  s.setView('run');
+  const replicas = s.replicas;
+  let lastProgress = 0;
+  let pendingTimer: ReturnType<typeof setTimeout> | null = null;
+  let finished = false;
+  try {
+    const api = await loadRunApi();
+    const handle = api.startRun(
+      { caseInput, replicas, liveEveryMs: liveIntervalMs(s.plan.cellsX * s.plan.cellsY), hooks: readTestHooks() },
+      {
+        onProgress: (p) => {
+          if (finished) return;
+          const now = performance.now();
+          const push = () => {
+            pendingTimer = null;
+            lastProgress = performance.now();
+            if (!finished) store.getState().setRunState({ progress: p });
+          };
+          if (pendingTimer) clearTimeout(pendingTimer);
+          if (now - lastProgress >= PROGRESS_EVERY_MS) push();
+          else pendingTimer = setTimeout(push, PROGRESS_EVERY_MS - (now - lastProgress));
+        },
+        onLive: (result) => {
+          if (finished) return;
+          putResult(id, { result, caseInput, caseName });
+          const st = store.getState();
+          if (st.resultId === id) st.bumpResult();
+          else st.showResult(id, true);
+        },
+        onReplicaLost: (stream, reason) => {
+          const others = replicas - 1;
+          store.getState().addNotice(`Replica ${stream} stopped: ${reason}. ${others > 0 ? `The other ${others} go on; its samples up to its last snapshot are kept.` : ''}`.trim());
+        },
+      },
+    );
+    active = handle;
+    store.getState().setRunState({ status: 'running' });
+    const end = await handle.done;
+    finished = true;
+    // For measurements (the browser tests' long-task window ends here): the run's work on this thread is done.
+    performance.mark('tenuis-run-end');
+    if (pendingTimer) clearTimeout(pendingTimer);
+    if (!end.ok) {
+      store.getState().setRunState({ status: 'failed', runError: end.message });
+      return;
+    }
+    await keepRun(store, id, caseInput as CaseInput, caseName, end.run, replicas);
+  } catch (e) {
+    finished = true;
+    store.getState().setRunState({ status: 'failed', runError: (e as Error).message });
+  } finally {
+    active = null;
+  }
+}
+
+async function keepRun(store: AppStore, id: string, caseInput: CaseInput, caseName: string, run: FinishedRun, replicas: number): Promise<void> {
+  putResult(id, { result: run.result, caseInput, caseName, performance: run.performance, samples: run.samples });
+  const st = store.getState();
+  st.setRunState({ status: run.cancelled ? 'stopped' : 'finished' });
+  st.showResult(id, false);
+  st.setView('results');
+  const lost = run.replicas.filter((r) => r.status === 'lost').length;
+  const title = st.exampleTitle ?? caseName;
+  const record: SavedRunRecord = {
+    id,
+    name: `${title} — ${new Date().toLocaleString()}`,
+    finishedAt: new Date().toISOString(),
+    caseName,
+    status: run.cancelled ? 'stopped' : 'finished',
+    replicas,
+    lostReplicas: lost,
+    sampledSteps: run.result.numerics.sampleSteps,
+    knudsen: run.result.reference.knudsen,
+    caseInput,
+    samples: run.samples,
+    runWarnings: run.runWarnings,
+    performance: run.performance,
+    replicaEnds: run.replicas,
+  };
+  // Speed of one worker: particle-steps over the wall time and the cores the replicas shared.
+  const perWorker = run.performance.particleSteps / (run.performance.wallSeconds * Math.min(replicas, st.cores));
+  if (!run.cancelled && run.performance.wallSeconds > 1 && Number.isFinite(perWorker)) {
+    st.setSpeed(perWorker);
+    await saveSpeed(perWorker).catch(() => undefined);
+  }
+  try {
+    await putRun(record);
+    store.getState().setSavedRuns(await listRuns());
+  } catch (e) {
+    store.getState().addNotice(`The run could not be saved in this browser: ${(e as Error).message}`);
+  }
+}
+
+export function pauseRun(store: AppStore): void {
+  if (!active || store.getState().status !== 'running') return;
+  active.pause();
+  store.getState().setRunState({ status: 'paused' });
+}
+
+export function resumeRun(store: AppStore): void {
+  if (!active || store.getState().status !== 'paused') return;
+  active.resume();
+  store.getState().setRunState({ status: 'running' });
+}
+
+export function stopRun(store: AppStore): void {
+  if (!active) return;
+  active.cancel();
+  store.getState().setRunState({ status: 'stopping' });
+}

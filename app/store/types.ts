@@ -1,0 +1,86 @@
+/**
+ * The workbench's one store, in four slices: case (the set-up and what is derived from it), run (the run going on),
+ * results (which result is shown, and the saved runs), ui (views and selections). Large typed arrays never enter it:
+ * results live in results/resultCache.ts and the store holds their id and a version number.
+ */
+import type { CaseDerivation } from '../setup/deriveCase';
+import type { FormState, ParamEntry, WallEdit, CaseSource } from '../setup/formModel';
+import type { PlanView } from '../setup/planView';
+import type { RunProgressView } from '../engine/runApi';
+import type { SideName } from '../../engine/case/schema';
+import type { SavedRunMeta } from '../io/savedRun';
+import type { ExampleEntry } from '../io/examples';
+
+export type { FormState, ParamEntry, WallEdit, CaseSource };
+
+export interface FileMessage {
+  readonly kind: 'error' | 'info';
+  readonly text: string;
+  readonly details?: readonly string[];
+}
+
+export interface CaseSlice extends FormState {
+  readonly derived: CaseDerivation | null;
+  readonly plan: PlanView | null;
+  readonly planErrors: readonly string[];
+  readonly fileMessage: FileMessage | null;
+  /** The example the set-up started from, if any (for the title of saved runs). */
+  readonly exampleTitle: string | null;
+  selectPreset(name: string): void;
+  applyExample(example: ExampleEntry, caseText: string | null): void;
+  setParamText(name: string, text: string): void;
+  setParamUnit(name: string, unit: string): void;
+  setWall(side: SideName, patch: WallEdit): void;
+  editCaseText(text: string): void;
+  /** Opens a case file's text: refused with a message (and nothing changed) unless it is a valid case. */
+  openCaseText(text: string, label: string): boolean;
+  rebuildFromForm(): void;
+  restoreForm(form: FormState): void;
+  setFileMessage(m: FileMessage | null): void;
+}
+
+export type RunStatus = 'idle' | 'starting' | 'running' | 'paused' | 'stopping' | 'finished' | 'stopped' | 'failed';
+
+export interface RunSlice {
+  readonly replicas: number;
+  readonly cores: number;
+  /** Particle-steps per second of one replica worker: measured by the last run in this browser, or a default. */
+  readonly speed: { readonly particleStepsPerSecond: number; readonly measured: boolean };
+  readonly status: RunStatus;
+  readonly progress: RunProgressView | null;
+  readonly notices: readonly string[];
+  readonly runError: string | null;
+  setReplicas(n: number): void;
+  setSpeed(particleStepsPerSecond: number): void;
+  setRunState(patch: Partial<Pick<RunSlice, 'status' | 'progress' | 'notices' | 'runError'>>): void;
+  addNotice(text: string): void;
+}
+
+export interface ResultsSlice {
+  /** Id of the result shown (live or finished) in results/resultCache.ts, and its version (bumped on each update). */
+  readonly resultId: string | null;
+  readonly resultVersion: number;
+  readonly resultIsLive: boolean;
+  readonly savedRuns: readonly SavedRunMeta[];
+  /** A saved run overlaid on the plots for comparison. */
+  readonly compareId: string | null;
+  showResult(id: string | null, live: boolean): void;
+  bumpResult(): void;
+  setSavedRuns(runs: readonly SavedRunMeta[]): void;
+  setCompare(id: string | null): void;
+}
+
+export type ViewName = 'setup' | 'run' | 'results' | 'saved';
+
+export interface UiSlice {
+  readonly view: ViewName;
+  readonly engineReady: boolean;
+  readonly profileQuantity: string;
+  readonly fieldQuantity: string;
+  readonly wallQuantity: string;
+  setView(v: ViewName): void;
+  setEngineReady(ready: boolean): void;
+  select(patch: Partial<Pick<UiSlice, 'profileQuantity' | 'fieldQuantity' | 'wallQuantity'>>): void;
+}
+
+export type AppState = CaseSlice & RunSlice & ResultsSlice & UiSlice;
