@@ -73,7 +73,6 @@ export function couettePredictions(
   const heatTop: PredictedQuantity = { key: 'walls.top.heatFlux', unit: 'W/m^2', values: {} };
   const velocity: PredictedProfile['values'] = {};
   const temperature: PredictedProfile['values'] = {};
-  const stress: PredictedProfile['values'] = {};
   for (const [name, slip] of velocityModels(slipChoice)) {
     const s = couetteFlow({ gas, gapM: h, bottomWallSpeedMPerS: ub, topWallSpeedMPerS: ut, slip, accommodation: sigma });
     const tau = s.shearStressPa;
@@ -82,7 +81,6 @@ export function couettePredictions(
     heatBottom.values[name] = (tau * du) / 2;
     heatTop.values[name] = (tau * du) / 2;
     velocity[name] = y.map((yy) => s.velocityMPerS(yy));
-    stress[name] = y.map(() => tau);
     if (name === 'freeMolecular') continue;
     // Viscous heating with the jump (file header); κ and μ of the reference state.
     const b = tau / gas.viscosityPaS;
@@ -95,9 +93,6 @@ export function couettePredictions(
     profiles: [
       { key: 'profile.velocityX', field: 'velocityX', unit: 'm/s', line: { kind: 'rows' }, positionsM: y, values: velocity, scale: { kind: 'fixed', value: Math.abs(du), what: 'wall speed difference |U_top − U_bottom|' } },
       { key: 'profile.temperature', field: 'temperature', unit: 'K', line: { kind: 'rows' }, positionsM: y, values: temperature, scale: { kind: 'dsmcRange', base: tw, what: 'largest DSMC |T − T_wall| (the viscous heating and jump)' } },
-      // τ_xy is uniform across the gap: its profile judges the shear stress with the noise of every row, not only of
-      // the wall hits (whose blocking half-width is conservative here, DEVELOPERS.md).
-      { key: 'profile.shearStressXY', field: 'shearStressXY', unit: 'Pa', line: { kind: 'rows' }, positionsM: y, values: stress, scale: { kind: 'dsmcRange', base: 0, what: 'largest DSMC |τ_xy|' } },
     ],
   };
 }
