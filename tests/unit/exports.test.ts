@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
-import { runToEnd } from '../support/planOrThrow';
+import { planOrThrow as planFromCase, runToEnd } from '../support/planOrThrow';
 import { summarize, type SimulationResult } from '../../engine/results/summarize';
 import { CELL_FIELDS } from '../../engine/results/cellFields';
 import { WALL_QUANTITIES } from '../../engine/results/wallQuantities';
@@ -14,6 +14,8 @@ import {
   summaryJsonText,
   surfacesCsv,
 } from '../../engine/results/exports';
+import { continuumComparisonOf, type ContinuumComparison } from '../../engine/continuum/comparison';
+import type { Plan } from '../../engine/case/plan';
 
 /**
  * A small RFC 4180 reader (quoted fields, doubled quotes, CR/LF inside quotes; rows end in LF or CRLF), written here
@@ -181,5 +183,69 @@ describe('result exports', () => {
 
   it('resultFiles() names the four files', () => {
     expect(Object.keys(resultFiles(result, { performance, caseName: 'x' }))).toEqual(['summary.json', 'profiles.csv', 'fields.csv', 'surfaces.csv']);
+  });
+});
+
+describe('result exports with a continuum comparison', () => {
+  let plan: Plan;
+  let result: SimulationResult;
+  let comparison: ContinuumComparison;
+  beforeAll(() => {
+    const sim = runToEnd(buildPreset('couette', { cellsY: '6', particlesPerCell: '10', transientSteps: '20', sampleSteps: '400', knudsen: '0.5' }));
+    plan = sim.plan;
+    result = summarize(sim);
+    const c = continuumComparisonOf(plan, result);
+    if (!c.recognised) throw new Error(c.reason);
+    comparison = c;
+  });
+
+  it('profilesCsv(result, comparison) puts one column per model after each quantity a model predicts, units in the header', () => {
+    const rows = parseCsv(profilesCsv(result, comparison));
+    const header = rows[0];
+    const at = header.indexOf('velocityX ci95 [m/s]');
+    expect(header.slice(at + 1, at + 5)).toEqual(['velocityX noSlip [m/s]', 'velocityX firstOrder [m/s]', 'velocityX secondOrder [m/s]', 'velocityX freeMolecular [m/s]']);
+    const t = header.indexOf('temperature ci95 [K]');
+    expect(header.slice(t + 1, t + 4)).toEqual(['temperature noSlip [K]', 'temperature firstOrder [K]', 'temperature secondOrder [K]']);
+    expect(header).toHaveLength(1 + 2 * CELL_FIELDS.length + 7);
+    for (const h of header) expect(h).toMatch(/ \[[^\]]+\]$/);
+    for (let r = 0; r < result.profile.rows; r++) {
+      expect(Number(rows[r + 1][at + 2])).toBe(comparison.profiles.firstOrder!['profile.velocityX'][r]);
+      expect(rows[r + 1]).toHaveLength(header.length);
+    }
+  });
+
+  it('summaryJson() with a comparison carries continuum, verdict and continuumModels, and units for every compared quantity', () => {
+    const s = summaryJson(result, { performance, caseName: 'tiny', comparison });
+    expect(s.continuum!.noSlip['walls.bottom.shearStress']).toBe(comparison.continuum.noSlip!['walls.bottom.shearStress']);
+    expect(Object.keys(s.verdict!)).toEqual(expect.arrayContaining(['walls.bottom.shearStress', 'walls.top.heatFlux', 'profile.velocityX', 'profile.temperature']));
+    for (const v of Object.values(s.verdict!)) {
+      expect(typeof v.text).toBe('string');
+      expect(Object.keys(v)).toEqual(expect.arrayContaining(['bestModel', 'deviation', 'text']));
+    }
+    expect(s.continuumModels!.problem).toBe('couette');
+    expect(s.continuumModels!.meanFreePath.kind).toBe('viscosity');
+    expect(s.units['walls.bottom.shearStress']).toBe('Pa');
+    expect(s.units['profile.velocityX']).toBe('m/s');
+    expect(JSON.stringify(s)).not.toMatch(/NaN|Infinity/);
+  });
+
+  it('resultFiles(result, { plan }) writes the comparison; without one the files are as before', () => {
+    const withPlan = resultFiles(result, { performance, caseName: 'x', plan });
+    expect(JSON.parse(withPlan['summary.json']).verdict['walls.top.shearStress'].text).toBe(comparison.verdict['walls.top.shearStress'].text);
+    expect(withPlan['profiles.csv']).toContain('velocityX noSlip [m/s]');
+    const plain = resultFiles(result, { performance, caseName: 'x' });
+    expect(plain['summary.json']).not.toContain('"verdict"');
+    expect(plain['profiles.csv']).toBe(profilesCsv(result));
+  });
+
+  it('summaryJson() says why when no continuum model applies', () => {
+    const c = structuredClone(plan.caseData);
+    c.boundaries.top = { ...c.boundaries.top, velocityMPerS: [0, 0, 0] } as typeof c.boundaries.top;
+    c.boundaries.bottom = { ...c.boundaries.bottom, velocityMPerS: [0, 0, 0] } as typeof c.boundaries.bottom;
+    const other = planFromCase(c);
+    const note = continuumComparisonOf(other, result);
+    const s = summaryJson(result, { performance, caseName: 'x', comparison: note });
+    expect(s.continuumNote).toMatch(/equilibrium/);
+    expect(s.continuum).toBeUndefined();
   });
 });
