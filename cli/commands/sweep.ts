@@ -18,7 +18,7 @@ import { parseQuantity } from '../../engine/units/engineeringUnits';
 import { createSimulation, stepsRemaining } from '../../engine/simulation';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
 import { summarizeSamples } from '../../engine/results/summarize';
-import { resultFiles, summaryJson, type Performance, type SummaryJson } from '../../engine/results/exports';
+import { resultFiles, type Performance, type SummaryJson } from '../../engine/results/exports';
 import { CliError, UsageError, EXIT_OK, EXIT_INTERRUPTED } from '../errors';
 import { SWEEP_USAGE } from '../usage';
 import { readJsonFile, parseSeedOption } from '../readCase';
@@ -193,13 +193,10 @@ function writePoint(outDir: string, p: PlannedPoint, run: PointRun & { samples: 
   const result = summarizeSamples(run.samples);
   result.warnings.push(...run.warnings);
   if (run.interrupted) result.warnings.push(`interrupted by the user: the result holds the ${run.samples.counters.sampledSteps} steps sampled until then`);
-  const extra = { performance: run.performance, caseName: p.caseData.name };
-  writeResultsAtomically(join(outDir, sweepPointFolder(p.point)), {
-    ...resultFiles(result, extra),
-    'case.json': `${prettyJson(p.caseData)}\n`,
-    ...run.extraFiles,
-  });
-  return { summary: summaryJson(result, extra), warnings: result.warnings.filter((w) => !p.plan.warnings.includes(w)) };
+  const files = resultFiles(result, { performance: run.performance, caseName: p.caseData.name });
+  writeResultsAtomically(join(outDir, sweepPointFolder(p.point)), { ...files, 'case.json': `${prettyJson(p.caseData)}\n`, ...run.extraFiles });
+  // The table is read back from the very text written, so sweep.csv and sweep.json cannot differ from summary.json.
+  return { summary: JSON.parse(files['summary.json']) as SummaryJson, warnings: result.warnings.filter((w) => !p.plan.warnings.includes(w)) };
 }
 
 /** Sets a flag on the first Ctrl-C; a second Ctrl-C ends the process at once (the default action). */
