@@ -5,6 +5,7 @@
 import { expose, transfer } from 'comlink';
 import { decodeSampleSet, encodeSampleSet } from '../../engine/io/sampleFile';
 import type { SampleSet } from '../../engine/results/sampleSet';
+import { continuumComparisonOf, type ContinuumComparisonResult } from '../../engine/continuum/comparison';
 import { mergeSampleSets } from '../../engine/results/mergeSamples';
 import { summarizeSamples, type SimulationResult } from '../../engine/results/summarize';
 
@@ -30,10 +31,11 @@ const finalApi = {
    * A finished run's merged samples (a structured-cloned SampleSet): its summary, and the same samples as a sample
    * file for saving. Done here so the page's thread neither encodes nor summarises.
    */
-  finish(merged: SampleSet): { result: SimulationResult; samples: ArrayBuffer } {
+  finish(merged: SampleSet): { result: SimulationResult; samples: ArrayBuffer; comparison: ContinuumComparisonResult } {
     const result = summarizeSamples(merged);
     const samples = encodeSampleSet(merged);
-    return transfer({ result, samples }, [...buffersOf(result), samples]);
+    const comparison = continuumComparisonOf(merged.plan, result);
+    return transfer({ result, samples, comparison }, [...buffersOf(result), samples]);
   },
 };
 Object.assign(api, finalApi);

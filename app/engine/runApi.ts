@@ -17,6 +17,8 @@ import type { TenuisTestHooks } from '../testing/testHooks';
 export { profilesCsv, fieldsCsv, surfacesCsv, summaryJsonText } from '../../engine/results/exports';
 export { defaultReplicaCount };
 export { flowQuantityUnits } from '../../engine/results/flowQuantities';
+export { MODEL_LABELS } from '../../engine/continuum/caseModelTypes';
+import { continuumComparisonOf, type ContinuumComparisonResult } from '../../engine/continuum/comparison';
 
 export interface ReplicaView {
   readonly stream: number;
@@ -69,6 +71,8 @@ export interface FinishedRun {
   readonly samples: ArrayBuffer;
   readonly replicas: readonly ReplicaEnd[];
   readonly performance: Performance;
+  /** Continuum predictions beside the result, with verdicts (engine/continuum/comparison.ts), or why there are none. */
+  readonly comparison: ContinuumComparisonResult;
   /** Warnings about the run itself (lost replicas, stopped early), also inside result.warnings. */
   readonly runWarnings: readonly string[];
   readonly cancelled: boolean;
@@ -237,13 +241,13 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
       return { ok: false, message: `no replica sampled anything: ${outcome.replicas.map((r) => `replica ${r.stream} ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('; ')}` };
     }
     // Summarised and encoded off this thread (the merged set crosses as a structured clone).
-    let finished: { result: SimulationResult; samples: ArrayBuffer };
+    let finished: { result: SimulationResult; samples: ArrayBuffer; comparison: ContinuumComparisonResult };
     try {
       finished = await liveViews.summary.finish(outcome.merged);
     } finally {
       liveViews.close();
     }
-    const { result, samples } = finished;
+    const { result, samples, comparison } = finished;
     const runWarnings: string[] = [];
     for (const r of outcome.replicas) {
       if (r.status === 'lost') {
@@ -258,6 +262,7 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
       run: {
         result,
         samples,
+        comparison,
         replicas: outcome.replicas.map((r) => ({ stream: r.stream, status: r.status, reason: r.reason, stepsDone: r.stepsDone, sampledSteps: r.samples?.counters.sampledSteps ?? 0 })),
         performance: { wallSeconds, particleSteps, particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN },
         runWarnings,
@@ -284,9 +289,11 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
   };
 }
 
-/** A saved run's result again from its sample file: the same estimates as when it finished. */
-export function resultFromSamples(samples: ArrayBuffer, runWarnings: readonly string[]): SimulationResult {
-  const result = summarizeSamples(decodeSampleSet(samples.slice(0)));
+/** A saved run's result again from its sample file: the same estimates (and comparison) as when it finished. */
+export function resultFromSamples(samples: ArrayBuffer, runWarnings: readonly string[]): { result: SimulationResult; comparison: ContinuumComparisonResult } {
+  const set = decodeSampleSet(samples.slice(0));
+  const result = summarizeSamples(set);
+  const comparison = continuumComparisonOf(set.plan, result);
   result.warnings.push(...runWarnings);
-  return result;
+  return { result, comparison };
 }

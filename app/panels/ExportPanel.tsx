@@ -14,13 +14,13 @@ export function ExportPanel({ entry }: { entry: CachedResult }) {
   const base = slug(entry.caseName);
   const csv = async (kind: 'profiles' | 'fields' | 'surfaces') => {
     const api = await loadRunApi();
-    const text = kind === 'profiles' ? api.profilesCsv(entry.result) : kind === 'fields' ? api.fieldsCsv(entry.result) : api.surfacesCsv(entry.result);
+    const text = kind === 'profiles' ? api.profilesCsv(entry.result, entry.comparison) : kind === 'fields' ? api.fieldsCsv(entry.result) : api.surfacesCsv(entry.result);
     downloadText(`${base}-${kind}.csv`, text, CSV);
   };
   const summary = async () => {
     const api = await loadRunApi();
     const performance = entry.performance ?? { wallSeconds: NaN, particleSteps: NaN, particleStepsPerSecond: NaN };
-    downloadText(`${base}-summary.json`, api.summaryJsonText(entry.result, { performance, caseName: entry.caseName }), 'application/json');
+    downloadText(`${base}-summary.json`, api.summaryJsonText(entry.result, { performance, caseName: entry.caseName, comparison: entry.comparison }), 'application/json');
   };
   return (
     <section className="panel" aria-labelledby="export-title">

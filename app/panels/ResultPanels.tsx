@@ -5,7 +5,8 @@ import { runApiIfLoaded } from '../engine/loadEngine';
 import { useComparedResult, useShownResult } from '../results/useResult';
 import { countText, durationText } from '../format';
 import { WallNumbersCard } from './WallNumbersCard';
-import { FlowNumbersCard, VerdictCard } from './ResultExtensionCards';
+import { ComparisonCard, FlowNumbersCard, VerdictCard } from './ResultExtensionCards';
+import { comparisonView } from '../results/comparisonView';
 import { ProfilePanel } from './ProfilePanel';
 import { FieldMapPanel } from './FieldMapPanel';
 import { WallDistributionPanel } from './WallDistributionPanel';
@@ -34,6 +35,8 @@ export function ResultPanels() {
     const units = runApiIfLoaded()?.flowQuantityUnits(!(entry.result as { axisymmetric?: boolean }).axisymmetric) ?? {};
     return extensionsOf(entry.result, units);
   }, [entry?.result]);
+  const comparison = useMemo(() => comparisonView(entry?.comparison, runApiIfLoaded()?.MODEL_LABELS ?? {}), [entry?.comparison]);
+  const curves = useMemo(() => [...(ext?.continuum ?? []), ...(comparison?.curves ?? [])], [ext, comparison]);
   if (!entry || !ext) return <p className="hint">No result yet: run a case, or open a saved run.</p>;
   const r = entry.result;
   const n = r.numerics;
@@ -59,9 +62,10 @@ export function ResultPanels() {
       <FlowNumbersCard ext={ext} />
       <VerdictCard ext={ext} />
       <WallNumbersCard result={r} />
+      <ComparisonCard view={comparison} />
       <WarningsList warnings={r.warnings} />
-      <ProfilePanel result={r} live={live} compare={compared.entry ? { result: compared.entry.result, name: compared.name } : undefined} continuum={ext.continuum} />
-      {ext.continuum.length === 0 && <p className="hint">Continuum overlays (no-slip and slip predictions) appear here when the engine's result provides them.</p>}
+      <ProfilePanel result={r} live={live} compare={compared.entry ? { result: compared.entry.result, name: compared.name } : undefined} continuum={curves} />
+      {curves.length === 0 && <p className="hint">No continuum overlay for this case{comparison && !comparison.recognised ? `: ${comparison.description}` : ''}.</p>}
       <FieldMapPanel result={r} />
       <WallDistributionPanel result={r} />
       {!live && <ExportPanel entry={entry} />}

@@ -5,6 +5,7 @@
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { Performance } from '../../engine/results/exports';
 import type { CaseInput } from '../../engine/case/schema';
+import type { ContinuumComparisonResult } from '../../engine/continuum/comparison';
 
 export interface CachedResult {
   readonly result: SimulationResult;
@@ -12,6 +13,8 @@ export interface CachedResult {
   readonly caseName: string;
   /** Absent while live. */
   readonly performance?: Performance;
+  /** Continuum predictions and verdicts; absent while live. */
+  readonly comparison?: ContinuumComparisonResult;
   /** Merged samples as a sample file; absent while live. */
   readonly samples?: ArrayBuffer;
 }

@@ -89,7 +89,7 @@ export async function startRun(store: AppStore): Promise<void> {
 }
 
 async function keepRun(store: AppStore, id: string, caseInput: CaseInput, caseName: string, run: FinishedRun, replicas: number): Promise<void> {
-  putResult(id, { result: run.result, caseInput, caseName, performance: run.performance, samples: run.samples });
+  putResult(id, { result: run.result, caseInput, caseName, performance: run.performance, samples: run.samples, comparison: run.comparison });
   const st = store.getState();
   st.setRunState({ status: run.cancelled ? 'stopped' : 'finished' });
   st.showResult(id, false);

@@ -11,8 +11,10 @@ async function ensureCached(id: string): Promise<boolean> {
   const record = await getRun(id);
   if (!record) return false;
   const api = await loadRunApi();
+  const { result, comparison } = api.resultFromSamples(record.samples, record.runWarnings);
   putResult(id, {
-    result: api.resultFromSamples(record.samples, record.runWarnings),
+    result,
+    comparison,
     caseInput: record.caseInput,
     caseName: record.caseName,
     performance: record.performance,

@@ -40,7 +40,7 @@ test('a user picks the MEMS damping example, sets Kn, runs it in Web Workers and
   const longTasks = await page.evaluate(([a, b]) => (window as unknown as { __longTasks: { start: number; duration: number }[] }).__longTasks.filter((t) => t.start >= a && t.start <= b), [t0, t1]);
   const longest = Math.max(0, ...longTasks.map((t) => t.duration));
   console.log(`run took ${((t1 - t0) / 1000).toFixed(1)} s; longest main-thread task during it: ${longest.toFixed(0)} ms (${longTasks.length} over 50 ms)`);
-  expect(longest, 'no main-thread task over 200 ms during the run').toBeLessThan(200);
+  expect.soft(longest, 'no main-thread task over 200 ms during the run').toBeLessThan(200);
 
   // Numbers with uncertainties; the moving walls are sheared in opposite directions.
   const top = await w.wallNumber('top', 'shearStress');
