@@ -245,7 +245,10 @@ export function plan(c: Case): PlanResult {
   // Transient: ballistic crossings and viscous diffusion across the domain; ~7 e-folds of the slowest shear mode
   // (time constant L²ρ/(π²μ)) — common practice, no source. A user can set it, and the parallel-runs work detects it.
   const length = Math.max(lx, ly);
-  const relaxTime = Math.max(10 * length / ref.mostProbableSpeedMPerS, (0.7 * length * length * ref.massDensityKgPerM3) / ref.viscosityPaS);
+  // A body force keeps accelerating molecules between collisions: the slowest part of the distribution (grazing
+  // molecules) settles over a few collision times, which near free-molecular flow is far longer than the crossings.
+  const forcedRelaxTime = c.bodyAccelerationXMPerS2 !== 0 ? 5 * ref.meanCollisionTimeS : 0;
+  const relaxTime = Math.max(10 * length / ref.mostProbableSpeedMPerS, (0.7 * length * length * ref.massDensityKgPerM3) / ref.viscosityPaS, forcedRelaxTime);
   const transientSteps = c.sampling.transientSteps ?? Math.ceil(relaxTime / timeStepS);
   const requestedSampleSteps = c.sampling.sampleSteps ?? Math.max(2000, 4 * transientSteps);
   // At least 10 steps per base batch: closing a batch touches every cell, and consecutive steps are strongly

@@ -53,10 +53,10 @@ function movePlanar(st: SimState, dt: number): number {
   const cx = st.cellSizeX;
   const cy = st.cellSizeY;
   const sec = st.sectionTable;
-  // Sections are counted only while sampling; a periodic wrap then goes to the exact flight, which counts it right.
+  // Sections are counted only while sampling (their sums belong to the open batch).
   const sections = st.sampling ? st.sectionCount : 0;
   const sectionSums = st.sectionSums;
-  const periodicX = st.periodicX && sections === 0;
+  const periodicX = st.periodicX;
   // A float64 copy of the argument: used directly, V8 re-checks the parameter's representation every iteration.
   const h = dt * 1;
   const halfKick = 0.5 * st.bodyAccelerationX * dt;
@@ -65,20 +65,25 @@ function movePlanar(st: SimState, dt: number): number {
     const u = vx[i] + halfKick;
     const xo = x[i];
     const yo = y[i];
-    let xi = xo + u * h;
-    const yi = yo + vy[i] * h;
+    const dx = u * h;
+    const dy = vy[i] * h;
+    let xi = xo + dx;
+    const yi = yo + dy;
     if (yi < 0 || yi >= ly) {
       vx[i] = u;
       list[listed++] = i;
       continue;
     }
+    // The shift a periodic wrap adds to x (0 without one).
+    let shift = 0;
     if (xi < 0 || xi >= lx) {
       if (!periodicX) {
         vx[i] = u;
         list[listed++] = i;
         continue;
       }
-      xi = xi < 0 ? xi + lx : xi - lx;
+      shift = xi < 0 ? lx : -lx;
+      xi += shift;
       if (xi >= lx || xi < 0) {
         vx[i] = u;
         list[listed++] = i; // crossed the periodic pair more than once: fly it exactly
@@ -87,16 +92,19 @@ function movePlanar(st: SimState, dt: number): number {
     }
     // 0 <= xi < lx, so the truncation is a floor and at most lands on the tables' extra last entry.
     const k = (columnKey[(xi * perX) | 0] + rowKey[(yi * perY) | 0]) | 0;
-    if (solids && (near[k] === 1 || Math.abs(xi - xo) > cx || Math.abs(yi - yo) > cy)) {
+    if (solids && (near[k] === 1 || Math.abs(dx) > cx || Math.abs(dy) > cy)) {
       vx[i] = u;
       list[listed++] = i;
       continue;
     }
+    // Crossings of the unwrapped path xo → xo + dx: of each section, and after a wrap of its periodic image.
     for (let s = 0; s < sections; s++) {
-      const xs = sec[3 * s];
-      if ((xo < xs) !== (xi < xs)) {
-        const yc = yo + ((yi - yo) * (xs - xo)) / (xi - xo);
-        if (yc >= sec[3 * s + 1] && yc <= sec[3 * s + 2]) sectionSums[s] += xi >= xs ? 1 : -1;
+      for (let image = 0; image < (shift === 0 ? 1 : 2); image++) {
+        const xs = sec[3 * s] - image * shift;
+        if ((xo < xs) !== (xo + dx < xs)) {
+          const yc = yo + (dy * (xs - xo)) / dx;
+          if (yc >= sec[3 * s + 1] && yc <= sec[3 * s + 2]) sectionSums[s] += dx > 0 ? 1 : -1;
+        }
       }
     }
     x[i] = xi;
@@ -142,7 +150,7 @@ function moveAxisymmetric(st: SimState, dt: number): number {
   const sec = st.sectionTable;
   const sections = st.sampling ? st.sectionCount : 0;
   const sectionSums = st.sectionSums;
-  const periodicX = st.periodicX && sections === 0;
+  const periodicX = st.periodicX;
   const h = dt * 1;
   const halfKick = 0.5 * st.bodyAccelerationX * dt;
   let listed = 0;
@@ -153,7 +161,8 @@ function moveAxisymmetric(st: SimState, dt: number): number {
     const w = vz[i];
     const xo = x[i];
     const ro = y[i];
-    let xi = xo + u * h;
+    const dx = u * h;
+    let xi = xo + dx;
     const yy = ro + v * h;
     const zz = w * h;
     const r2 = yy * yy + zz * zz;
@@ -162,13 +171,15 @@ function moveAxisymmetric(st: SimState, dt: number): number {
       list[listed++] = i;
       continue;
     }
+    let shift = 0;
     if (xi < 0 || xi >= lx) {
       if (!periodicX) {
         vx[i] = u;
         list[listed++] = i;
         continue;
       }
-      xi = xi < 0 ? xi + lx : xi - lx;
+      shift = xi < 0 ? lx : -lx;
+      xi += shift;
       if (xi >= lx || xi < 0) {
         vx[i] = u;
         list[listed++] = i;
@@ -177,7 +188,7 @@ function moveAxisymmetric(st: SimState, dt: number): number {
     }
     const r = Math.sqrt(r2);
     const k = (columnKey[(xi * perX) | 0] + rowKey[(r * perY) | 0]) | 0;
-    if (solids && (near[k] === 1 || Math.abs(xi - xo) > cx || (v * v + w * w) * h * h > cy2)) {
+    if (solids && (near[k] === 1 || Math.abs(dx) > cx || (v * v + w * w) * h * h > cy2)) {
       vx[i] = u;
       list[listed++] = i;
       continue;
@@ -185,13 +196,15 @@ function moveAxisymmetric(st: SimState, dt: number): number {
     let rowOld = (ro * rowsPerM) | 0;
     if (rowOld > lastRow) rowOld = lastRow;
     for (let s = 0; s < sections; s++) {
-      const xs = sec[3 * s];
-      if ((xo < xs) !== (xi < xs)) {
-        const tc = (h * (xs - xo)) / (xi - xo);
-        const a = ro + v * tc;
-        const b = w * tc;
-        const rc = Math.sqrt(a * a + b * b);
-        if (rc >= sec[3 * s + 1] && rc <= sec[3 * s + 2]) sectionSums[s] += xi >= xs ? rowWeight[rowOld] : -rowWeight[rowOld];
+      for (let image = 0; image < (shift === 0 ? 1 : 2); image++) {
+        const xs = sec[3 * s] - image * shift;
+        if ((xo < xs) !== (xo + dx < xs)) {
+          const tc = (h * (xs - xo)) / dx;
+          const a = ro + v * tc;
+          const b = w * tc;
+          const rc = Math.sqrt(a * a + b * b);
+          if (rc >= sec[3 * s + 1] && rc <= sec[3 * s + 2]) sectionSums[s] += dx > 0 ? rowWeight[rowOld] : -rowWeight[rowOld];
+        }
       }
     }
     if (r > 0) {

@@ -25,7 +25,7 @@ const N = P / (K_B * T);
 const VMP = Math.sqrt((2 * K_B * T) / MASS);
 
 function openBox(drift: number, axisymmetric: boolean, openCylinder: boolean): CaseInput {
-  const reservoir = { type: 'reservoir', pressurePa: P, temperatureK: T, velocityMPerS: [drift, 0, 0] } as const;
+  const reservoir = { type: 'reservoir' as const, pressurePa: P, temperatureK: T, velocityMPerS: [drift, 0, 0] as [number, number, number] };
   return {
     schemaVersion: 1,
     name: 'open box',
