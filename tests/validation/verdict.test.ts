@@ -17,8 +17,8 @@
  *   with a jump has a single maximum on the axis; kinetic theory and DSMC give a dip there between two maxima
  *   (Mansour, Baras & Garcia 1997, Physica A 240:255; Tij & Santos 1994; from memory) and a larger rise, so the
  *   temperature profile must not be judged adequate.
- * Sample counts: enough for the 95 % half-widths to separate these outcomes, about two and a half minutes for the
- * file on two shared cores (measured; see the commit message).
+ * Sample counts: enough for the 95 % half-widths to separate these outcomes; the file takes 70 s on an idle
+ * two-core machine and about 3 minutes when the machine is shared at a load of 4–8 (measured).
  */
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
