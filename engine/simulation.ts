@@ -14,6 +14,7 @@ import { seriesKeysOf, sectionSeriesKey } from './results/seriesKeys';
 import { moveParticles } from './kernel/move';
 import { indexParticles, reorderParticles } from './kernel/indexCells';
 import { collideParticles } from './kernel/collide';
+import { updatePressureOutlets } from './kernel/pressureOutlet';
 import { createBatchStore, addToBatches, type DoublingBatchStore } from './stats/doublingBatches';
 import { wallTotalsOfBatch, type WallQuantityName } from './results/wallQuantities';
 import { createSeries, pushSeries, type GrowableSeries } from './stats/series';
@@ -107,6 +108,7 @@ export function advance(sim: Simulation, steps: number): void {
     if (timed) { const t = clock(); ph.move += t - t0; t0 = t; }
     indexParticles(st);
     if (st.step % REORDER_INTERVAL === 0) reorderParticles(st);
+    if (st.hasPressureOutlets) updatePressureOutlets(st);
     if (timed) { const t = clock(); ph.index += t - t0; t0 = t; }
     // Cell sampling is fused into the collision pass (see collideParticles), so `collide` times both and `sample`
     // only the batch bookkeeping.

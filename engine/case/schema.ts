@@ -96,8 +96,14 @@ const boundary = z.discriminatedUnion(
     reservoir,
     /** The axis of symmetry (bottom side of an axisymmetric domain): molecules pass it in 3D, nothing to do. */
     z.strictObject({ type: z.literal('axis') }),
+    /**
+     * The end of a long duct held at a pressure (subsonic outflow): molecules leave freely and enter from a
+     * Maxwellian whose density, speed and temperature follow from the gas next to the end by the characteristic
+     * relations of Wang & Li 2004 (kernel/pressureOutlet.ts).
+     */
+    z.strictObject({ type: z.literal('pressureOutlet'), pressurePa: positive('outlet pressure (Pa)') }),
   ],
-  { error: 'boundary type must be wall, periodic, symmetry, reservoir or axis' },
+  { error: 'boundary type must be wall, periodic, symmetry, reservoir, axis or pressureOutlet' },
 );
 
 const NAME_PATTERN = /^[A-Za-z][A-Za-z0-9_-]*$/;
@@ -251,6 +257,7 @@ function checkGeometry(c: CaseDraft, report: Report): void {
   if (c.flowReport && c.flowSections.length === 0) report('flowReport needs at least one entry in flowSections to count the flow through', ['flowReport']);
   for (const side of SIDE_NAMES) {
     if (b[side].type === 'axis' && (!axisymmetric || side !== 'bottom')) report('only the bottom side of an axisymmetric domain can be the axis', ['boundaries', side, 'type']);
+    if (b[side].type === 'pressureOutlet' && side !== 'left' && side !== 'right') report('a pressureOutlet ends a duct along x: use it on the left or right side', ['boundaries', side, 'type']);
   }
   if (axisymmetric) {
     if (b.bottom.type !== 'axis') report('in an axisymmetric domain the bottom side (y = 0) is the axis: set boundaries.bottom to {"type": "axis"}', ['boundaries', 'bottom', 'type']);

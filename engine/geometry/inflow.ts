@@ -22,38 +22,60 @@ export const INFLOW_PER_STEP = 3;
 export const INFLOW_SPEED_RATIO = 4;
 /** Particle weight of the cells next to the segment. */
 export const INFLOW_WEIGHT = 5;
-export const INFLOW_STRIDE = 6;
+/** The state molecules enter from: temperature (K), drift velocity (m/s). */
+export const INFLOW_TEMPERATURE = 6;
+export const INFLOW_DRIFT_X = 7;
+export const INFLOW_DRIFT_Y = 8;
+export const INFLOW_DRIFT_Z = 9;
+/** The cell next to the segment (pressure outlets sample it). */
+export const INFLOW_CELL = 10;
+/** Gas volume of that cell (m³) and the segment's area (m²). */
+export const INFLOW_CELL_VOLUME = 11;
+export const INFLOW_AREA = 12;
+export const INFLOW_STRIDE = 13;
 
 /** One-way number flux through a plane (1/(m² s)) of a Maxwellian gas, n in 1/m³, v_mp in m/s, s = u_n/v_mp. */
 export function maxwellianInfluxPerM2S(numberDensity: number, mostProbableSpeed: number, s: number): number {
   return ((numberDensity * mostProbableSpeed) / (2 * Math.sqrt(Math.PI))) * (Math.exp(-s * s) + Math.sqrt(Math.PI) * s * (1 + jStat.erf(s)));
 }
 
-/** The inflow table of a plan: every reservoir side cut into cell-wide segments, blocked ones left out. */
+/**
+ * The inflow table of a plan: every reservoir side and pressure outlet cut into cell-wide segments, blocked ones
+ * left out. Reservoir rows carry their fixed state; pressure-outlet rows start from the initial gas and are updated
+ * every step (kernel/pressureOutlet.ts).
+ */
 export function inflowTableOf(plan: Plan): Float64Array {
   const g = plan.grid;
   const rows: number[] = [];
   const m = plan.gas.model.massKg;
+  const init = plan.caseData.initial;
   plan.surfaces.forEach((f, row) => {
     const b = f.spec;
-    if (b.type !== 'reservoir') return;
-    const n = b.pressurePa / (K_B * b.temperatureK);
-    const vmp = Math.sqrt((2 * K_B * b.temperatureK) / m);
-    const drift = (f.normalIsX ? b.velocityMPerS[0] : b.velocityMPerS[1]) * f.inward;
-    const s = drift / vmp;
+    if (b.type !== 'reservoir' && b.type !== 'pressureOutlet') return;
+    const t = b.type === 'reservoir' ? b.temperatureK : init.temperatureK;
+    const drift = b.type === 'reservoir' ? b.velocityMPerS : init.velocityMPerS;
+    const n = (b.type === 'reservoir' ? b.pressurePa : init.pressurePa) / (K_B * t);
+    const vmp = Math.sqrt((2 * K_B * t) / m);
+    const s = ((f.normalIsX ? drift[0] : drift[1]) * f.inward) / vmp;
     const flux = maxwellianInfluxPerM2S(n, vmp, s);
     const cellsAlong = f.normalIsX ? g.cellsY : g.cellsX;
     const size = f.normalIsX ? g.cellSizeYM : g.cellSizeXM;
     for (let k = 0; k < cellsAlong; k++) {
       const a = k * size;
       const c = (k + 1) * size;
-      // A segment whose neighbouring strip is solid lets nothing in (block faces on a reservoir side are walls).
+      // A segment whose neighbouring strip is solid lets nothing in (block faces on an open side are walls).
       const mid = 0.5 * (a + c);
       const inside = f.planeM + f.inward * 1e-9 * size;
       if (f.normalIsX ? insideBlock(g.blocks, inside, mid) : insideBlock(g.blocks, mid, inside)) continue;
       const weight = f.normalIsX ? g.cells.rowWeights[k] : g.cells.rowWeights[f.inward > 0 ? 0 : g.cellsY - 1];
       const area = surfaceAreaM2(f.normalIsX, f.planeM, a, c, g.axisymmetric);
-      rows.push(row, a, c, (flux * area * plan.timeStepS) / (plan.moleculesPerParticle * weight), s, weight);
+      const column = f.normalIsX ? (f.inward > 0 ? 0 : g.cellsX - 1) : k;
+      const cellRow = f.normalIsX ? k : f.inward > 0 ? 0 : g.cellsY - 1;
+      const cell = cellRow * g.cellsX + column;
+      rows.push(
+        row, a, c, (flux * area * plan.timeStepS) / (plan.moleculesPerParticle * weight), s, weight,
+        t, drift[0], drift[1], drift[2], cell, g.cells.gasVolumesM3[cell], area,
+      );
     }
   });
   return Float64Array.from(rows);

@@ -47,7 +47,7 @@ export function encodeCheckpoint(sim: Simulation, stream: number): ArrayBuffer {
     ['x', st.x.subarray(0, n)], ['y', st.y.subarray(0, n)],
     ['vx', st.vx.subarray(0, n)], ['vy', st.vy.subarray(0, n)], ['vz', st.vz.subarray(0, n)], ['erot', st.erot.subarray(0, n)],
     ['rng', st.rng], ['sigmaCrMax', st.sigmaCrMax], ['collisionRemainder', st.collisionRemainder],
-    ['cellSums', st.cellSums], ['wallSums', st.wallSums], ['sectionSums', st.sectionSums], ['inflowRemainder', st.inflowRemainder], ['weightCarry', st.weightCarry],
+    ['cellSums', st.cellSums], ['wallSums', st.wallSums], ['sectionSums', st.sectionSums], ['inflowRemainder', st.inflowRemainder], ['weightCarry', st.weightCarry], ['inflowTable', st.inflowTable], ['outletMoments', st.outletMoments],
     ['cellStore.values', sim.cellStore.values], ['cellStore.pending', sim.cellStore.pending],
     ['wallStore.values', sim.wallStore.values], ['wallStore.pending', sim.wallStore.pending],
   ];
@@ -151,6 +151,8 @@ export function decodeCheckpoint(buffer: ArrayBuffer): { sim: Simulation; stream
   into(st.sectionSums, 'sectionSums');
   into(st.inflowRemainder, 'inflowRemainder');
   into(st.weightCarry, 'weightCarry');
+  into(st.inflowTable, 'inflowTable');
+  into(st.outletMoments, 'outletMoments');
   for (const k of STATE_SCALARS) if (k !== 'count') st[k] = header.scalars[k] ?? 0;
   st.sampling = header.scalars.sampling === 1;
   sim.batchStepsDone = header.scalars.batchStepsDone;

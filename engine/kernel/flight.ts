@@ -15,7 +15,7 @@
 import {
   type SimState,
   SIDE_STRIDE, SIDE_TYPE, SIDE_LEFT, SIDE_RIGHT, SIDE_BOTTOM, SIDE_TOP, DOMAIN_SIDES,
-  BOUNDARY_PERIODIC, BOUNDARY_SPECULAR, BOUNDARY_WALL, BOUNDARY_RESERVOIR,
+  BOUNDARY_PERIODIC, BOUNDARY_SPECULAR, BOUNDARY_WALL, BOUNDARY_RESERVOIR, BOUNDARY_PRESSURE_OUTLET,
   BLOCK_STRIDE, BLOCK_X0, BLOCK_X1, BLOCK_Y0, BLOCK_Y1, SECTION_STRIDE, SECTION_X, SECTION_Y0, SECTION_Y1,
 } from './state';
 import { reflectAtWall } from './wallReflection';
@@ -197,7 +197,7 @@ export function flyParticle(st: SimState, i: number, dt: number, weight: number)
       else st.vy[i] = -st.vy[i];
     } else if (type === BOUNDARY_WALL) {
       reflectAtWall(st, i, row, along, weight);
-    } else if (type === BOUNDARY_RESERVOIR) {
+    } else if (type === BOUNDARY_RESERVOIR || type === BOUNDARY_PRESSURE_OUTLET) {
       left = true;
       break;
     }

@@ -1,5 +1,5 @@
 /**
- * Molecules entering through reservoir sides, each step: per segment (geometry/inflow.ts) the mean number of
+ * Molecules entering through reservoir sides and pressure outlets, each step: per segment (geometry/inflow.ts) the mean number of
  * simulated particles of the Maxwellian influx, the fractional part carried to the next step so the mean is exact.
  * Each enters at a uniform point of its segment (uniform in area: in r² on an axisymmetric end), with the velocity
  * distribution of molecules crossing a plane — the normal component flux-weighted, f(c_n) ∝ c_n exp(−(c_n − u_n)²/v_mp²),
@@ -7,11 +7,11 @@
  */
 import { uniform, standardNormal, rotationalEnergyOverKT, type RngState } from '../particles/rng';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
+import { type SimState, addParticle, SIDE_STRIDE, SIDE_NORMAL_IS_X, SIDE_INWARD, SIDE_PLANE } from './state';
 import {
-  type SimState, addParticle,
-  SIDE_STRIDE, SIDE_NORMAL_IS_X, SIDE_INWARD, SIDE_PLANE, SIDE_TEMPERATURE, SIDE_UX, SIDE_UY, SIDE_UZ, SIDE_THERMAL_SPEED,
-} from './state';
-import { INFLOW_STRIDE, INFLOW_SURFACE, INFLOW_FROM, INFLOW_TO, INFLOW_PER_STEP, INFLOW_SPEED_RATIO } from '../geometry/inflow';
+  INFLOW_STRIDE, INFLOW_SURFACE, INFLOW_FROM, INFLOW_TO, INFLOW_PER_STEP, INFLOW_SPEED_RATIO, INFLOW_TEMPERATURE,
+  INFLOW_DRIFT_X, INFLOW_DRIFT_Y, INFLOW_DRIFT_Z,
+} from '../geometry/inflow';
 import { flyAndSettle } from './settle';
 
 const SQRT_PI = Math.sqrt(Math.PI);
@@ -67,12 +67,12 @@ export function injectReservoirMolecules(st: SimState, dt: number): void {
     const normalIsX = tab[row + SIDE_NORMAL_IS_X] === 1;
     const inward = tab[row + SIDE_INWARD];
     const plane = tab[row + SIDE_PLANE];
-    const sd = tab[row + SIDE_THERMAL_SPEED];
+    const kT = K_B * table[o + INFLOW_TEMPERATURE];
+    const sd = Math.sqrt(kT / st.massKg);
     const vmp = Math.SQRT2 * sd;
-    const kT = K_B * tab[row + SIDE_TEMPERATURE];
-    const ux = tab[row + SIDE_UX];
-    const uy = tab[row + SIDE_UY];
-    const uz = tab[row + SIDE_UZ];
+    const ux = table[o + INFLOW_DRIFT_X];
+    const uy = table[o + INFLOW_DRIFT_Y];
+    const uz = table[o + INFLOW_DRIFT_Z];
     const s = table[o + INFLOW_SPEED_RATIO];
     const a = table[o + INFLOW_FROM];
     const b = table[o + INFLOW_TO];

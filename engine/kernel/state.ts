@@ -16,6 +16,7 @@ import { buildSideTable } from './sideTable';
 import type { SamplingGeometry } from '../results/samplingGeometry';
 import { insideBlock, type BlockRectangle } from '../geometry/cellGeometry';
 import { inflowTableOf, INFLOW_STRIDE } from '../geometry/inflow';
+import { initialOutletMoments } from './pressureOutlet';
 
 export const SIDE_LEFT = 0;
 export const SIDE_RIGHT = 1;
@@ -29,6 +30,8 @@ export const BOUNDARY_WALL = 2;
 export const BOUNDARY_RESERVOIR = 3;
 /** The axis of an axisymmetric domain: never reached by a 3D flight, so nothing happens there. */
 export const BOUNDARY_AXIS = 4;
+/** The end of a long duct held at a pressure by characteristic relations (kernel/pressureOutlet.ts). */
+export const BOUNDARY_PRESSURE_OUTLET = 5;
 
 export const WALL_DIFFUSE = 0;
 export const WALL_SPECULAR = 1;
@@ -60,7 +63,9 @@ export const SIDE_FROM = 14;
 export const SIDE_TO = 15;
 /** Reservoirs: number density (1/m³); temperature and drift are in SIDE_TEMPERATURE and SIDE_UX…. */
 export const SIDE_NUMBER_DENSITY = 16;
-export const SIDE_STRIDE = 17;
+/** Pressure outlets: the pressure held (Pa). */
+export const SIDE_PRESSURE = 17;
+export const SIDE_STRIDE = 18;
 /** Rows of the domain's sides; block faces follow from row 4, four per block (left, right, bottom, top). */
 export const DOMAIN_SIDES = 4;
 
@@ -137,9 +142,15 @@ export interface SimState extends SamplingGeometry {
   readonly sectionCount: number;
   /** Per flow section: weighted particles crossing it towards +x minus those crossing towards −x, pending batch. */
   sectionSums: Float64Array;
-  /** Reservoir inflow segments (geometry/inflow.ts columns) and the fractional particles carried between steps. */
+  /**
+   * Inflow segments (geometry/inflow.ts columns) and the fractional particles carried between steps. Reservoir rows
+   * are fixed; pressure-outlet rows are updated every step from outletMoments (kernel/pressureOutlet.ts).
+   */
   readonly inflowTable: Float64Array;
   inflowRemainder: Float64Array;
+  /** Per inflow segment: running averages of the weighted moments N, Σv_x, Σv_y, Σv_z, Σ|v|² in its cell. */
+  outletMoments: Float64Array;
+  readonly hasPressureOutlets: boolean;
   /** Uniform body acceleration along x, m/s². */
   readonly bodyAccelerationX: number;
   /** Particles found inside a solid after a flight (must stay 0; reported so a test can hold it to that). */
@@ -267,6 +278,8 @@ export function createState(plan: Plan, stream = 0): SimState {
     sectionNames: sections.map((x) => x.name),
     inflowTable,
     inflowRemainder: new Float64Array(inflowTable.length / INFLOW_STRIDE),
+    outletMoments: initialOutletMoments(plan, inflowTable),
+    hasPressureOutlets: plan.surfaces.some((f) => f.spec.type === 'pressureOutlet'),
     bodyAccelerationX: plan.bodyAccelerationXMPerS2,
     leaks: 0,
     cellsX: g.cellsX,
