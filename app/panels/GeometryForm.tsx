@@ -4,7 +4,7 @@ import type { Preset } from '../../engine/case/presets';
 import { ParameterField } from '../fields/ParameterField';
 import { appStore, useApp } from '../store/appStore';
 
-const NUMERICS = new Set(['cellsX', 'cellsY', 'particlesPerCell', 'transientSteps', 'sampleSteps', 'seed', 'timeStep']);
+const NUMERICS = new Set(['cells', 'cellsX', 'cellsY', 'particlesPerCell', 'transientSteps', 'sampleSteps', 'seed', 'timeStep']);
 
 export function GeometryForm() {
   const presetName = useApp((s) => s.presetName);

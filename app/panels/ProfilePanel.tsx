@@ -57,7 +57,7 @@ export function ProfilePanel({ result, live, compare, continuum = [] }: ProfileP
   }), [name, unit, len.unit]);
   return (
     <section className="panel" aria-labelledby="profile-title">
-      <h2 id="profile-title">Profile across the gap</h2>
+      <h2 id="profile-title">Profile along y (averages over each row of cells)</h2>
       <QuantitySelect id="profile-quantity" label="quantity" names={t.names} units={t.units} value={name} onChange={(q) => appStore.getState().select({ profileQuantity: q })} />
       <Plot data={data} layout={layout} filename={`profile-${name}`} label={`profile of ${name}`} testId="profile-plot" />
       <details>
