@@ -52,7 +52,7 @@ export function mergeCommand(args: string[], io: CommandIO): number {
   const result = summarizeSamples(merged);
   const particleSteps = merged.counters.particleSteps;
   const files = {
-    ...resultFiles(result, { performance: { wallSeconds: NaN, particleSteps, particleStepsPerSecond: NaN }, caseName: merged.plan.caseData.name }),
+    ...resultFiles(result, { performance: { wallSeconds: NaN, particleSteps, particleStepsPerSecond: NaN }, caseName: merged.plan.caseData.name, plan: merged.plan }),
     'case.json': `${prettyJson(merged.plan.caseData)}\n`,
   };
   writeResultsAtomically(values.out, files);

@@ -220,7 +220,7 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
     particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN,
   };
   const files = {
-    ...resultFiles(result, { performance, caseName: caseData.name }),
+    ...resultFiles(result, { performance, caseName: caseData.name, plan: samples.plan }),
     'case.json': `${prettyJson(caseData)}\n`,
     ...extraFiles,
   };

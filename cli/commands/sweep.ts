@@ -193,7 +193,7 @@ function writePoint(outDir: string, p: PlannedPoint, run: PointRun & { samples: 
   const result = summarizeSamples(run.samples);
   result.warnings.push(...run.warnings);
   if (run.interrupted) result.warnings.push(`interrupted by the user: the result holds the ${run.samples.counters.sampledSteps} steps sampled until then`);
-  const files = resultFiles(result, { performance: run.performance, caseName: p.caseData.name });
+  const files = resultFiles(result, { performance: run.performance, caseName: p.caseData.name, plan: run.samples.plan });
   writeResultsAtomically(join(outDir, sweepPointFolder(p.point)), { ...files, 'case.json': `${prettyJson(p.caseData)}\n`, ...run.extraFiles });
   // The table is read back from the very text written, so sweep.csv and sweep.json cannot differ from summary.json.
   return { summary: JSON.parse(files['summary.json']) as SummaryJson, warnings: result.warnings.filter((w) => !p.plan.warnings.includes(w)) };
