@@ -56,9 +56,13 @@ describe('tenuis sweep', () => {
     expect(r.stderr).toMatch(/point 3\/3 done in [\d.]+s; sweep elapsed [\d.]+s, remaining ~[\d.]+s/);
 
     const { header, rows } = readCsv(join(out, 'sweep.csv'));
+    const models = ['noSlip', 'firstOrder', 'secondOrder', 'freeMolecular'];
+    const predicted = ['bottom', 'top'].flatMap((w) => ['shearStress', 'heatFlux'].map((q) => ({ w, q, unit: q === 'heatFlux' ? 'W/m^2' : 'Pa' })));
     expect(header).toEqual([
       'point [1]', 'knudsen [1]', 'status', 'reference knudsen [1]', 'reference rarefaction [1]', 'reference pressure [Pa]',
       ...['bottom', 'top'].flatMap((w) => [`${w} shearStress [Pa]`, `${w} shearStress ci95 [Pa]`, `${w} heatFlux [W/m^2]`, `${w} heatFlux ci95 [W/m^2]`]),
+      // The continuum models' predictions of the same quantities, next to the DSMC numbers.
+      ...predicted.flatMap(({ w, q, unit }) => models.map((m) => `${w} ${q} ${m} [${unit}]`)),
     ]);
     expect(rows).toHaveLength(3);
     expect(rows.map((row) => Number(row[1]))).toEqual([0.5, 1, 2]);
@@ -71,7 +75,8 @@ describe('tenuis sweep', () => {
       expect(sweep.points[k].summary).toEqual(s);
       expect(Math.abs(s.reference.knudsen / Number(row[1]) - 1)).toBeLessThan(1e-12);
       expect(row.slice(0, 6)).toEqual([String(k + 1), row[1], 'complete', cell(s.reference.knudsen), cell(s.reference.rarefaction), cell(s.reference.pressure)]);
-      expect(row.slice(6)).toEqual(['bottom', 'top'].flatMap((w) => ['shearStress', 'heatFlux'].flatMap((q) => [cell(s.walls[w][q].mean), cell(s.walls[w][q].ci95)])));
+      expect(row.slice(6, 14)).toEqual(['bottom', 'top'].flatMap((w) => ['shearStress', 'heatFlux'].flatMap((q) => [cell(s.walls[w][q].mean), cell(s.walls[w][q].ci95)])));
+      expect(row.slice(14)).toEqual(predicted.flatMap(({ w, q }) => models.map((m) => cell(s.continuum[m][`walls.${w}.${q}`]))));
       // The point's case.json runs the point again: the same pressures, scaled from the case's by Kn_case / Kn_k = 1 / Kn_k.
       const c = json(join(folder, 'case.json'));
       expect(c.initial.pressurePa).toBeCloseTo(json(couettePath).initial.pressurePa / Number(row[1]), 9);
@@ -97,10 +102,11 @@ describe('tenuis sweep', () => {
     const { header, rows } = readCsv(join(out, 'sweep.csv'));
     const flow = ['massFlowRate', 'throughput', 'molarFlow', 'conductance', 'transmissionProbability', 'reducedFlowRate'];
     const units = ['kg/(s m)', 'Pa m^2/s', 'sccm/m', 'm^2/s', '1', '1'];
-    expect(header.slice(6)).toEqual(flow.flatMap((q, i) => [`${q} [${units[i]}]`, `${q} ci95 [${units[i]}]`]));
+    expect(header.slice(6, 18)).toEqual(flow.flatMap((q, i) => [`${q} [${units[i]}]`, `${q} ci95 [${units[i]}]`]));
+    expect(header.slice(18)).toContain('reducedFlowRate firstOrder [1]');
     expect(rows).toHaveLength(1);
     const s = json(join(out, 'points', '001', 'summary.json'));
-    expect(rows[0].slice(6)).toEqual(flow.flatMap((q) => [cell(s.flow[q]?.mean), cell(s.flow[q]?.ci95)]));
+    expect(rows[0].slice(6, 18)).toEqual(flow.flatMap((q) => [cell(s.flow[q]?.mean), cell(s.flow[q]?.ci95)]));
     expect(Number(rows[0][6])).toBeGreaterThan(0); // mass flow along +x, the direction of the body force
     expect(rows[0][12]).toBe(''); // no conductance without a pressure difference
   });
