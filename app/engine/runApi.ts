@@ -94,7 +94,7 @@ type LiveReplicas = Map<number, Remote<ReplicaApi>>;
  * Wraps the browser factory: reports a lost worker at once, lists running replicas for the live views, and applies
  * the test hook that fails one on purpose.
  */
-function observedFactory(onLost: (stream: number, reason: string) => void, hooks: TenuisTestHooks | undefined, live: LiveReplicas): ReplicaFactory {
+function observedFactory(onLost: (stream: number, reason: string) => void, kills: Map<number, () => void>, live: LiveReplicas): ReplicaFactory {
   const base = browserReplicaFactory();
   return (stream) => {
     const handle = base(stream);
@@ -109,13 +109,10 @@ function observedFactory(onLost: (stream: number, reason: string) => void, hooks
       for (const l of listeners) l(reason);
     };
     handle.onFailure(fail);
-    const forced = hooks?.failReplica;
-    if (forced && forced.stream === stream) {
-      setTimeout(() => {
-        handle.terminate();
-        fail('its worker was stopped by the test hook failReplica');
-      }, forced.afterMs);
-    }
+    kills.set(stream, () => {
+      handle.terminate();
+      fail('its worker was stopped by the test hook failReplica');
+    });
     return {
       api: handle.api,
       onFailure: (l) => void listeners.push(l),
@@ -220,16 +217,27 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
   };
 
   const liveReplicas: LiveReplicas = new Map();
+  const kills = new Map<number, () => void>();
+  // The test hook: fail one replica's worker afterMs after it first reported sampling (so always mid-run).
+  const forced = request.hooks?.failReplica;
+  let forcedTimer: ReturnType<typeof setTimeout> | null = null;
+  const maybeForceFailure = (p: PoolProgress) => {
+    if (!forced || forcedTimer !== null || p.replicas[forced.stream]?.phase !== 'sampling') return;
+    forcedTimer = setTimeout(() => kills.get(forced.stream)?.(), forced.afterMs);
+  };
   const pool = runReplicaPool({
     caseInput: request.caseInput,
     replicas: request.replicas,
     createReplica: observedFactory((stream, reason) => {
       lostReasons.set(stream, reason);
       callbacks.onReplicaLost(stream, reason);
-    }, request.hooks, liveReplicas),
+    }, kills, liveReplicas),
     // Safety snapshots for lost workers; no stopping check, so the pool merges nothing on this thread meanwhile.
     snapshotEveryMs: Math.max(1000, request.liveEveryMs),
-    onProgress: (p) => callbacks.onProgress(progressView(p)),
+    onProgress: (p) => {
+      maybeForceFailure(p);
+      callbacks.onProgress(progressView(p));
+    },
   });
   const liveViews = startLiveViews(liveReplicas, request.liveEveryMs, callbacks.onLive);
 

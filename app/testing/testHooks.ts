@@ -4,7 +4,7 @@
  * once when it starts, and without it the app behaves exactly as for a user.
  */
 export interface TenuisTestHooks {
-  /** Terminates replica `stream`'s worker `afterMs` milliseconds after it starts, as if it had crashed. */
+  /** Terminates replica `stream`'s worker `afterMs` milliseconds after it first reports sampling, as if it had crashed. */
   readonly failReplica?: { readonly stream: number; readonly afterMs: number };
 }
 

@@ -25,9 +25,9 @@ test('stopping a run mid-way keeps what was sampled, marked as stopped', async (
 
 test('a replica whose worker fails leaves the others running, and the page says so', async ({ workbench: w, page }) => {
   test.setTimeout(90_000);
-  // The one typed test hook (app/testing/testHooks.ts): stop replica 1's worker 2.5 s after it starts.
+  // The one typed test hook (app/testing/testHooks.ts): stop replica 1's worker 1.5 s after it starts sampling.
   await page.addInitScript(() => {
-    (window as unknown as { __tenuisTestHooks: unknown }).__tenuisTestHooks = { failReplica: { stream: 1, afterMs: 2500 } };
+    (window as unknown as { __tenuisTestHooks: unknown }).__tenuisTestHooks = { failReplica: { stream: 1, afterMs: 1500 } };
   });
   await w.open();
   await w.pickExample('mems-damping-gap');
