@@ -32,7 +32,7 @@ export function FieldMapPanel({ result }: { result: SimulationResult }) {
     return [{ type: 'heatmap', x, y, z, colorscale: 'Viridis', colorbar: { title: { text: `${name} [${t.units[f]}]`, side: 'right' } } }];
   }, [result, t, f, name, cellsX, cellsY, len.factor]);
   const layout = useMemo((): Partial<Layout> => ({
-    xaxis: { title: { text: `x [${len.unit}] (bottom wall below, top wall above)` }, constrain: 'domain' },
+    xaxis: { title: { text: `x [${len.unit}]` }, constrain: 'domain' },
     yaxis: { title: { text: `y [${len.unit}]` } },
     height: 380,
   }), [len.unit]);

@@ -87,3 +87,22 @@ test('a user picks the MEMS damping example, sets Kn, runs it in Web Workers and
   expect(summary.units.shearStress).toBe('Pa');
   expect(summary.numerics.cellsY).toBe(20);
 });
+
+test('the round-tube example, made tiny, gives flow numbers with uncertainties and units, and a field map of the duct', async ({ workbench: w, page }) => {
+  test.setTimeout(90_000);
+  await w.open();
+  await w.pickExample('roughing-line-stub');
+  await expect(w.param('radius')).toHaveValue('2');
+  await expect(page.getByLabel('radius unit')).toHaveValue('mm');
+  // Coarse on purpose: the advisor marks it.
+  await w.setParams({ knudsen: '1', cellsY: '8', particlesPerCell: '20', transientSteps: '300', sampleSteps: '3000' });
+  await expect(page.getByTestId('plan-review').getByLabel('numerics advisor')).toContainText('warn');
+  await w.runToEnd();
+  const flow = page.getByTestId('flow-numbers');
+  await expect(flow).toContainText('mass flow rate [kg/s]');
+  await expect(flow).toContainText('conductance [m^3/s]');
+  await expect(flow).toContainText(/\d ± \d/);
+  await expect(page.getByTestId('result-facts')).toContainText('Kn = 1.000');
+  await w.showAllPlots();
+  await w.screenshot('view-results-tube');
+});
