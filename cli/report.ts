@@ -90,6 +90,20 @@ export function runSummary(result: SimulationResult, performance: Performance, o
     if (!e) continue;
     lines.push(`  ${wall} wall: shear stress ${plusMinus(e.shearStress.mean, e.shearStress.ci95, 'Pa')}, heat flux ${plusMinus(e.heatFlux.mean, e.heatFlux.ci95, 'W/m^2')}`);
   }
+  const f = result.flow;
+  if (f) {
+    const per = result.axisymmetric ? '' : ' per m depth';
+    const v = f.values;
+    const show = (label: string, e: { mean: number; ci95: number } | undefined, factor: number, unit: string) =>
+      e && lines.push(`  ${label}: ${plusMinus(e.mean * factor, e.ci95 * factor, unit)}${per}`);
+    lines.push(`  flow through section ${f.section}:`);
+    show('  mass flow rate', v.massFlowRate, 1, 'kg/s');
+    show('  molar flow', v.molarFlow, 1, 'sccm');
+    show('  throughput', v.throughput, 10, 'mbar L/s');
+    show('  conductance', v.conductance, 1000, 'L/s');
+    if (v.transmissionProbability) lines.push(`    transmission probability: ${plusMinus(v.transmissionProbability.mean, v.transmissionProbability.ci95, '')}`);
+    if (v.reducedFlowRate) lines.push(`    reduced flow rate G_P: ${plusMinus(v.reducedFlowRate.mean, v.reducedFlowRate.ci95, '')}`);
+  }
   lines.push(`results in ${outDir}`);
   return lines.join('\n');
 }

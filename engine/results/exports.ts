@@ -20,6 +20,7 @@ import type { Plan, ReferenceState } from '../case/plan';
 import { continuumComparisonOf, type ContinuumComparisonResult } from '../continuum/comparison';
 import type { QuantityVerdict } from '../continuum/verdict';
 import { FLOW_QUANTITIES, flowQuantityUnits, type FlowResult } from './flowQuantities';
+import { flowCsv } from './flowCsv';
 import type { SimulationResult, FieldTable, IntegralEstimate } from './summarize';
 import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, type WallQuantityName } from './wallQuantities';
 
@@ -367,5 +368,6 @@ export function resultFiles(result: SimulationResult, extra: SummaryExtra & { pl
     'profiles.csv': profilesCsv(result, comparison),
     'fields.csv': fieldsCsv(result),
     'surfaces.csv': surfacesCsv(result),
+    ...(result.flow ? { 'flow.csv': flowCsv(result.flow, !result.axisymmetric) } : {}),
   };
 }
