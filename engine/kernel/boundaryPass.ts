@@ -3,7 +3,7 @@
  * changed row, this step's reservoir molecules, and the removal of every particle that left or was deleted.
  * Removal swaps the last particle into each freed slot, in descending slot order, so no slot is visited twice.
  */
-import { type SimState } from './state';
+import { type SimState, copyParticle } from './state';
 import { flyAndSettle, reweight, rowOf } from './settle';
 import { injectReservoirMolecules } from './inflow';
 
@@ -28,15 +28,7 @@ function removeParticles(st: SimState): void {
   for (let k = doomed.length - 1; k >= 0; k--) {
     const i = doomed[k];
     const last = st.count - 1;
-    if (i !== last) {
-      st.x[i] = st.x[last];
-      st.y[i] = st.y[last];
-      st.vx[i] = st.vx[last];
-      st.vy[i] = st.vy[last];
-      st.vz[i] = st.vz[last];
-      st.erot[i] = st.erot[last];
-      st.key[i] = st.key[last];
-    }
+    if (i !== last) copyParticle(st, last, i);
     st.count--;
   }
   st.removeCount = 0;

@@ -3,7 +3,7 @@
  * it changed row in an axisymmetric domain, and its sub-cell key and count for the index step. Rare work (a few per
  * cent of particles per step), so it may call helpers.
  */
-import { type SimState, addParticle } from './state';
+import { type SimState, addParticle, copyParticle } from './state';
 import { flyParticle, FLIGHT_LEFT_DOMAIN } from './flight';
 import { keyOf } from './move';
 
@@ -40,16 +40,8 @@ export function reweight(st: SimState, i: number, fromRow: number, toRow: number
   }
   for (let c = 1; c < kept; c++) {
     const j = addParticle(st);
-    st.x[j] = st.x[i];
-    st.y[j] = st.y[i];
-    st.vx[j] = st.vx[i];
-    st.vy[j] = st.vy[i];
-    st.vz[j] = st.vz[i];
-    st.erot[j] = st.erot[i];
-    if (indexed) {
-      st.key[j] = st.key[i];
-      st.keyCount[st.key[j]]++;
-    }
+    copyParticle(st, i, j);
+    if (indexed) st.keyCount[st.key[j]]++;
   }
 }
 

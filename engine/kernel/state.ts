@@ -384,6 +384,17 @@ function fillInitialGas(st: SimState, plan: Plan): void {
   }
 }
 
+/** Copies particle `from` (position, velocity, rotational energy, sub-cell key) into slot `to`. */
+export function copyParticle(st: SimState, from: number, to: number): void {
+  st.x[to] = st.x[from];
+  st.y[to] = st.y[from];
+  st.vx[to] = st.vx[from];
+  st.vy[to] = st.vy[from];
+  st.vz[to] = st.vz[from];
+  st.erot[to] = st.erot[from];
+  st.key[to] = st.key[from];
+}
+
 /** Appends one particle slot (growing the arrays by doubling when full) and returns its index. */
 export function addParticle(st: SimState): number {
   if (st.count === st.capacity) growParticles(st, st.capacity * 2);
