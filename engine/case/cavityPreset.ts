@@ -1,8 +1,8 @@
 /**
  * Preset `cavity`: the lid-driven square cavity in DSMC. A planar square of side L with walls on all four sides at
  * one temperature; the lid is the top side (y = L), moving along +x at the lid speed U; the left, right and bottom
- * walls are at rest. The case's sides keep their usual names, so results name the lid `top` (walls.top,
- * surfaces.csv rows `top`) and the other walls `left`, `right` and `bottom`.
+ * walls are at rest. The lid reports as `lid` (walls.lid, surfaces.csv rows `lid`: the top side's wall is named so) and
+ * the other walls as `left`, `right` and `bottom`.
  *
  * The gas state is set from the Knudsen number on the side, Kn = λ/L with the viscosity-based mean free path
  * λ = (μ/p)·sqrt(πkT/(2m)) (presetParameters.ts pressureForKnudsenPa). The continuum comparison
@@ -33,7 +33,7 @@ function wallOf(v: PresetValues, speedXMPerS: number): Wall {
 
 export const cavity: Preset = {
   name: 'cavity',
-  description: 'lid-driven square cavity: gas in a square box whose top wall (the lid, reported as `top`) slides along +x; the other walls (left, right, bottom) are at rest',
+  description: 'lid-driven square cavity: gas in a square box whose top wall (the lid, reported as `lid`) slides along +x; the other walls (left, right, bottom) are at rest',
   parameters: [
     gasParameter,
     modelParameter,
@@ -70,7 +70,7 @@ export const cavity: Preset = {
       gas: { species: v.gas as SpeciesId, model: v.model as CollisionModelKind },
       initial: { pressurePa: pressureForKnudsenPa(model, t, v.knudsen as number, side), temperatureK: t },
       domain: { lengthXM: side, lengthYM: side, characteristicLengthM: side },
-      boundaries: { left: wallOf(v, 0), right: wallOf(v, 0), bottom: wallOf(v, 0), top: wallOf(v, u) },
+      boundaries: { left: wallOf(v, 0), right: wallOf(v, 0), bottom: wallOf(v, 0), top: { ...wallOf(v, u), name: 'lid' } },
       numerics,
       sampling,
       seed: v.seed as number,

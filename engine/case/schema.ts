@@ -55,9 +55,14 @@ const gas = z
     }
   });
 
+/** Names that results use as keys (walls.NAME, flow.sections.NAME): letters first, then letters, digits, _ and -. */
+const RESULT_NAME = /^[A-Za-z][A-Za-z0-9_-]*$/;
+
 const wall = z
   .strictObject({
     type: z.literal('wall'),
+    /** The name results report this wall under (e.g. `lid`); a side's own name (top …) when left out. */
+    name: z.string().regex(RESULT_NAME, { error: 'a wall name must start with a letter and hold only letters, digits, _ and -' }).optional(),
     model: z.enum(WALL_MODELS, { error: `wall model must be one of ${WALL_MODELS.join(', ')}` }).default('diffuse'),
     temperatureK: positive('wall temperature (K)'),
     velocityMPerS: velocity,
@@ -106,9 +111,8 @@ const boundary = z.discriminatedUnion(
   { error: 'boundary type must be wall, periodic, symmetry, reservoir, axis or pressureOutlet' },
 );
 
-const NAME_PATTERN = /^[A-Za-z][A-Za-z0-9_-]*$/;
 const identifier = (what: string) =>
-  z.string({ error: `${what} must be a name` }).regex(NAME_PATTERN, { error: `${what} must start with a letter and hold only letters, digits, _ and -` });
+  z.string({ error: `${what} must be a name` }).regex(RESULT_NAME, { error: `${what} must start with a letter and hold only letters, digits, _ and -` });
 const coordinate = (what: string) => z.number({ error: `${what} must be a number (m)` }).finite().min(0, { error: `${what} must be 0 or more (m, measured from the domain's lower left corner)` });
 
 export const BLOCK_FACES = ['left', 'right', 'bottom', 'top'] as const;
@@ -229,6 +233,12 @@ function checkGeometry(c: CaseDraft, report: Report): void {
   const axisymmetric = c.domain.geometry === 'axisymmetric';
   const b = c.boundaries;
   const names = new Set<string>(SIDE_NAMES);
+  for (const side of SIDE_NAMES) {
+    const s = b[side];
+    if (s.type !== 'wall' || s.name === undefined || s.name === side) continue;
+    if (names.has(s.name) || (SIDE_NAMES as readonly string[]).includes(s.name)) report(`wall name "${s.name}" is already used; give each wall its own name`, ['boundaries', side, 'name']);
+    names.add(s.name);
+  }
   c.blocks.forEach((k, i) => {
     const at = ['blocks', i];
     if (names.has(k.name)) report(`block name "${k.name}" is used twice (or is a side's name); give each block its own name`, [...at, 'name']);

@@ -16,7 +16,7 @@ import type { Case, BoundarySpec, WallSpec } from '../case/schema';
 import { SIDE_NAMES, BLOCK_FACES } from '../case/schema';
 
 export interface SurfacePlan {
-  /** Side name (left …) or BLOCK.FACE for block faces; walls report under this name. */
+  /** Side name (left …, or the wall's own `name`) or BLOCK.FACE for block faces; walls report under this name. */
   readonly name: string;
   readonly spec: BoundarySpec;
   /** Block index for block faces, −1 for the domain's sides. */
@@ -48,9 +48,10 @@ export function surfacesOf(c: Case, cellSizeXM: number, cellSizeYM: number): Sur
   const { lengthXM: lx, lengthYM: ly } = c.domain;
   const out: SurfacePlan[] = SIDE_NAMES.map((side) => {
     const normalIsX = side === 'left' || side === 'right';
+    const spec = c.boundaries[side];
     return {
-      name: side,
-      spec: c.boundaries[side],
+      name: spec.type === 'wall' && spec.name !== undefined ? spec.name : side,
+      spec,
       block: -1,
       normalIsX,
       inward: side === 'left' || side === 'bottom' ? 1 : -1,
