@@ -5,7 +5,7 @@
  */
 import type { Case, SideName, BoundarySpec } from './schema';
 import { SIDE_NAMES, parseCase } from './schema';
-import { cellGeometryOf, type BlockRectangle, type CellGeometry } from '../geometry/cellGeometry';
+import { cellGeometryOf, gasVolumeOfBoxM3, boxVolumeM3, type BlockRectangle, type CellGeometry } from '../geometry/cellGeometry';
 import { surfacesOf, type SurfacePlan } from '../geometry/surfaces';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import {
@@ -218,6 +218,18 @@ export function plan(c: Case): PlanResult {
   if (resolved(cellsY, b.bottom, b.top)) resolvedSizes.push(dy);
   const largestCell = resolvedSizes.length ? Math.max(...resolvedSizes) : Math.max(dx, dy);
   const blocks: BlockRectangle[] = c.blocks.map((k) => ({ x0: k.xMinM, x1: k.xMaxM, y0: k.yMinM, y1: k.yMaxM }));
+  // Refuse a grid far beyond the particle budget before building it cell by cell (millions of cells take seconds).
+  const gasShare = gasVolumeOfBoxM3(0, lx, 0, ly, blocks, axisymmetric) / boxVolumeM3(0, lx, 0, ly, axisymmetric);
+  const roughParticles = cellsX * cellsY * (c.numerics.particlesPerCell ?? 30) * gasShare;
+  if (roughParticles > 2 * c.numerics.maxParticles) {
+    return {
+      ok: false,
+      errors: [
+        `numerics: ${cellsX} × ${cellsY} cells at about ${c.numerics.particlesPerCell ?? 30} particles each need about ${Math.round(roughParticles)} particles, ` +
+          `far more than numerics.maxParticles (${c.numerics.maxParticles}); use fewer or larger cells (numerics.cellsX/cellsY), a higher Knudsen number or a smaller domain`,
+      ],
+    };
+  }
   const cellGeometry = cellGeometryOf(cellsX, cellsY, lx, ly, blocks, axisymmetric);
   const surfaces = surfacesOf(c, dx, dy);
   const smallestCell = resolvedSizes.length ? Math.min(...resolvedSizes) : Math.min(dx, dy);
