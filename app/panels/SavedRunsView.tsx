@@ -23,11 +23,13 @@ function SavedRunRow({ run }: { run: SavedRunMeta }) {
       <td>{run.replicas}</td>
       <td>{countText(run.sampledSteps)}</td>
       <td>{new Date(run.finishedAt).toLocaleString()}</td>
-      <td className="actions">
+      <td>
+        <div className="actions">
         <button type="button" onClick={() => void openSavedRun(appStore, run.id)}>Open</button>
         <button type="button" onClick={() => void compareWithSavedRun(appStore, run.id).then(() => appStore.getState().setView('results'))}>Overlay on shown result</button>
         <button type="button" onClick={() => setEditing(true)}>Rename</button>
         <button type="button" onClick={() => { if (window.confirm(`Delete the saved run “${run.name}”?`)) void deleteSavedRun(appStore, run.id); }}>Delete</button>
+        </div>
       </td>
     </tr>
   );
