@@ -52,11 +52,17 @@ function countSections(st: SimState, x0: number, y0: number, x1: number, y1: num
   }
 }
 
-/** First positive time at which r(t)² = p² + 2 p v t + a t² reaches R² from inside (p ≤ R), or Infinity. */
-function timeToCylinderFromInside(p: number, v: number, a: number, radius: number): number {
+/**
+ * Time at which r(t)² = p² + 2 p v t + a t² rises through R² (the later root), or Infinity if it never does from
+ * now on. r² is convex in t, so the line crosses the cylinder outward at most once — also when it starts outside it
+ * (p > R), dips inside and comes back out, which is how a molecule can meet the inner face of a ring from below.
+ */
+function timeToCylinderOutward(p: number, v: number, a: number, radius: number): number {
   if (a <= 0) return Infinity;
   const disc = p * p * v * v - a * (p * p - radius * radius);
-  return disc < 0 ? Infinity : (-p * v + Math.sqrt(disc)) / a;
+  if (disc < 0) return Infinity;
+  const t = (-p * v + Math.sqrt(disc)) / a;
+  return t >= 0 ? t : Infinity;
 }
 
 /** First positive time at which r(t) falls to R from outside (p ≥ R), or Infinity when the path passes outside. */
@@ -105,7 +111,7 @@ export function flyParticle(st: SimState, i: number, dt: number, weight: number)
       if (t < tHit) { tHit = t; row = SIDE_LEFT; }
     }
     if (axi) {
-      const t = timeToCylinderFromInside(py, vyi, a, ly);
+      const t = timeToCylinderOutward(py, vyi, a, ly);
       if (t < tHit) { tHit = t; row = SIDE_TOP; }
     } else if (vyi > 0) {
       const t = (ly - py) / vyi;
@@ -134,9 +140,10 @@ export function flyParticle(st: SimState, i: number, dt: number, weight: number)
           if (yh >= y0 && yh <= y1) { tHit = t; row = base + 1; }
         }
       }
-      // The bottom face: met from below. In axisymmetric domains a block on the axis (y0 = 0) has no such face.
-      if (py <= y0 && (axi ? y0 > 0 : vyi > 0)) {
-        const t = axi ? timeToCylinderFromInside(py, vyi, a, y0) : (y0 - py) / vyi;
+      // The bottom face: met from below. In axisymmetric domains a block on the axis (y0 = 0) has no such face, and a
+      // molecule that starts above it may dip below and meet it on the way out.
+      if (axi ? y0 > 0 : py <= y0 && vyi > 0) {
+        const t = axi ? timeToCylinderOutward(py, vyi, a, y0) : (y0 - py) / vyi;
         if (t < tHit) {
           const xh = px + vxi * t;
           if (xh >= x0 && xh <= x1) { tHit = t; row = base + 2; }

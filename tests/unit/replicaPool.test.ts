@@ -46,7 +46,8 @@ describe('replica pool on worker threads', () => {
     const workers: { terminate(): Promise<number> }[] = [];
     let samplingSince: number | undefined;
     const pool = runReplicaPool({
-      caseInput: smallCouette(200_000),
+      // Long enough that replica 0 is still running when the test cancels it (the run is cancelled, so length is free).
+      caseInput: smallCouette(5_000_000),
       replicas: 2,
       snapshotEveryMs: 200,
       chunkMilliseconds: 20,
