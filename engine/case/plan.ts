@@ -225,8 +225,8 @@ export function plan(c: Case): PlanResult {
     return {
       ok: false,
       errors: [
-        `numerics: ${cellsX} × ${cellsY} cells at about ${c.numerics.particlesPerCell ?? 30} particles each need about ${Math.round(roughParticles)} particles, ` +
-          `far more than numerics.maxParticles (${c.numerics.maxParticles}); use fewer or larger cells (numerics.cellsX/cellsY), a higher Knudsen number or a smaller domain`,
+        `numerics.particlesPerCell: ${cellsX} × ${cellsY} cells at about ${c.numerics.particlesPerCell ?? 30} particles each need about ${Math.round(roughParticles)} particles, ` +
+          `far more than numerics.maxParticles (${c.numerics.maxParticles}); use fewer or larger cells (numerics.cellsX/cellsY), fewer particles per cell, a higher Knudsen number or a smaller domain`,
       ],
     };
   }
