@@ -25,14 +25,16 @@ test('stopping a run mid-way keeps what was sampled, marked as stopped', async (
 
 test('a replica whose worker fails leaves the others running, and the page says so', async ({ workbench: w, page }) => {
   test.setTimeout(90_000);
-  // The one typed test hook (app/testing/testHooks.ts): stop replica 1's worker 1.5 s after it starts sampling.
+  // The one typed test hook (app/testing/testHooks.ts): stop replica 1's worker 0.3 s after it starts sampling. The
+  // sampling is long enough (600 000 steps) that on an idle machine, where the tiny case runs fast, the worker is
+  // still sampling then (120 000 steps were over within 1.5 s in a CI run).
   await page.addInitScript(() => {
-    (window as unknown as { __tenuisTestHooks: unknown }).__tenuisTestHooks = { failReplica: { stream: 1, afterMs: 1500 } };
+    (window as unknown as { __tenuisTestHooks: unknown }).__tenuisTestHooks = { failReplica: { stream: 1, afterMs: 300 } };
   });
   await w.open();
   await w.pickExample('mems-damping-gap');
   await page.locator('#replica-count').fill('2');
-  await w.setParams({ ...TINY, sampleSteps: '120000' });
+  await w.setParams({ ...TINY, sampleSteps: '600000' });
   await w.runButton().click();
   await expect(page.getByRole('status').filter({ hasText: 'Replica 1 stopped' })).toBeVisible({ timeout: 30_000 });
   await expect(page.getByTestId('replica-1')).toContainText('lost');
