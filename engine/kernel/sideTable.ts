@@ -4,8 +4,9 @@
  * state.ts.
  *
  * Built from the plan alone (no particles), so sampled sums can be reduced to wall quantities without a live state
- * (results/samplingGeometry.ts). state.ts imports this module and this one reads state.ts's constants: the cycle is
- * harmless because neither uses the other's bindings while it loads, only when a function is called.
+ * (results/samplingGeometry.ts). state.ts reaches this module through samplingGeometry.ts and this one reads
+ * state.ts's constants: the cycle is harmless because neither uses the other's bindings while it loads, only when a
+ * function is called.
  */
 import type { Plan } from '../case/plan';
 import type { SurfacePlan } from '../geometry/surfaces';

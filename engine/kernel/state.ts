@@ -12,8 +12,7 @@ import type { Plan } from '../case/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { createRng, uniform, standardNormal, rotationalEnergyOverKT, type RngState } from '../particles/rng';
 import { sigmaCrCoefficient } from '../gas/molecularModel';
-import { buildSideTable } from './sideTable';
-import type { SamplingGeometry } from '../results/samplingGeometry';
+import { geometryOf, wallBinTotalOf, type SamplingGeometry } from '../results/samplingGeometry';
 import { insideBlock, type BlockRectangle } from '../geometry/cellGeometry';
 import { inflowTableOf, INFLOW_STRIDE } from '../geometry/inflow';
 import { initialOutletMoments } from './pressureOutlet';
@@ -240,13 +239,16 @@ export function createState(plan: Plan, stream = 0): SimState {
   const main = particleArrays(capacity);
   const rng = createRng(plan.seed, stream);
 
-  const { sideTable, wallBinTotal } = buildSideTable(plan);
+  // The sampling geometry (grid, weights, side table, names) is the plan's, as results/samplingGeometry.ts derives it.
+  const geometry = geometryOf(plan);
+  const wallBinTotal = wallBinTotalOf(geometry);
   const cg = g.cells;
   const inflowTable = inflowTableOf(plan);
   const sections = plan.caseData.flowSections;
 
   const m = plan.gas.model;
   const st: SimState = {
+    ...geometry,
     count: 0,
     capacity,
     ...main,
@@ -261,12 +263,9 @@ export function createState(plan: Plan, stream = 0): SimState {
     weightFromRow: new Int32Array(capacity),
     weightCount: 0,
     weightCarry: new Float64Array(g.cellsY),
-    axisymmetric: g.axisymmetric,
     cellSizeX: g.cellSizeXM,
     cellSizeY: g.cellSizeYM,
     rowWeight: cg.rowWeights,
-    cellWeights: cg.weights,
-    cellVolumes: cg.gasVolumesM3,
     selectionFactor: cg.gasVolumesM3.map((v, c) => (v > 0 ? (0.5 * plan.moleculesPerParticle * cg.weights[c] * plan.timeStepS) / v : 0)),
     blockTable: Float64Array.from(g.blocks.flatMap((b) => [b.x0, b.x1, b.y0, b.y1])),
     blockCount: g.blocks.length,
@@ -274,34 +273,21 @@ export function createState(plan: Plan, stream = 0): SimState {
     sectionTable: Float64Array.from(sections.flatMap((x) => [x.xM, x.yMinM ?? 0, x.yMaxM ?? g.lengthYM])),
     sectionCount: sections.length,
     sectionSums: new Float64Array(sections.length),
-    surfaceNames: plan.surfaces.map((f) => f.name),
-    sectionNames: sections.map((x) => x.name),
     inflowTable,
     inflowRemainder: new Float64Array(inflowTable.length / INFLOW_STRIDE),
     outletMoments: initialOutletMoments(plan, inflowTable),
     hasPressureOutlets: plan.surfaces.some((f) => f.spec.type === 'pressureOutlet'),
     bodyAccelerationX: plan.bodyAccelerationXMPerS2,
     leaks: 0,
-    cellsX: g.cellsX,
-    cellsY: g.cellsY,
-    cells,
     subcellsPerSide: g.subcellsPerCellSide,
     subcellsPerCell,
     subcolumnsPerM: (g.cellsX * g.subcellsPerCellSide) / g.lengthXM,
     subrowsPerM: (g.cellsY * g.subcellsPerCellSide) / g.lengthYM,
     ...keyTables(g.cellsX, g.cellsY, g.subcellsPerCellSide),
-    lengthX: g.lengthXM,
-    lengthY: g.lengthYM,
-    cellVolume: g.cellVolumeM3,
-    timeStep: plan.timeStepS,
-    massKg: m.massKg,
-    moleculesPerParticle: plan.moleculesPerParticle,
-    rotationalDof: m.rotationalDof,
     rotationalCollisionNumber: plan.gas.rotationalCollisionNumber,
     viscosityIndex: m.viscosityIndex,
     scatteringExponent: m.scatteringExponent,
     sigmaCrCoefficient: sigmaCrCoefficient(m),
-    sideTable,
     periodicX: plan.boundaries.left.type === 'periodic',
     periodicY: plan.boundaries.bottom.type === 'periodic',
     sigmaCrMax: new Float64Array(cells),
