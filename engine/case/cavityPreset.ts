@@ -13,7 +13,7 @@ import { CASE_SCHEMA_VERSION } from './schema';
 import type { SpeciesId } from '../gas/species';
 import { modelFromSpecies, type CollisionModelKind } from '../gas/molecularModel';
 import { formatQuantity } from '../units/engineeringUnits';
-import { type Preset, type PresetValues, gasParameter, modelParameter, knudsenParameter, pressureForKnudsenPa } from './presetParameters';
+import { type Preset, type PresetValues, gasParameter, modelParameter, knudsenParameter, pressureForKnudsenPa, presetSampling } from './presetParameters';
 
 export const CAVITY_WALL_MODELS = ['diffuse', 'maxwell'] as const;
 
@@ -60,9 +60,7 @@ export const cavity: Preset = {
       numerics.cellsY = v.cells as number;
     }
     if (v.particlesPerCell !== undefined) numerics.particlesPerCell = v.particlesPerCell as number;
-    const sampling: NonNullable<CaseInput['sampling']> = {};
-    if (v.transientSteps !== undefined) sampling.transientSteps = v.transientSteps as number;
-    if (v.sampleSteps !== undefined) sampling.sampleSteps = v.sampleSteps as number;
+    const sampling = presetSampling(v);
     return {
       schemaVersion: CASE_SCHEMA_VERSION,
       name: `cavity ${v.gas} Kn ${v.knudsen}`,

@@ -19,7 +19,7 @@ import { modelFromSpecies, mostProbableSpeedMPerS, type CollisionModelKind } fro
 import { formatQuantity } from '../units/engineeringUnits';
 import {
   type Preset, type PresetParameter, type PresetValues, gasParameter, modelParameter, knudsenParameter,
-  pressureForKnudsenPa, defaultGapNumerics,
+  pressureForKnudsenPa, defaultGapNumerics, presetSampling,
 } from './presetParameters';
 
 const temperatureParameter: PresetParameter = {
@@ -56,9 +56,7 @@ function common(v: PresetValues, pressurePa: number, lengthXM: number, lengthYM:
     numerics.cellsX = Math.max(1, Math.round(((v.cellsY as number) * lengthXM) / lengthYM));
   }
   if (v.particlesPerCell !== undefined) numerics.particlesPerCell = v.particlesPerCell as number;
-  const sampling: NonNullable<CaseInput['sampling']> = {};
-  if (v.transientSteps !== undefined) sampling.transientSteps = v.transientSteps as number;
-  if (v.sampleSteps !== undefined) sampling.sampleSteps = v.sampleSteps as number;
+  const sampling = presetSampling(v);
   return {
     schemaVersion: CASE_SCHEMA_VERSION,
     gas: { species: v.gas as SpeciesId, model: v.model as CollisionModelKind },

@@ -79,3 +79,11 @@ export function defaultGapNumerics(knudsen: number): { cellsY: number; particles
   return { cellsY, particlesPerCell, sampleSteps };
 }
 // ────────────────────────────────────────────────────────────────────────────────────────────────────────────────
+
+/** The sampling block of a preset's case from its transientSteps and sampleSteps parameters (left out when unset). */
+export function presetSampling(v: PresetValues): NonNullable<CaseInput['sampling']> {
+  const sampling: NonNullable<CaseInput['sampling']> = {};
+  if (v.transientSteps !== undefined) sampling.transientSteps = v.transientSteps as number;
+  if (v.sampleSteps !== undefined) sampling.sampleSteps = v.sampleSteps as number;
+  return sampling;
+}
