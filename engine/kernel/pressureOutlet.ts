@@ -60,8 +60,12 @@ export function updatePressureOutlets(st: SimState): void {
       n++; sx += vx; sy += vy; sz += vz; s2 += vx * vx + vy * vy + vz * vz;
     }
     const mo = g * MOMENTS;
-    const inst = [n, sx, sy, sz, s2];
-    for (let q = 0; q < MOMENTS; q++) moments[mo + q] += RELAXATION * (inst[q] - moments[mo + q]);
+    // Exponential running averages, written out: the step allocates nothing.
+    moments[mo] += RELAXATION * (n - moments[mo]);
+    moments[mo + 1] += RELAXATION * (sx - moments[mo + 1]);
+    moments[mo + 2] += RELAXATION * (sy - moments[mo + 2]);
+    moments[mo + 3] += RELAXATION * (sz - moments[mo + 3]);
+    moments[mo + 4] += RELAXATION * (s2 - moments[mo + 4]);
     const count = moments[mo];
     if (!(count > 0)) continue;
     const ux = moments[mo + 1] / count;
