@@ -3,7 +3,8 @@ import { requireChromium } from './tests/e2e/find-chromium.mjs';
 
 // Browser tests against the production build (`npm run build` first; tests/e2e/run-playwright.mjs
 // builds when dist/ is missing or stale). Uses a system Chromium, never a downloaded one.
-const port = 4173;
+// TENUIS_E2E_PORT lets two checkouts on one machine run their browser tests side by side.
+const port = Number(process.env.TENUIS_E2E_PORT ?? 4173);
 
 export default defineConfig({
   testDir: 'tests/e2e',
