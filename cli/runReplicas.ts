@@ -10,6 +10,7 @@ import { summarizeSamples, type SimulationResult } from '../engine/results/summa
 import { summaryJson } from '../engine/results/exports';
 import { evaluateStop, relativeHalfWidthOf, estimateRemaining, type PrecisionTarget } from '../engine/stats/stopping';
 import { duration } from './format';
+import { estimateAt } from '../engine/results/targetQuantities';
 import { nodeReplicaFactory } from '../workers/nodeReplica';
 import type { Progress } from './progress';
 
@@ -72,29 +73,6 @@ export interface StoppingOptions {
   readonly maxSeconds?: number;
   /** Sampling steps per replica (the step budget). */
   readonly maxSampleSteps?: number;
-}
-
-/**
- * Reads `walls.top.shearStress`, `walls.plate.left.heatFlux` or `flow.massFlowRate` style paths (as in summary.json)
- * from a result: the estimate, or undefined. Names may hold dots (block faces), so at each level the longest run of
- * segments that is a key wins.
- */
-export function estimateAt(result: SimulationResult, path: string): { mean: number; ci95: number } | undefined {
-  const flow = result.flow
-    ? { ...result.flow.values, sections: Object.fromEntries(Object.entries(result.flow.sections).map(([n, e]) => [n, { massFlowRate: e }])) }
-    : undefined;
-  let node: unknown = { walls: result.walls, flow };
-  const parts = path.split('.');
-  for (let at = 0; at < parts.length; ) {
-    if (node === null || typeof node !== 'object') return undefined;
-    let end = parts.length;
-    while (end > at && !Object.hasOwn(node, parts.slice(at, end).join('.'))) end--;
-    if (end === at) return undefined;
-    node = (node as Record<string, unknown>)[parts.slice(at, end).join('.')];
-    at = end;
-  }
-  const e = node as { mean?: unknown; ci95?: unknown };
-  return typeof e?.mean === 'number' && typeof e.ci95 === 'number' ? { mean: e.mean, ci95: e.ci95 } : undefined;
 }
 
 function checkStop(merged: SampleSet, elapsedSeconds: number, s: StoppingOptions, progress?: Progress): string | null {

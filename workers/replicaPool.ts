@@ -38,15 +38,20 @@ export interface ReplicaReport {
   readonly stepsDone: number;
   readonly particleSteps: number;
   readonly wallSeconds: number;
-  /** Its samples: final ones, or for a lost replica its last snapshot (null if it never took one). */
+  /**
+   * Its samples: final ones, or for a lost replica its last snapshot (null if it never took one). Null as well when
+   * the pool was asked not to decode (`decodeOnThisThread: false`): then only samplesFile holds them.
+   */
   readonly samples: SampleSet | null;
+  /** The same samples as the sample file the worker sent (engine/io/sampleFile.ts), or null; samples may view it. */
+  readonly samplesFile: ArrayBuffer | null;
 }
 
 export interface PoolOutcome {
   readonly replicas: readonly ReplicaReport[];
   /** Why the pool stopped the replicas early (a stopping rule), or null. */
   readonly stoppedBy: string | null;
-  /** All replicas' samples merged; null when no replica sampled anything. */
+  /** All replicas' samples merged; null when no replica sampled anything, or when asked not to decode. */
   readonly merged: SampleSet | null;
 }
 
@@ -65,6 +70,12 @@ export interface PoolOptions {
    * replica (keeping all samples), e.g. when a precision target is met.
    */
   readonly check?: (merged: SampleSet, elapsedSeconds: number) => string | null;
+  /**
+   * false: the pool neither decodes nor merges the final samples, and leaves them as sample files (samplesFile) for
+   * the caller to hand to another worker — decoding and merging a large grid is a long task a page's thread must
+   * not run. Default true (the command line).
+   */
+  readonly decodeOnThisThread?: boolean;
 }
 
 export interface ReplicaPoolRun {
@@ -82,6 +93,8 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
   const lastSnapshot: (ArrayBuffer | null)[] = new Array(options.replicas).fill(null);
   const finished: boolean[] = new Array(options.replicas).fill(false);
   const t0 = Date.now();
+  const decode = options.decodeOnThisThread !== false;
+  const decoded = (file: ArrayBuffer | null): SampleSet | null => (decode && file ? decodeSampleSet(file) : null);
   let stoppedBy: string | null = null;
   let checking = false;
   // One round of snapshots from every running replica: kept for fault safety, merged for the stopping check.
@@ -121,7 +134,7 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
       handle = options.createReplica(stream);
     } catch (e) {
       lost.push(stream);
-      return { stream, status: 'lost', reason: `could not start a worker: ${(e as Error).message}`, stepsDone: 0, particleSteps: 0, wallSeconds: 0, samples: null };
+      return { stream, status: 'lost', reason: `could not start a worker: ${(e as Error).message}`, stepsDone: 0, particleSteps: 0, wallSeconds: 0, samples: null, samplesFile: null };
     }
     handles[stream] = handle;
     const failure = new Promise<string>((resolve) => handle.onFailure(resolve));
@@ -136,7 +149,7 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
       const result = await Promise.race([started.then((o) => ({ ok: true as const, o })), failure.then((reason) => ({ ok: false as const, reason }))]);
       if (result.ok) {
         const o = result.o;
-        return { stream, status: o.end, stepsDone: o.stepsDone, particleSteps: o.particleSteps, wallSeconds: o.wallSeconds, samples: decodeSampleSet(o.samples) };
+        return { stream, status: o.end, stepsDone: o.stepsDone, particleSteps: o.particleSteps, wallSeconds: o.wallSeconds, samples: decoded(o.samples), samplesFile: o.samples };
       }
       return lostReport(stream, result.reason);
     } catch (e) {
@@ -159,7 +172,8 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
       stepsDone: p?.stepsDone ?? 0,
       particleSteps: p?.particleSteps ?? 0,
       wallSeconds: p?.elapsedSeconds ?? 0,
-      samples: snap ? decodeSampleSet(snap) : null,
+      samples: decoded(snap),
+      samplesFile: snap,
     };
   };
 

@@ -26,16 +26,32 @@ const api = {
   },
 };
 
+/** A finished run, summarised: the result, its samples as one sample file for saving, the comparison. */
+export interface FinishedSummary {
+  readonly result: SimulationResult;
+  readonly samples: ArrayBuffer;
+  readonly comparison: ContinuumComparisonResult;
+  /** Sampled steps of each file given, in order (0 for null or empty ones). */
+  readonly sampledSteps: readonly number[];
+}
+
 const finalApi = {
   /**
-   * A finished run's merged samples (a structured-cloned SampleSet): its summary, and the same samples as a sample
-   * file for saving. Done here so the page's thread neither encodes nor summarises.
+   * A finished run's sample files, one per replica (null for a replica that kept nothing): decoded, merged and
+   * summarised here, and the merged samples encoded again for saving — all work the page's thread must not do
+   * (decoding plans the case again; merging a large grid takes long). Null when no replica sampled anything.
    */
-  finish(merged: SampleSet): { result: SimulationResult; samples: ArrayBuffer; comparison: ContinuumComparisonResult } {
+  finishFiles(files: readonly (ArrayBuffer | null)[]): FinishedSummary | null {
+    const sets = files.map((b) => (b ? decodeSampleSet(b) : null));
+    const sampledSteps = sets.map((s) => s?.counters.sampledSteps ?? 0);
+    const sampled = sets.filter((s): s is SampleSet => s !== null && s.counters.sampledSteps > 0);
+    if (!sampled.length) return null;
+    // Merged like the replica pool merges on the command line, so both give the same numbers.
+    const merged = mergeSampleSets(sampled);
     const result = summarizeSamples(merged);
     const samples = encodeSampleSet(merged);
     const comparison = continuumComparisonOf(merged.plan, result);
-    return transfer({ result, samples, comparison }, [...buffersOf(result), samples]);
+    return transfer({ result, samples, comparison, sampledSteps }, [...buffersOf(result), samples]);
   },
 };
 Object.assign(api, finalApi);

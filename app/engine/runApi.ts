@@ -6,6 +6,10 @@
 import { runReplicaPool, type PoolProgress, type ReplicaReport } from '../../workers/replicaPool';
 import { defaultReplicaCount } from '../../workers/browserReplica';
 import { observedFactory, startLiveViews, type LiveReplicas } from './liveViews';
+import type { FinishedSummary } from './liveSummary.worker';
+import { transfer } from 'comlink';
+import { estimateAt } from '../../engine/results/targetQuantities';
+import { evaluateStop, estimateRemaining, relativeHalfWidthOf } from '../../engine/stats/stopping';
 import { planFromInput } from '../../engine/case/plan';
 import { summarizeSamples, type SimulationResult } from '../../engine/results/summarize';
 import { decodeSampleSet } from '../../engine/io/sampleFile';
@@ -39,13 +43,44 @@ export interface RunProgressView {
   readonly remainingSeconds: number;
   readonly inTransient: boolean;
   readonly replicas: readonly ReplicaView[];
+  /** The precision target's state, when the run has one. */
+  readonly target?: TargetView;
 }
+
+/** A precision target on one reported quantity (engine/stats/stopping.ts; paths as in summary.json). */
+export interface TargetRequest {
+  readonly path: string;
+  /** Goal for the 95 % half-width over |mean|, above 0 and at most 1. */
+  readonly relativeHalfWidth: number;
+  /**
+   * Stop every replica once the goal is met; the sampling budget is then TARGET_SAMPLE_CAP × the planned sampling,
+   * as for `tenuis run --target`.
+   */
+  readonly stopWhenReached: boolean;
+}
+
+export interface TargetView {
+  readonly path: string;
+  readonly goal: number;
+  /** Current 95 % half-width over |mean| of the live estimate; NaN until it has one, Infinity while it cannot say. */
+  readonly current: number;
+  readonly mean: number;
+  readonly ci95: number;
+  readonly reached: boolean;
+  /** Seconds of sampling still needed at the present rate (half-width ∝ 1/√samples); NaN when unknown, 0 once reached. */
+  readonly remainingSeconds: number;
+  readonly stopWhenReached: boolean;
+}
+
+/** With a target that stops the run: the sampling budget as a multiple of the planned sampling (as on the command line). */
+export const TARGET_SAMPLE_CAP = 50;
 
 export interface RunRequest {
   readonly caseInput: unknown;
   readonly replicas: number;
   /** Interval of the live views (merged snapshots of every replica), ms. */
   readonly liveEveryMs: number;
+  readonly target?: TargetRequest;
   readonly hooks?: TenuisTestHooks;
 }
 
@@ -73,7 +108,10 @@ export interface FinishedRun {
   readonly comparison: ContinuumComparisonResult;
   /** Warnings about the run itself (lost replicas, stopped early), also inside result.warnings. */
   readonly runWarnings: readonly string[];
+  /** Cancelled by the user (not by the precision target). */
   readonly cancelled: boolean;
+  /** Why the run ended before its budget by a rule of its own (the precision target), or null. */
+  readonly stoppedBy: string | null;
 }
 
 export type RunEnd = { ok: true; run: FinishedRun } | { ok: false; message: string };
@@ -88,7 +126,14 @@ export interface RunHandle {
 export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandle {
   const planned = planFromInput(request.caseInput);
   if (!planned.ok) return { done: Promise.resolve({ ok: false, message: planned.errors.join('\n') }), pause() {}, resume() {}, cancel() {} };
-  const plannedSampleSteps = planned.plan.sampleSteps;
+  const target = request.target;
+  const stopsAtTarget = target?.stopWhenReached === true;
+  const plannedSampleSteps = stopsAtTarget ? TARGET_SAMPLE_CAP * planned.plan.sampleSteps : planned.plan.sampleSteps;
+  let stoppedBy: string | null = null;
+  let targetView: TargetView | undefined = target && {
+    path: target.path, goal: target.relativeHalfWidth, current: NaN, mean: NaN, ci95: NaN, reached: false, remainingSeconds: NaN, stopWhenReached: stopsAtTarget,
+  };
+  let samplingSince: number | null = null;
   const t0 = performance.now();
   let pausedAt: number | null = null;
   let pausedMs = 0;
@@ -126,10 +171,17 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     const totalSteps = live ? total / live : 0;
     const elapsed = running();
     const fraction = totalSteps > 0 ? Math.min(1, stepsDone / totalSteps) : 0;
+    if (samplingSince === null && sampled > 0) samplingSince = elapsed;
+    let remainingSeconds = stepsDone > 0 ? (elapsed * (totalSteps - stepsDone)) / stepsDone : NaN;
+    let shownFraction = fraction;
+    // A run that ends at its target has a budget far beyond what it will use: the target's estimate says more.
+    if (stopsAtTarget && targetView && !inTransient && Number.isFinite(targetView.remainingSeconds)) {
+      remainingSeconds = Number.isFinite(remainingSeconds) ? Math.min(remainingSeconds, targetView.remainingSeconds) : targetView.remainingSeconds;
+      shownFraction = Math.max(fraction, elapsed / (elapsed + remainingSeconds));
+    }
     return {
-      stepsDone, totalSteps, sampledSteps: sampled, plannedSampleSteps, fraction, elapsedSeconds: elapsed,
-      remainingSeconds: stepsDone > 0 ? (elapsed * (totalSteps - stepsDone)) / stepsDone : NaN,
-      inTransient, replicas,
+      stepsDone, totalSteps, sampledSteps: sampled, plannedSampleSteps, fraction: shownFraction, elapsedSeconds: elapsed,
+      remainingSeconds, inTransient, replicas, target: targetView,
     };
   };
 
@@ -145,41 +197,64 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
   const pool = runReplicaPool({
     caseInput: request.caseInput,
     replicas: request.replicas,
+    ...(stopsAtTarget ? { sampleSteps: plannedSampleSteps } : {}),
     createReplica: observedFactory((stream, reason) => {
       lostReasons.set(stream, reason);
       callbacks.onReplicaLost(stream, reason);
     }, kills, liveReplicas),
     // Safety snapshots for lost workers; no stopping check, so the pool merges nothing on this thread meanwhile.
     snapshotEveryMs: Math.max(1000, request.liveEveryMs),
+    decodeOnThisThread: false,
     onProgress: (p) => {
       maybeForceFailure(p);
       callbacks.onProgress(progressView(p));
     },
   });
-  const liveViews = startLiveViews(liveReplicas, request.liveEveryMs, callbacks.onLive);
+  // The target is judged on each live view (summarised off this thread): no merging here for the stopping rule.
+  const onLive = (result: SimulationResult) => {
+    if (target && targetView) {
+      const estimate = estimateAt(result, target.path);
+      const decision = evaluateStop({ stepsDone: 0, elapsedSeconds: 0, target, estimate });
+      const current = estimate ? relativeHalfWidthOf(estimate) : NaN;
+      const reached = decision.rule === 'target';
+      const samplingSeconds = samplingSince === null ? 0 : running() - samplingSince;
+      const remainingSeconds = reached ? 0 : Number.isFinite(current) && current > 0 && result.numerics.sampleSteps > 0
+        ? estimateRemaining(current, target.relativeHalfWidth, result.numerics.sampleSteps, samplingSeconds).additionalSeconds ?? NaN
+        : NaN;
+      targetView = { ...targetView, current, mean: estimate?.mean ?? NaN, ci95: estimate?.ci95 ?? NaN, reached, remainingSeconds };
+      if (reached && stopsAtTarget && stoppedBy === null && !cancelled) {
+        stoppedBy = decision.reason;
+        pool.cancel();
+      }
+    }
+    callbacks.onLive(result);
+  };
+  const liveViews = startLiveViews(liveReplicas, request.liveEveryMs, onLive);
 
   const done = pool.done.then(async (outcome): Promise<RunEnd> => {
     liveViews.stop();
     const wallSeconds = (performance.now() - t0) / 1000;
-    if (!outcome.merged) {
-      liveViews.close();
-      return { ok: false, message: `no replica sampled anything: ${outcome.replicas.map((r) => `replica ${r.stream} ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('; ')}` };
-    }
-    // Summarised and encoded off this thread (the merged set crosses as a structured clone).
-    let finished: { result: SimulationResult; samples: ArrayBuffer; comparison: ContinuumComparisonResult };
+    // Decoded, merged, summarised and encoded off this thread; the files are transferred, not copied.
+    const files = outcome.replicas.map((r) => r.samplesFile);
+    let finished: FinishedSummary | null;
     try {
-      finished = await liveViews.summary.finish(outcome.merged);
+      finished = await liveViews.summary.finishFiles(transfer(files, [...new Set(files.filter((b): b is ArrayBuffer => b !== null))]));
     } finally {
       liveViews.close();
     }
-    const { result, samples, comparison } = finished;
-    const runWarnings: string[] = [];
-    for (const r of outcome.replicas) {
-      if (r.status === 'lost') {
-        runWarnings.push(`replica ${r.stream} was lost (${r.reason}); ${r.samples ? `its ${r.samples.counters.sampledSteps} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`);
-      }
+    if (!finished) {
+      return { ok: false, message: `no replica sampled anything: ${outcome.replicas.map((r) => `replica ${r.stream} ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('; ')}` };
     }
-    if (cancelled) runWarnings.push(`stopped by the user: the result holds the ${outcome.merged.counters.sampledSteps} steps sampled until then`);
+    const { result, samples, comparison, sampledSteps } = finished;
+    const runWarnings: string[] = [];
+    outcome.replicas.forEach((r, k) => {
+      if (r.status === 'lost') {
+        runWarnings.push(`replica ${r.stream} was lost (${r.reason}); ${sampledSteps[k] > 0 ? `its ${sampledSteps[k]} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`);
+      }
+    });
+    const totalSampled = sampledSteps.reduce((a, b) => a + b, 0);
+    if (stoppedBy !== null && !cancelled) runWarnings.push(`stopped early: ${stoppedBy}`);
+    if (cancelled) runWarnings.push(`stopped by the user: the result holds the ${totalSampled} steps sampled until then`);
     result.warnings.push(...runWarnings);
     const particleSteps = outcome.replicas.reduce((s, r) => s + r.particleSteps, 0);
     return {
@@ -188,10 +263,11 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
         result,
         samples,
         comparison,
-        replicas: outcome.replicas.map((r) => ({ stream: r.stream, status: r.status, reason: r.reason, stepsDone: r.stepsDone, sampledSteps: r.samples?.counters.sampledSteps ?? 0 })),
+        replicas: outcome.replicas.map((r, k) => ({ stream: r.stream, status: r.status, reason: r.reason, stepsDone: r.stepsDone, sampledSteps: sampledSteps[k] })),
         performance: { wallSeconds, particleSteps, particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN },
         runWarnings,
         cancelled,
+        stoppedBy: cancelled ? null : stoppedBy,
       },
     };
   });

@@ -1,7 +1,29 @@
 /** Progress of the run: bar, steps, samples, elapsed and remaining time, each replica's state, and notices. */
 import { countText, durationText } from '../format';
+import type { TargetView } from '../engine/runApi';
 import { pauseRun, resumeRun, stopRun } from '../run/runController';
 import { appStore, useApp } from '../store/appStore';
+
+function percentText(fraction: number): string {
+  return Number.isFinite(fraction) ? `${(100 * fraction).toPrecision(2)} %` : '—';
+}
+
+/** The precision target's current half-width against its goal, and the sampling time still needed for it. */
+function TargetRow({ target }: { target: TargetView }) {
+  const known = Number.isFinite(target.current);
+  const now = target.reached ? `±${percentText(target.current)}: goal met`
+    : known ? `±${percentText(target.current)} now; about ${durationText(target.remainingSeconds)} more sampling to the goal (estimate)`
+      : 'no estimate yet (too few batches)';
+  return (
+    <tr>
+      <th scope="row">precision of {target.path} (95 % half-width / |mean|)</th>
+      <td data-testid="progress-target" data-current={String(target.current)} data-goal={String(target.goal)} data-reached={String(target.reached)}>
+        <div>goal ±{percentText(target.goal)}; {now}{target.stopWhenReached ? '. The run stops when the goal is met.' : '.'}</div>
+        <meter min={0} max={1} value={known ? Math.min(1, target.goal / target.current) : 0} aria-label="precision reached towards the goal" />
+      </td>
+    </tr>
+  );
+}
 
 export function RunProgress() {
   const status = useApp((s) => s.status);
@@ -19,10 +41,11 @@ export function RunProgress() {
       {p && (
         <table className="kv" aria-label="progress numbers">
           <tbody>
-            <tr><th scope="row">steps (mean per replica)</th><td data-testid="progress-steps">{countText(p.stepsDone)} of {countText(p.totalSteps)}{p.inTransient ? ' (transient still running: total is an estimate)' : ''}</td></tr>
+            <tr><th scope="row">steps (mean per replica)</th><td data-testid="progress-steps">{countText(p.stepsDone)} of {p.target?.stopWhenReached ? 'at most ' : ''}{countText(p.totalSteps)}{p.inTransient ? ' (transient still running: total is an estimate)' : ''}</td></tr>
             <tr><th scope="row">sampled steps (all replicas)</th><td data-testid="progress-samples">{countText(p.sampledSteps)}</td></tr>
             <tr><th scope="row">elapsed</th><td>{durationText(p.elapsedSeconds)}</td></tr>
             <tr><th scope="row">remaining (estimate)</th><td>{status === 'finished' ? '0 s' : durationText(p.remainingSeconds)}</td></tr>
+            {p.target && <TargetRow target={p.target} />}
           </tbody>
         </table>
       )}

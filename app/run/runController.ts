@@ -6,6 +6,7 @@ import { loadRunApi } from '../engine/loadEngine';
 import type { RunHandle, FinishedRun } from '../engine/runApi';
 import { putResult } from '../results/resultCache';
 import { readTestHooks } from '../testing/testHooks';
+import { targetRequestOf } from './targetSetting';
 import { putRun, listRuns, saveSpeed } from '../io/db';
 import type { SavedRunRecord } from '../io/savedRun';
 import type { AppStore } from '../store/store';
@@ -30,6 +31,8 @@ export async function startRun(store: AppStore): Promise<void> {
   const s = store.getState();
   const caseInput = s.derived?.caseInput;
   if (!caseInput || !s.plan || active || ['starting', 'running', 'paused', 'stopping'].includes(s.status)) return;
+  const target = targetRequestOf(s.target, s.plan.targetPaths);
+  if (!target.ok) return;
   const id = newRunId();
   const caseName = String((caseInput as CaseInput).name);
   s.setRunState({ status: 'starting', progress: null, notices: [], runError: null });
@@ -41,7 +44,7 @@ export async function startRun(store: AppStore): Promise<void> {
   try {
     const api = await loadRunApi();
     const handle = api.startRun(
-      { caseInput, replicas, liveEveryMs: liveIntervalMs(s.plan.cellsX * s.plan.cellsY), hooks: readTestHooks() },
+      { caseInput, replicas, liveEveryMs: liveIntervalMs(s.plan.cellsX * s.plan.cellsY), target: target.request, hooks: readTestHooks() },
       {
         onProgress: (p) => {
           if (finished) return;

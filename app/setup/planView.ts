@@ -5,6 +5,7 @@
  */
 import { planFromInput, type ReferenceState } from '../../engine/case/plan';
 import { SIDE_NAMES } from '../../engine/case/schema';
+import { targetPathsOf } from '../../engine/results/targetQuantities';
 import {
   densityRelativeError,
   independentSamples,
@@ -48,6 +49,8 @@ export interface PlanView {
   /** Estimated wall time of the run, s, at particleStepsPerSecond per replica. */
   readonly estimatedSeconds: number;
   readonly warnings: readonly string[];
+  /** Quantities a precision target may name (paths as in summary.json, e.g. flow.massFlowRate). */
+  readonly targetPaths: readonly string[];
 }
 
 export interface PlanOptions {
@@ -109,6 +112,7 @@ export function describePlan(caseInput: unknown, o: PlanOptions): PlanViewResult
       },
       estimatedSeconds: (steps * p.initialParticles) / (o.particleStepsPerSecond * share),
       warnings: p.warnings,
+      targetPaths: targetPathsOf(p),
     },
   };
 }

@@ -20,6 +20,8 @@ export function createRunSlice(deps: StoreDeps, cores: number): StateCreator<App
       progress: null,
       notices: [],
       runError: null,
+      target: { path: '', goalPercent: '2', stopWhenReached: false },
+      setTarget: (patch) => set({ target: { ...get().target, ...patch } }),
       setReplicas: (n) => {
         if (!Number.isInteger(n) || n < 1 || n > 64) return;
         set({ replicas: n });

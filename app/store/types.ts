@@ -41,6 +41,14 @@ export interface CaseSlice extends FormState {
 
 export type RunStatus = 'idle' | 'starting' | 'running' | 'paused' | 'stopping' | 'finished' | 'stopped' | 'failed';
 
+/** The precision target as the user set it: a quantity, its goal as text in %, and whether reaching it ends the run. */
+export interface TargetSetting {
+  /** '' for no target. */
+  readonly path: string;
+  readonly goalPercent: string;
+  readonly stopWhenReached: boolean;
+}
+
 export interface RunSlice {
   readonly replicas: number;
   readonly cores: number;
@@ -50,7 +58,9 @@ export interface RunSlice {
   readonly progress: RunProgressView | null;
   readonly notices: readonly string[];
   readonly runError: string | null;
+  readonly target: TargetSetting;
   setReplicas(n: number): void;
+  setTarget(patch: Partial<TargetSetting>): void;
   setSpeed(particleStepsPerSecond: number): void;
   setRunState(patch: Partial<Pick<RunSlice, 'status' | 'progress' | 'notices' | 'runError'>>): void;
   addNotice(text: string): void;

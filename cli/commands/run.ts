@@ -11,10 +11,8 @@ import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
 import { encodeSampleSet } from '../../engine/io/sampleFile';
 import { runReplicas, replicaReportJson, type StoppingOptions } from '../runReplicas';
 import { parseTarget } from '../../engine/stats/stopping';
-import { WALL_QUANTITIES } from '../../engine/results/wallQuantities';
 import type { Plan } from '../../engine/case/plan';
-import { wallNamesOf } from '../../engine/kernel/sideTable';
-import { FLOW_QUANTITIES } from '../../engine/results/flowQuantities';
+import { targetPathsOf } from '../../engine/results/targetQuantities';
 import { writeBinaryAtomically } from '../writeResults';
 import { CliError } from '../errors';
 import { resultFiles, type Performance } from '../../engine/results/exports';
@@ -46,11 +44,7 @@ function watchInterrupt(): { readonly interrupted: boolean; dispose(): void } {
 /** --target, --max-steps, --max-seconds → the pool's stopping options (undefined when none is given). */
 function stoppingOptions(values: { target?: string; 'max-steps'?: string; 'max-seconds'?: string }, plan: Plan): StoppingOptions | undefined {
   if (values.target === undefined && values['max-steps'] === undefined && values['max-seconds'] === undefined) return undefined;
-  const knownPaths = [
-    ...wallNamesOf(plan).flatMap((w) => WALL_QUANTITIES.map((q) => `walls.${w}.${q}`)),
-    ...(plan.caseData.flowSections.length ? FLOW_QUANTITIES.map((q) => `flow.${q}`) : []),
-    ...plan.caseData.flowSections.map((s) => `flow.sections.${s.name}.massFlowRate`),
-  ];
+  const knownPaths = targetPathsOf(plan);
   let target;
   try {
     target = values.target === undefined ? undefined : parseTarget(values.target, knownPaths);

@@ -14,6 +14,7 @@ import { sampleSetOf } from '../../engine/results/sampleSet';
 import { mergeSampleSets } from '../../engine/results/mergeSamples';
 import { summarizeSamples } from '../../engine/results/summarize';
 import { parseCase } from '../../engine/case/schema';
+import { decodeSampleSet } from '../../engine/io/sampleFile';
 
 const workerUrl = pathToFileURL(join(__dirname, '..', '..', 'dist-cli', 'replica.node.mjs'));
 const smallCouette = (sampleSteps: number) => {
@@ -73,5 +74,18 @@ describe('replica pool on worker threads', () => {
     // Both replicas' samples are in the merged result: nothing sampled was dropped silently.
     expect(outcome.merged!.replicas).toBe(2);
     expect(outcome.merged!.counters.sampledSteps).toBe(r0.samples!.counters.sampledSteps + r1.samples!.counters.sampledSteps);
+  });
+  it('asked not to decode, the pool hands back each replica\'s sample file untouched and merges nothing', async () => {
+    const caseData = smallCouette(1000);
+    const pool = runReplicaPool({ caseInput: caseData, replicas: 2, createReplica: nodeReplicaFactory(workerUrl), decodeOnThisThread: false });
+    const outcome = await pool.done;
+    expect(outcome.merged).toBeNull();
+    expect(outcome.replicas.map((r) => r.samples)).toEqual([null, null]);
+    // The files are whole: decoded elsewhere (the browser's summary worker) they give the same as decoding here.
+    const sets = outcome.replicas.map((r) => decodeSampleSet(r.samplesFile!));
+    expect(sets.map((x) => x.counters.sampledSteps)).toEqual([1000, 1000]);
+    const direct = runReplicaPool({ caseInput: caseData, replicas: 2, createReplica: nodeReplicaFactory(workerUrl) });
+    const decodedHere = await direct.done;
+    expect(summarizeSamples(mergeSampleSets(sets)).walls.top!.shearStress).toEqual(summarizeSamples(decodedHere.merged!).walls.top!.shearStress);
   });
 });
