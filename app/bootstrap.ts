@@ -55,8 +55,34 @@ async function start(store: AppStore): Promise<ExampleEntry[]> {
     if (timer) clearTimeout(timer);
     timer = setTimeout(() => void saveForm(form).catch(() => undefined), 300);
   });
-  const warm = () => void Promise.all([loadRunApi(), warmPlotly()]).catch(() => undefined);
+  const warm = () => void warmChunks(store);
   if ('requestIdleCallback' in window) window.requestIdleCallback(warm, { timeout: 2000 });
   else setTimeout(warm, 500);
   return examples;
+}
+
+const BUSY = new Set(['starting', 'running', 'paused', 'stopping']);
+
+/**
+ * Loads the run chunk, then plotly. Evaluating plotly holds the page's thread for about a second (more on a loaded
+ * machine), and a run shows its live views without it: if the user has started a run meanwhile, plotly waits until
+ * the run ends. Marks `tenuis-warm-done` when all is loaded.
+ */
+async function warmChunks(store: AppStore): Promise<void> {
+  try {
+    await loadRunApi();
+    if (BUSY.has(store.getState().status)) {
+      await new Promise<void>((resolve) => {
+        const unsubscribe = store.subscribe((s) => {
+          if (BUSY.has(s.status)) return;
+          unsubscribe();
+          resolve();
+        });
+      });
+    }
+    await warmPlotly();
+    performance.mark('tenuis-warm-done');
+  } catch {
+    // Warming is only a head start: each chunk loads again when first needed.
+  }
 }

@@ -16,10 +16,20 @@ function buffersOf(r: SimulationResult): ArrayBuffer[] {
   return [...new Set(arrays.map((a) => a.buffer as ArrayBuffer))];
 }
 
+/**
+ * The latest snapshot of each replica, kept here rather than on the page: snapshots of long runs hold every step's
+ * wall series and run to megabytes, and copying them across on each round was the page's longest task.
+ */
+const kept = new Map<number, ArrayBuffer>();
+
 const api = {
-  /** The summary of the merged snapshots that have sampled anything, or null if none has. */
-  summarize(snapshots: ArrayBuffer[]): SimulationResult | null {
-    const sets = snapshots.map((b) => decodeSampleSet(b)).filter((s) => s.counters.sampledSteps > 0);
+  /** Keeps a replica's latest snapshot (transferred here), replacing its previous one. */
+  keep(stream: number, snapshot: ArrayBuffer): void {
+    kept.set(stream, snapshot);
+  },
+  /** The summary of the kept snapshots that have sampled anything, or null if none has. */
+  summarizeKept(): SimulationResult | null {
+    const sets = [...kept.values()].map((b) => decodeSampleSet(b)).filter((s) => s.counters.sampledSteps > 0);
     if (!sets.length) return null;
     const result = summarizeSamples(sets.length === 1 ? sets[0] : mergeSampleSets(sets));
     return transfer(result, buffersOf(result));

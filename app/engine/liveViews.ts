@@ -3,7 +3,7 @@
  * a replica factory that reports lost workers at once and lets the test hook fail one, and the live views, which
  * take snapshots of the replicas and have a worker of their own merge and summarise them.
  */
-import { wrap, type Remote } from 'comlink';
+import { transfer, wrap, type Remote } from 'comlink';
 import type { ReplicaFactory } from '../../workers/replicaPool';
 import type { ReplicaApi } from '../../workers/protocol';
 import { browserReplicaFactory } from '../../workers/browserReplica';
@@ -57,7 +57,7 @@ const SNAPSHOT_TIMEOUT_MS = 3000;
 export function startLiveViews(replicas: LiveReplicas, everyMs: number, onLive: (r: SimulationResult) => void): { stop(): void; summary: Remote<LiveSummaryApi>; close(): void } {
   const worker = new Worker(new URL('./liveSummary.worker.ts', import.meta.url), { type: 'module', name: 'tenuis-live-summary' });
   const summary = wrap<LiveSummaryApi>(worker);
-  const last = new Map<number, ArrayBuffer>();
+  let kept = 0;
   let stopped = false;
   let busy = false;
   const within = <T,>(p: Promise<T>): Promise<T | null> =>
@@ -68,11 +68,13 @@ export function startLiveViews(replicas: LiveReplicas, everyMs: number, onLive: 
     try {
       await Promise.all([...replicas].map(async ([stream, api]) => {
         const b = await within(api.snapshot()).catch(() => null);
-        if (b) last.set(stream, b);
+        if (!b || stopped) return;
+        // Passed on, not copied: the summary worker keeps each replica's latest snapshot itself.
+        await summary.keep(stream, transfer(b, [b]));
+        kept++;
       }));
-      if (stopped || !last.size) return;
-      // Copies cross (structured clone): the last snapshots stay here for the next round.
-      const result = await summary.summarize([...last.values()]);
+      if (stopped || !kept) return;
+      const result = await summary.summarizeKept();
       if (result && !stopped) onLive(result);
     } catch {
       // A live view is a convenience: a failed round is simply skipped.
