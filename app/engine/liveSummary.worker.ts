@@ -63,6 +63,13 @@ const finalApi = {
     const comparison = continuumComparisonOf(merged.plan, result);
     return transfer({ result, samples, comparison, sampledSteps }, [...buffersOf(result), samples]);
   },
+  /** A saved run's sample file: its result and comparison again, as when it finished (warnings added by the caller). */
+  summarizeFile(file: ArrayBuffer): { result: SimulationResult; comparison: ContinuumComparisonResult } {
+    const set = decodeSampleSet(file);
+    const result = summarizeSamples(set);
+    const comparison = continuumComparisonOf(set.plan, result);
+    return transfer({ result, comparison }, buffersOf(result));
+  },
 };
 Object.assign(api, finalApi);
 

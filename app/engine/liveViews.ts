@@ -54,9 +54,14 @@ const SNAPSHOT_TIMEOUT_MS = 3000;
  * Every `everyMs`, takes a snapshot of each running replica and has a worker of its own merge and summarise them
  * (engine/liveSummary.worker.ts); a replica that has ended keeps contributing its last snapshot. Returns a stop function.
  */
+/** A summary worker (decoding, merging and summarising samples off the page's thread) and how to end it. */
+export function openSummaryWorker(name: string): { summary: Remote<LiveSummaryApi>; close(): void } {
+  const worker = new Worker(new URL('./liveSummary.worker.ts', import.meta.url), { type: 'module', name });
+  return { summary: wrap<LiveSummaryApi>(worker), close: () => worker.terminate() };
+}
+
 export function startLiveViews(replicas: LiveReplicas, everyMs: number, onLive: (r: SimulationResult) => void): { stop(): void; summary: Remote<LiveSummaryApi>; close(): void } {
-  const worker = new Worker(new URL('./liveSummary.worker.ts', import.meta.url), { type: 'module', name: 'tenuis-live-summary' });
-  const summary = wrap<LiveSummaryApi>(worker);
+  const { summary, close } = openSummaryWorker('tenuis-live-summary');
   let kept = 0;
   let stopped = false;
   let busy = false;
@@ -89,6 +94,6 @@ export function startLiveViews(replicas: LiveReplicas, everyMs: number, onLive: 
       clearInterval(timer);
     },
     summary,
-    close: () => worker.terminate(),
+    close,
   };
 }

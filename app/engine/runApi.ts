@@ -5,17 +5,16 @@
  */
 import { runReplicaPool, type PoolProgress, type ReplicaReport } from '../../workers/replicaPool';
 import { defaultReplicaCount } from '../../workers/browserReplica';
-import { observedFactory, startLiveViews, type LiveReplicas } from './liveViews';
+import { observedFactory, openSummaryWorker, startLiveViews, type LiveReplicas } from './liveViews';
 import type { FinishedSummary } from './liveSummary.worker';
 import { transfer } from 'comlink';
 import { estimateAt } from '../../engine/results/targetQuantities';
 import { evaluateStop, estimateRemaining, relativeHalfWidthOf } from '../../engine/stats/stopping';
 import { planFromInput } from '../../engine/case/plan';
-import { summarizeSamples, type SimulationResult } from '../../engine/results/summarize';
-import { decodeSampleSet } from '../../engine/io/sampleFile';
+import type { SimulationResult } from '../../engine/results/summarize';
 import type { Performance } from '../../engine/results/exports';
 import type { TenuisTestHooks } from '../testing/testHooks';
-import { continuumComparisonOf, type ContinuumComparisonResult } from '../../engine/continuum/comparison';
+import type { ContinuumComparisonResult } from '../../engine/continuum/comparison';
 
 export { profilesCsv, fieldsCsv, surfacesCsv, summaryJsonText } from '../../engine/results/exports';
 export { defaultReplicaCount };
@@ -290,11 +289,18 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
   };
 }
 
-/** A saved run's result again from its sample file: the same estimates (and comparison) as when it finished. */
-export function resultFromSamples(samples: ArrayBuffer, runWarnings: readonly string[]): { result: SimulationResult; comparison: ContinuumComparisonResult } {
-  const set = decodeSampleSet(samples.slice(0));
-  const result = summarizeSamples(set);
-  const comparison = continuumComparisonOf(set.plan, result);
-  result.warnings.push(...runWarnings);
-  return { result, comparison };
+/**
+ * A saved run's result again from its sample file: the same estimates (and comparison) as when it finished. Worked
+ * out in a summary worker of its own: decoding re-plans the case, too long a task for the page's thread on big grids.
+ */
+export async function resultFromSamples(samples: ArrayBuffer, runWarnings: readonly string[]): Promise<{ result: SimulationResult; comparison: ContinuumComparisonResult }> {
+  const { summary, close } = openSummaryWorker('tenuis-saved-run');
+  try {
+    const copy = samples.slice(0);
+    const { result, comparison } = await summary.summarizeFile(transfer(copy, [copy]));
+    result.warnings.push(...runWarnings);
+    return { result, comparison };
+  } finally {
+    close();
+  }
 }

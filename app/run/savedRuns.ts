@@ -11,7 +11,7 @@ async function ensureCached(id: string): Promise<boolean> {
   const record = await getRun(id);
   if (!record) return false;
   const api = await loadRunApi();
-  const { result, comparison } = api.resultFromSamples(record.samples, record.runWarnings);
+  const { result, comparison } = await api.resultFromSamples(record.samples, record.runWarnings);
   putResult(id, {
     result,
     comparison,
