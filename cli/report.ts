@@ -88,7 +88,7 @@ export function runSummary(result: SimulationResult, performance: Performance, o
   const lines = [`finished in ${duration(performance.wallSeconds)}: ${sig(performance.particleSteps, 3)} particle steps, ${sig(performance.particleStepsPerSecond, 3)} per second`];
   for (const [wall, e] of Object.entries(result.walls)) {
     if (!e) continue;
-    lines.push(`  ${wall} wall: shear stress ${plusMinus(e.shearStress.mean, e.shearStress.ci95, 'Pa')}, heat flux ${plusMinus(e.heatFlux.mean, e.heatFlux.ci95, 'W/m^2')}`);
+    lines.push(`  wall ${wall}: shear stress ${plusMinus(e.shearStress.mean, e.shearStress.ci95, 'Pa')}, heat flux ${plusMinus(e.heatFlux.mean, e.heatFlux.ci95, 'W/m^2')}`);
   }
   const f = result.flow;
   if (f) {

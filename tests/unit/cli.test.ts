@@ -173,7 +173,7 @@ describe('tenuis run', () => {
     const r = tenuis('run', tinyCasePath, '--out', out);
     expect(r.code, r.stderr).toBe(0);
     expect(readdirSync(out).sort()).toEqual(RESULT_FILES);
-    expect(r.stderr).toMatch(/bottom wall: shear stress .* ± .* Pa, heat flux .* W\/m\^2/);
+    expect(r.stderr).toMatch(/wall bottom: shear stress .* ± .* Pa, heat flux .* W\/m\^2/);
     const summary = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
     expect(summary.numerics.sampleSteps).toBe(500);
     expect(summary.numerics.transientSteps).toBe(100);
