@@ -11,6 +11,7 @@ import {
   planSweepPoints, sweepContinuumCurves, sweepValues,
   type SweepContinuumCurves, type SweepParameter, type SweepSpacing,
 } from '../../engine/case/sweep';
+import type { ContinuumModelName } from '../../engine/continuum/caseModelTypes';
 
 export { sweepCsv, sweepJson, sweepRowOf, SWEEP_PARAMETER_UNITS } from '../../engine/case/sweep';
 export { convertToSI } from '../../engine/units/engineeringUnits';
@@ -88,11 +89,16 @@ export function planSweep(caseInput: unknown, r: SweepRequest): SweepPlanView {
   };
 }
 
+/** Values evaluated per macrotask: each plans the case and runs the case models (a few ms), so no task grows long. */
+const CURVE_VALUES_PER_TASK = 4;
+const nextTask = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
+
 /**
  * The continuum models' integral predictions over the sweep's range, on the smallest grid of its points: a log-spaced
  * grid of CURVE_POINTS values, or just the points' own values for the cavity (each value solves Navier–Stokes).
+ * Evaluated a few values per macrotask, so the page stays responsive meanwhile.
  */
-export function sweepCurves(caseInput: unknown, r: SweepRequest, points: readonly SweepPointView[]): SweepContinuumCurves | { readonly reason: string } {
+export async function sweepCurves(caseInput: unknown, r: SweepRequest, points: readonly SweepPointView[]): Promise<SweepContinuumCurves | { readonly reason: string }> {
   const parsed = parseCase(caseInput);
   if (!parsed.ok || points.length === 0) return { reason: 'no valid case' };
   const smallest = points.reduce((a, b) => (b.cellsX * b.cellsY < a.cellsX * a.cellsY ? b : a));
@@ -102,5 +108,19 @@ export function sweepCurves(caseInput: unknown, r: SweepRequest, points: readonl
   const lo = Math.min(r.from, r.to);
   const hi = Math.max(r.from, r.to);
   const values = first.problem === 'cavity' || lo === hi ? points.map((p) => p.value) : sweepValues(lo, hi, CURVE_POINTS, 'log');
-  return sweepContinuumCurves(parsed.value, r.parameter, values, cells);
+  const curves: Record<string, Partial<Record<ContinuumModelName, number[]>>> = {};
+  const units: Record<string, string> = {};
+  for (let start = 0; start < values.length; start += CURVE_VALUES_PER_TASK) {
+    await nextTask();
+    const part = sweepContinuumCurves(parsed.value, r.parameter, values.slice(start, start + CURVE_VALUES_PER_TASK), cells);
+    if ('reason' in part) continue;
+    Object.assign(units, part.units);
+    for (const [key, byModel] of Object.entries(part.curves)) {
+      for (const [model, ys] of Object.entries(byModel) as [ContinuumModelName, number[]][]) {
+        const all = ((curves[key] ??= {})[model] ??= values.map(() => NaN));
+        ys.forEach((y, k) => (all[start + k] = y));
+      }
+    }
+  }
+  return { problem: first.problem, values, curves, units };
 }

@@ -69,14 +69,11 @@ export async function startSweep(): Promise<void> {
     const s = sweepStore.getState();
     if (!planned.quantities.some((q) => q.key === s.quantity)) s.setForm({ quantity: planned.quantities[0]?.key ?? '' });
     set({ status: 'running', planned, request, baseCase: caseInput, current: { index: 0, count: planned.points.length, progress: null } });
-    // The curves take a few milliseconds per value: after the page has shown that the sweep runs.
-    setTimeout(() => {
-      try {
-        sweepStore.getState().setRun({ curves: api.sweepCurves(caseInput, request, planned.points) });
-      } catch (e) {
-        sweepStore.getState().setRun({ curves: { reason: (e as Error).message } });
-      }
-    }, 0);
+    // The curves are evaluated a few values per macrotask, beside the first point's run.
+    api.sweepCurves(caseInput, request, planned.points).then(
+      (curves) => sweepStore.getState().request === request && set({ curves }),
+      (e: Error) => sweepStore.getState().request === request && set({ curves: { reason: e.message } }),
+    );
     const progress = throttled((p) => {
       const c = sweepStore.getState().current;
       if (c) set({ current: { ...c, progress: p } });
