@@ -28,11 +28,13 @@ export function SweepForm() {
   const caseValid = useApp((s) => s.derived?.caseInput != null && s.plan !== null);
   const reference = useApp((s) => s.plan?.reference ?? null);
   const replicas = useApp((s) => s.replicas);
+  // One thing at a time on the cores: a sweep waits for a single run to end.
+  const singleRunBusy = useApp((s) => ['starting', 'running', 'paused', 'stopping'].includes(s.status));
   // Positivity and counts only here; the ends are converted to SI with the engine's units when the sweep starts.
   const read = readSweepForm(f, (v) => v);
   const errors = read.ok ? {} : read.errors;
   const busy = SWEEP_BUSY.includes(f.status);
-  const reason = busy ? 'a sweep is going on' : !caseValid ? 'the set-up has problems: fix them in “1 Set up and check” first' : !read.ok ? 'fix the marked fields first' : null;
+  const reason = busy ? 'a sweep is going on' : singleRunBusy ? 'a single run is going on (see “2 Run”)' : !caseValid ? 'the set-up has problems: fix them in “1 Set up and check” first' : !read.ok ? 'fix the marked fields first' : null;
   const setForm = sweepStore.getState().setForm;
   const unit = f.parameter === 'knudsen' ? '1' : f.pressureUnit;
   const chooseParameter = (parameter: SweepParameter) => {
