@@ -13,6 +13,7 @@ import { RunLauncher } from './panels/RunLauncher';
 import { RunProgress } from './panels/RunProgress';
 import { LiveProfile, ResultPanels } from './panels/ResultPanels';
 import { SavedRunsView } from './panels/SavedRunsView';
+import { SweepView } from './sweep/SweepView';
 import { DropTarget } from './panels/DropTarget';
 import { Footer } from './panels/Footer';
 
@@ -20,6 +21,7 @@ const VIEWS: readonly { id: ViewName; label: string }[] = [
   { id: 'setup', label: '1 Set up and check' },
   { id: 'run', label: '2 Run' },
   { id: 'results', label: '3 Results' },
+  { id: 'sweep', label: 'Sweep' },
   { id: 'saved', label: 'Saved runs' },
 ];
 
@@ -92,6 +94,7 @@ export function App() {
           </div>
         )}
         {ready && view === 'results' && <ResultPanels />}
+        {ready && view === 'sweep' && <SweepView />}
         {ready && view === 'saved' && <SavedRunsView />}
       </main>
       <DropTarget />

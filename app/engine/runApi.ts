@@ -20,6 +20,7 @@ export { profilesCsv, fieldsCsv, surfacesCsv, summaryJsonText } from '../../engi
 export { defaultReplicaCount };
 export { flowQuantityUnits } from '../../engine/results/flowQuantities';
 export { MODEL_LABELS } from '../../engine/continuum/caseModelTypes';
+export * from './sweepApi';
 
 export interface ReplicaView {
   readonly stream: number;

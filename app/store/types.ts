@@ -80,7 +80,7 @@ export interface ResultsSlice {
   setCompare(id: string | null): void;
 }
 
-export type ViewName = 'setup' | 'run' | 'results' | 'saved';
+export type ViewName = 'setup' | 'run' | 'results' | 'sweep' | 'saved';
 
 export interface UiSlice {
   readonly view: ViewName;

@@ -8,17 +8,18 @@
  */
 import { parseArgs } from 'node:util';
 import { join } from 'node:path';
-import { parseCase, type Case } from '../../engine/case/schema';
-import { plan, type Plan } from '../../engine/case/plan';
+import { parseCase } from '../../engine/case/schema';
+import type { Plan } from '../../engine/case/plan';
 import {
-  SWEEP_PARAMETERS, SWEEP_PARAMETER_UNITS, sweepValues, caseValueOf, caseAtSweepPoint, sweepPointFolder, sweepCsv, sweepJson,
-  type SweepParameter, type SweepRow, type SweepSpacing,
+  SWEEP_PARAMETERS, SWEEP_PARAMETER_UNITS, sweepValues, caseValueOf, planSweepPoints, sweepPointFolder, sweepCsv, sweepJson, sweepRowOf,
+  type PlannedSweepPoint, type SweepParameter, type SweepRow, type SweepSpacing,
 } from '../../engine/case/sweep';
 import { parseQuantity } from '../../engine/units/engineeringUnits';
 import { createSimulation, stepsRemaining } from '../../engine/simulation';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
 import { summarizeSamples } from '../../engine/results/summarize';
-import { resultFiles, type Performance, type SummaryJson } from '../../engine/results/exports';
+import { resultFiles, type Performance } from '../../engine/results/exports';
+import { continuumComparisonOf } from '../../engine/continuum/comparison';
 import { CliError, UsageError, EXIT_OK, EXIT_INTERRUPTED } from '../errors';
 import { SWEEP_USAGE } from '../usage';
 import { readJsonFile, parseSeedOption } from '../readCase';
@@ -43,12 +44,7 @@ interface SweepOptions {
   readonly quiet: boolean;
 }
 
-interface PlannedPoint {
-  readonly point: number;
-  readonly value: number;
-  readonly caseData: Case;
-  readonly plan: Plan;
-}
+type PlannedPoint = PlannedSweepPoint;
 
 /** What one point's run gave: its samples (null if nothing was sampled) and what goes with them. */
 interface PointRun {
@@ -136,14 +132,11 @@ function planPoints(o: SweepOptions): { caseName: string; points: PlannedPoint[]
   } catch (e) {
     throw new CliError(`${o.casePath} cannot run as set up:\n  gas: ${(e as Error).message}`);
   }
-  const points = sweepValues(o.from, o.to, o.points, o.spacing).map((value, k) => {
-    const caseData = caseAtSweepPoint(parsed.value, o.parameter, value);
-    const planned = plan(caseData);
-    if (!planned.ok) {
-      throw new CliError(`point ${k + 1} of ${o.points} (${o.parameter} = ${shown(o.parameter, value)}) cannot run as set up:\n${planned.errors.map((m) => `  ${m}`).join('\n')}`);
-    }
-    return { point: k + 1, value, caseData, plan: planned.plan };
-  });
+  const planned = planSweepPoints(parsed.value, o.parameter, sweepValues(o.from, o.to, o.points, o.spacing));
+  if (!planned.ok) {
+    throw new CliError(`point ${planned.point} of ${o.points} (${o.parameter} = ${shown(o.parameter, planned.value)}) cannot run as set up:\n${planned.errors.map((m) => `  ${m}`).join('\n')}`);
+  }
+  const { points } = planned;
   return { caseName: parsed.value.name, points };
 }
 
@@ -188,15 +181,20 @@ async function runPoint(p: PlannedPoint, replicas: number, interrupted: () => bo
   };
 }
 
-/** Summarises a point's samples and writes its folder as `tenuis run` would; returns its summary.json. */
-function writePoint(outDir: string, p: PlannedPoint, run: PointRun & { samples: SampleSet }): { summary: SummaryJson; warnings: string[] } {
+/**
+ * Summarises a point's samples, writes its folder as `tenuis run` would and returns its row of the table (the
+ * engine's sweepRowOf, which the browser's sweep uses too).
+ */
+function writePoint(outDir: string, p: PlannedPoint, run: PointRun & { samples: SampleSet }): { row: SweepRow; warnings: string[] } {
   const result = summarizeSamples(run.samples);
   result.warnings.push(...run.warnings);
   if (run.interrupted) result.warnings.push(`interrupted by the user: the result holds the ${run.samples.counters.sampledSteps} steps sampled until then`);
-  const files = resultFiles(result, { performance: run.performance, caseName: p.caseData.name, plan: run.samples.plan });
+  const comparison = continuumComparisonOf(run.samples.plan, result);
+  const files = resultFiles(result, { performance: run.performance, caseName: p.caseData.name, comparison });
   writeResultsAtomically(join(outDir, sweepPointFolder(p.point)), { ...files, 'case.json': `${prettyJson(p.caseData)}\n`, ...run.extraFiles });
-  // The table is read back from the very text written, so sweep.csv and sweep.json cannot differ from summary.json.
-  return { summary: JSON.parse(files['summary.json']) as SummaryJson, warnings: result.warnings.filter((w) => !p.plan.warnings.includes(w)) };
+  // The row's summary is summary.json's very text parsed back (sweepPointSummary), so the table cannot differ from it.
+  const row = sweepRowOf(p.point, p.value, { kind: 'sampled', result, comparison, performance: run.performance, caseName: p.caseData.name, interrupted: run.interrupted });
+  return { row, warnings: result.warnings.filter((w) => !p.plan.warnings.includes(w)) };
 }
 
 /** Sets a flag on the first Ctrl-C; a second Ctrl-C ends the process at once (the default action). */
@@ -247,19 +245,18 @@ export async function sweepCommand(args: string[], io: CommandIO): Promise<numbe
       } catch (e) {
         // Keep the table of the points already written; the failed one is marked as such.
         if (rows.some((r) => r.summary)) {
-          rows.push({ point: p.point, value: p.value, status: 'failed', summary: null });
+          rows.push(sweepRowOf(p.point, p.value, { kind: 'failed' }));
           writeTable(false);
         }
         throw e;
       }
-      const status = run.interrupted ? 'interrupted' : 'complete';
       if (!run.samples) {
         io.stderr.write(`${label}: interrupted in the transient, nothing was sampled\n`);
-        rows.push({ point: p.point, value: p.value, status, summary: null });
+        rows.push(sweepRowOf(p.point, p.value, { kind: 'nothingSampled' }));
       } else {
         const written = writePoint(o.outDir, p, { ...run, samples: run.samples });
         for (const w of written.warnings) io.stderr.write(`${label}: warning: ${w}\n`);
-        rows.push({ point: p.point, value: p.value, status, summary: written.summary });
+        rows.push(written.row);
       }
       if (run.interrupted) {
         const kept = rows.filter((r) => r.summary).length;

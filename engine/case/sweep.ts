@@ -13,9 +13,13 @@
  */
 import type { Case } from './schema';
 import { SIDE_NAMES } from './schema';
-import { gasModelOf, referenceStateOf } from './plan';
+import { gasModelOf, plan, referenceStateOf, type Plan } from './plan';
 import type { QuantityKind } from '../units/engineeringUnits';
-import { csvDocument, type SummaryJson, type JsonNumber } from '../results/exports';
+import { csvDocument, summaryJsonText, type SummaryJson, type JsonNumber, type Performance } from '../results/exports';
+import type { SimulationResult } from '../results/summarize';
+import type { ContinuumComparisonResult } from '../continuum/comparison';
+import { caseModelsOf } from '../continuum/caseModels';
+import type { CaseProblem, ContinuumModelName } from '../continuum/caseModelTypes';
 import { FLOW_QUANTITIES, flowQuantityUnits } from '../results/flowQuantities';
 import { WALL_QUANTITY_UNITS } from '../results/wallQuantities';
 
@@ -103,6 +107,34 @@ export function sweepPointFolder(point: number): string {
   return `points/${String(point).padStart(3, '0')}`;
 }
 
+/** One point of a sweep, planned: its number (from 1), the swept value (SI), its case and plan. */
+export interface PlannedSweepPoint {
+  readonly point: number;
+  readonly value: number;
+  readonly caseData: Case;
+  readonly plan: Plan;
+}
+
+export type SweepPlanResult =
+  | { readonly ok: true; readonly points: PlannedSweepPoint[] }
+  /** The first point that cannot run: its number, value and the planner's errors. */
+  | { readonly ok: false; readonly point: number; readonly value: number; readonly errors: readonly string[] };
+
+/**
+ * Every point of a sweep planned before any runs (the command line and the browser alike), so a sweep never stops
+ * half-way at a point that could not have run. `c` must have a usable gas (caseValueOf throws otherwise).
+ */
+export function planSweepPoints(c: Case, parameter: SweepParameter, values: readonly number[]): SweepPlanResult {
+  const points: PlannedSweepPoint[] = [];
+  for (let k = 0; k < values.length; k++) {
+    const caseData = caseAtSweepPoint(c, parameter, values[k]);
+    const planned = plan(caseData);
+    if (!planned.ok) return { ok: false, point: k + 1, value: values[k], errors: planned.errors };
+    points.push({ point: k + 1, value: values[k], caseData, plan: planned.plan });
+  }
+  return { ok: true, points };
+}
+
 // ─── The sweep's table ─────────────────────────────────────────────────────────────────────────────────────────
 
 /** complete: ran to the end; interrupted: stopped by the user (summary of what was sampled, or null); failed: null. */
@@ -116,6 +148,42 @@ export interface SweepRow {
   readonly status: SweepPointStatus;
   /** The point's summary.json, or null when nothing was sampled. */
   readonly summary: SummaryJson | null;
+}
+
+/**
+ * What one point's run gave, as the row needs it: its result with the continuum comparison of the same plan
+ * (engine/continuum/comparison.ts), or nothing, because it was stopped before sampling began or it failed.
+ */
+export type SweepPointRun =
+  | {
+    readonly kind: 'sampled';
+    readonly result: SimulationResult;
+    readonly comparison: ContinuumComparisonResult;
+    readonly performance: Performance;
+    /** The point's case name (caseAtSweepPoint names it after the point). */
+    readonly caseName: string;
+    /** Stopped by the user: the result holds what was sampled until then. */
+    readonly interrupted: boolean;
+  }
+  | { readonly kind: 'nothingSampled' }
+  | { readonly kind: 'failed' };
+
+/**
+ * The point's summary.json as an object: parsed back from the very text `tenuis run` writes (summaryJsonText), so
+ * the table holds exactly the numbers of the point's summary.json (JSON has no NaN: they are null there too).
+ */
+export function sweepPointSummary(run: Extract<SweepPointRun, { kind: 'sampled' }>): SummaryJson {
+  return JSON.parse(summaryJsonText(run.result, { performance: run.performance, caseName: run.caseName, comparison: run.comparison })) as SummaryJson;
+}
+
+/**
+ * The row of one point: the one way from a point's run to sweep.csv and sweep.json, shared by `tenuis sweep` and
+ * the browser's sweep, so both tables hold the same numbers for the same case, seed and replicas.
+ */
+export function sweepRowOf(point: number, value: number, run: SweepPointRun): SweepRow {
+  if (run.kind === 'failed') return { point, value, status: 'failed', summary: null };
+  if (run.kind === 'nothingSampled') return { point, value, status: 'interrupted', summary: null };
+  return { point, value, status: run.interrupted ? 'interrupted' : 'complete', summary: sweepPointSummary(run) };
 }
 
 export interface SweepTableOptions {
@@ -203,4 +271,50 @@ export function sweepJson(
     interrupted: o.interrupted,
     points: rows.map((r) => ({ point: r.point, value: r.value, status: r.status, folder: r.summary ? sweepPointFolder(r.point) : null, summary: r.summary })),
   };
+}
+
+// ─── Continuum curves over the swept range ─────────────────────────────────────────────────────────────────────
+
+export interface SweepContinuumCurves {
+  readonly problem: CaseProblem;
+  /** The swept values (SI) the curves are evaluated at. */
+  readonly values: readonly number[];
+  /** Integral quantity key (`flow.massFlowRate`, `walls.bottom.shearStress` …) → model → value at each of `values` (NaN where that point could not be planned). */
+  readonly curves: Readonly<Record<string, Partial<Record<ContinuumModelName, number[]>>>>;
+  /** SI unit of each key. */
+  readonly units: Readonly<Record<string, string>>;
+}
+
+/**
+ * What each continuum model predicts for the integral quantities of `c` at each swept value: the same case models
+ * (engine/continuum/caseModels.ts) the points' summaries compare with, on a grid as fine as asked for. The integral
+ * predictions depend on the gas, geometry, walls and pressures only, not on the DSMC grid, so every value is planned
+ * on the fixed grid `cells` (e.g. the smallest grid of the sweep's points): cheap, and never refused for too many
+ * particles. One plan and one caseModelsOf per value; the cavity's predictions solve Navier–Stokes twice each, so
+ * give it few values. Returns the reason when no continuum model fits the case.
+ */
+export function sweepContinuumCurves(
+  c: Case, parameter: SweepParameter, values: readonly number[], cells: { readonly cellsX: number; readonly cellsY: number },
+): SweepContinuumCurves | { readonly reason: string } {
+  const onGrid: Case = { ...c, numerics: { ...c.numerics, cellsX: cells.cellsX, cellsY: cells.cellsY } };
+  const curves: Record<string, Partial<Record<ContinuumModelName, number[]>>> = {};
+  const units: Record<string, string> = {};
+  let problem: CaseProblem | undefined;
+  let reason = 'no point of the range could be planned';
+  values.forEach((value, k) => {
+    const planned = plan(caseAtSweepPoint(onGrid, parameter, value));
+    if (!planned.ok) return;
+    const models = caseModelsOf(planned.plan);
+    if (!models.recognised) {
+      reason = models.reason;
+      return;
+    }
+    problem = models.problem;
+    for (const q of models.quantities) {
+      units[q.key] = q.unit;
+      const byModel = (curves[q.key] ??= {});
+      for (const [model, v] of Object.entries(q.values) as [ContinuumModelName, number][]) (byModel[model] ??= values.map(() => NaN))[k] = v;
+    }
+  });
+  return problem ? { problem, values: [...values], curves, units } : { reason };
 }

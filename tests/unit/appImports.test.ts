@@ -11,7 +11,7 @@ const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 const appDir = join(repoRoot, 'app');
 
 /** Lazily loaded entry points (and modules imported only by them). */
-const LAZY = new Set(['app/engine/setupApi.ts', 'app/engine/runApi.ts', 'app/engine/liveViews.ts', 'app/engine/liveSummary.worker.ts', 'app/setup/planView.ts', 'app/setup/deriveCase.ts']);
+const LAZY = new Set(['app/engine/setupApi.ts', 'app/engine/runApi.ts', 'app/engine/sweepApi.ts', 'app/engine/liveViews.ts', 'app/engine/liveSummary.worker.ts', 'app/setup/planView.ts', 'app/setup/deriveCase.ts']);
 
 function files(dir: string): string[] {
   return readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? files(join(dir, e.name)) : /\.tsx?$/.test(e.name) ? [join(dir, e.name)] : []));
