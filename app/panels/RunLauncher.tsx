@@ -4,9 +4,11 @@
  */
 import { startRun } from '../run/runController';
 import { targetRequestOf } from '../run/targetSetting';
+import { useSweep } from '../sweep/sweepStore';
 import { appStore, useApp } from '../store/appStore';
 
 const BUSY = ['starting', 'running', 'paused', 'stopping'];
+const SWEEP_BUSY = ['planning', 'running', 'stopping'];
 
 export function RunLauncher() {
   const replicas = useApp((s) => s.replicas);
@@ -14,11 +16,13 @@ export function RunLauncher() {
   const ready = useApp((s) => s.plan !== null && s.derived?.caseInput != null);
   const problems = useApp((s) => Object.keys(s.derived?.fieldErrors ?? {}).length + (s.derived?.caseErrors.length ?? 0) + s.planErrors.length);
   const busy = useApp((s) => BUSY.includes(s.status));
+  // A sweep's points use the cores' workers already: one pool at a time.
+  const sweeping = useSweep((s) => SWEEP_BUSY.includes(s.status));
   const target = useApp((s) => s.target);
   const paths = useApp((s) => s.plan?.targetPaths);
   const checked = targetRequestOf(target, paths ?? []);
   const targetError = checked.ok ? null : checked.message;
-  const reason = busy ? 'a run is going on' : !ready ? `fix the ${problems || ''} marked problem${problems === 1 ? '' : 's'} first`
+  const reason = busy ? 'a run is going on' : sweeping ? 'a sweep is going on (Sweep view)' : !ready ? `fix the ${problems || ''} marked problem${problems === 1 ? '' : 's'} first`
     : targetError ? 'fix the precision target first' : null;
   const st = appStore.getState();
   return (

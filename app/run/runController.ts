@@ -7,6 +7,7 @@ import type { RunHandle, FinishedRun } from '../engine/runApi';
 import { putResult } from '../results/resultCache';
 import { readTestHooks } from '../testing/testHooks';
 import { targetRequestOf } from './targetSetting';
+import { sweepStore } from '../sweep/sweepStore';
 import { putRun, listRuns, saveSpeed } from '../io/db';
 import type { SavedRunRecord } from '../io/savedRun';
 import type { AppStore } from '../store/store';
@@ -32,7 +33,7 @@ export async function startRun(store: AppStore): Promise<void> {
   const caseInput = s.derived?.caseInput;
   if (!caseInput || !s.plan || active || ['starting', 'running', 'paused', 'stopping'].includes(s.status)) return;
   const target = targetRequestOf(s.target, s.plan.targetPaths);
-  if (!target.ok) return;
+  if (!target.ok || ['planning', 'running', 'stopping'].includes(sweepStore.getState().status)) return;
   const id = newRunId();
   const caseName = String((caseInput as CaseInput).name);
   s.setRunState({ status: 'starting', progress: null, notices: [], runError: null });
