@@ -34,7 +34,7 @@ export function CutControls({ spec, columnsM, rowsM, lengthUnit, radial, onChang
   };
   const step = centres.length > 1 ? (centres[1] - centres[0]) / lengthUnit.factor : undefined;
   return (
-    <div className="cut-controls">
+    <>
       <span className="field-inline">
         <label htmlFor="profile-cut">cut</label>
         <select id="profile-cut" value={spec.kind} onChange={(e) => kindChange(e.target.value as CutKind)}>
@@ -59,6 +59,6 @@ export function CutControls({ spec, columnsM, rowsM, lengthUnit, radial, onChang
           </span>
         </span>
       )}
-    </div>
+    </>
   );
 }

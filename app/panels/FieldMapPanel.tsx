@@ -67,7 +67,8 @@ export function FieldMapPanel({ result, geometry = null }: { result: SimulationR
         <Plot data={data} layout={layout} filename={`field-${name}`} label={`field map of ${name}`} testId="field-map" />
       </div>
       <p className="hint">
-        {geometry ? `Walls: thick black lines, named; blocks: grey. ` : ''}
+        {overlay.wallCount > 0 ? 'Walls: thick black lines, named. ' : ''}
+        {overlay.blockCount > 0 ? 'Blocks: grey, named; cells wholly inside them hold no gas and are left blank. ' : ''}
         {result.axisymmetric ? 'Axisymmetric: x is the axis, r the radius. ' : ''}
         Hover a cell for its value with the 95 % half-width; speed and Mach number are formed from the cell means (first-order error propagation).
       </p>

@@ -119,11 +119,13 @@ export function ProfilePanel({ result, live, compare, continuum = [], geometry =
   return (
     <section className="panel" aria-labelledby="profile-title" data-testid="profile-panel" data-cut={cut.kind}>
       <h2 id="profile-title">{headingOf(cut, radial, len)}</h2>
-      <CutControls spec={spec} columnsM={columnsM} rowsM={rowsM} lengthUnit={len} radial={radial} onChange={setSpec} />
-      <QuantitySelect id="profile-quantity" label="quantity" names={cut.names} units={cut.units} value={name} onChange={(q) => appStore.getState().select({ profileQuantity: q })} />
+      <div className="cut-controls">
+        <QuantitySelect id="profile-quantity" label="quantity" names={cut.names} units={cut.units} value={name} onChange={(q) => appStore.getState().select({ profileQuantity: q })} />
+        <CutControls spec={spec} columnsM={columnsM} rowsM={rowsM} lengthUnit={len} radial={radial} onChange={setSpec} />
+      </div>
+      <Plot data={data} layout={layout} filename={`profile-${name}`} label={`profile of ${name}`} testId="profile-plot" />
       <ModelToggles models={models} hidden={hidden} onToggle={toggle} />
       {cut.kind === 'horizontal' && continuum.length > 0 && <p className="hint">The continuum predictions are profiles across the gap: they are drawn on vertical cuts and the average over x.</p>}
-      <Plot data={data} layout={layout} filename={`profile-${name}`} label={`profile of ${name}`} testId="profile-plot" />
       {gaps > 0 && <p className="hint" data-testid="cut-gaps">{gaps} of {cut.gap.length} points lie inside blocks or saw no molecule: left blank.</p>}
       {!live && exportName !== undefined && (
         <div className="actions">

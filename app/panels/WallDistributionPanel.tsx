@@ -51,6 +51,7 @@ export function WallDistributionPanel({ result, geometry = null }: { result: Sim
     xaxis: { title: { text: xTitle } },
     yaxis: { title: { text: first ? `${first.names[f]} [${first.units[f]}]` : '' } },
     height: 320,
+    showlegend: true,
     legend: { orientation: 'h', y: -0.25 },
   }), [first, f, xTitle]);
   if (!first) return null;
