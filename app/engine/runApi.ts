@@ -245,6 +245,8 @@ export function resultGeometryOf(caseInput: unknown): ResultGeometry | null {
   return {
     lengthXM: g.lengthXM,
     lengthYM: g.lengthYM,
+    cellsX: g.cellsX,
+    cellsY: g.cellsY,
     axisymmetric: g.axisymmetric,
     walls: p.surfaces.flatMap((s, k) => (s.block < 0 && s.spec.type === 'wall' ? [{ name: s.name, side: sides[k], normalIsX: s.normalIsX, planeM: s.planeM, fromM: s.fromM, toM: s.toM }] : [])),
     blocks: p.caseData.blocks.map((b) => ({ name: b.name, x0: b.xMinM, x1: b.xMaxM, y0: b.yMinM, y1: b.yMaxM })),

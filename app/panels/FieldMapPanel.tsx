@@ -9,7 +9,7 @@ import type { Data, Layout } from '../charts/plotly';
 import { lengthUnitFor } from '../format';
 import { withDerivedFields } from '../results/derivedFields';
 import { geometryOverlay } from '../results/geometryOverlay';
-import type { ResultGeometry } from '../results/resultGeometry';
+import { solidCellsFor, type ResultGeometry } from '../results/resultGeometry';
 import { appStore, useApp } from '../store/appStore';
 import { QuantitySelect } from './QuantitySelect';
 
@@ -24,7 +24,7 @@ export function FieldMapPanel({ result, geometry = null }: { result: SimulationR
   const overlay = useMemo(() => geometryOverlay(geometry, len.factor), [geometry, len.factor]);
   const data = useMemo((): Data[] => {
     const w = t.names.length;
-    const solid = geometry?.solidCells.length === cellsX * cellsY ? geometry.solidCells : null;
+    const solid = solidCellsFor(geometry, result.numerics);
     const z: (number | null)[][] = [];
     const ci: (number | null)[][] = [];
     for (let iy = 0; iy < cellsY; iy++) {

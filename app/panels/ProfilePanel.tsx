@@ -9,7 +9,7 @@ import type { Data, Layout } from '../charts/plotly';
 import type { ContinuumCurve } from '../results/extensions';
 import { withDerivedFields } from '../results/derivedFields';
 import { cellCentres, cutColumn, extractCut, nearestCentre, GAP_SOLID, type CutSource, type CutSpec, type ProfileCut } from '../results/profileCut';
-import type { ResultGeometry } from '../results/resultGeometry';
+import { solidCellsFor, type ResultGeometry } from '../results/resultGeometry';
 import { loadRunApi } from '../engine/loadEngine';
 import { downloadText } from '../io/download';
 import { estimateText, lengthUnitFor, sig, slug } from '../format';
@@ -62,7 +62,7 @@ export function ProfilePanel({ result, live, compare, continuum = [], geometry =
   const len = lengthUnitFor(result.reference.lengthScaleM);
   const radial = result.axisymmetric ? 'r' : 'y';
   const source = useMemo(() => derivedSource(result, geometry), [result, geometry]);
-  const solid = geometry?.solidCells.length === result.numerics.cells ? geometry.solidCells : undefined;
+  const solid = solidCellsFor(geometry, result.numerics) ?? undefined;
   const cut = useMemo(() => extractCut(source, spec, solid), [source, spec, solid]);
   const columnsM = useMemo(() => cellCentres(source, 'x'), [source]);
   const rowsM = useMemo(() => cellCentres(source, 'y'), [source]);

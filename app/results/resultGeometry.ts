@@ -35,6 +35,9 @@ export interface GasConstants {
 export interface ResultGeometry {
   readonly lengthXM: number;
   readonly lengthYM: number;
+  /** The planned grid (the result's own when the case is the one that ran). */
+  readonly cellsX: number;
+  readonly cellsY: number;
   /** x the axis, y the radius. */
   readonly axisymmetric: boolean;
   readonly walls: readonly DomainWall[];
@@ -42,4 +45,9 @@ export interface ResultGeometry {
   /** 1 for cells with no gas volume (wholly inside blocks), cell index ix + cellsX·iy. */
   readonly solidCells: Uint8Array;
   readonly gas: GasConstants;
+}
+
+/** The geometry's no-gas cells, if its grid is the result's (else null: a case edited since would mislabel cells). */
+export function solidCellsFor(g: ResultGeometry | null, grid: { readonly cellsX: number; readonly cellsY: number }): Uint8Array | null {
+  return g && g.cellsX === grid.cellsX && g.cellsY === grid.cellsY ? g.solidCells : null;
 }

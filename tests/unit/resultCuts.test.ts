@@ -177,6 +177,18 @@ describe('geometry of a result', () => {
     const solid = g!.solidCells.reduce((s, v) => s + v, 0);
     expect(solid).toBeGreaterThan(0);
     expect(solid).toBeLessThan(g!.solidCells.length);
+    // A cell is solid exactly when its whole box lies inside a plate (cells the plate edges cut keep their gas).
+    const { cellsX, cellsY } = g!;
+    expect(g!.solidCells).toHaveLength(cellsX * cellsY);
+    const dx = g!.lengthXM / cellsX;
+    const dy = g!.lengthYM / cellsY;
+    const eps = 1e-9 * dx;
+    for (let c = 0; c < g!.solidCells.length; c++) {
+      const x0 = (c % cellsX) * dx;
+      const y0 = Math.floor(c / cellsX) * dy;
+      const covered = g!.blocks.some((b) => x0 >= b.x0 - eps && x0 + dx <= b.x1 + eps && y0 >= b.y0 - eps && y0 + dy <= b.y1 + eps);
+      expect(g!.solidCells[c], `cell ${c}`).toBe(covered ? 1 : 0);
+    }
     const overlay = geometryOverlay(g, 1e-6);
     expect(overlay.blockCount).toBe(2);
     expect(overlay.shapes.filter((s) => s.type === 'rect')).toHaveLength(2);
