@@ -57,15 +57,18 @@ function headingOf(cut: ProfileCut, radial: string, len: { unit: string; factor:
 
 export function ProfilePanel({ result, live, compare, continuum = [], geometry = null, exportName }: ProfilePanelProps) {
   const chosen = useApp((s) => s.profileQuantity);
-  const [spec, setSpec] = useState<CutSpec>({ kind: 'average', index: 0 });
+  const [chosenSpec, setSpec] = useState<CutSpec>({ kind: 'average', index: 0 });
   const [hidden, setHidden] = useState<ReadonlySet<string>>(new Set());
   const len = lengthUnitFor(result.reference.lengthScaleM);
   const radial = result.axisymmetric ? 'r' : 'y';
   const source = useMemo(() => derivedSource(result, geometry), [result, geometry]);
   const solid = solidCellsFor(geometry, result.numerics) ?? undefined;
-  const cut = useMemo(() => extractCut(source, spec, solid), [source, spec, solid]);
   const columnsM = useMemo(() => cellCentres(source, 'x'), [source]);
   const rowsM = useMemo(() => cellCentres(source, 'y'), [source]);
+  // A cut chosen on another result may lie beyond this grid: kept, but clamped to its last column or row.
+  const last = (chosenSpec.kind === 'vertical' ? columnsM.length : rowsM.length) - 1;
+  const spec = useMemo((): CutSpec => ({ kind: chosenSpec.kind, index: Math.max(0, Math.min(last, chosenSpec.index)) }), [chosenSpec, last]);
+  const cut = useMemo(() => extractCut(source, spec, solid), [source, spec, solid]);
   const f = Math.max(0, cut.names.indexOf(chosen));
   const name = cut.names[f];
   const unit = cut.units[f];
