@@ -15,12 +15,14 @@ import type { SimulationResult } from '../../engine/results/summarize';
 import type { Performance } from '../../engine/results/exports';
 import type { TenuisTestHooks } from '../testing/testHooks';
 import type { ContinuumComparisonResult } from '../../engine/continuum/comparison';
+import type { ResultGeometry } from '../results/resultGeometry';
 
 export { profilesCsv, fieldsCsv, surfacesCsv, summaryJsonText } from '../../engine/results/exports';
 export { defaultReplicaCount };
 export { flowQuantityUnits } from '../../engine/results/flowQuantities';
 export { MODEL_LABELS } from '../../engine/continuum/caseModelTypes';
 export * from './sweepApi';
+export { cutProfileCsv } from '../../engine/results/cutProfileCsv';
 
 export interface ReplicaView {
   readonly stream: number;
@@ -304,4 +306,34 @@ export async function resultFromSamples(samples: ArrayBuffer, runWarnings: reado
   } finally {
     close();
   }
+}
+
+/**
+ * The geometry and gas the results view draws and derives from (app/results/resultGeometry.ts), from the case's
+ * plan: the same cells, walls and blocks the run had. Null when the case does not plan (it then never ran here).
+ */
+export function resultGeometryOf(caseInput: unknown): ResultGeometry | null {
+  const planned = planFromInput(caseInput);
+  if (!planned.ok) return null;
+  const p = planned.plan;
+  const g = p.grid;
+  const wholeCell = (c: number) => {
+    const iy = Math.floor(c / g.cellsX);
+    return g.axisymmetric ? Math.PI * g.cellSizeYM * g.cellSizeYM * (2 * iy + 1) * g.cellSizeXM : g.cellSizeXM * g.cellSizeYM;
+  };
+  // Relative to the whole cell, so round-off in the cut-out volume of a covered cell still counts as no gas.
+  const solidCells = Uint8Array.from(g.cells.gasVolumesM3, (v, c) => (v <= 1e-9 * wholeCell(c) ? 1 : 0));
+  const zeta = p.gas.model.rotationalDof;
+  const sides = ['left', 'right', 'bottom', 'top'] as const;
+  return {
+    lengthXM: g.lengthXM,
+    lengthYM: g.lengthYM,
+    cellsX: g.cellsX,
+    cellsY: g.cellsY,
+    axisymmetric: g.axisymmetric,
+    walls: p.surfaces.flatMap((s, k) => (s.block < 0 && s.spec.type === 'wall' ? [{ name: s.name, side: sides[k], normalIsX: s.normalIsX, planeM: s.planeM, fromM: s.fromM, toM: s.toM }] : [])),
+    blocks: p.caseData.blocks.map((b) => ({ name: b.name, x0: b.xMinM, x1: b.xMaxM, y0: b.yMinM, y1: b.yMaxM })),
+    solidCells,
+    gas: { massKg: p.gas.model.massKg, rotationalDof: zeta, heatCapacityRatio: (5 + zeta) / (3 + zeta) },
+  };
 }

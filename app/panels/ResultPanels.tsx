@@ -37,6 +37,8 @@ export function ResultPanels() {
   }, [entry?.result]);
   const comparison = useMemo(() => comparisonView(entry?.comparison, runApiIfLoaded()?.MODEL_LABELS ?? {}), [entry?.comparison]);
   const curves = useMemo(() => [...(ext?.continuum ?? []), ...(comparison?.curves ?? [])], [ext, comparison]);
+  // Walls, blocks, no-gas cells and gas constants from the case's plan (null if the run API is not loaded).
+  const geometry = useMemo(() => (entry ? runApiIfLoaded()?.resultGeometryOf(entry.caseInput) ?? null : null), [entry?.caseInput]);
   if (!entry || !ext) return <p className="hint">No result yet: run a case, or open a saved run.</p>;
   const r = entry.result;
   const n = r.numerics;
@@ -64,10 +66,10 @@ export function ResultPanels() {
       <WallNumbersCard result={r} />
       <ComparisonCard view={comparison} />
       <WarningsList warnings={r.warnings} />
-      <ProfilePanel result={r} live={live} compare={compared.entry ? { result: compared.entry.result, name: compared.name } : undefined} continuum={curves} />
+      <ProfilePanel result={r} live={live} compare={compared.entry ? { result: compared.entry.result, name: compared.name } : undefined} continuum={curves} geometry={geometry} exportName={entry.caseName} />
       {curves.length === 0 && <p className="hint">No continuum overlay for this case{comparison && !comparison.recognised ? `: ${comparison.description}` : ''}.</p>}
-      <FieldMapPanel result={r} />
-      <WallDistributionPanel result={r} />
+      <FieldMapPanel result={r} geometry={geometry} />
+      <WallDistributionPanel result={r} geometry={geometry} />
       {!live && <ExportPanel entry={entry} />}
     </div>
   );
