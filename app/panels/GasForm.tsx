@@ -39,11 +39,10 @@ const NUMBERS: readonly { key: 'viscosityIndex' | 'scatteringExponent'; field: s
 ];
 const SHOWN_FIELDS = new Set(['name', 'massKg', 'referenceDiameterM', 'referenceTemperatureK', 'viscosityIndex', 'scatteringExponent', 'rotationalDof', 'rotationalCollisionNumber', 'model', 'species']);
 
-function CustomGasFields({ gas }: { gas: GasEdit }) {
+function CustomGasFields({ gas, custom: c }: { gas: GasEdit; custom: CustomGasEdit }) {
   const errors = useApp((s) => s.derived?.fieldErrors);
   const api = setupApi();
   const st = appStore.getState();
-  const c = gas.custom;
   const set = (patch: Partial<CustomGasEdit>) => st.setGas({ ...gas, custom: { ...c, ...patch } });
   const nameError = errors?.['gas:name'];
   const dofError = errors?.['gas:rotationalDof'];
@@ -110,8 +109,8 @@ export function GasForm() {
   const st = appStore.getState();
   const species = gasParam?.text ?? 'Ar';
   const model = modelParam?.text ?? 'VHS';
-  const edit: GasEdit = gas ?? { source: 'table', custom: customFrom(species, model) };
-  const custom = edit.source === 'custom';
+  const edit: GasEdit = gas ?? { source: 'table' };
+  const custom = edit.source === 'custom' && edit.custom !== undefined;
   const speciesError = errors?.['param:gas'] ?? errors?.['gas:species'];
   const modelError = errors?.['param:model'] ?? errors?.['gas:model'];
   const zError = errors?.['gas:rotationalCollisionNumber'];
@@ -125,14 +124,14 @@ export function GasForm() {
           <span className="field-label">gas from</span>
           <div className="field-input" role="radiogroup" aria-label="gas from">
             <label className="field-inline"><input type="radio" name="gas-source" checked={!custom} onChange={() => st.setGas({ ...edit, source: 'table' })} /> the table</label>
-            <label className="field-inline"><input type="radio" name="gas-source" checked={custom} onChange={() => st.setGas({ ...edit, source: 'custom', ...(gas ? {} : { custom: customFrom(species, model) }) })} /> my own data (custom gas)</label>
+            <label className="field-inline"><input type="radio" name="gas-source" checked={custom} onChange={() => st.setGas({ ...edit, source: 'custom', custom: edit.custom ?? customFrom(species, model) })} /> my own data (custom gas)</label>
           </div>
         </div>
         {!custom && (
           <div className={`field${speciesError ? ' field-invalid' : ''}`}>
             <label htmlFor="gas-species">table gas<span className="field-description">molecular data of Bird (1994), Appendix A</span></label>
             <div className="field-input">
-              <select id="gas-species" value={species} onChange={(e) => { st.setParamText('gas', e.target.value); if (!gas || gas.source === 'table') st.setGas({ ...edit, custom: customFrom(e.target.value, model) }); }}>
+              <select id="gas-species" value={species} onChange={(e) => st.setParamText('gas', e.target.value)}>
                 {api.SPECIES_IDS.map((id) => <option key={id} value={id}>{id} — {api.SPECIES[id].name}</option>)}
               </select>
             </div>
@@ -160,7 +159,7 @@ export function GasForm() {
           onText={(text) => st.setGas({ ...edit, rotationalCollisionNumber: text })}
           onUnit={() => undefined}
         />
-        {custom && <CustomGasFields gas={edit} />}
+        {custom && <CustomGasFields gas={edit} custom={edit.custom!} />}
         {custom && <p className="hint">The Knudsen number of the geometry form holds for this gas: every pressure of the case is set for it (the JSON shows the result).</p>}
         {others.length > 0 && <ul className="errors">{others.map(([k, m]) => <li key={k} role="alert">{k.slice(4)}: {m}</li>)}</ul>}
       </fieldset>

@@ -60,6 +60,11 @@ function WallQuantities({ side, wall }: { side: SideName; wall: WallSpec }) {
   );
 }
 
+/** Wall fields with a place of their own in the row: the model, the temperature, the speed and the model's coefficients. */
+function shownKeys(coefficients: readonly string[]): ReadonlySet<string> {
+  return new Set(['model', 'temperatureK', 'velocityMPerS', ...coefficients]);
+}
+
 function WallRow({ side, wall }: { side: SideName; wall: WallSpec }) {
   const edit = useApp((s) => s.walls[side]);
   const errors = useApp((s) => s.derived?.fieldErrors);
@@ -92,6 +97,10 @@ function WallRow({ side, wall }: { side: SideName; wall: WallSpec }) {
         );
       })}
       <WallQuantities side={side} wall={wall} />
+      {/* Messages of fields not shown for this model (e.g. an accommodation typed before switching to diffuse). */}
+      {Object.entries(errors ?? {})
+        .filter(([k]) => k.startsWith(`wall:${side}:`) && !shownKeys(coefficients.map(([key]) => key)).has(k.slice(`wall:${side}:`.length)))
+        .map(([k, m]) => <p key={k} className="field-error" role="alert">{side} wall, {k.slice(`wall:${side}:`.length)}: {m}</p>)}
     </fieldset>
   );
 }

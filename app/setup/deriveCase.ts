@@ -24,7 +24,7 @@ import { modelFromSpecies, viscosityPaS, type MolecularModel } from '../../engin
 import { SPECIES_IDS, type SpeciesId } from '../../engine/gas/species';
 import { AVOGADRO_PER_MOL } from '../../engine/physics/constants';
 import { convertFromSI, unitsOf } from '../../engine/units/engineeringUnits';
-import { entrySI, numberOf, toSI, type BlockEdit, type FormState, type ParamEntry, type UnitApi } from './formModel';
+import { entrySI, numberOf, toSI, type BlockEdit, type CustomGasEdit, type FormState, type ParamEntry, type UnitApi } from './formModel';
 import { lengthLabel } from './blockEdits';
 
 export interface CaseDerivation {
@@ -72,7 +72,7 @@ function buildFromForm(form: FormState, fieldErrors: Record<string, string>, cas
     caseErrors.push(`unknown starting geometry "${form.presetName}"`);
     return null;
   }
-  const custom = form.gas?.source === 'custom';
+  const custom = form.gas?.source === 'custom' && form.gas.custom !== undefined;
   const overrides: Record<string, string> = {};
   for (const p of preset.parameters) {
     const e = form.params[p.name];
@@ -127,8 +127,7 @@ function applyWallEdit(c: CaseInput, side: SideName, form: FormState, fieldError
 }
 
 /** The custom gas's fields as the case file has them; unreadable numbers are marked and left out. */
-function customGasOf(form: FormState, fieldErrors: Record<string, string>): Record<string, unknown> {
-  const g = form.gas!.custom;
+function customGasOf(g: CustomGasEdit, fieldErrors: Record<string, string>): Record<string, unknown> {
   const out: Record<string, unknown> = { name: g.name.trim() };
   const quantities: [keyof typeof g & ('mass' | 'diameter' | 'referenceTemperature'), string, string][] = [
     ['mass', 'massKg', 'the molecular mass'],
@@ -174,13 +173,13 @@ function applyGas(c: CaseInput, form: FormState, preset: Preset, fieldErrors: Re
   const z = numberOf(g.rotationalCollisionNumber);
   if (z !== null && Number.isNaN(z)) fieldErrors['gas:rotationalCollisionNumber'] = notANumber(g.rotationalCollisionNumber!, 'a number of at least 1');
   const collisionNumber = z !== null && !Number.isNaN(z) ? { rotationalCollisionNumber: z } : {};
-  if (g.source !== 'custom') {
+  if (g.source !== 'custom' || !g.custom) {
     c.gas = { ...c.gas, ...collisionNumber };
     return;
   }
   const table = c.gas.species as SpeciesId | undefined;
   const model = (form.params.model?.text.trim() || c.gas.model || 'VHS') as NonNullable<CaseInput['gas']['model']>;
-  c.gas = { custom: customGasOf(form, fieldErrors) as NonNullable<CaseInput['gas']['custom']>, model, ...collisionNumber };
+  c.gas = { custom: customGasOf(g.custom, fieldErrors) as NonNullable<CaseInput['gas']['custom']>, model, ...collisionNumber };
   const name = String(c.gas.custom!.name) || 'custom gas';
   if (table && (SPECIES_IDS as readonly string[]).includes(table)) {
     const word = new RegExp(`\\b${table}\\b(?: \\((?:HS|VHS|VSS)\\))?`);
@@ -246,7 +245,6 @@ function applyBlocks(c: CaseInput, form: FormState, fieldErrors: Record<string, 
 
 interface Placement {
   readonly form: FormState;
-  readonly draft: CaseInput;
   readonly blockRows: readonly number[];
   readonly fieldErrors: Record<string, string>;
   readonly caseErrors: string[];
@@ -260,8 +258,9 @@ function blockField(rest: string[]): string {
   return field !== undefined && BLOCK_MESSAGE_FIELDS.has(field) ? field : 'other';
 }
 
-function domainNote(d: CaseInput['domain'], unit: string): string {
-  return ` (the domain is ${lengthLabel(d.lengthXM, unit, UNIT_API)} in x by ${lengthLabel(d.lengthYM, unit, UNIT_API)} in y)`;
+/** The schema's lengths in metres ("(0.0005 m)") in the block table's unit ("(500 µm)"). */
+function inUnit(text: string, unit: string): string {
+  return text.replace(/([+-]?\d+(?:\.\d+)?(?:e[+-]?\d+)?) m\b/g, (_, n: string) => lengthLabel(Number(n), unit, UNIT_API));
 }
 
 /** Puts a validation message at its form field when its path names one, else in caseErrors. */
@@ -285,9 +284,10 @@ function placeMessage(message: string, p: Placement): void {
   }
   const k = /^blocks\.(\d+)\.([\w.]+):/.exec(message);
   if (fromForm && k && p.blockRows[Number(k[1])] !== undefined) {
+    // The row names the block already: drop the schema's "block NAME: ".
+    const own = text.replace(/^block [^:\s]+: /, '');
     const unit = form.blocks?.lengthUnit;
-    const note = unit && /outside the domain|lengthYM|lengthXM/.test(text) ? domainNote(p.draft.domain, unit) : '';
-    fieldErrors[`block:${p.blockRows[Number(k[1])]}:${blockField(k[2].split('.'))}`] ??= text + note;
+    fieldErrors[`block:${p.blockRows[Number(k[1])]}:${blockField(k[2].split('.'))}`] ??= unit ? inUnit(own, unit) : own;
     return;
   }
   const n = /^numerics\.(\w+):/.exec(message);
@@ -317,7 +317,7 @@ export function deriveCase(form: FormState): CaseDerivation {
     }
   }
   if (!draft) return { caseInput: null, draft: null, caseText, fieldErrors, caseErrors };
-  const placement: Placement = { form, draft, blockRows, fieldErrors, caseErrors };
+  const placement: Placement = { form, blockRows, fieldErrors, caseErrors };
   const parsed = parseCase(draft);
   if (!parsed.ok) for (const e of parsed.errors) placeMessage(e, placement);
   else {

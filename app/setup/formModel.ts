@@ -50,7 +50,8 @@ export interface CustomGasEdit {
  */
 export interface GasEdit {
   readonly source: 'table' | 'custom';
-  readonly custom: CustomGasEdit;
+  /** Filled from the table gas when the user first picks 'custom', then kept (also while 'table' is picked again). */
+  readonly custom?: CustomGasEdit;
   /** Z of gas.rotationalCollisionNumber; empty = the schema's default. */
   readonly rotationalCollisionNumber?: string;
 }
