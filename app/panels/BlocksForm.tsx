@@ -91,6 +91,16 @@ export function BlocksForm() {
   if (!draft) return null;
   const api = setupApi();
   const fromJson = source.kind === 'json';
+  // JSON typed by the user may lack any field the preview reads: show it only for a case that parses.
+  const parsed = fromJson ? api.parseCase(draft) : null;
+  if (parsed && !parsed.ok) {
+    return (
+      <section className="panel" aria-labelledby="blocks-title" data-testid="blocks-form">
+        <h2 id="blocks-title">Domain and solid blocks</h2>
+        <p className="hint">The domain is shown once the case JSON is valid (see its problems below).</p>
+      </section>
+    );
+  }
   const table = (!fromJson && edited) || blockTableFrom(draft, api);
   const grid = lastGrid.current;
   const st = appStore.getState();

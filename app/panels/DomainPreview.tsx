@@ -73,7 +73,9 @@ export function DomainPreview(p: DomainPreviewProps) {
   const { lengthXM: lx, lengthYM: ly } = p.domain;
   const f = frameOf(lx, ly);
   const height = MARGIN.top + f.h + MARGIN.bottom;
-  const X = (x: number) => MARGIN.left + x * f.sx;
+  // Centred, so that a narrow domain (a one-cell Couette gap) keeps room for the labels of its bottom and top.
+  const left = (WIDTH - f.w) / 2;
+  const X = (x: number) => left + x * f.sx;
   const Y = (y: number) => MARGIN.top + f.h - y * f.sy;
   const svg = useRef<SVGSVGElement>(null);
   const [drag, setDrag] = useState<{ x0: number; y0: number; x1: number; y1: number } | null>(null);
@@ -85,7 +87,7 @@ export function DomainPreview(p: DomainPreviewProps) {
     const vx = ((e.clientX - r.left) * WIDTH) / r.width;
     const vy = ((e.clientY - r.top) * height) / r.height;
     return {
-      x: snapToGrid((vx - MARGIN.left) / f.sx, lx, p.grid?.cellsX ?? null),
+      x: snapToGrid((vx - left) / f.sx, lx, p.grid?.cellsX ?? null),
       y: snapToGrid((MARGIN.top + f.h - vy) / f.sy, ly, p.grid?.cellsY ?? null),
     };
   };
@@ -145,7 +147,7 @@ export function DomainPreview(p: DomainPreviewProps) {
           data-testid="domain-area"
           onPointerDown={down} onPointerMove={move} onPointerUp={up} onPointerCancel={() => setDrag(null)}
         />
-        <text className="domain-extent" x={MARGIN.left} y={height - 8}>
+        <text className="domain-extent" x={WIDTH / 2} y={height - 8}>
           x 0 … {lengthLabel(lx, p.lengthUnit, api)}{radial ? ' (axis)' : ''}, {radial ? 'r' : 'y'} 0 … {lengthLabel(ly, p.lengthUnit, api)}
           {p.grid ? `; grid ${p.grid.cellsX} × ${p.grid.cellsY} cells` : ''}{f.toScale ? '' : '; not to scale'}
         </text>
