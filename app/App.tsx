@@ -7,6 +7,8 @@ import type { ViewName } from './store/types';
 import { ExamplePicker } from './panels/ExamplePicker';
 import { GeometryForm } from './panels/GeometryForm';
 import { WallForm } from './panels/WallForm';
+import { GasForm } from './panels/GasForm';
+import { BlocksForm } from './panels/BlocksForm';
 import { CaseJsonPanel } from './panels/CaseJsonPanel';
 import { PlanReview } from './panels/PlanReview';
 import { RunLauncher } from './panels/RunLauncher';
@@ -53,7 +55,9 @@ function SetupView({ examples }: { examples: readonly ExampleEntry[] }) {
       <div className="column">
         <ExamplePicker examples={examples} />
         <GeometryForm />
+        <GasForm />
         <WallForm />
+        <BlocksForm />
         <CaseJsonPanel />
       </div>
       <div className="column">

@@ -50,7 +50,7 @@ async function start(store: AppStore): Promise<ExampleEntry[]> {
   let last = formOf(store.getState());
   store.subscribe((s) => {
     const form = formOf(s);
-    if (form.presetName === last.presetName && form.params === last.params && form.walls === last.walls && form.source === last.source && form.caseText === last.caseText) return;
+    if (form.presetName === last.presetName && form.params === last.params && form.walls === last.walls && form.gas === last.gas && form.blocks === last.blocks && form.source === last.source && form.caseText === last.caseText) return;
     last = form;
     if (timer) clearTimeout(timer);
     timer = setTimeout(() => void saveForm(form).catch(() => undefined), 300);

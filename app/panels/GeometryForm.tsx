@@ -1,21 +1,25 @@
-/** The starting geometry (read from the engine's presets at run time) and the form of its parameters. */
+/**
+ * The starting geometry (read from the engine's presets at run time) and the form of its parameters; the gas and
+ * collision model parameters are edited in the gas panel (GasForm).
+ */
 import { setupApi } from '../engine/loadEngine';
 import type { Preset } from '../../engine/case/presets';
 import { ParameterField } from '../fields/ParameterField';
 import { appStore, useApp } from '../store/appStore';
 
 const NUMERICS = new Set(['cells', 'cellsX', 'cellsY', 'particlesPerCell', 'transientSteps', 'sampleSteps', 'seed', 'timeStep']);
+const IN_GAS_PANEL = new Set(['gas', 'model']);
 
 export function GeometryForm() {
   const presetName = useApp((s) => s.presetName);
   const source = useApp((s) => s.source);
   const presets = setupApi().PRESETS as Readonly<Record<string, Preset>>;
   const preset = presets[presetName];
-  const physical = preset?.parameters.filter((p) => !NUMERICS.has(p.name)) ?? [];
+  const physical = preset?.parameters.filter((p) => !NUMERICS.has(p.name) && !IN_GAS_PANEL.has(p.name)) ?? [];
   const numerics = preset?.parameters.filter((p) => NUMERICS.has(p.name)) ?? [];
   return (
     <section className="panel" aria-labelledby="geometry-title">
-      <h2 id="geometry-title">Geometry and gas</h2>
+      <h2 id="geometry-title">Geometry and conditions</h2>
       <div className="field">
         <label htmlFor="preset-select">starting geometry</label>
         <select id="preset-select" value={presetName} onChange={(e) => appStore.getState().selectPreset(e.target.value)}>

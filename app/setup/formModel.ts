@@ -1,7 +1,8 @@
 /**
- * The set-up form as plain data: one text and unit per preset parameter, per-wall edits on top of the built case,
- * and where the case currently comes from (the form, or JSON typed or opened by the user). No engine imports: the
- * engine's functions arrive as an argument (the lazily loaded set-up API).
+ * The set-up form as plain data: one text and unit per preset parameter; edits applied on top of the case the preset
+ * builds (per-wall model, accommodation, temperature and speed; a custom gas; the solid blocks); and where the case
+ * currently comes from (the form, or JSON typed or opened by the user). No engine imports: the engine's functions
+ * arrive as an argument (the lazily loaded set-up API).
  */
 import type { SetupApi } from '../engine/loadEngine';
 import type { PresetParameter } from '../../engine/case/presets';
@@ -19,16 +20,72 @@ export interface WallEdit {
   readonly accommodation?: string;
   readonly normalAccommodation?: string;
   readonly tangentialAccommodation?: string;
+  /** Wall temperature in K or °C; absent or empty text = as the preset builds it. */
+  readonly temperature?: ParamEntry;
+  /** Speed along the wall (x for the bottom and top walls, y for the left and right walls). */
+  readonly speed?: ParamEntry;
 }
 export type WallEdits = Readonly<Partial<Record<SideName, WallEdit>>>;
 
 /** 'form': the case is built from the preset form; 'json': the user's own JSON (edited, opened or dropped). */
 export type CaseSource = { readonly kind: 'form' } | { readonly kind: 'json'; readonly label: string };
 
+/** A gas of the user's own: the fields of the case file's gas.custom, each with its unit. */
+export interface CustomGasEdit {
+  readonly name: string;
+  /** Mass of one molecule; unit g/mol (molar mass) or kg. */
+  readonly mass: ParamEntry;
+  readonly diameter: ParamEntry;
+  readonly referenceTemperature: ParamEntry;
+  readonly viscosityIndex: string;
+  readonly scatteringExponent: string;
+  /** '0', '2' or '3'. */
+  readonly rotationalDof: string;
+}
+
+/**
+ * The gas. The table gas and the collision model are the preset's own `gas` and `model` parameters (so the pressure
+ * the preset derives from the Knudsen number is that gas's); 'custom' replaces the table gas by `custom`, keeping
+ * the Knudsen number (every pressure is rescaled, see deriveCase.ts).
+ */
+export interface GasEdit {
+  readonly source: 'table' | 'custom';
+  /** Filled from the table gas when the user first picks 'custom', then kept (also while 'table' is picked again). */
+  readonly custom?: CustomGasEdit;
+  /** Z of gas.rotationalCollisionNumber; empty = the schema's default. */
+  readonly rotationalCollisionNumber?: string;
+}
+
+/** One solid block as typed: coordinates in the table's length unit, its wall temperature in the table's unit. */
+export interface BlockEdit {
+  readonly name: string;
+  readonly xMin: string;
+  readonly xMax: string;
+  readonly yMin: string;
+  readonly yMax: string;
+  readonly temperature: string;
+  readonly model: string;
+  readonly accommodation?: string;
+  readonly normalAccommodation?: string;
+  readonly tangentialAccommodation?: string;
+  /** Per-face walls of a block the preset built, carried over unchanged (the form does not edit them). */
+  readonly faces?: unknown;
+}
+
+export interface BlockTable {
+  readonly lengthUnit: string;
+  readonly temperatureUnit: string;
+  readonly rows: readonly BlockEdit[];
+}
+
 export interface FormState {
   readonly presetName: string;
   readonly params: ParamEntries;
   readonly walls: WallEdits;
+  /** Absent: the table gas of the preset's parameters. */
+  readonly gas?: GasEdit;
+  /** Absent or null: the blocks as the preset builds them; a table replaces them all. */
+  readonly blocks?: BlockTable | null;
   readonly source: CaseSource;
   /** The case as JSON text: built from the form, or the user's own. */
   readonly caseText: string;
@@ -42,7 +99,49 @@ const PREFERRED_UNITS: Readonly<Record<string, readonly string[]>> = {
   speed: ['m/s'],
 };
 
-export function unitChoices(kind: string, api: SetupApi): readonly string[] {
+/** Units of the mass of one molecule: the molar mass people look up, or kilograms per molecule as the case file has it. */
+export const MOLECULAR_MASS_UNITS = ['g/mol', 'kg'] as const;
+
+/** The part of the set-up API that unit conversions need. */
+export type UnitApi = Pick<SetupApi, 'convertFromSI' | 'unitsOf' | 'AVOGADRO_PER_MOL'>;
+
+/** An SI value in `unit`, including the molecular-mass units the engine's unit table does not have. */
+export function fromSI(valueSI: number, unit: string, api: UnitApi): number {
+  if (unit === 'g/mol') return valueSI * api.AVOGADRO_PER_MOL * 1e3;
+  if (unit === 'kg') return valueSI;
+  return api.convertFromSI(valueSI, unit);
+}
+
+/**
+ * The inverse of fromSI; the engine's conversions are affine (°C), so two points give it. Rounded to 15 significant
+ * digits, which removes the last-bit noise of the division (1.8 µm is 1.8e-6 m, 26.85 °C is 300 K) and nothing a
+ * typed value holds.
+ */
+export function toSI(value: number, unit: string, api: UnitApi): number {
+  const offset = fromSI(0, unit, api);
+  return Number(((value - offset) / (fromSI(1, unit, api) - offset)).toPrecision(15));
+}
+
+/** A form text as a number: null when empty, NaN when not a number (the minus sign U+2212 is accepted). */
+export function numberOf(text: string | undefined): number | null {
+  if (text === undefined || text.trim() === '') return null;
+  const t = text.trim().replace('\u2212', '-');
+  return /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/.test(t) ? Number(t) : Number.NaN;
+}
+
+/** An entry's value in SI: null when empty, NaN when the text is not a number. */
+export function entrySI(entry: ParamEntry | undefined, api: UnitApi): number | null {
+  const v = numberOf(entry?.text);
+  if (v === null || Number.isNaN(v)) return v;
+  return entry!.unit ? toSI(v, entry!.unit, api) : v;
+}
+
+/** An entry showing an SI value in `unit`. */
+export function entryOfSI(valueSI: number, unit: string, api: UnitApi): ParamEntry {
+  return { text: numberText(fromSI(valueSI, unit, api)), unit };
+}
+
+export function unitChoices(kind: string, api: Pick<SetupApi, 'unitsOf'>): readonly string[] {
   if (kind === 'count' || kind === 'choice' || kind === 'dimensionless') return [];
   const all = api.unitsOf(kind as Parameters<SetupApi['unitsOf']>[0]);
   const preferred = (PREFERRED_UNITS[kind] ?? []).filter((u) => all.includes(u));
@@ -80,12 +179,8 @@ export function entriesFor(presetName: string, api: SetupApi, given: Readonly<Re
 }
 
 /** The same physical value in another unit (the text is converted, not kept), or the text unchanged if unparsable. */
-export function convertEntry(entry: ParamEntry, toUnit: string, api: SetupApi): ParamEntry {
-  const v = Number(entry.text.replace('\u2212', '-'));
-  if (entry.text.trim() === '' || !Number.isFinite(v) || !entry.unit) return { text: entry.text, unit: toUnit };
-  // convertFromSI is affine for °C: use two points to stay exact for offsets.
-  const offset = api.convertFromSI(0, entry.unit);
-  const scale = api.convertFromSI(1, entry.unit) - offset;
-  const valueSI = (v - offset) / scale;
-  return { text: numberText(api.convertFromSI(valueSI, toUnit)), unit: toUnit };
+export function convertEntry(entry: ParamEntry, toUnit: string, api: UnitApi): ParamEntry {
+  const v = numberOf(entry.text);
+  if (v === null || !Number.isFinite(v) || !entry.unit) return { text: entry.text, unit: toUnit };
+  return entryOfSI(toSI(v, entry.unit, api), toUnit, api);
 }

@@ -10,7 +10,7 @@ export interface StoreDeps {
 }
 
 export function formOf(s: FormState): FormState {
-  return { presetName: s.presetName, params: s.params, walls: s.walls, source: s.source, caseText: s.caseText };
+  return { presetName: s.presetName, params: s.params, walls: s.walls, gas: s.gas, blocks: s.blocks ?? null, source: s.source, caseText: s.caseText };
 }
 
 /** Derives case, messages and plan from a form and the run settings. */
@@ -36,6 +36,8 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
       presetName: '',
       params: {},
       walls: {},
+      gas: undefined,
+      blocks: null,
       source: { kind: 'form' },
       caseText: '',
       derived: null,
@@ -43,11 +45,11 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
       planErrors: [],
       fileMessage: null,
       exampleTitle: null,
-      selectPreset: (name) => update({ presetName: name, params: entriesFor(name, deps.setup()), walls: {}, source: { kind: 'form' }, fileMessage: null, exampleTitle: null }),
+      selectPreset: (name) => update({ presetName: name, params: entriesFor(name, deps.setup()), walls: {}, gas: undefined, blocks: null, source: { kind: 'form' }, fileMessage: null, exampleTitle: null }),
       applyExample: (example, caseText) => {
         const api = deps.setup();
         if (example.preset && Object.hasOwn(api.PRESETS, example.preset)) {
-          update({ presetName: example.preset, params: entriesFor(example.preset, api, example.parameters ?? {}), walls: {}, source: { kind: 'form' }, fileMessage: null, exampleTitle: example.title });
+          update({ presetName: example.preset, params: entriesFor(example.preset, api, example.parameters ?? {}), walls: {}, gas: undefined, blocks: null, source: { kind: 'form' }, fileMessage: null, exampleTitle: example.title });
         } else if (caseText !== null) {
           update({ source: { kind: 'json', label: `example ${example.file}` }, caseText, fileMessage: null, exampleTitle: example.title });
         }
@@ -58,6 +60,8 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
         if (entry) update({ params: { ...get().params, [name]: convertEntry(entry, unit, deps.setup()) } });
       },
       setWall: (side, patch) => update({ walls: { ...get().walls, [side]: { ...get().walls[side], ...patch } } }),
+      setGas: (gas) => update({ gas }),
+      setBlocks: (blocks) => update({ blocks }),
       editCaseText: (text) => update({ source: { kind: 'json', label: 'edited as JSON' }, caseText: text }),
       openCaseText: (text, label) => {
         const checked = deps.setup().checkCaseText(text);
@@ -69,7 +73,8 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
         return true;
       },
       rebuildFromForm: () => update({ source: { kind: 'form' }, fileMessage: null }),
-      restoreForm: (form) => update({ ...form }),
+      // Forms saved before the gas and block edits existed have neither: the preset's gas and blocks then stand.
+      restoreForm: (form) => update({ gas: undefined, blocks: null, ...form }),
       setFileMessage: (m) => set({ fileMessage: m }),
     };
   };

@@ -4,14 +4,14 @@
  * results live in results/resultCache.ts and the store holds their id and a version number.
  */
 import type { CaseDerivation } from '../setup/deriveCase';
-import type { FormState, ParamEntry, WallEdit, CaseSource } from '../setup/formModel';
+import type { FormState, ParamEntry, WallEdit, CaseSource, GasEdit, BlockTable } from '../setup/formModel';
 import type { PlanView } from '../setup/planView';
 import type { RunProgressView } from '../engine/runApi';
 import type { SideName } from '../../engine/case/schema';
 import type { SavedRunMeta } from '../io/savedRun';
 import type { ExampleEntry } from '../io/examples';
 
-export type { FormState, ParamEntry, WallEdit, CaseSource };
+export type { FormState, ParamEntry, WallEdit, CaseSource, GasEdit, BlockTable };
 
 export interface FileMessage {
   readonly kind: 'error' | 'info';
@@ -31,6 +31,10 @@ export interface CaseSlice extends FormState {
   setParamText(name: string, text: string): void;
   setParamUnit(name: string, unit: string): void;
   setWall(side: SideName, patch: WallEdit): void;
+  /** The gas edit; undefined = the preset's table gas parameters alone. */
+  setGas(gas: GasEdit | undefined): void;
+  /** The block table replacing the preset's blocks; null = the preset's blocks again. */
+  setBlocks(blocks: BlockTable | null): void;
   editCaseText(text: string): void;
   /** Opens a case file's text: refused with a message (and nothing changed) unless it is a valid case. */
   openCaseText(text: string, label: string): boolean;
