@@ -1,8 +1,10 @@
 /**
  * Start-up: load the set-up part of the engine, restore the set-up and saved runs from IndexedDB (or open the first
- * example on a first visit), keep the set-up saved as it changes, and load the run chunk while idle.
+ * example on a first visit), keep the set-up saved as it changes, and warm the run and plot chunks while idle so
+ * they are not parsed in the middle of a run.
  */
 import { loadRunApi, loadSetupApi } from './engine/loadEngine';
+import { warmPlotly } from './charts/plotly';
 import { fetchExampleCase, fetchExamples, type ExampleEntry } from './io/examples';
 import { listRuns, loadForm, loadSpeed, saveForm } from './io/db';
 import { formOf } from './store/caseSlice';
@@ -53,22 +55,34 @@ async function start(store: AppStore): Promise<ExampleEntry[]> {
     if (timer) clearTimeout(timer);
     timer = setTimeout(() => void saveForm(form).catch(() => undefined), 300);
   });
-  const warm = () => void warmChunks();
+  const warm = () => void warmChunks(store);
   if ('requestIdleCallback' in window) window.requestIdleCallback(warm, { timeout: 2000 });
   else setTimeout(warm, 500);
   return examples;
 }
 
+const BUSY = new Set(['starting', 'running', 'paused', 'stopping']);
+
 /**
- * Loads the run chunk while the page is idle, so the first run starts at once. Plotly is not loaded ahead: evaluating
- * it holds the page's thread for a second or more (five under load), which would freeze the set-up at a random
- * moment; it loads when a plot is first shown, and live views during a run need none (they are plain SVG).
+ * Loads the run chunk, then plotly. Evaluating plotly holds the page's thread for about a second (more on a loaded
+ * machine), and a run shows its live views without it: if the user has started a run meanwhile, plotly waits until
+ * the run ends. Marks `tenuis-warm-done` when all is loaded.
  */
-async function warmChunks(): Promise<void> {
+async function warmChunks(store: AppStore): Promise<void> {
   try {
     await loadRunApi();
+    if (BUSY.has(store.getState().status)) {
+      await new Promise<void>((resolve) => {
+        const unsubscribe = store.subscribe((s) => {
+          if (BUSY.has(s.status)) return;
+          unsubscribe();
+          resolve();
+        });
+      });
+    }
+    await warmPlotly();
     performance.mark('tenuis-warm-done');
   } catch {
-    // Warming is only a head start: the chunk loads again when first needed.
+    // Warming is only a head start: each chunk loads again when first needed.
   }
 }

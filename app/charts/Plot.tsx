@@ -47,7 +47,6 @@ export function Plot({ data, layout, filename, label, testId }: PlotProps) {
   return (
     <figure className="plot" aria-label={label} data-testid={testId} data-drawn={drawn ? 'yes' : 'no'}>
       <div ref={ref} className="plot-area" />
-      {!drawn && !failure && <p className="hint" role="status">Drawing the plot… (the plotting library loads on first use)</p>}
       {failure && <p role="alert">The plot could not be drawn: {failure}</p>}
       <figcaption className="plot-actions">
         <button type="button" onClick={() => save('png')} disabled={!drawn}>Save plot as PNG</button>

@@ -26,6 +26,23 @@ export async function drawPlot(div: HTMLDivElement, data: Data[], layout: Partia
   await Plotly.react(div, data, { margin: { l: 70, r: 20, t: 30, b: 55 }, font: { family: 'system-ui, sans-serif', size: 12 }, ...layout }, CONFIG);
 }
 
+/**
+ * Loads plotly and draws one throw-away plot off-screen while the page is idle: its first drawing sets up styles and
+ * measures fonts, which would otherwise land in the middle of a run.
+ */
+export async function warmPlotly(): Promise<void> {
+  const Plotly = await loadPlotly();
+  const div = document.createElement('div');
+  div.style.cssText = 'position:absolute;left:-10000px;top:0;width:400px;height:300px';
+  document.body.appendChild(div);
+  try {
+    await Plotly.newPlot(div, [{ type: 'scatter', x: [0, 1], y: [0, 1], error_y: { type: 'data', array: [0.1, 0.1] } }, { type: 'heatmap', z: [[0, 1]] }], { margin: { t: 10 } }, { staticPlot: true });
+  } finally {
+    Plotly.purge(div);
+    div.remove();
+  }
+}
+
 export async function purgePlot(div: HTMLDivElement): Promise<void> {
   const Plotly = await loadPlotly();
   Plotly.purge(div);
