@@ -24,6 +24,8 @@ export interface SavedSweepMeta {
   readonly pointsDone: number;
   readonly pointCount: number;
   readonly failedPoints: number;
+  /** Replicas each point ran with. */
+  readonly replicas: number;
 }
 
 /** The parts of the plan the view shows (the per-point cases are not kept: baseCase and request plan them again). */
@@ -49,7 +51,7 @@ export interface SavedSweepRecord extends SavedSweepMeta {
 
 /** Keys of the record that the list shows; typed over SavedSweepMeta so a new field must be placed here. */
 const META_KEYS: { readonly [K in keyof SavedSweepMeta]: true } = {
-  id: true, name: true, startedAt: true, updatedAt: true, caseName: true, parameter: true, status: true, pointsDone: true, pointCount: true, failedPoints: true,
+  id: true, name: true, startedAt: true, updatedAt: true, caseName: true, parameter: true, status: true, pointsDone: true, pointCount: true, failedPoints: true, replicas: true,
 };
 
 export function sweepMetaOf(r: SavedSweepRecord): SavedSweepMeta {

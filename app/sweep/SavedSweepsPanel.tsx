@@ -20,6 +20,7 @@ function SavedSweepRow({ sweep, shown, activeId, busy }: { sweep: SavedSweepMeta
         {shown && <span className="hint"> (shown)</span>}
       </td>
       <td data-testid="saved-sweep-status">{sweepStandingText(sweep, activeId)}</td>
+      <td>{sweep.replicas}</td>
       <td>{new Date(sweep.startedAt).toLocaleString()}</td>
       <td>
         <div className="actions">
@@ -43,7 +44,7 @@ export function SavedSweepsPanel() {
       <h2 id="saved-sweeps-title">Saved sweeps in this browser</h2>
       {saved.length === 0 ? <p>No saved sweeps yet: every sweep is kept here as its points finish.</p> : (
         <table className="grid" aria-label="saved sweeps">
-          <thead><tr><th>name</th><th>status</th><th>started</th><th>actions</th></tr></thead>
+          <thead><tr><th>name</th><th>status</th><th>replicas</th><th>started</th><th>actions</th></tr></thead>
           <tbody>{saved.map((s) => <SavedSweepRow key={s.id} sweep={s} shown={s.id === savedId} activeId={activeId} busy={busy} />)}</tbody>
         </table>
       )}

@@ -77,7 +77,8 @@ export async function startSweep(): Promise<void> {
     if (!planned.quantities.some((q) => q.key === s.quantity)) s.setForm({ quantity: planned.quantities[0]?.key ?? '' });
     const plan = { caseName: planned.caseName, planar: planned.planar, hasFlow: planned.hasFlow, quantities: planned.quantities, pointCount: planned.points.length };
     const id = newSweepId();
-    const kept = keepSweep(newSweepRecord({ id, now: now(), form: sweepStore.getState(), baseCase: caseInput, request, plan }));
+    const replicas = appStore.getState().replicas;
+    const kept = keepSweep(newSweepRecord({ id, now: now(), form: sweepStore.getState(), baseCase: caseInput, request, plan, replicas }));
     keeper = kept;
     set({ status: 'running', planned: plan, savedId: id, request, baseCase: caseInput, current: { index: 0, count: planned.points.length, progress: null } });
     // The curves are evaluated a few values per macrotask, beside the first point's run.
@@ -92,7 +93,7 @@ export async function startSweep(): Promise<void> {
     });
     const handle = runSweepPoints(
       planned.points,
-      { replicas: appStore.getState().replicas, liveEveryMs: LIVE_EVERY_MS, hooks: readTestHooks() },
+      { replicas, liveEveryMs: LIVE_EVERY_MS, hooks: readTestHooks() },
       { startRun: api.startRun, rowOf: api.sweepRowOf },
       {
         onPointStart: (index, count) => {

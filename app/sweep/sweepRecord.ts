@@ -24,6 +24,7 @@ export interface NewSweep {
   readonly baseCase: unknown;
   readonly request: SweepRequest;
   readonly plan: SweepPlanOutline;
+  readonly replicas: number;
 }
 
 /** The record saved as the sweep starts: no point ended yet, marked running. */
@@ -38,6 +39,7 @@ export function newSweepRecord(s: NewSweep): SavedSweepRecord {
     parameter: s.request.parameter,
     status: 'running',
     pointCount: s.plan.pointCount,
+    replicas: s.replicas,
     ...sweepCounts([]),
     baseCase: s.baseCase,
     request: s.request,

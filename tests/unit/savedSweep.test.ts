@@ -66,7 +66,7 @@ const row = (point: number, status: SweepRow['status'], mean: number | null): Sw
 function started() {
   // The store's state object is passed as the form: only the form's fields may be kept.
   const storeState = { ...form, rows: [], setForm: () => undefined } as unknown as SweepFormState;
-  return newSweepRecord({ id: 'sweep-1', now: '2026-12-02T08:00:00.000Z', form: storeState, baseCase: { name: 'tube', gas: { species: 'N2' } }, request, plan });
+  return newSweepRecord({ id: 'sweep-1', now: '2026-12-02T08:00:00.000Z', form: storeState, baseCase: { name: 'tube', gas: { species: 'N2' } }, request, plan, replicas: 2 });
 }
 
 describe('the saved sweep record', () => {
@@ -74,11 +74,11 @@ describe('the saved sweep record', () => {
     const r = started();
     expect(r).toEqual({
       id: 'sweep-1', name: 'tube: Kn 1–10, 3 points (log)', startedAt: '2026-12-02T08:00:00.000Z', updatedAt: '2026-12-02T08:00:00.000Z',
-      caseName: 'tube', parameter: 'knudsen', status: 'running', pointsDone: 0, pointCount: 3, failedPoints: 0,
+      caseName: 'tube', parameter: 'knudsen', status: 'running', pointsDone: 0, pointCount: 3, failedPoints: 0, replicas: 2,
       baseCase: { name: 'tube', gas: { species: 'N2' } }, request, form, plan, rows: [], failures: {}, curves: null, notices: [],
     });
     expect(isSavedSweepRecord(r)).toBe(true);
-    expect(sweepMetaOf(r)).toEqual({ id: 'sweep-1', name: r.name, startedAt: r.startedAt, updatedAt: r.updatedAt, caseName: 'tube', parameter: 'knudsen', status: 'running', pointsDone: 0, pointCount: 3, failedPoints: 0 });
+    expect(sweepMetaOf(r)).toEqual({ id: 'sweep-1', name: r.name, startedAt: r.startedAt, updatedAt: r.updatedAt, caseName: 'tube', parameter: 'knudsen', status: 'running', pointsDone: 0, pointCount: 3, failedPoints: 0, replicas: 2 });
   });
 
   it('names pressure sweeps with their unit', () => {
