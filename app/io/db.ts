@@ -83,13 +83,15 @@ export async function getSweep(id: string): Promise<SavedSweepRecord | undefined
 
 /**
  * Changes a saved sweep's fields in one transaction, keeping the others (a rename made while it runs survives the
- * next point's update); a sweep deleted meanwhile stays deleted.
+ * next point's update); a sweep deleted meanwhile stays deleted (undefined). Returns what the list shows of it.
  */
-export async function patchSweep(id: string, patch: Partial<Omit<SavedSweepRecord, 'id'>>): Promise<void> {
+export async function patchSweep(id: string, patch: Partial<Omit<SavedSweepRecord, 'id'>>): Promise<SavedSweepMeta | undefined> {
   const tx = (await db()).transaction('sweeps', 'readwrite');
   const r = await tx.store.get(id);
-  if (r) await tx.store.put({ ...r, ...patch, id });
+  const updated = r ? { ...r, ...patch, id } : undefined;
+  if (updated) await tx.store.put(updated);
   await tx.done;
+  return updated && sweepMetaOf(updated);
 }
 
 /** All saved sweeps, the latest started first. */

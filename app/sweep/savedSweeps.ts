@@ -4,7 +4,7 @@
  */
 import { loadRunApi } from '../engine/loadEngine';
 import { deleteSweep, getSweep, listSweeps, patchSweep, putSweep } from '../io/db';
-import type { SavedSweepRecord } from '../io/savedSweep';
+import { sweepMetaOf, type SavedSweepMeta, type SavedSweepRecord } from '../io/savedSweep';
 import { shownSweepOf } from './sweepRecord';
 import { initialSweepRun, sweepStore, SWEEP_BUSY as BUSY } from './sweepStore';
 
@@ -24,6 +24,17 @@ export async function refreshSavedSweeps(): Promise<void> {
   sweepStore.getState().setSaved(await listSweeps());
 }
 
+/**
+ * Puts one sweep's new meta into the list in place (the list stays ordered by start time), without reading every
+ * saved sweep back with all its rows after each point.
+ */
+function showMeta(meta: SavedSweepMeta | undefined): void {
+  if (!meta) return;
+  const st = sweepStore.getState();
+  const others = st.saved.filter((m) => m.id !== meta.id);
+  st.setSaved([...others, meta].sort((a, b) => b.startedAt.localeCompare(a.startedAt)));
+}
+
 export interface SweepKeeper {
   /** Saves these fields of the sweep's record (in the order given: a later point never lands before an earlier one). */
   update(patch: Partial<Omit<SavedSweepRecord, 'id'>>): void;
@@ -39,10 +50,10 @@ export function keepSweep(record: SavedSweepRecord): SweepKeeper {
     warned = true;
     notice(`The sweep could not be saved in this browser: ${(e as Error).message}`);
   };
-  let chain = putSweep(record).then(refreshSavedSweeps).catch(failed);
+  let chain = putSweep(record).then(() => showMeta(sweepMetaOf(record))).catch(failed);
   return {
     update(patch) {
-      chain = chain.then(() => patchSweep(record.id, patch)).then(refreshSavedSweeps).catch(failed);
+      chain = chain.then(() => patchSweep(record.id, patch)).then(showMeta).catch(failed);
     },
     settled: () => chain,
   };
@@ -87,8 +98,7 @@ export async function reopenSavedSweep(id: string): Promise<void> {
 export async function renameSavedSweep(id: string, name: string): Promise<void> {
   const trimmed = name.trim();
   if (!trimmed) return;
-  await patchSweep(id, { name: trimmed });
-  await refreshSavedSweeps();
+  showMeta(await patchSweep(id, { name: trimmed }));
 }
 
 /** Deletes a saved sweep that is not running; the view stops showing it if it did. */
