@@ -153,4 +153,15 @@ test('a sweep a reload ends is shown as interrupted at the point that was runnin
   // Nothing runs any more: a new sweep can start.
   await expect(page.getByRole('button', { name: 'Run the sweep' })).toBeEnabled();
   await expect(page.getByRole('button', { name: /Stop the sweep/ })).toBeDisabled();
+
+  // A new one-point sweep replaces it in the view; Open shows the interrupted one again, the same to the last digit.
+  await w.view('1 Set up and check');
+  await w.setParam('sampleSteps', '1000');
+  await startKnudsenSweep(w, page, '1');
+  await expect(status).toContainText('finished — 1 of 1 points run', { timeout: 60_000 });
+  await expect(saved).toHaveCount(2);
+  await saved.filter({ hasText: 'interrupted' }).getByRole('button', { name: 'Open' }).click();
+  await expect(status).toContainText(`interrupted at point ${k} of 3`);
+  expect(await shownRows(page)).toEqual(rows);
+  await expect(saved.filter({ hasText: 'interrupted' })).toHaveAttribute('data-shown', 'yes');
 });
