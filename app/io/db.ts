@@ -1,25 +1,29 @@
 /**
- * Work kept in the browser's IndexedDB (through idb): the set-up as last edited, finished and stopped runs, and the
- * measured speed of a replica worker. A reload restores all of it.
+ * Work kept in the browser's IndexedDB (through idb): the set-up as last edited, finished and stopped runs, sweeps
+ * (saved as each point ends), and the measured speed of a replica worker. A reload restores all of it. The stores
+ * and the upgrade from older versions are in dbUpgrade.ts.
  */
 import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
 import type { FormState } from '../setup/formModel';
 import { metaOf, type SavedRunMeta, type SavedRunRecord } from './savedRun';
+import { isSavedSweepRecord, sweepMetaOf, type SavedSweepMeta, type SavedSweepRecord } from './savedSweep';
+import { upgradeWorkbenchDb, WORKBENCH_DB_NAME, WORKBENCH_DB_VERSION } from './dbUpgrade';
 
 interface TenuisDb extends DBSchema {
   runs: { key: string; value: SavedRunRecord };
   settings: { key: string; value: unknown };
+  sweeps: { key: string; value: SavedSweepRecord };
 }
 
-const DB_NAME = 'tenuis-workbench';
-const DB_VERSION = 1;
 let dbPromise: Promise<IDBPDatabase<TenuisDb>> | null = null;
 
 function db(): Promise<IDBPDatabase<TenuisDb>> {
-  dbPromise ??= openDB<TenuisDb>(DB_NAME, DB_VERSION, {
-    upgrade(d) {
-      d.createObjectStore('runs', { keyPath: 'id' });
-      d.createObjectStore('settings');
+  dbPromise ??= openDB<TenuisDb>(WORKBENCH_DB_NAME, WORKBENCH_DB_VERSION, {
+    upgrade(d, oldVersion) {
+      upgradeWorkbenchDb({
+        hasStore: (name) => d.objectStoreNames.contains(name as 'runs'),
+        createStore: (spec) => void d.createObjectStore(spec.name, spec.keyPath ? { keyPath: spec.keyPath } : undefined),
+      }, oldVersion);
     },
   });
   return dbPromise;
@@ -66,4 +70,36 @@ export async function renameRun(id: string, name: string): Promise<void> {
 
 export async function deleteRun(id: string): Promise<void> {
   await (await db()).delete('runs', id);
+}
+
+export async function putSweep(record: SavedSweepRecord): Promise<void> {
+  await (await db()).put('sweeps', record);
+}
+
+export async function getSweep(id: string): Promise<SavedSweepRecord | undefined> {
+  const r = await (await db()).get('sweeps', id);
+  return isSavedSweepRecord(r) ? r : undefined;
+}
+
+/**
+ * Changes a saved sweep's fields in one transaction, keeping the others (a rename made while it runs survives the
+ * next point's update); a sweep deleted meanwhile stays deleted (undefined). Returns what the list shows of it.
+ */
+export async function patchSweep(id: string, patch: Partial<Omit<SavedSweepRecord, 'id'>>): Promise<SavedSweepMeta | undefined> {
+  const tx = (await db()).transaction('sweeps', 'readwrite');
+  const r = await tx.store.get(id);
+  const updated = r ? { ...r, ...patch, id } : undefined;
+  if (updated) await tx.store.put(updated);
+  await tx.done;
+  return updated && sweepMetaOf(updated);
+}
+
+/** All saved sweeps, the latest started first. */
+export async function listSweeps(): Promise<SavedSweepMeta[]> {
+  const all = await (await db()).getAll('sweeps');
+  return all.filter(isSavedSweepRecord).map(sweepMetaOf).sort((a, b) => b.startedAt.localeCompare(a.startedAt));
+}
+
+export async function deleteSweep(id: string): Promise<void> {
+  await (await db()).delete('sweeps', id);
 }

@@ -20,7 +20,7 @@ export function SweepExport() {
     if (kind === 'csv') {
       downloadText(`${base}-sweep.csv`, api.sweepCsv(all, { parameter: request.parameter, planar: planned.planar, hasFlow: planned.hasFlow }), 'text/csv;charset=utf-8');
     } else {
-      const j = api.sweepJson(all, { caseName: planned.caseName, parameter: request.parameter, from: request.from, to: request.to, points: request.points, spacing: request.spacing, interrupted: st === 'stopped' });
+      const j = api.sweepJson(all, { caseName: planned.caseName, parameter: request.parameter, from: request.from, to: request.to, points: request.points, spacing: request.spacing, interrupted: st === 'stopped' || st === 'interrupted' });
       downloadText(`${base}-sweep.json`, `${JSON.stringify(j, null, 2)}\n`, 'application/json');
     }
   };

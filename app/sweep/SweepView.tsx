@@ -1,11 +1,16 @@
-/** The Sweep view: the form and progress on the left; the plot, the points' numbers and the exports on the right. */
-import { useCallback, useMemo } from 'react';
+/**
+ * The Sweep view: the form, progress, exports and saved sweeps on the left; the plot and the points' numbers on the
+ * right. The first time it is shown it lists the saved sweeps and shows the latest again.
+ */
+import { useCallback, useEffect, useMemo } from 'react';
 import { setupApi } from '../engine/loadEngine';
 import { SweepForm } from './SweepForm';
 import { SweepProgress } from './SweepProgress';
 import { SweepPlot } from './SweepPlot';
 import { SweepTable } from './SweepTable';
 import { SweepExport } from './SweepExport';
+import { SavedSweepsPanel } from './SavedSweepsPanel';
+import { restoreLastSweep } from './savedSweeps';
 import { sweepSeries } from './sweepSeries';
 import { sweepStore, useSweep } from './sweepStore';
 
@@ -42,12 +47,14 @@ function SweepResults() {
 }
 
 export function SweepView() {
+  useEffect(() => void restoreLastSweep(), []);
   return (
     <div className="columns">
       <div className="column">
         <SweepForm />
         <SweepProgress />
         <SweepExport />
+        <SavedSweepsPanel />
       </div>
       <div className="column">
         <SweepResults />

@@ -1,16 +1,21 @@
 /**
  * The sweep's own small store (zustand, vanilla core like the app's): the form's texts, what the sweep is doing,
  * the finished points' rows (each a point's summary.json object: plain numbers, no typed arrays) and the continuum
- * curves over the range (a few hundred numbers). Kept apart from the app store so a sweep never changes the state
- * of single runs.
+ * curves over the range (a few hundred numbers), and the list of sweeps saved in this browser. Kept apart from the
+ * app store so a sweep never changes the state of single runs.
  */
 import { createStore } from 'zustand/vanilla';
 import { useStore } from 'zustand';
 import type { RunProgressView } from '../engine/runApi';
-import type { SweepPlanView, SweepRequest } from '../engine/sweepApi';
+import type { SweepRequest } from '../engine/sweepApi';
+import type { SavedSweepMeta, SweepPlanOutline } from '../io/savedSweep';
 import type { SweepContinuumCurves, SweepParameter, SweepRow, SweepSpacing } from '../../engine/case/sweep';
 
-export type SweepStatus = 'idle' | 'planning' | 'running' | 'stopping' | 'finished' | 'stopped';
+/** `interrupted`: a saved sweep this page did not finish (a reload or a closed tab ended it), shown with its finished points. */
+export type SweepStatus = 'idle' | 'planning' | 'running' | 'stopping' | 'finished' | 'stopped' | 'interrupted';
+
+/** While a sweep is in one of these, no other sweep starts and no saved one replaces it in the view. */
+export const SWEEP_BUSY: readonly string[] = ['planning', 'running', 'stopping'];
 
 /** What the user typed: texts, parsed by sweepForm.ts. */
 export interface SweepFormState {
@@ -28,7 +33,9 @@ export interface SweepFormState {
 export interface SweepRunState {
   readonly status: SweepStatus;
   /** The planned sweep being run or last run (for the table options and the export). */
-  readonly planned: Extract<SweepPlanView, { ok: true }> | null;
+  readonly planned: SweepPlanOutline | null;
+  /** Id of the record in IndexedDB the sweep shown is kept as (null before it is saved or after it is deleted). */
+  readonly savedId: string | null;
   readonly request: SweepRequest | null;
   /** The set-up's case the sweep started from (exported as case.json for `tenuis sweep`). */
   readonly baseCase: unknown;
@@ -42,12 +49,15 @@ export interface SweepRunState {
 }
 
 export interface SweepState extends SweepFormState, SweepRunState {
+  /** Sweeps saved in this browser, the latest started first. */
+  readonly saved: readonly SavedSweepMeta[];
   setForm(patch: Partial<SweepFormState>): void;
   setRun(patch: Partial<SweepRunState>): void;
+  setSaved(saved: readonly SavedSweepMeta[]): void;
 }
 
 const initialRun: SweepRunState = {
-  status: 'idle', planned: null, request: null, baseCase: null, rows: [], failures: {}, current: null, curves: null, error: null, notices: [],
+  status: 'idle', planned: null, savedId: null, request: null, baseCase: null, rows: [], failures: {}, current: null, curves: null, error: null, notices: [],
 };
 
 export function createSweepStore() {
@@ -60,8 +70,10 @@ export function createSweepStore() {
     spacing: 'log',
     quantity: 'flow.massFlowRate',
     ...initialRun,
+    saved: [],
     setForm: (patch) => set(patch),
     setRun: (patch) => set(patch),
+    setSaved: (saved) => set({ saved }),
   }));
 }
 
