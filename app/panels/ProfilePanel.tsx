@@ -43,10 +43,19 @@ function matchingSpec(spec: CutSpec, from: CutSource, to: CutSource): CutSpec {
   return { kind: spec.kind, index: nearestCentre(cellCentres(to, axis), cellCentres(from, axis)[spec.index]) };
 }
 
-/** Continuum curves at the cut's own positions: they predict the across-gap profile, so only for vertical cuts and the average. */
-function curvesFor(cut: ProfileCut, continuum: readonly ContinuumCurve[]): ContinuumCurve[] {
-  if (cut.kind === 'horizontal') return [];
-  return continuum.filter((c) => c.values.length === cut.positionsM.length);
+/**
+ * Continuum curves that predict this cut, at its own positions: across-gap profiles (no line) on vertical cuts and
+ * the average; a prediction along one column or row (the cavity's centrelines) on the cut through the cells nearest
+ * to it — within half a cell, so on an even grid either of the two middle columns.
+ */
+function curvesFor(cut: ProfileCut, continuum: readonly ContinuumCurve[], cellSizeM: { x: number; y: number }): ContinuumCurve[] {
+  const fits = (c: ContinuumCurve) => {
+    if (!c.line) return cut.kind !== 'horizontal';
+    if (cut.kind === 'average' || (cut.kind === 'vertical') !== (c.line.kind === 'column')) return false;
+    const half = 0.5 * (c.line.kind === 'column' ? cellSizeM.x : cellSizeM.y);
+    return Math.abs(c.line.atM - cut.atM) <= half * (1 + 1e-9);
+  };
+  return continuum.filter((c) => fits(c) && c.values.length === cut.positionsM.length);
 }
 
 function headingOf(cut: ProfileCut, radial: string, len: { unit: string; factor: number }): string {
@@ -75,7 +84,14 @@ export function ProfilePanel({ result, live, compare, continuum = [], geometry =
   const along = cut.along === 'x' ? 'x' : radial;
   const positions = useMemo(() => Array.from(cut.positionsM, (v) => v / len.factor), [cut, len.factor]);
   const values = useMemo(() => cutColumn(cut, name), [cut, name]);
-  const curves = useMemo(() => curvesFor(cut, continuum), [cut, continuum]);
+  const cellSizeM = useMemo(() => {
+    const { cellsX } = result.numerics;
+    return {
+      x: cellsX > 1 ? result.cellX[1] - result.cellX[0] : 2 * result.cellX[0],
+      y: result.numerics.cellsY > 1 ? result.cellY[cellsX] - result.cellY[0] : 2 * result.cellY[0],
+    };
+  }, [result]);
+  const curves = useMemo(() => curvesFor(cut, continuum, cellSizeM), [cut, continuum, cellSizeM]);
   const models = useMemo(() => [...new Set(curves.filter((c) => c.quantity === name).map((c) => c.model))], [curves, name]);
   const shownCurves = useMemo(() => curves.filter((c) => !hidden.has(c.model)), [curves, hidden]);
   const quantityCurves = shownCurves.filter((c) => c.quantity === name);
@@ -128,7 +144,13 @@ export function ProfilePanel({ result, live, compare, continuum = [], geometry =
       </div>
       <Plot data={data} layout={layout} filename={`profile-${name}`} label={`profile of ${name}`} testId="profile-plot" />
       <ModelToggles models={models} hidden={hidden} onToggle={toggle} />
-      {cut.kind === 'horizontal' && continuum.length > 0 && <p className="hint">The continuum predictions are profiles across the gap: they are drawn on vertical cuts and the average over x.</p>}
+      {continuum.length > 0 && curves.length === 0 && (
+        <p className="hint">
+          {continuum.some((c) => c.line)
+            ? 'The continuum predictions hold along particular lines (here: ' + [...new Set(continuum.filter((c) => c.line).map((c) => `${c.line!.kind === 'column' ? 'x' : radial} = ${sig(c.line!.atM / len.factor, 4)} ${len.unit}`))].join(', ') + '): choose the cut through them to see them.'
+            : 'The continuum predictions are profiles across the gap: they are drawn on vertical cuts and the average over x.'}
+        </p>
+      )}
       {gaps > 0 && <p className="hint" data-testid="cut-gaps">{gaps} of {cut.gap.length} points lie inside blocks or saw no molecule: left blank.</p>}
       {!live && exportName !== undefined && (
         <div className="actions">

@@ -28,9 +28,9 @@ export function comparisonView(c: ContinuumComparisonResult | undefined, labels:
   const label = (m: string) => labels[m] ?? m;
   const curves: ContinuumCurve[] = [];
   for (const p of c.predictions.profiles) {
-    if (p.line.kind !== 'rows') continue;
+    const line = p.line.kind === 'rows' ? undefined : { kind: p.line.kind, atM: p.line.atM };
     for (const [model, values] of Object.entries(p.values)) {
-      if (values) curves.push({ model: label(model), quantity: p.field, values: Array.from(values), y: Array.from(p.positionsM) });
+      if (values) curves.push({ model: label(model), quantity: p.field, values: Array.from(values), y: Array.from(p.positionsM), ...(line ? { line } : {}) });
     }
   }
   const verdicts: VerdictRow[] = Object.values(c.verdict).map((v) => {

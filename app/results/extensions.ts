@@ -25,6 +25,11 @@ export interface ContinuumCurve {
   readonly values: readonly number[];
   /** Positions (m); absent = the profile's own rows. */
   readonly y?: readonly number[];
+  /**
+   * Where the prediction holds: across the gap for every column (absent, the 1D flows), or along one column or row
+   * of the domain at a position (m), e.g. the cavity's centrelines.
+   */
+  readonly line?: { readonly kind: 'column' | 'row'; readonly atM: number };
 }
 
 export interface VerdictView {

@@ -124,3 +124,31 @@ test('a Couette gap: continuum predictions are toggled one by one on the row ave
   await expect(walls.locator('.xtitle')).toHaveText('x along the wall [µm]');
   await expect(walls.locator('.legendtext')).toHaveText(['top (along x)']);
 });
+
+test('a lid-driven cavity: its Navier–Stokes centreline predictions appear on the vertical cut through the centre, not on the row average', async ({ workbench: w, page }) => {
+  test.setTimeout(90_000);
+  await w.open();
+  await w.pickExample('trench-under-moving-lid');
+  await w.setParams({ cells: '10', particlesPerCell: '10', transientSteps: '300', sampleSteps: '1500' });
+  await w.runToEnd();
+  await w.view('3 Results');
+
+  const plot = page.getByTestId('profile-plot');
+  await plot.scrollIntoViewIfNeeded();
+  await expect(plot).toHaveAttribute('data-drawn', 'yes');
+  // The average over x is no centreline: no overlay, and the hint says where the predictions hold.
+  await expect(plot.locator('.scatterlayer .trace')).toHaveCount(1);
+  await expect(page.getByText(/hold along particular lines \(here: x = 250 µm, y = 250 µm\)/)).toBeVisible();
+
+  // Column 6 of 10 has its centre at 275 µm, within half a cell (25 µm) of the vertical centreline x = 250 µm.
+  await page.locator('#profile-cut').selectOption('vertical');
+  await expect(page.getByTestId('cut-position')).toContainText('centre of column 6 of 10');
+  await expect(page.getByTestId('continuum-toggles').getByRole('checkbox')).not.toHaveCount(0);
+  const legend = await plot.locator('.legendtext').allTextContents();
+  expect(legend[0]).toBe('this run');
+  expect(legend).toContain('no-slip');
+  // A column away from the centreline has none.
+  await page.locator('#profile-cut-position').fill('30');
+  await expect(page.getByTestId('cut-position')).toContainText('centre of column 1 of 10');
+  await expect(plot.locator('.scatterlayer .trace')).toHaveCount(1);
+});

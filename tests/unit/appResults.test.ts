@@ -29,7 +29,7 @@ describe('extensionsOf()', () => {
 });
 
 describe('comparisonView()', () => {
-  it('turns row profiles into overlay curves and verdicts into rows with the model values', () => {
+  it('turns profiles into overlay curves (centrelines keep their line) and verdicts into rows with the model values', () => {
     const c = {
       recognised: true,
       predictions: {
@@ -45,7 +45,10 @@ describe('comparisonView()', () => {
       profiles: {},
     } as unknown as ContinuumComparisonResult;
     const v = comparisonView(c, { noSlip: 'no-slip' })!;
-    expect(v.curves).toEqual([{ model: 'no-slip', quantity: 'velocityX', values: [-1, 1], y: [1, 2] }]);
+    expect(v.curves).toEqual([
+      { model: 'no-slip', quantity: 'velocityX', values: [-1, 1], y: [1, 2] },
+      { model: 'no-slip', quantity: 'velocityX', values: [0], y: [1], line: { kind: 'column', atM: 0.5 } },
+    ]);
     expect(v.verdicts).toEqual([{ quantity: 'walls.top.shearStress', unit: 'Pa', category: 'adequate', text: 'no-slip adequate', values: [{ label: 'no-slip', value: -1.5 }] }]);
     expect(comparisonView({ recognised: false, reason: 'not a known problem' }, {})).toEqual({ recognised: false, description: 'not a known problem', curves: [], verdicts: [] });
   });
