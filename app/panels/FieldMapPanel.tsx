@@ -2,6 +2,7 @@
  * A map of one cell field over the domain (heatmap of the cells), with the case's walls and blocks drawn on top.
  * Speed and Mach number are derived from the cell means (results/derivedFields.ts); cells with no gas are blank.
  */
+import { cellSizeOf } from '../results/profileCut';
 import { useMemo } from 'react';
 import type { SimulationResult } from '../../engine/results/summarize';
 import { Plot } from '../charts/Plot';
@@ -42,8 +43,7 @@ export function FieldMapPanel({ result, geometry = null }: { result: SimulationR
       ci.push(ciRow);
     }
     // Cell edges (one more than cells): plotly then draws each cell over its true extent.
-    const dx = cellsX > 1 ? result.cellX[1] - result.cellX[0] : 2 * result.cellX[0];
-    const dy = cellsY > 1 ? result.cellY[cellsX] - result.cellY[0] : 2 * result.cellY[0];
+    const { x: dx, y: dy } = cellSizeOf(result);
     const x = Array.from({ length: cellsX + 1 }, (_, ix) => (ix * dx) / len.factor);
     const y = Array.from({ length: cellsY + 1 }, (_, iy) => (iy * dy) / len.factor);
     return [{

@@ -8,7 +8,7 @@ import { Plot } from '../charts/Plot';
 import type { Data, Layout } from '../charts/plotly';
 import type { ContinuumCurve } from '../results/extensions';
 import { withDerivedFields } from '../results/derivedFields';
-import { cellCentres, cutColumn, extractCut, nearestCentre, GAP_SOLID, type CutSource, type CutSpec, type ProfileCut } from '../results/profileCut';
+import { cellCentres, cellSizeOf, cutColumn, extractCut, nearestCentre, GAP_SOLID, type CutSource, type CutSpec, type ProfileCut } from '../results/profileCut';
 import { solidCellsFor, type ResultGeometry } from '../results/resultGeometry';
 import { loadRunApi } from '../engine/loadEngine';
 import { downloadText } from '../io/download';
@@ -84,13 +84,7 @@ export function ProfilePanel({ result, live, compare, continuum = [], geometry =
   const along = cut.along === 'x' ? 'x' : radial;
   const positions = useMemo(() => Array.from(cut.positionsM, (v) => v / len.factor), [cut, len.factor]);
   const values = useMemo(() => cutColumn(cut, name), [cut, name]);
-  const cellSizeM = useMemo(() => {
-    const { cellsX } = result.numerics;
-    return {
-      x: cellsX > 1 ? result.cellX[1] - result.cellX[0] : 2 * result.cellX[0],
-      y: result.numerics.cellsY > 1 ? result.cellY[cellsX] - result.cellY[0] : 2 * result.cellY[0],
-    };
-  }, [result]);
+  const cellSizeM = useMemo(() => cellSizeOf(result), [result]);
   const curves = useMemo(() => curvesFor(cut, continuum, cellSizeM), [cut, continuum, cellSizeM]);
   const models = useMemo(() => [...new Set(curves.filter((c) => c.quantity === name).map((c) => c.model))], [curves, name]);
   const shownCurves = useMemo(() => curves.filter((c) => !hidden.has(c.model)), [curves, hidden]);

@@ -52,6 +52,15 @@ export function cellCentres(src: CutSource, axis: 'x' | 'y'): Float64Array {
   return axis === 'x' ? Float64Array.from({ length: cellsX }, (_, ix) => src.cellX[ix]) : Float64Array.from({ length: cellsY }, (_, iy) => src.cellY[iy * cellsX]);
 }
 
+/** Cell size along x and y, m, from the centres (a uniform grid; a single cell spans twice its centre). */
+export function cellSizeOf(src: Pick<CutSource, 'numerics' | 'cellX' | 'cellY'>): { readonly x: number; readonly y: number } {
+  const { cellsX, cellsY } = src.numerics;
+  return {
+    x: cellsX > 1 ? src.cellX[1] - src.cellX[0] : 2 * src.cellX[0],
+    y: cellsY > 1 ? src.cellY[cellsX] - src.cellY[0] : 2 * src.cellY[0],
+  };
+}
+
 /** Index of the centre nearest to positionM (the cut snaps to cell centres). */
 export function nearestCentre(centres: ArrayLike<number>, positionM: number): number {
   let best = 0;
