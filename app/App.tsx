@@ -32,7 +32,12 @@ function RunBadge() {
   const fraction = useApp((s) => s.progress?.fraction ?? 0);
   if (status === 'idle') return null;
   const busy = status === 'running' || status === 'paused' || status === 'starting' || status === 'stopping';
-  return <span className="run-badge" role="status" data-testid="run-badge">run {status}{busy ? ` ${(100 * fraction).toFixed(0)} %` : ''}</span>;
+  return (
+    <span className="run-badge" role="status" data-testid="run-badge">
+      run {status}
+      {busy ? ` ${(100 * fraction).toFixed(0)} %` : ''}
+    </span>
+  );
 }
 
 function ViewTabs() {
@@ -41,8 +46,15 @@ function ViewTabs() {
   return (
     <nav className="tabs" aria-label="views">
       {VIEWS.map((v) => (
-        <button key={v.id} type="button" role="tab" aria-selected={view === v.id} onClick={() => appStore.getState().setView(v.id)}>
-          {v.label}{v.id === 'saved' && saved ? ` (${saved})` : ''}
+        <button
+          key={v.id}
+          type="button"
+          role="tab"
+          aria-selected={view === v.id}
+          onClick={() => appStore.getState().setView(v.id)}
+        >
+          {v.label}
+          {v.id === 'saved' && saved ? ` (${saved})` : ''}
         </button>
       ))}
     </nav>
@@ -75,7 +87,9 @@ export function App() {
   const [failure, setFailure] = useState<string | null>(null);
   useEffect(() => {
     let cancelled = false;
-    bootstrap(appStore).then((e) => !cancelled && setExamples(e)).catch((e: Error) => !cancelled && setFailure(e.message));
+    bootstrap(appStore)
+      .then((e) => !cancelled && setExamples(e))
+      .catch((e: Error) => !cancelled && setFailure(e.message));
     return () => {
       cancelled = true;
     };
@@ -88,13 +102,21 @@ export function App() {
         <RunBadge />
       </header>
       <main className="main">
-        {failure && <p className="message message-error" role="alert">The workbench could not start: {failure}</p>}
+        {failure && (
+          <p className="message message-error" role="alert">
+            The workbench could not start: {failure}
+          </p>
+        )}
         {!ready && !failure && <p role="status">Loading the engine…</p>}
         {ready && view === 'setup' && <SetupView examples={examples} />}
         {ready && view === 'run' && (
           <div className="columns">
-            <div className="column"><RunProgress /></div>
-            <div className="column"><LiveProfile /></div>
+            <div className="column">
+              <RunProgress />
+            </div>
+            <div className="column">
+              <LiveProfile />
+            </div>
           </div>
         )}
         {ready && view === 'results' && <ResultPanels />}

@@ -15,7 +15,9 @@ export async function openExample(store: AppStore, example: ExampleEntry): Promi
   try {
     text = await fetchExampleCase(example);
   } catch (e) {
-    store.getState().setFileMessage({ kind: 'error', text: `The example could not be loaded: ${(e as Error).message}` });
+    store
+      .getState()
+      .setFileMessage({ kind: 'error', text: `The example could not be loaded: ${(e as Error).message}` });
     if (!example.preset) return;
   }
   store.getState().applyExample(example, text);
@@ -50,7 +52,16 @@ async function start(store: AppStore): Promise<ExampleEntry[]> {
   let last = formOf(store.getState());
   store.subscribe((s) => {
     const form = formOf(s);
-    if (form.presetName === last.presetName && form.params === last.params && form.walls === last.walls && form.gas === last.gas && form.blocks === last.blocks && form.source === last.source && form.caseText === last.caseText) return;
+    if (
+      form.presetName === last.presetName &&
+      form.params === last.params &&
+      form.walls === last.walls &&
+      form.gas === last.gas &&
+      form.blocks === last.blocks &&
+      form.source === last.source &&
+      form.caseText === last.caseText
+    )
+      return;
     last = form;
     if (timer) clearTimeout(timer);
     timer = setTimeout(() => void saveForm(form).catch(() => undefined), 300);

@@ -49,5 +49,11 @@ export function lengthUnitFor(sizeM: number): { unit: string; factor: number } {
 
 /** A file-name-safe version of a case name. */
 export function slug(name: string): string {
-  return name.trim().toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'case';
+  return (
+    name
+      .trim()
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-|-$/g, '') || 'case'
+  );
 }

@@ -80,7 +80,9 @@ function measure(particles: number, steps: number, repeats: number): SizeResult 
     phaseNs.total.push((ms * 1e6) / ps);
     collisionRates.push((2 * sim.state.collisionCount) / ps);
   }
-  const ns = Object.fromEntries(Object.entries(phaseNs).map(([k, v]) => [k, median(v)])) as SizeResult['nsPerParticleStep'];
+  const ns = Object.fromEntries(
+    Object.entries(phaseNs).map(([k, v]) => [k, median(v)]),
+  ) as SizeResult['nsPerParticleStep'];
   return {
     particles: sim.state.count,
     cells: sim.state.cells,
@@ -129,7 +131,9 @@ async function main(): Promise<void> {
   const repeats = Number(option('repeats', '3'));
   const out = option('out', fileURLToPath(new URL('../bench-results.json', import.meta.url)));
   const idleBefore = machine();
-  console.log(`node ${idleBefore.node}, ${idleBefore.cpus} × ${idleBefore.cpuModel}, load average ${idleBefore.loadAvg.map((v) => v.toFixed(2)).join(' ')}`);
+  console.log(
+    `node ${idleBefore.node}, ${idleBefore.cpus} × ${idleBefore.cpuModel}, load average ${idleBefore.loadAvg.map((v) => v.toFixed(2)).join(' ')}`,
+  );
 
   // Warm the JIT on the same code paths (timed phases included) before any figure is taken.
   advance(makeSimulation(2000), 400);
@@ -143,7 +147,9 @@ async function main(): Promise<void> {
   const scaling = option('scaling', 'yes') === 'no' ? null : await measureReplicaScaling();
   if (scaling) {
     const [one, many] = scaling.runs;
-    console.log(`replicas on worker threads: 1 → ${one.mParticleStepsPerS.toFixed(1)} M p-steps/s, ${many.replicas} → ${many.mParticleStepsPerS.toFixed(1)} M p-steps/s in total: ${scaling.speedup.toFixed(2)}× (wall time includes worker start-up)`);
+    console.log(
+      `replicas on worker threads: 1 → ${one.mParticleStepsPerS.toFixed(1)} M p-steps/s, ${many.replicas} → ${many.mParticleStepsPerS.toFixed(1)} M p-steps/s in total: ${scaling.speedup.toFixed(2)}× (wall time includes worker start-up)`,
+    );
   }
   const report = {
     benchmark: 'hard-sphere argon Couette, ~20 particles per cell, one thread',

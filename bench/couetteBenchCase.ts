@@ -18,7 +18,11 @@ export function couetteBenchCase(particles: number): Case {
   // Hard-sphere argon viscosity at 273 K (engine's HS model, μ_ref = 2.117e-5 Pa·s × 1.016): p = μ sqrt(πkT/2m)/(Kn H).
   const mu = 2.117e-5 * 1.016034;
   const pressurePa = (mu * Math.sqrt((Math.PI * BOLTZMANN_J_PER_K * temperatureK) / (2 * massKg))) / (knudsen * gap);
-  const wall = (u: number) => ({ type: 'wall' as const, temperatureK, velocityMPerS: [u, 0, 0] as [number, number, number] });
+  const wall = (u: number) => ({
+    type: 'wall' as const,
+    temperatureK,
+    velocityMPerS: [u, 0, 0] as [number, number, number],
+  });
   const r = parseCase({
     schemaVersion: 1,
     name: `benchmark couette ${particles}`,

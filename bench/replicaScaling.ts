@@ -24,13 +24,26 @@ async function timePool(replicas: number, particles: number, steps: number): Pro
   const outcome = await runReplicaPool({ caseInput, replicas, createReplica: nodeReplicaFactory() }).done;
   const wallSeconds = (performance.now() - t0) / 1000;
   const failed = outcome.replicas.filter((r) => r.status !== 'completed');
-  if (failed.length) throw new Error(`replica scaling: ${failed.map((r) => `replica ${r.stream} ${r.status} ${r.reason ?? ''}`).join('; ')}`);
+  if (failed.length)
+    throw new Error(
+      `replica scaling: ${failed.map((r) => `replica ${r.stream} ${r.status} ${r.reason ?? ''}`).join('; ')}`,
+    );
   const particleSteps = outcome.replicas.reduce((s, r) => s + r.particleSteps, 0);
-  return { replicas, particlesPerReplica: particles, stepsPerReplica: steps, wallSeconds, mParticleStepsPerS: particleSteps / wallSeconds / 1e6, loadAvgBefore };
+  return {
+    replicas,
+    particlesPerReplica: particles,
+    stepsPerReplica: steps,
+    wallSeconds,
+    mParticleStepsPerS: particleSteps / wallSeconds / 1e6,
+    loadAvgBefore,
+  };
 }
 
 /** One replica, then `cores` replicas, same work per replica. */
-export async function measureReplicaScaling(particles = 1e5, steps = 1500): Promise<{ runs: ScalingResult[]; speedup: number }> {
+export async function measureReplicaScaling(
+  particles = 1e5,
+  steps = 1500,
+): Promise<{ runs: ScalingResult[]; speedup: number }> {
   const cores = Math.max(2, os.availableParallelism?.() ?? os.cpus().length);
   const one = await timePool(1, particles, steps);
   const many = await timePool(cores, particles, steps);

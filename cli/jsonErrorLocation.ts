@@ -25,7 +25,11 @@ export function jsonErrorOffset(text: string): number {
     while (i < text.length && ' \t\n\r'.includes(text[i])) i++;
   };
   const literal = (word: string) => {
-    for (const ch of word) if (text[i++] !== ch) { i--; fail(); }
+    for (const ch of word)
+      if (text[i++] !== ch) {
+        i--;
+        fail();
+      }
   };
   const digits = () => {
     if (!(text[i] >= '0' && text[i] <= '9')) fail();
@@ -35,7 +39,10 @@ export function jsonErrorOffset(text: string): number {
     if (text[i] === '-') i++;
     if (text[i] === '0') i++;
     else digits();
-    if (text[i] === '.') { i++; digits(); }
+    if (text[i] === '.') {
+      i++;
+      digits();
+    }
     if (text[i] === 'e' || text[i] === 'E') {
       i++;
       if (text[i] === '+' || text[i] === '-') i++;
@@ -47,13 +54,20 @@ export function jsonErrorOffset(text: string): number {
     for (;;) {
       if (i >= text.length) fail();
       const ch = text[i];
-      if (ch === '"') { i++; return; }
+      if (ch === '"') {
+        i++;
+        return;
+      }
       if (ch < ' ') fail();
       if (ch === '\\') {
         i++;
         const e = text[i];
         if (e === 'u') {
-          for (let k = 1; k <= 4; k++) if (!/[0-9a-fA-F]/.test(text[i + k] ?? '')) { i += k; fail(); }
+          for (let k = 1; k <= 4; k++)
+            if (!/[0-9a-fA-F]/.test(text[i + k] ?? '')) {
+              i += k;
+              fail();
+            }
           i += 5;
         } else if (e !== undefined && '"\\/bfnrt'.includes(e)) i++;
         else fail();
@@ -64,26 +78,50 @@ export function jsonErrorOffset(text: string): number {
     ws();
     const ch = text[i];
     if (ch === '{') {
-      i++; ws();
-      if (text[i] === '}') { i++; return; }
+      i++;
+      ws();
+      if (text[i] === '}') {
+        i++;
+        return;
+      }
       for (;;) {
         ws();
         if (text[i] !== '"') fail();
-        string(); ws();
+        string();
+        ws();
         if (text[i] !== ':') fail();
-        i++; value(); ws();
-        if (text[i] === ',') { i++; continue; }
-        if (text[i] === '}') { i++; return; }
+        i++;
+        value();
+        ws();
+        if (text[i] === ',') {
+          i++;
+          continue;
+        }
+        if (text[i] === '}') {
+          i++;
+          return;
+        }
         fail();
       }
     }
     if (ch === '[') {
-      i++; ws();
-      if (text[i] === ']') { i++; return; }
+      i++;
+      ws();
+      if (text[i] === ']') {
+        i++;
+        return;
+      }
       for (;;) {
-        value(); ws();
-        if (text[i] === ',') { i++; continue; }
-        if (text[i] === ']') { i++; return; }
+        value();
+        ws();
+        if (text[i] === ',') {
+          i++;
+          continue;
+        }
+        if (text[i] === ']') {
+          i++;
+          return;
+        }
         fail();
       }
     }
@@ -110,7 +148,10 @@ export function locationOf(text: string, offset: number): TextLocation {
   let line = 1;
   let lineStart = 0;
   for (let k = 0; k < offset && k < text.length; k++) {
-    if (text[k] === '\n') { line++; lineStart = k + 1; }
+    if (text[k] === '\n') {
+      line++;
+      lineStart = k + 1;
+    }
   }
   return { line, column: offset - lineStart + 1 };
 }

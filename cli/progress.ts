@@ -29,7 +29,11 @@ export interface Progress {
   setTotals(totalSteps: number, transientSteps: number): void;
 }
 
-export function progressText(stepsDone: number, o: { totalSteps: number; transientSteps: number }, elapsedS: number): string {
+export function progressText(
+  stepsDone: number,
+  o: { totalSteps: number; transientSteps: number },
+  elapsedS: number,
+): string {
   const phase = stepsDone < o.transientSteps ? 'transient' : 'sampling';
   const pct = o.totalSteps > 0 ? (100 * stepsDone) / o.totalSteps : 100;
   // Extrapolated from the mean rate so far; shown as "?" until there is a fraction of a second to go by.

@@ -12,7 +12,8 @@ export function readJsonFile(path: string): unknown {
     text = readFileSync(path, 'utf8');
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder, not a file' : (e as Error).message;
+    const why =
+      code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder, not a file' : (e as Error).message;
     throw new CliError(`cannot read ${path}: ${why}`);
   }
   if (text.charCodeAt(0) === 0xfeff) text = text.slice(1); // byte-order mark some editors write
@@ -20,7 +21,8 @@ export function readJsonFile(path: string): unknown {
     return JSON.parse(text);
   } catch (e) {
     const offset = jsonErrorOffset(text);
-    const where = offset >= 0 ? (({ line, column }) => ` at line ${line}, column ${column}`)(locationOf(text, offset)) : '';
+    const where =
+      offset >= 0 ? (({ line, column }) => ` at line ${line}, column ${column}`)(locationOf(text, offset)) : '';
     throw new CliError(`${path} is not valid JSON${where}: ${(e as Error).message}`);
   }
 }
@@ -35,15 +37,21 @@ export function parseSeedOption(text: string): number {
  * Validates and plans a case read from `source`. `seed` overrides the file's seed before validation (so its range
  * is checked like any other field). Throws CliError with one line per problem, each naming the field.
  */
-export function validateAndPlan(raw: unknown, source: string, options: { seed?: number } = {}): { caseData: Case; plan: Plan } {
+export function validateAndPlan(
+  raw: unknown,
+  source: string,
+  options: { seed?: number } = {},
+): { caseData: Case; plan: Plan } {
   let input = raw;
   if (options.seed !== undefined && input !== null && typeof input === 'object' && !Array.isArray(input)) {
     input = { ...(input as Record<string, unknown>), seed: options.seed };
   }
   const parsed = parseCase(input);
-  if (!parsed.ok) throw new CliError(`${source} is not a valid case:\n${parsed.errors.map((m) => `  ${m}`).join('\n')}`);
+  if (!parsed.ok)
+    throw new CliError(`${source} is not a valid case:\n${parsed.errors.map((m) => `  ${m}`).join('\n')}`);
   const planned = plan(parsed.value);
-  if (!planned.ok) throw new CliError(`${source} cannot run as set up:\n${planned.errors.map((m) => `  ${m}`).join('\n')}`);
+  if (!planned.ok)
+    throw new CliError(`${source} cannot run as set up:\n${planned.errors.map((m) => `  ${m}`).join('\n')}`);
   return { caseData: parsed.value, plan: planned.plan };
 }
 

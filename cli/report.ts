@@ -3,7 +3,12 @@ import type { Plan } from '../engine/case/plan';
 import type { SimulationResult } from '../engine/results/summarize';
 import type { Performance } from '../engine/results/exports';
 import { sig, plusMinus, duration, bytes, table } from './format';
-import { independentSamples, densityRelativeError, temperatureRelativeError, velocityStandardErrorMPerS } from '../engine/stats/expectedNoise';
+import {
+  independentSamples,
+  densityRelativeError,
+  temperatureRelativeError,
+  velocityStandardErrorMPerS,
+} from '../engine/stats/expectedNoise';
 
 /**
  * Expected relative errors of one cell's density, temperature and velocity after the plan's sampling, assuming
@@ -21,7 +26,10 @@ function expectedErrorRows(p: Plan): [string, string][] {
   const speed = flowSpeedOf(p);
   if (speed > 0) {
     const u = velocityStandardErrorMPerS(p.gas.model.massKg, p.reference.temperatureK, n, m);
-    rows.push(['velocity', `±${sig(u, 2)} m/s (1σ), ${sig((100 * u) / speed, 2)} % of the fastest wall or inflow speed ${sig(speed, 3)} m/s`]);
+    rows.push([
+      'velocity',
+      `±${sig(u, 2)} m/s (1σ), ${sig((100 * u) / speed, 2)} % of the fastest wall or inflow speed ${sig(speed, 3)} m/s`,
+    ]);
   }
   return rows;
 }
@@ -61,7 +69,10 @@ export function planReport(p: Plan): string {
     table([
       ['cells', `${g.cellsX} × ${g.cellsY}, each ${sig(g.cellSizeXM)} m × ${sig(g.cellSizeYM)} m`],
       ['time step', `${sig(p.timeStepS)} s`],
-      ['particles', `${p.initialParticles} (${sig(p.particlesPerCell)} per cell), ${sig(p.moleculesPerParticle)} molecules each`],
+      [
+        'particles',
+        `${p.initialParticles} (${sig(p.particlesPerCell)} per cell), ${sig(p.moleculesPerParticle)} molecules each`,
+      ],
       [
         'steps',
         p.transientMode === 'auto'
@@ -85,10 +96,14 @@ export function planReport(p: Plan): string {
 
 /** Wall shear stress and heat flux with 95 % half-widths, and the run's speed. */
 export function runSummary(result: SimulationResult, performance: Performance, outDir: string): string {
-  const lines = [`finished in ${duration(performance.wallSeconds)}: ${sig(performance.particleSteps, 3)} particle steps, ${sig(performance.particleStepsPerSecond, 3)} per second`];
+  const lines = [
+    `finished in ${duration(performance.wallSeconds)}: ${sig(performance.particleSteps, 3)} particle steps, ${sig(performance.particleStepsPerSecond, 3)} per second`,
+  ];
   for (const [wall, e] of Object.entries(result.walls)) {
     if (!e) continue;
-    lines.push(`  wall ${wall}: shear stress ${plusMinus(e.shearStress.mean, e.shearStress.ci95, 'Pa')}, heat flux ${plusMinus(e.heatFlux.mean, e.heatFlux.ci95, 'W/m^2')}`);
+    lines.push(
+      `  wall ${wall}: shear stress ${plusMinus(e.shearStress.mean, e.shearStress.ci95, 'Pa')}, heat flux ${plusMinus(e.heatFlux.mean, e.heatFlux.ci95, 'W/m^2')}`,
+    );
   }
   const f = result.flow;
   if (f) {
@@ -101,8 +116,12 @@ export function runSummary(result: SimulationResult, performance: Performance, o
     show('  molar flow', v.molarFlow, 1, 'sccm');
     show('  throughput', v.throughput, 10, 'mbar L/s');
     show('  conductance', v.conductance, 1000, 'L/s');
-    if (v.transmissionProbability) lines.push(`    transmission probability: ${plusMinus(v.transmissionProbability.mean, v.transmissionProbability.ci95, '')}`);
-    if (v.reducedFlowRate) lines.push(`    reduced flow rate G_P: ${plusMinus(v.reducedFlowRate.mean, v.reducedFlowRate.ci95, '')}`);
+    if (v.transmissionProbability)
+      lines.push(
+        `    transmission probability: ${plusMinus(v.transmissionProbability.mean, v.transmissionProbability.ci95, '')}`,
+      );
+    if (v.reducedFlowRate)
+      lines.push(`    reduced flow rate G_P: ${plusMinus(v.reducedFlowRate.mean, v.reducedFlowRate.ci95, '')}`);
   }
   lines.push(`results in ${outDir}`);
   return lines.join('\n');

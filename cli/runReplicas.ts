@@ -41,8 +41,12 @@ export async function runReplicas(
     onProgress: (p) => {
       const live = p.replicas.filter((r, k) => r && !p.lost.includes(k));
       if (!live.length) return;
-      const mean = (f: (r: NonNullable<(typeof live)[number]>) => number) => Math.round(live.reduce((s, r) => s + f(r!), 0) / live.length);
-      o.progress?.setTotals(mean((r) => r.totalSteps), live.some((r) => r!.phase === 'transient') ? Infinity : 0);
+      const mean = (f: (r: NonNullable<(typeof live)[number]>) => number) =>
+        Math.round(live.reduce((s, r) => s + f(r!), 0) / live.length);
+      o.progress?.setTotals(
+        mean((r) => r.totalSteps),
+        live.some((r) => r!.phase === 'transient') ? Infinity : 0,
+      );
       o.progress?.update(mean((r) => r.stepsDone));
     },
   });
@@ -92,7 +96,17 @@ function checkStop(merged: SampleSet, elapsedSeconds: number, s: StoppingOptions
 
 /** What replicas.json says of each replica: its status and, when it sampled, its own wall estimates. */
 export function replicaReportJson(r: ReplicaReport, caseName: string) {
-  const own = r.samples && r.samples.counters.sampledSteps > 0 ? summaryJson(summarizeSamples(r.samples), { caseName, performance: { wallSeconds: r.wallSeconds, particleSteps: r.particleSteps, particleStepsPerSecond: r.wallSeconds > 0 ? r.particleSteps / r.wallSeconds : NaN } }) : null;
+  const own =
+    r.samples && r.samples.counters.sampledSteps > 0
+      ? summaryJson(summarizeSamples(r.samples), {
+          caseName,
+          performance: {
+            wallSeconds: r.wallSeconds,
+            particleSteps: r.particleSteps,
+            particleStepsPerSecond: r.wallSeconds > 0 ? r.particleSteps / r.wallSeconds : NaN,
+          },
+        })
+      : null;
   return {
     stream: r.stream,
     status: r.status,

@@ -105,15 +105,27 @@ export function advance(sim: Simulation, steps: number): void {
     st.sampling = st.step >= sim.transientEndStep;
     let t0 = timed ? clock() : 0;
     moveParticles(st, dt);
-    if (timed) { const t = clock(); ph.move += t - t0; t0 = t; }
+    if (timed) {
+      const t = clock();
+      ph.move += t - t0;
+      t0 = t;
+    }
     indexParticles(st);
     if (st.step % REORDER_INTERVAL === 0) reorderParticles(st);
     if (st.hasPressureOutlets) updatePressureOutlets(st);
-    if (timed) { const t = clock(); ph.index += t - t0; t0 = t; }
+    if (timed) {
+      const t = clock();
+      ph.index += t - t0;
+      t0 = t;
+    }
     // Cell sampling is fused into the collision pass (see collideParticles), so `collide` times both and `sample`
     // only the batch bookkeeping.
     collideParticles(st, st.sampling);
-    if (timed) { const t = clock(); ph.collide += t - t0; t0 = t; }
+    if (timed) {
+      const t = clock();
+      ph.collide += t - t0;
+      t0 = t;
+    }
     if (st.sampling) {
       sim.sampledSteps++;
       if (++sim.batchStepsDone === sim.plan.batchSteps) closeBatch(sim);
@@ -130,7 +142,8 @@ function closeBatch(sim: Simulation): void {
   for (const [k, v] of totals) pushSeries(sim.series.get(k)!, v);
   // Mass flow rate through each section: net weighted crossings × molecules per particle × m over the batch time.
   const massPerCrossing = (st.moleculesPerParticle * st.massKg) / (steps * st.timeStep);
-  for (let s = 0; s < st.sectionCount; s++) pushSeries(sim.series.get(sectionSeriesKey(st.sectionNames[s]))!, st.sectionSums[s] * massPerCrossing);
+  for (let s = 0; s < st.sectionCount; s++)
+    pushSeries(sim.series.get(sectionSeriesKey(st.sectionNames[s]))!, st.sectionSums[s] * massPerCrossing);
   addToBatches(sim.cellStore, st.cellSums);
   addToBatches(sim.wallStore, st.wallSums);
   st.cellSums.fill(0);

@@ -13,7 +13,10 @@ export function defaultReplicaCount(): number {
 
 export function browserReplicaFactory(): ReplicaFactory {
   return (): ReplicaHandle => {
-    const worker = new Worker(new URL('./replica.worker.ts', import.meta.url), { type: 'module', name: 'tenuis-replica' });
+    const worker = new Worker(new URL('./replica.worker.ts', import.meta.url), {
+      type: 'module',
+      name: 'tenuis-replica',
+    });
     const listeners: ((reason: string) => void)[] = [];
     let done = false;
     const fail = (reason: string) => {

@@ -5,7 +5,15 @@
  */
 import { transfer } from 'comlink';
 import { planFromInput } from '../engine/case/plan';
-import { createSimulation, advance, isFinished, isSampling, nextChunk, stepsRemaining, type Simulation } from '../engine/simulation';
+import {
+  createSimulation,
+  advance,
+  isFinished,
+  isSampling,
+  nextChunk,
+  stepsRemaining,
+  type Simulation,
+} from '../engine/simulation';
 import { sampleSetOf } from '../engine/results/sampleSet';
 import { encodeSampleSet } from '../engine/io/sampleFile';
 import type { ReplicaApi, ReplicaOutcome, ReplicaProgress, ReplicaStartRequest } from './protocol';
@@ -30,7 +38,10 @@ export function createReplicaApi(clock: () => number = Date.now): ReplicaApi {
       const planned = planFromInput(request.caseInput);
       if (!planned.ok) throw new Error(`the case was refused:\n${planned.errors.join('\n')}`);
       const planned0 = planned.plan;
-      const sampleSteps = request.sampleSteps === undefined ? planned0.sampleSteps : Math.ceil(request.sampleSteps / planned0.batchSteps) * planned0.batchSteps;
+      const sampleSteps =
+        request.sampleSteps === undefined
+          ? planned0.sampleSteps
+          : Math.ceil(request.sampleSteps / planned0.batchSteps) * planned0.batchSteps;
       const plan = { ...planned0, sampleSteps };
       const s = createSimulation(plan, { stream: request.stream });
       sim = s;

@@ -86,7 +86,8 @@ export interface ReplicaPoolRun {
 }
 
 export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
-  if (!Number.isInteger(options.replicas) || options.replicas < 1) throw new Error(`replicas must be a whole number of at least 1, got ${options.replicas}`);
+  if (!Number.isInteger(options.replicas) || options.replicas < 1)
+    throw new Error(`replicas must be a whole number of at least 1, got ${options.replicas}`);
   const handles: ReplicaHandle[] = [];
   const latest: (ReplicaProgress | undefined)[] = new Array(options.replicas).fill(undefined);
   const lost: number[] = [];
@@ -103,7 +104,14 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
     checking = true;
     try {
       await Promise.all(
-        handles.map((h, k) => (h && !finished[k] ? h.api.snapshot().then((b) => void (lastSnapshot[k] = b), () => undefined) : undefined)),
+        handles.map((h, k) =>
+          h && !finished[k]
+            ? h.api.snapshot().then(
+                (b) => void (lastSnapshot[k] = b),
+                () => undefined,
+              )
+            : undefined,
+        ),
       );
       if (!options.check) return;
       const sets = lastSnapshot.filter((b): b is ArrayBuffer => b !== null).map((b) => decodeSampleSet(b.slice(0)));
@@ -134,22 +142,47 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
       handle = options.createReplica(stream);
     } catch (e) {
       lost.push(stream);
-      return { stream, status: 'lost', reason: `could not start a worker: ${(e as Error).message}`, stepsDone: 0, particleSteps: 0, wallSeconds: 0, samples: null, samplesFile: null };
+      return {
+        stream,
+        status: 'lost',
+        reason: `could not start a worker: ${(e as Error).message}`,
+        stepsDone: 0,
+        particleSteps: 0,
+        wallSeconds: 0,
+        samples: null,
+        samplesFile: null,
+      };
     }
     handles[stream] = handle;
     const failure = new Promise<string>((resolve) => handle.onFailure(resolve));
     try {
       const started = handle.api.start(
-        { caseInput: options.caseInput, stream, chunkMilliseconds: options.chunkMilliseconds, sampleSteps: options.sampleSteps },
+        {
+          caseInput: options.caseInput,
+          stream,
+          chunkMilliseconds: options.chunkMilliseconds,
+          sampleSteps: options.sampleSteps,
+        },
         proxy((p: ReplicaProgress) => {
           latest[stream] = p;
           emit();
         }),
       );
-      const result = await Promise.race([started.then((o) => ({ ok: true as const, o })), failure.then((reason) => ({ ok: false as const, reason }))]);
+      const result = await Promise.race([
+        started.then((o) => ({ ok: true as const, o })),
+        failure.then((reason) => ({ ok: false as const, reason })),
+      ]);
       if (result.ok) {
         const o = result.o;
-        return { stream, status: o.end, stepsDone: o.stepsDone, particleSteps: o.particleSteps, wallSeconds: o.wallSeconds, samples: decoded(o.samples), samplesFile: o.samples };
+        return {
+          stream,
+          status: o.end,
+          stepsDone: o.stepsDone,
+          particleSteps: o.particleSteps,
+          wallSeconds: o.wallSeconds,
+          samples: decoded(o.samples),
+          samplesFile: o.samples,
+        };
       }
       return lostReport(stream, result.reason);
     } catch (e) {
@@ -180,10 +213,13 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
   const done = Promise.all(Array.from({ length: options.replicas }, (_, k) => runOne(k))).then((replicas) => {
     clearInterval(snapshotTimer);
     settled = true;
-    const sets = replicas.map((r) => r.samples).filter((s): s is SampleSet => s !== null && s.counters.sampledSteps > 0);
+    const sets = replicas
+      .map((r) => r.samples)
+      .filter((s): s is SampleSet => s !== null && s.counters.sampledSteps > 0);
     return { replicas, merged: sets.length ? mergeSampleSets(sets) : null, stoppedBy };
   });
-  const each = (f: (api: Remote<ReplicaApi>) => Promise<void>) => handles.forEach((h) => h && f(h.api).catch(() => undefined));
+  const each = (f: (api: Remote<ReplicaApi>) => Promise<void>) =>
+    handles.forEach((h) => h && f(h.api).catch(() => undefined));
   return {
     done,
     pause: () => each((a) => a.pause()),

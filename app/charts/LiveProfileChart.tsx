@@ -17,7 +17,8 @@ export function niceTicks(lo: number, hi: number, count = 5): number[] {
   const mag = 10 ** Math.floor(Math.log10(raw));
   const step = [1, 2, 2.5, 5, 10].map((f) => f * mag).find((s) => s >= raw) ?? 10 * mag;
   const out: number[] = [];
-  for (let v = Math.ceil(lo / step) * step; v <= hi + step * 1e-9; v += step) out.push(Math.abs(v) < step * 1e-9 ? 0 : v);
+  for (let v = Math.ceil(lo / step) * step; v <= hi + step * 1e-9; v += step)
+    out.push(Math.abs(v) < step * 1e-9 ? 0 : v);
   return out;
 }
 
@@ -30,7 +31,9 @@ export interface LiveProfileChartProps {
 }
 
 export function LiveProfileChart({ x, y, ci95, xLabel, yLabel }: LiveProfileChartProps) {
-  const pts = x.map((xv, k) => ({ x: xv, y: y[k], e: Number.isFinite(ci95[k]) ? ci95[k] : 0 })).filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
+  const pts = x
+    .map((xv, k) => ({ x: xv, y: y[k], e: Number.isFinite(ci95[k]) ? ci95[k] : 0 }))
+    .filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
   if (!pts.length) return <p className="hint">No samples yet.</p>;
   const x0 = Math.min(...pts.map((p) => p.x));
   const x1 = Math.max(...pts.map((p) => p.x));
@@ -47,19 +50,33 @@ export function LiveProfileChart({ x, y, ci95, xLabel, yLabel }: LiveProfileChar
   const sy = (v: number) => H - M.b - ((v - y0) / (y1 - y0)) * (H - M.t - M.b);
   const path = pts.map((p, k) => `${k ? 'L' : 'M'}${sx(p.x).toFixed(1)},${sy(p.y).toFixed(1)}`).join('');
   return (
-    <svg viewBox={`0 0 ${W} ${H}`} className="live-chart" role="img" aria-label={`live profile: ${yLabel} against ${xLabel}`} data-testid="live-profile">
+    <svg
+      viewBox={`0 0 ${W} ${H}`}
+      className="live-chart"
+      role="img"
+      aria-label={`live profile: ${yLabel} against ${xLabel}`}
+      data-testid="live-profile"
+    >
       <rect x={M.l} y={M.t} width={W - M.l - M.r} height={H - M.t - M.b} fill="#fff" stroke="#c8ced3" />
       {niceTicks(y0, y1).map((t) => (
         <g key={`y${t}`}>
           <line x1={M.l} x2={W - M.r} y1={sy(t)} y2={sy(t)} stroke="#eceff1" />
-          <text x={M.l - 6} y={sy(t) + 4} textAnchor="end" fontSize="11">{sig(t, 3)}</text>
+          <text x={M.l - 6} y={sy(t) + 4} textAnchor="end" fontSize="11">
+            {sig(t, 3)}
+          </text>
         </g>
       ))}
       {niceTicks(x0, x1).map((t) => (
-        <text key={`x${t}`} x={sx(t)} y={H - M.b + 16} textAnchor="middle" fontSize="11">{sig(t, 3)}</text>
+        <text key={`x${t}`} x={sx(t)} y={H - M.b + 16} textAnchor="middle" fontSize="11">
+          {sig(t, 3)}
+        </text>
       ))}
-      <text x={(M.l + W - M.r) / 2} y={H - 8} textAnchor="middle" fontSize="12">{xLabel}</text>
-      <text transform={`translate(14 ${(M.t + H - M.b) / 2}) rotate(-90)`} textAnchor="middle" fontSize="12">{yLabel}</text>
+      <text x={(M.l + W - M.r) / 2} y={H - 8} textAnchor="middle" fontSize="12">
+        {xLabel}
+      </text>
+      <text transform={`translate(14 ${(M.t + H - M.b) / 2}) rotate(-90)`} textAnchor="middle" fontSize="12">
+        {yLabel}
+      </text>
       <path d={path} fill="none" stroke="#1f5f8b" strokeWidth="1.5" />
       {pts.map((p, k) => (
         <g key={k} className="errorbar">

@@ -21,7 +21,9 @@ export function Plot({ data, layout, filename, label, testId }: PlotProps) {
     const div = ref.current;
     if (!div || visible) return;
     if (typeof IntersectionObserver === 'undefined') return setVisible(true);
-    const observer = new IntersectionObserver((entries) => entries.some((e) => e.isIntersecting) && setVisible(true), { rootMargin: '100px' });
+    const observer = new IntersectionObserver((entries) => entries.some((e) => e.isIntersecting) && setVisible(true), {
+      rootMargin: '100px',
+    });
     observer.observe(div);
     return () => observer.disconnect();
   }, [visible]);
@@ -49,8 +51,12 @@ export function Plot({ data, layout, filename, label, testId }: PlotProps) {
       <div ref={ref} className="plot-area" />
       {failure && <p role="alert">The plot could not be drawn: {failure}</p>}
       <figcaption className="plot-actions">
-        <button type="button" onClick={() => save('png')} disabled={!drawn}>Save plot as PNG</button>
-        <button type="button" onClick={() => save('svg')} disabled={!drawn}>Save plot as SVG</button>
+        <button type="button" onClick={() => save('png')} disabled={!drawn}>
+          Save plot as PNG
+        </button>
+        <button type="button" onClick={() => save('svg')} disabled={!drawn}>
+          Save plot as SVG
+        </button>
       </figcaption>
     </figure>
   );

@@ -23,7 +23,12 @@ export async function drawPlot(div: HTMLDivElement, data: Data[], layout: Partia
   const Plotly = await loadPlotly();
   await nextTask();
   if (!div.isConnected) return;
-  await Plotly.react(div, data, { margin: { l: 70, r: 20, t: 30, b: 55 }, font: { family: 'system-ui, sans-serif', size: 12 }, ...layout }, CONFIG);
+  await Plotly.react(
+    div,
+    data,
+    { margin: { l: 70, r: 20, t: 30, b: 55 }, font: { family: 'system-ui, sans-serif', size: 12 }, ...layout },
+    CONFIG,
+  );
 }
 
 /**
@@ -36,7 +41,15 @@ export async function warmPlotly(): Promise<void> {
   div.style.cssText = 'position:absolute;left:-10000px;top:0;width:400px;height:300px';
   document.body.appendChild(div);
   try {
-    await Plotly.newPlot(div, [{ type: 'scatter', x: [0, 1], y: [0, 1], error_y: { type: 'data', array: [0.1, 0.1] } }, { type: 'heatmap', z: [[0, 1]] }], { margin: { t: 10 } }, { staticPlot: true });
+    await Plotly.newPlot(
+      div,
+      [
+        { type: 'scatter', x: [0, 1], y: [0, 1], error_y: { type: 'data', array: [0.1, 0.1] } },
+        { type: 'heatmap', z: [[0, 1]] },
+      ],
+      { margin: { t: 10 } },
+      { staticPlot: true },
+    );
   } finally {
     Plotly.purge(div);
     div.remove();

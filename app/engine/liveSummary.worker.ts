@@ -11,7 +11,15 @@ import { summarizeSamples, type SimulationResult } from '../../engine/results/su
 
 /** The typed arrays' buffers of a result, to transfer rather than copy it back. */
 function buffersOf(r: SimulationResult): ArrayBuffer[] {
-  const arrays: Float64Array[] = [r.cellX, r.cellY, r.profileY, r.cells.mean, r.cells.ci95, r.profile.mean, r.profile.ci95];
+  const arrays: Float64Array[] = [
+    r.cellX,
+    r.cellY,
+    r.profileY,
+    r.cells.mean,
+    r.cells.ci95,
+    r.profile.mean,
+    r.profile.ci95,
+  ];
   for (const bins of Object.values(r.wallBins)) if (bins) arrays.push(bins.position, bins.table.mean, bins.table.ci95);
   return [...new Set(arrays.map((a) => a.buffer as ArrayBuffer))];
 }

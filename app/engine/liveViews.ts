@@ -17,7 +17,11 @@ export type LiveReplicas = Map<number, Remote<ReplicaApi>>;
  * Wraps the browser factory: reports a lost worker at once, lists running replicas for the live views, and applies
  * the test hook that fails one on purpose.
  */
-export function observedFactory(onLost: (stream: number, reason: string) => void, kills: Map<number, () => void>, live: LiveReplicas): ReplicaFactory {
+export function observedFactory(
+  onLost: (stream: number, reason: string) => void,
+  kills: Map<number, () => void>,
+  live: LiveReplicas,
+): ReplicaFactory {
   const base = browserReplicaFactory();
   return (stream) => {
     const handle = base(stream);
@@ -60,24 +64,30 @@ export function openSummaryWorker(name: string): { summary: Remote<LiveSummaryAp
   return { summary: wrap<LiveSummaryApi>(worker), close: () => worker.terminate() };
 }
 
-export function startLiveViews(replicas: LiveReplicas, everyMs: number, onLive: (r: SimulationResult) => void): { stop(): void; summary: Remote<LiveSummaryApi>; close(): void } {
+export function startLiveViews(
+  replicas: LiveReplicas,
+  everyMs: number,
+  onLive: (r: SimulationResult) => void,
+): { stop(): void; summary: Remote<LiveSummaryApi>; close(): void } {
   const { summary, close } = openSummaryWorker('tenuis-live-summary');
   let kept = 0;
   let stopped = false;
   let busy = false;
-  const within = <T,>(p: Promise<T>): Promise<T | null> =>
+  const within = <T>(p: Promise<T>): Promise<T | null> =>
     Promise.race([p, new Promise<null>((resolve) => setTimeout(() => resolve(null), SNAPSHOT_TIMEOUT_MS))]);
   const round = async () => {
     if (busy || stopped) return;
     busy = true;
     try {
-      await Promise.all([...replicas].map(async ([stream, api]) => {
-        const b = await within(api.snapshot()).catch(() => null);
-        if (!b || stopped) return;
-        // Passed on, not copied: the summary worker keeps each replica's latest snapshot itself.
-        await summary.keep(stream, transfer(b, [b]));
-        kept++;
-      }));
+      await Promise.all(
+        [...replicas].map(async ([stream, api]) => {
+          const b = await within(api.snapshot()).catch(() => null);
+          if (!b || stopped) return;
+          // Passed on, not copied: the summary worker keeps each replica's latest snapshot itself.
+          await summary.keep(stream, transfer(b, [b]));
+          kept++;
+        }),
+      );
       if (stopped || !kept) return;
       const result = await summary.summarizeKept();
       if (result && !stopped) onLive(result);

@@ -127,13 +127,26 @@ export interface RunHandle {
 
 export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandle {
   const planned = planFromInput(request.caseInput);
-  if (!planned.ok) return { done: Promise.resolve({ ok: false, message: planned.errors.join('\n') }), pause() {}, resume() {}, cancel() {} };
+  if (!planned.ok)
+    return {
+      done: Promise.resolve({ ok: false, message: planned.errors.join('\n') }),
+      pause() {},
+      resume() {},
+      cancel() {},
+    };
   const target = request.target;
   const stopsAtTarget = target?.stopWhenReached === true;
   const plannedSampleSteps = stopsAtTarget ? TARGET_SAMPLE_CAP * planned.plan.sampleSteps : planned.plan.sampleSteps;
   let stoppedBy: string | null = null;
   let targetView: TargetView | undefined = target && {
-    path: target.path, goal: target.relativeHalfWidth, current: NaN, mean: NaN, ci95: NaN, reached: false, remainingSeconds: NaN, stopWhenReached: stopsAtTarget,
+    path: target.path,
+    goal: target.relativeHalfWidth,
+    current: NaN,
+    mean: NaN,
+    ci95: NaN,
+    reached: false,
+    remainingSeconds: NaN,
+    stopWhenReached: stopsAtTarget,
   };
   let samplingSince: number | null = null;
   const t0 = performance.now();
@@ -141,7 +154,8 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
   let pausedMs = 0;
   let cancelled = false;
   const lostReasons = new Map<number, string>();
-  const running = () => (performance.now() - t0 - pausedMs - (pausedAt === null ? 0 : performance.now() - pausedAt)) / 1000;
+  const running = () =>
+    (performance.now() - t0 - pausedMs - (pausedAt === null ? 0 : performance.now() - pausedAt)) / 1000;
 
   const progressView = (p: PoolProgress): RunProgressView => {
     const replicas: ReplicaView[] = [];
@@ -154,7 +168,13 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
       const r = p.replicas[k];
       const lost = p.lost.includes(k) || lostReasons.has(k);
       if (lost) {
-        replicas.push({ stream: k, state: 'lost', stepsDone: r?.stepsDone ?? 0, totalSteps: r?.totalSteps ?? 0, reason: lostReasons.get(k) });
+        replicas.push({
+          stream: k,
+          state: 'lost',
+          stepsDone: r?.stepsDone ?? 0,
+          totalSteps: r?.totalSteps ?? 0,
+          reason: lostReasons.get(k),
+        });
         continue;
       }
       if (!r) {
@@ -178,12 +198,22 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     let shownFraction = fraction;
     // A run that ends at its target has a budget far beyond what it will use: the target's estimate says more.
     if (stopsAtTarget && targetView && !inTransient && Number.isFinite(targetView.remainingSeconds)) {
-      remainingSeconds = Number.isFinite(remainingSeconds) ? Math.min(remainingSeconds, targetView.remainingSeconds) : targetView.remainingSeconds;
+      remainingSeconds = Number.isFinite(remainingSeconds)
+        ? Math.min(remainingSeconds, targetView.remainingSeconds)
+        : targetView.remainingSeconds;
       shownFraction = Math.max(fraction, elapsed / (elapsed + remainingSeconds));
     }
     return {
-      stepsDone, totalSteps, sampledSteps: sampled, plannedSampleSteps, fraction: shownFraction, elapsedSeconds: elapsed,
-      remainingSeconds, inTransient, replicas, target: targetView,
+      stepsDone,
+      totalSteps,
+      sampledSteps: sampled,
+      plannedSampleSteps,
+      fraction: shownFraction,
+      elapsedSeconds: elapsed,
+      remainingSeconds,
+      inTransient,
+      replicas,
+      target: targetView,
     };
   };
 
@@ -200,10 +230,14 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     caseInput: request.caseInput,
     replicas: request.replicas,
     ...(stopsAtTarget ? { sampleSteps: plannedSampleSteps } : {}),
-    createReplica: observedFactory((stream, reason) => {
-      lostReasons.set(stream, reason);
-      callbacks.onReplicaLost(stream, reason);
-    }, kills, liveReplicas),
+    createReplica: observedFactory(
+      (stream, reason) => {
+        lostReasons.set(stream, reason);
+        callbacks.onReplicaLost(stream, reason);
+      },
+      kills,
+      liveReplicas,
+    ),
     // Safety snapshots for lost workers; no stopping check, so the pool merges nothing on this thread meanwhile.
     snapshotEveryMs: Math.max(1000, request.liveEveryMs),
     decodeOnThisThread: false,
@@ -220,10 +254,20 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
       const current = estimate ? relativeHalfWidthOf(estimate) : NaN;
       const reached = decision.rule === 'target';
       const samplingSeconds = samplingSince === null ? 0 : running() - samplingSince;
-      const remainingSeconds = reached ? 0 : Number.isFinite(current) && current > 0 && result.numerics.sampleSteps > 0
-        ? estimateRemaining(current, target.relativeHalfWidth, result.numerics.sampleSteps, samplingSeconds).additionalSeconds ?? NaN
-        : NaN;
-      targetView = { ...targetView, current, mean: estimate?.mean ?? NaN, ci95: estimate?.ci95 ?? NaN, reached, remainingSeconds };
+      const remainingSeconds = reached
+        ? 0
+        : Number.isFinite(current) && current > 0 && result.numerics.sampleSteps > 0
+          ? (estimateRemaining(current, target.relativeHalfWidth, result.numerics.sampleSteps, samplingSeconds)
+              .additionalSeconds ?? NaN)
+          : NaN;
+      targetView = {
+        ...targetView,
+        current,
+        mean: estimate?.mean ?? NaN,
+        ci95: estimate?.ci95 ?? NaN,
+        reached,
+        remainingSeconds,
+      };
       if (reached && stopsAtTarget && stoppedBy === null && !cancelled) {
         stoppedBy = decision.reason;
         pool.cancel();
@@ -240,23 +284,31 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     const files = outcome.replicas.map((r) => r.samplesFile);
     let finished: FinishedSummary | null;
     try {
-      finished = await liveViews.summary.finishFiles(transfer(files, [...new Set(files.filter((b): b is ArrayBuffer => b !== null))]));
+      finished = await liveViews.summary.finishFiles(
+        transfer(files, [...new Set(files.filter((b): b is ArrayBuffer => b !== null))]),
+      );
     } finally {
       liveViews.close();
     }
     if (!finished) {
-      return { ok: false, message: `no replica sampled anything: ${outcome.replicas.map((r) => `replica ${r.stream} ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('; ')}` };
+      return {
+        ok: false,
+        message: `no replica sampled anything: ${outcome.replicas.map((r) => `replica ${r.stream} ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('; ')}`,
+      };
     }
     const { result, samples, comparison, sampledSteps } = finished;
     const runWarnings: string[] = [];
     outcome.replicas.forEach((r, k) => {
       if (r.status === 'lost') {
-        runWarnings.push(`replica ${r.stream} was lost (${r.reason}); ${sampledSteps[k] > 0 ? `its ${sampledSteps[k]} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`);
+        runWarnings.push(
+          `replica ${r.stream} was lost (${r.reason}); ${sampledSteps[k] > 0 ? `its ${sampledSteps[k]} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`,
+        );
       }
     });
     const totalSampled = sampledSteps.reduce((a, b) => a + b, 0);
     if (stoppedBy !== null && !cancelled) runWarnings.push(`stopped early: ${stoppedBy}`);
-    if (cancelled) runWarnings.push(`stopped by the user: the result holds the ${totalSampled} steps sampled until then`);
+    if (cancelled)
+      runWarnings.push(`stopped by the user: the result holds the ${totalSampled} steps sampled until then`);
     result.warnings.push(...runWarnings);
     const particleSteps = outcome.replicas.reduce((s, r) => s + r.particleSteps, 0);
     return {
@@ -265,8 +317,18 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
         result,
         samples,
         comparison,
-        replicas: outcome.replicas.map((r, k) => ({ stream: r.stream, status: r.status, reason: r.reason, stepsDone: r.stepsDone, sampledSteps: sampledSteps[k] })),
-        performance: { wallSeconds, particleSteps, particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN },
+        replicas: outcome.replicas.map((r, k) => ({
+          stream: r.stream,
+          status: r.status,
+          reason: r.reason,
+          stepsDone: r.stepsDone,
+          sampledSteps: sampledSteps[k],
+        })),
+        performance: {
+          wallSeconds,
+          particleSteps,
+          particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN,
+        },
         runWarnings,
         cancelled,
         stoppedBy: cancelled ? null : stoppedBy,
@@ -296,7 +358,10 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
  * A saved run's result again from its sample file: the same estimates (and comparison) as when it finished. Worked
  * out in a summary worker of its own: decoding re-plans the case, too long a task for the page's thread on big grids.
  */
-export async function resultFromSamples(samples: ArrayBuffer, runWarnings: readonly string[]): Promise<{ result: SimulationResult; comparison: ContinuumComparisonResult }> {
+export async function resultFromSamples(
+  samples: ArrayBuffer,
+  runWarnings: readonly string[],
+): Promise<{ result: SimulationResult; comparison: ContinuumComparisonResult }> {
   const { summary, close } = openSummaryWorker('tenuis-saved-run');
   try {
     const copy = samples.slice(0);
@@ -319,7 +384,9 @@ export function resultGeometryOf(caseInput: unknown): ResultGeometry | null {
   const g = p.grid;
   const wholeCell = (c: number) => {
     const iy = Math.floor(c / g.cellsX);
-    return g.axisymmetric ? Math.PI * g.cellSizeYM * g.cellSizeYM * (2 * iy + 1) * g.cellSizeXM : g.cellSizeXM * g.cellSizeYM;
+    return g.axisymmetric
+      ? Math.PI * g.cellSizeYM * g.cellSizeYM * (2 * iy + 1) * g.cellSizeXM
+      : g.cellSizeXM * g.cellSizeYM;
   };
   // Relative to the whole cell, so round-off in the cut-out volume of a covered cell still counts as no gas.
   const solidCells = Uint8Array.from(g.cells.gasVolumesM3, (v, c) => (v <= 1e-9 * wholeCell(c) ? 1 : 0));
@@ -331,7 +398,11 @@ export function resultGeometryOf(caseInput: unknown): ResultGeometry | null {
     cellsX: g.cellsX,
     cellsY: g.cellsY,
     axisymmetric: g.axisymmetric,
-    walls: p.surfaces.flatMap((s, k) => (s.block < 0 && s.spec.type === 'wall' ? [{ name: s.name, side: sides[k], normalIsX: s.normalIsX, planeM: s.planeM, fromM: s.fromM, toM: s.toM }] : [])),
+    walls: p.surfaces.flatMap((s, k) =>
+      s.block < 0 && s.spec.type === 'wall'
+        ? [{ name: s.name, side: sides[k], normalIsX: s.normalIsX, planeM: s.planeM, fromM: s.fromM, toM: s.toM }]
+        : [],
+    ),
     blocks: p.caseData.blocks.map((b) => ({ name: b.name, x0: b.xMinM, x1: b.xMaxM, y0: b.yMinM, y1: b.yMaxM })),
     solidCells,
     gas: { massKg: p.gas.model.massKg, rotationalDof: zeta, heatCapacityRatio: (5 + zeta) / (3 + zeta) },

@@ -8,8 +8,12 @@ import { wallNamesOf } from '../../engine/kernel/sideTable';
 import { FLOW_QUANTITIES, flowQuantityUnits } from '../../engine/results/flowQuantities';
 import { WALL_QUANTITY_UNITS } from '../../engine/results/wallQuantities';
 import {
-  planSweepPoints, sweepContinuumCurves, sweepValues,
-  type SweepContinuumCurves, type SweepParameter, type SweepSpacing,
+  planSweepPoints,
+  sweepContinuumCurves,
+  sweepValues,
+  type SweepContinuumCurves,
+  type SweepParameter,
+  type SweepSpacing,
 } from '../../engine/case/sweep';
 import type { ContinuumModelName } from '../../engine/continuum/caseModelTypes';
 
@@ -48,15 +52,15 @@ export interface SweepQuantity {
 
 export type SweepPlanView =
   | {
-    readonly ok: true;
-    readonly caseName: string;
-    readonly points: readonly SweepPointView[];
-    /** For the table: planar cases give flow numbers per metre; cases without flow sections get wall columns. */
-    readonly planar: boolean;
-    readonly hasFlow: boolean;
-    /** What can be plotted, as sweep.csv has it: each flow quantity, or each wall's shear stress and heat flux (SI units). */
-    readonly quantities: readonly SweepQuantity[];
-  }
+      readonly ok: true;
+      readonly caseName: string;
+      readonly points: readonly SweepPointView[];
+      /** For the table: planar cases give flow numbers per metre; cases without flow sections get wall columns. */
+      readonly planar: boolean;
+      readonly hasFlow: boolean;
+      /** What can be plotted, as sweep.csv has it: each flow quantity, or each wall's shear stress and heat flux (SI units). */
+      readonly quantities: readonly SweepQuantity[];
+    }
   | { readonly ok: false; readonly message: string };
 
 /** Points of the continuum curves: fine enough to look smooth on a log axis, few enough to plan in a few ms each. */
@@ -68,13 +72,23 @@ export function planSweep(caseInput: unknown, r: SweepRequest): SweepPlanView {
   if (!parsed.ok) return { ok: false, message: `the set-up's case is not valid: ${parsed.errors.join('; ')}` };
   const c = parsed.value;
   const planned = planSweepPoints(c, r.parameter, sweepValues(r.from, r.to, r.points, r.spacing));
-  if (!planned.ok) return { ok: false, message: `point ${planned.point} of ${r.points} (${r.parameter} = ${Number(planned.value.toPrecision(6))}) cannot run as set up: ${planned.errors.join('; ')}` };
+  if (!planned.ok)
+    return {
+      ok: false,
+      message: `point ${planned.point} of ${r.points} (${r.parameter} = ${Number(planned.value.toPrecision(6))}) cannot run as set up: ${planned.errors.join('; ')}`,
+    };
   const planar = c.domain.geometry !== 'axisymmetric';
   const hasFlow = c.flowSections.length > 0;
   const flowUnits = flowQuantityUnits(planar);
   const quantities: SweepQuantity[] = hasFlow
     ? FLOW_QUANTITIES.map((q) => ({ key: `flow.${q}`, label: q, unit: flowUnits[q] }))
-    : wallNamesOf(planned.points[0].plan).flatMap((w) => (['shearStress', 'heatFlux'] as const).map((q) => ({ key: `walls.${w}.${q}`, label: `${w} ${q}`, unit: WALL_QUANTITY_UNITS[q] })));
+    : wallNamesOf(planned.points[0].plan).flatMap((w) =>
+        (['shearStress', 'heatFlux'] as const).map((q) => ({
+          key: `walls.${w}.${q}`,
+          label: `${w} ${q}`,
+          unit: WALL_QUANTITY_UNITS[q],
+        })),
+      );
   return {
     ok: true,
     caseName: c.name,
@@ -82,9 +96,16 @@ export function planSweep(caseInput: unknown, r: SweepRequest): SweepPlanView {
     hasFlow,
     quantities,
     points: planned.points.map((p) => ({
-      point: p.point, value: p.value, caseInput: p.caseData, caseName: p.caseData.name,
-      cellsX: p.plan.grid.cellsX, cellsY: p.plan.grid.cellsY, particles: p.plan.initialParticles,
-      knudsen: p.plan.reference.knudsen, pressurePa: p.plan.reference.pressurePa, warnings: p.plan.warnings,
+      point: p.point,
+      value: p.value,
+      caseInput: p.caseData,
+      caseName: p.caseData.name,
+      cellsX: p.plan.grid.cellsX,
+      cellsY: p.plan.grid.cellsY,
+      particles: p.plan.initialParticles,
+      knudsen: p.plan.reference.knudsen,
+      pressurePa: p.plan.reference.pressurePa,
+      warnings: p.plan.warnings,
     })),
   };
 }
@@ -98,7 +119,11 @@ const nextTask = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
  * grid of CURVE_POINTS values, or just the points' own values for the cavity (each value solves Navier–Stokes).
  * Evaluated a few values per macrotask, so the page stays responsive meanwhile.
  */
-export async function sweepCurves(caseInput: unknown, r: SweepRequest, points: readonly SweepPointView[]): Promise<SweepContinuumCurves | { readonly reason: string }> {
+export async function sweepCurves(
+  caseInput: unknown,
+  r: SweepRequest,
+  points: readonly SweepPointView[],
+): Promise<SweepContinuumCurves | { readonly reason: string }> {
   const parsed = parseCase(caseInput);
   if (!parsed.ok || points.length === 0) return { reason: 'no valid case' };
   const smallest = points.reduce((a, b) => (b.cellsX * b.cellsY < a.cellsX * a.cellsY ? b : a));
@@ -107,12 +132,18 @@ export async function sweepCurves(caseInput: unknown, r: SweepRequest, points: r
   if ('reason' in first) return first;
   const lo = Math.min(r.from, r.to);
   const hi = Math.max(r.from, r.to);
-  const values = first.problem === 'cavity' || lo === hi ? points.map((p) => p.value) : sweepValues(lo, hi, CURVE_POINTS, 'log');
+  const values =
+    first.problem === 'cavity' || lo === hi ? points.map((p) => p.value) : sweepValues(lo, hi, CURVE_POINTS, 'log');
   const curves: Record<string, Partial<Record<ContinuumModelName, number[]>>> = {};
   const units: Record<string, string> = {};
   for (let start = 0; start < values.length; start += CURVE_VALUES_PER_TASK) {
     await nextTask();
-    const part = sweepContinuumCurves(parsed.value, r.parameter, values.slice(start, start + CURVE_VALUES_PER_TASK), cells);
+    const part = sweepContinuumCurves(
+      parsed.value,
+      r.parameter,
+      values.slice(start, start + CURVE_VALUES_PER_TASK),
+      cells,
+    );
     if ('reason' in part) continue;
     Object.assign(units, part.units);
     for (const [key, byModel] of Object.entries(part.curves)) {

@@ -26,7 +26,11 @@ export function ParameterField({ p }: { p: PresetParameter }) {
       <div className="field-input">
         {p.kind === 'choice' ? (
           <select id={id} value={entry?.text ?? ''} onChange={(e) => st.setParamText(p.name, e.target.value)}>
-            {(p.choices ?? []).map((c) => <option key={c} value={c}>{c}</option>)}
+            {(p.choices ?? []).map((c) => (
+              <option key={c} value={c}>
+                {c}
+              </option>
+            ))}
           </select>
         ) : (
           <input
@@ -40,13 +44,28 @@ export function ParameterField({ p }: { p: PresetParameter }) {
           />
         )}
         {units.length > 0 && (
-          <select aria-label={`${p.name} unit`} value={entry?.unit ?? ''} onChange={(e) => st.setParamUnit(p.name, e.target.value)}>
-            {units.map((u) => <option key={u} value={u}>{u}</option>)}
+          <select
+            aria-label={`${p.name} unit`}
+            value={entry?.unit ?? ''}
+            onChange={(e) => st.setParamUnit(p.name, e.target.value)}
+          >
+            {units.map((u) => (
+              <option key={u} value={u}>
+                {u}
+              </option>
+            ))}
           </select>
         )}
-        {units.length === 0 && p.kind !== 'choice' && <span className="unit-fixed">{p.kind === 'count' ? '' : '1'}</span>}
+        {units.length === 0 && p.kind !== 'choice' && (
+          <span className="unit-fixed">{p.kind === 'count' ? '' : '1'}</span>
+        )}
       </div>
-      {error && <p className="field-error" id={`${id}-error`} role="alert">{error}{hint && !error.includes(hint) ? ` (allowed: ${hint})` : ''}</p>}
+      {error && (
+        <p className="field-error" id={`${id}-error`} role="alert">
+          {error}
+          {hint && !error.includes(hint) ? ` (allowed: ${hint})` : ''}
+        </p>
+      )}
     </div>
   );
 }

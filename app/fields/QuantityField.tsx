@@ -19,8 +19,7 @@ export function QuantityField(p: QuantityFieldProps) {
   return (
     <div className={`field${p.error ? ' field-invalid' : ''}`}>
       <label htmlFor={p.id}>
-        {p.label} [{p.unit || '1'}]
-        {p.description && <span className="field-description">{p.description}</span>}
+        {p.label} [{p.unit || '1'}]{p.description && <span className="field-description">{p.description}</span>}
       </label>
       <div className="field-input">
         <input
@@ -34,13 +33,21 @@ export function QuantityField(p: QuantityFieldProps) {
         />
         {p.units.length > 1 ? (
           <select aria-label={`${p.id} unit`} value={p.unit} onChange={(e) => p.onUnit(e.target.value)}>
-            {p.units.map((u) => <option key={u} value={u}>{u}</option>)}
+            {p.units.map((u) => (
+              <option key={u} value={u}>
+                {u}
+              </option>
+            ))}
           </select>
         ) : (
           <span className="unit-fixed">{p.unit || '1'}</span>
         )}
       </div>
-      {p.error && <p className="field-error" id={`${p.id}-error`} role="alert">{p.error}</p>}
+      {p.error && (
+        <p className="field-error" id={`${p.id}-error`} role="alert">
+          {p.error}
+        </p>
+      )}
     </div>
   );
 }

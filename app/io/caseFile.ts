@@ -3,7 +3,10 @@ const MAX_CASE_FILE_BYTES = 2_000_000;
 
 export async function readCaseFile(file: File): Promise<{ ok: true; text: string } | { ok: false; message: string }> {
   if (file.size > MAX_CASE_FILE_BYTES) {
-    return { ok: false, message: `${file.name} was not opened: ${file.size} bytes is too large for a case file (at most ${MAX_CASE_FILE_BYTES}). Nothing was changed.` };
+    return {
+      ok: false,
+      message: `${file.name} was not opened: ${file.size} bytes is too large for a case file (at most ${MAX_CASE_FILE_BYTES}). Nothing was changed.`,
+    };
   }
   try {
     return { ok: true, text: await file.text() };

@@ -20,10 +20,14 @@ let dbPromise: Promise<IDBPDatabase<TenuisDb>> | null = null;
 function db(): Promise<IDBPDatabase<TenuisDb>> {
   dbPromise ??= openDB<TenuisDb>(WORKBENCH_DB_NAME, WORKBENCH_DB_VERSION, {
     upgrade(d, oldVersion) {
-      upgradeWorkbenchDb({
-        hasStore: (name) => d.objectStoreNames.contains(name as 'runs'),
-        createStore: (spec) => void d.createObjectStore(spec.name, spec.keyPath ? { keyPath: spec.keyPath } : undefined),
-      }, oldVersion);
+      upgradeWorkbenchDb(
+        {
+          hasStore: (name) => d.objectStoreNames.contains(name as 'runs'),
+          createStore: (spec) =>
+            void d.createObjectStore(spec.name, spec.keyPath ? { keyPath: spec.keyPath } : undefined),
+        },
+        oldVersion,
+      );
     },
   });
   return dbPromise;
@@ -85,7 +89,10 @@ export async function getSweep(id: string): Promise<SavedSweepRecord | undefined
  * Changes a saved sweep's fields in one transaction, keeping the others (a rename made while it runs survives the
  * next point's update); a sweep deleted meanwhile stays deleted (undefined). Returns what the list shows of it.
  */
-export async function patchSweep(id: string, patch: Partial<Omit<SavedSweepRecord, 'id'>>): Promise<SavedSweepMeta | undefined> {
+export async function patchSweep(
+  id: string,
+  patch: Partial<Omit<SavedSweepRecord, 'id'>>,
+): Promise<SavedSweepMeta | undefined> {
   const tx = (await db()).transaction('sweeps', 'readwrite');
   const r = await tx.store.get(id);
   const updated = r ? { ...r, ...patch, id } : undefined;
@@ -97,7 +104,10 @@ export async function patchSweep(id: string, patch: Partial<Omit<SavedSweepRecor
 /** All saved sweeps, the latest started first. */
 export async function listSweeps(): Promise<SavedSweepMeta[]> {
   const all = await (await db()).getAll('sweeps');
-  return all.filter(isSavedSweepRecord).map(sweepMetaOf).sort((a, b) => b.startedAt.localeCompare(a.startedAt));
+  return all
+    .filter(isSavedSweepRecord)
+    .map(sweepMetaOf)
+    .sort((a, b) => b.startedAt.localeCompare(a.startedAt));
 }
 
 export async function deleteSweep(id: string): Promise<void> {

@@ -30,7 +30,15 @@ export interface SavedRunRecord extends SavedRunMeta {
 
 /** Keys of the record that the list shows; typed over SavedRunMeta so a new field must be placed here. */
 const META_KEYS: { readonly [K in keyof SavedRunMeta]: true } = {
-  id: true, name: true, finishedAt: true, caseName: true, status: true, replicas: true, lostReplicas: true, sampledSteps: true, knudsen: true,
+  id: true,
+  name: true,
+  finishedAt: true,
+  caseName: true,
+  status: true,
+  replicas: true,
+  lostReplicas: true,
+  sampledSteps: true,
+  knudsen: true,
 };
 
 export function metaOf(r: SavedRunRecord): SavedRunMeta {

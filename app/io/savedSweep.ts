@@ -51,7 +51,17 @@ export interface SavedSweepRecord extends SavedSweepMeta {
 
 /** Keys of the record that the list shows; typed over SavedSweepMeta so a new field must be placed here. */
 const META_KEYS: { readonly [K in keyof SavedSweepMeta]: true } = {
-  id: true, name: true, startedAt: true, updatedAt: true, caseName: true, parameter: true, status: true, pointsDone: true, pointCount: true, failedPoints: true, replicas: true,
+  id: true,
+  name: true,
+  startedAt: true,
+  updatedAt: true,
+  caseName: true,
+  parameter: true,
+  status: true,
+  pointsDone: true,
+  pointCount: true,
+  failedPoints: true,
+  replicas: true,
 };
 
 export function sweepMetaOf(r: SavedSweepRecord): SavedSweepMeta {
@@ -70,10 +80,12 @@ export function sweepCounts(rows: readonly SweepRow[]): Pick<SavedSweepMeta, 'po
  * another page or of an earlier page load is interrupted at the point after its last finished one.
  */
 export type SweepStanding =
-  | { readonly kind: 'running' | 'finished' | 'stopped' }
-  | { readonly kind: 'interrupted'; readonly atPoint: number };
+  { readonly kind: 'running' | 'finished' | 'stopped' } | { readonly kind: 'interrupted'; readonly atPoint: number };
 
-export function sweepStanding(m: Pick<SavedSweepMeta, 'id' | 'status' | 'pointsDone' | 'pointCount'>, activeId: string | null): SweepStanding {
+export function sweepStanding(
+  m: Pick<SavedSweepMeta, 'id' | 'status' | 'pointsDone' | 'pointCount'>,
+  activeId: string | null,
+): SweepStanding {
   if (m.status !== 'running') return { kind: m.status };
   if (m.id === activeId) return { kind: 'running' };
   // Every point ended but the end of the sweep was not written: nothing is missing.
@@ -87,10 +99,14 @@ export function sweepStandingText(m: SavedSweepMeta, activeId: string | null): s
   const failed = m.failedPoints ? `, ${m.failedPoints} failed` : '';
   const kept = `${m.pointsDone} finished point${m.pointsDone === 1 ? '' : 's'} kept`;
   switch (s.kind) {
-    case 'running': return `running, ${m.pointsDone} of ${m.pointCount} points done${failed}`;
-    case 'finished': return `finished, ${m.pointsDone} of ${m.pointCount} points${failed}`;
-    case 'stopped': return `stopped after ${m.pointsDone} of ${m.pointCount} points${failed}`;
-    case 'interrupted': return `interrupted at point ${s.atPoint} of ${m.pointCount} (${kept}${failed})`;
+    case 'running':
+      return `running, ${m.pointsDone} of ${m.pointCount} points done${failed}`;
+    case 'finished':
+      return `finished, ${m.pointsDone} of ${m.pointCount} points${failed}`;
+    case 'stopped':
+      return `stopped after ${m.pointsDone} of ${m.pointCount} points${failed}`;
+    case 'interrupted':
+      return `interrupted at point ${s.atPoint} of ${m.pointCount} (${kept}${failed})`;
   }
 }
 
@@ -98,9 +114,18 @@ export function sweepStandingText(m: SavedSweepMeta, activeId: string | null): s
 export function isSavedSweepRecord(x: unknown): x is SavedSweepRecord {
   if (typeof x !== 'object' || x === null) return false;
   const r = x as Record<string, unknown>;
-  return typeof r.id === 'string' && typeof r.name === 'string' && typeof r.startedAt === 'string'
-    && ['running', 'finished', 'stopped'].includes(r.status as string)
-    && Array.isArray(r.rows) && typeof r.request === 'object' && r.request !== null
-    && typeof r.plan === 'object' && r.plan !== null && Array.isArray((r.plan as { quantities?: unknown }).quantities)
-    && typeof r.form === 'object' && r.form !== null;
+  return (
+    typeof r.id === 'string' &&
+    typeof r.name === 'string' &&
+    typeof r.startedAt === 'string' &&
+    ['running', 'finished', 'stopped'].includes(r.status as string) &&
+    Array.isArray(r.rows) &&
+    typeof r.request === 'object' &&
+    r.request !== null &&
+    typeof r.plan === 'object' &&
+    r.plan !== null &&
+    Array.isArray((r.plan as { quantities?: unknown }).quantities) &&
+    typeof r.form === 'object' &&
+    r.form !== null
+  );
 }

@@ -30,21 +30,59 @@ export function CaseJsonPanel() {
       <div className="actions">
         <label className="button-like">
           Open case file…
-          <input type="file" accept=".json,application/json" className="visually-hidden" data-testid="open-case-file"
-            onChange={(e) => { const f = e.target.files?.[0]; if (f) void openCaseFile(f); e.target.value = ''; }} />
+          <input
+            type="file"
+            accept=".json,application/json"
+            className="visually-hidden"
+            data-testid="open-case-file"
+            onChange={(e) => {
+              const f = e.target.files?.[0];
+              if (f) void openCaseFile(f);
+              e.target.value = '';
+            }}
+          />
         </label>
-        <button type="button" disabled={!valid} title={valid ? undefined : 'fix the marked problems first'} onClick={() => downloadText(`${slug(String(name))}.json`, caseText, 'application/json')}>Save case as JSON</button>
-        <button type="button" disabled={!dirty} onClick={() => appStore.getState().editCaseText(text)}>Apply JSON edits</button>
-        {dirty && <button type="button" onClick={() => setText(caseText)}>Discard edits</button>}
+        <button
+          type="button"
+          disabled={!valid}
+          title={valid ? undefined : 'fix the marked problems first'}
+          onClick={() => downloadText(`${slug(String(name))}.json`, caseText, 'application/json')}
+        >
+          Save case as JSON
+        </button>
+        <button type="button" disabled={!dirty} onClick={() => appStore.getState().editCaseText(text)}>
+          Apply JSON edits
+        </button>
+        {dirty && (
+          <button type="button" onClick={() => setText(caseText)}>
+            Discard edits
+          </button>
+        )}
       </div>
-      <p className="hint">Drop a case file anywhere on the page to open it. Source: {source.kind === 'form' ? 'built from the form' : source.label}.</p>
+      <p className="hint">
+        Drop a case file anywhere on the page to open it. Source:{' '}
+        {source.kind === 'form' ? 'built from the form' : source.label}.
+      </p>
       {source.kind === 'form' && fieldProblems > 0 && (
-        <p className="message message-error" role="status">The JSON below leaves out the {fieldProblems} form value{fieldProblems === 1 ? '' : 's'} marked invalid (their defaults stand in); it is not the case you asked for until they are fixed.</p>
+        <p className="message message-error" role="status">
+          The JSON below leaves out the {fieldProblems} form value{fieldProblems === 1 ? '' : 's'} marked invalid (their
+          defaults stand in); it is not the case you asked for until they are fixed.
+        </p>
       )}
-      <textarea aria-label="case JSON" spellCheck={false} value={text} onChange={(e) => setText(e.target.value)} rows={18} />
+      <textarea
+        aria-label="case JSON"
+        spellCheck={false}
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        rows={18}
+      />
       {errors.length > 0 && (
         <ul className="errors" aria-label="case problems">
-          {errors.map((e) => <li key={e} role="alert">{e}</li>)}
+          {errors.map((e) => (
+            <li key={e} role="alert">
+              {e}
+            </li>
+          ))}
         </ul>
       )}
     </section>

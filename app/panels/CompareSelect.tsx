@@ -11,9 +11,17 @@ export function CompareSelect() {
   return (
     <span className="field-inline">
       <label htmlFor="compare-select">overlay a saved run</label>
-      <select id="compare-select" value={compareId ?? ''} onChange={(e) => void compareWithSavedRun(appStore, e.target.value || null)}>
+      <select
+        id="compare-select"
+        value={compareId ?? ''}
+        onChange={(e) => void compareWithSavedRun(appStore, e.target.value || null)}
+      >
         <option value="">(none)</option>
-        {others.map((r) => <option key={r.id} value={r.id}>{r.name}</option>)}
+        {others.map((r) => (
+          <option key={r.id} value={r.id}>
+            {r.name}
+          </option>
+        ))}
       </select>
     </span>
   );

@@ -30,7 +30,8 @@ export function CutControls({ spec, columnsM, rowsM, lengthUnit, radial, onChang
   const typed = (value: string) => {
     setText(value);
     const v = Number(value);
-    if (value.trim() !== '' && Number.isFinite(v)) onChange({ kind: spec.kind, index: nearestCentre(centres, v * lengthUnit.factor) });
+    if (value.trim() !== '' && Number.isFinite(v))
+      onChange({ kind: spec.kind, index: nearestCentre(centres, v * lengthUnit.factor) });
   };
   const step = centres.length > 1 ? (centres[1] - centres[0]) / lengthUnit.factor : undefined;
   return (
@@ -45,17 +46,30 @@ export function CutControls({ spec, columnsM, rowsM, lengthUnit, radial, onChang
       </span>
       {spec.kind !== 'average' && (
         <span className="field-inline">
-          <label htmlFor="profile-cut-position">{coordinate} [{lengthUnit.unit}]</label>
+          <label htmlFor="profile-cut-position">
+            {coordinate} [{lengthUnit.unit}]
+          </label>
           <input
-            id="profile-cut-position" type="number" inputMode="decimal" step={step} value={text}
-            onChange={(e) => typed(e.target.value)} onBlur={() => setText(shown(at))}
+            id="profile-cut-position"
+            type="number"
+            inputMode="decimal"
+            step={step}
+            value={text}
+            onChange={(e) => typed(e.target.value)}
+            onBlur={() => setText(shown(at))}
           />
           <input
-            type="range" aria-label={`cut position (${spec.kind === 'vertical' ? 'column' : 'row'} of cells)`} min={0} max={centres.length - 1} step={1}
-            value={spec.index} onChange={(e) => onChange({ kind: spec.kind, index: Number(e.target.value) })}
+            type="range"
+            aria-label={`cut position (${spec.kind === 'vertical' ? 'column' : 'row'} of cells)`}
+            min={0}
+            max={centres.length - 1}
+            step={1}
+            value={spec.index}
+            onChange={(e) => onChange({ kind: spec.kind, index: Number(e.target.value) })}
           />
           <span className="hint" data-testid="cut-position">
-            {coordinate} = {shown(at)} {lengthUnit.unit}: centre of {spec.kind === 'vertical' ? 'column' : 'row'} {spec.index + 1} of {centres.length}
+            {coordinate} = {shown(at)} {lengthUnit.unit}: centre of {spec.kind === 'vertical' ? 'column' : 'row'}{' '}
+            {spec.index + 1} of {centres.length}
           </span>
         </span>
       )}

@@ -106,54 +106,137 @@ export function DomainPreview(p: DomainPreviewProps) {
     if (!drag) return;
     const q = pointAt(e);
     setDrag(null);
-    const rect = { xMinM: Math.min(drag.x0, q.x), xMaxM: Math.max(drag.x0, q.x), yMinM: Math.min(drag.y0, q.y), yMaxM: Math.max(drag.y0, q.y) };
+    const rect = {
+      xMinM: Math.min(drag.x0, q.x),
+      xMaxM: Math.max(drag.x0, q.x),
+      yMinM: Math.min(drag.y0, q.y),
+      yMaxM: Math.max(drag.y0, q.y),
+    };
     if (rect.xMaxM > rect.xMinM && rect.yMaxM > rect.yMinM) p.onDraw?.(rect);
   };
 
-  const sides: { side: SideName; x1: number; y1: number; x2: number; y2: number; lx: number; ly: number; rotate: number }[] = [
+  const sides: {
+    side: SideName;
+    x1: number;
+    y1: number;
+    x2: number;
+    y2: number;
+    lx: number;
+    ly: number;
+    rotate: number;
+  }[] = [
     { side: 'bottom', x1: X(0), y1: Y(0), x2: X(lx), y2: Y(0), lx: X(lx / 2), ly: Y(0) + 16, rotate: 0 },
     { side: 'top', x1: X(0), y1: Y(ly), x2: X(lx), y2: Y(ly), lx: X(lx / 2), ly: Y(ly) - 8, rotate: 0 },
     { side: 'left', x1: X(0), y1: Y(0), x2: X(0), y2: Y(ly), lx: X(0) - 10, ly: Y(ly / 2), rotate: -90 },
     { side: 'right', x1: X(lx), y1: Y(0), x2: X(lx), y2: Y(ly), lx: X(lx) + 10, ly: Y(ly / 2), rotate: 90 },
   ];
   const grid = p.grid && p.grid.cellsX <= GRID_LINES_MAX && p.grid.cellsY <= GRID_LINES_MAX ? p.grid : null;
-  const shown = drag && { x: X(Math.min(drag.x0, drag.x1)), y: Y(Math.max(drag.y0, drag.y1)), w: Math.abs(drag.x1 - drag.x0) * f.sx, h: Math.abs(drag.y1 - drag.y0) * f.sy };
+  const shown = drag && {
+    x: X(Math.min(drag.x0, drag.x1)),
+    y: Y(Math.max(drag.y0, drag.y1)),
+    w: Math.abs(drag.x1 - drag.x0) * f.sx,
+    h: Math.abs(drag.y1 - drag.y0) * f.sy,
+  };
   return (
     <figure className="domain-preview">
-      <svg ref={svg} viewBox={`0 0 ${WIDTH} ${height}`} role="img" aria-label="domain preview: sides, grid and solid blocks" data-testid="domain-preview">
+      <svg
+        ref={svg}
+        viewBox={`0 0 ${WIDTH} ${height}`}
+        role="img"
+        aria-label="domain preview: sides, grid and solid blocks"
+        data-testid="domain-preview"
+      >
         <rect className="domain-gas" x={X(0)} y={Y(ly)} width={f.w} height={f.h} />
         {grid && (
           <g className="domain-grid">
-            {Array.from({ length: grid.cellsX - 1 }, (_, i) => <line key={`x${i}`} x1={X(((i + 1) * lx) / grid.cellsX)} x2={X(((i + 1) * lx) / grid.cellsX)} y1={Y(0)} y2={Y(ly)} />)}
-            {Array.from({ length: grid.cellsY - 1 }, (_, i) => <line key={`y${i}`} y1={Y(((i + 1) * ly) / grid.cellsY)} y2={Y(((i + 1) * ly) / grid.cellsY)} x1={X(0)} x2={X(lx)} />)}
+            {Array.from({ length: grid.cellsX - 1 }, (_, i) => (
+              <line
+                key={`x${i}`}
+                x1={X(((i + 1) * lx) / grid.cellsX)}
+                x2={X(((i + 1) * lx) / grid.cellsX)}
+                y1={Y(0)}
+                y2={Y(ly)}
+              />
+            ))}
+            {Array.from({ length: grid.cellsY - 1 }, (_, i) => (
+              <line
+                key={`y${i}`}
+                y1={Y(((i + 1) * ly) / grid.cellsY)}
+                y2={Y(((i + 1) * ly) / grid.cellsY)}
+                x1={X(0)}
+                x2={X(lx)}
+              />
+            ))}
           </g>
         )}
-        {p.blocks.map((b, i) => b.rect && (
-          <g key={`${i}:${b.name}`} className={`domain-block${b.invalid ? ' domain-block-invalid' : ''}`} data-testid={`preview-block-${i}`}>
-            <rect x={X(Math.max(0, b.rect.xMinM))} y={Y(Math.min(ly, b.rect.yMaxM))} width={Math.max(1, (Math.min(lx, b.rect.xMaxM) - Math.max(0, b.rect.xMinM)) * f.sx)} height={Math.max(1, (Math.min(ly, b.rect.yMaxM) - Math.max(0, b.rect.yMinM)) * f.sy)} />
-            <text x={X((Math.max(0, b.rect.xMinM) + Math.min(lx, b.rect.xMaxM)) / 2)} y={Y((Math.max(0, b.rect.yMinM) + Math.min(ly, b.rect.yMaxM)) / 2) + 4}>{b.name}</text>
-          </g>
-        ))}
+        {p.blocks.map(
+          (b, i) =>
+            b.rect && (
+              <g
+                key={`${i}:${b.name}`}
+                className={`domain-block${b.invalid ? ' domain-block-invalid' : ''}`}
+                data-testid={`preview-block-${i}`}
+              >
+                <rect
+                  x={X(Math.max(0, b.rect.xMinM))}
+                  y={Y(Math.min(ly, b.rect.yMaxM))}
+                  width={Math.max(1, (Math.min(lx, b.rect.xMaxM) - Math.max(0, b.rect.xMinM)) * f.sx)}
+                  height={Math.max(1, (Math.min(ly, b.rect.yMaxM) - Math.max(0, b.rect.yMinM)) * f.sy)}
+                />
+                <text
+                  x={X((Math.max(0, b.rect.xMinM) + Math.min(lx, b.rect.xMaxM)) / 2)}
+                  y={Y((Math.max(0, b.rect.yMinM) + Math.min(ly, b.rect.yMaxM)) / 2) + 4}
+                >
+                  {b.name}
+                </text>
+              </g>
+            ),
+        )}
         {sides.map((s) => (
-          <g key={s.side} className={`domain-side side-${p.boundaries[s.side].type}`} data-testid={`preview-side-${s.side}`}>
+          <g
+            key={s.side}
+            className={`domain-side side-${p.boundaries[s.side].type}`}
+            data-testid={`preview-side-${s.side}`}
+          >
             <line x1={s.x1} y1={s.y1} x2={s.x2} y2={s.y2} />
-            <text x={s.lx} y={s.ly} transform={s.rotate ? `rotate(${s.rotate} ${s.lx} ${s.ly})` : undefined}>{sideLabel(s.side, p.boundaries[s.side])}</text>
+            <text x={s.lx} y={s.ly} transform={s.rotate ? `rotate(${s.rotate} ${s.lx} ${s.ly})` : undefined}>
+              {sideLabel(s.side, p.boundaries[s.side])}
+            </text>
           </g>
         ))}
-        {shown && <rect className="domain-drag" x={shown.x} y={shown.y} width={shown.w} height={shown.h} data-testid="preview-drag" />}
+        {shown && (
+          <rect
+            className="domain-drag"
+            x={shown.x}
+            y={shown.y}
+            width={shown.w}
+            height={shown.h}
+            data-testid="preview-drag"
+          />
+        )}
         <rect
           className={`domain-area${p.onDraw ? ' domain-area-draw' : ''}`}
-          x={X(0)} y={Y(ly)} width={f.w} height={f.h}
+          x={X(0)}
+          y={Y(ly)}
+          width={f.w}
+          height={f.h}
           data-testid="domain-area"
-          onPointerDown={down} onPointerMove={move} onPointerUp={up} onPointerCancel={() => setDrag(null)}
+          onPointerDown={down}
+          onPointerMove={move}
+          onPointerUp={up}
+          onPointerCancel={() => setDrag(null)}
         />
         <text className="domain-extent" x={WIDTH / 2} y={height - 8}>
-          x 0 … {lengthLabel(lx, p.lengthUnit, api)}{radial ? ' (axis)' : ''}, {radial ? 'r' : 'y'} 0 … {lengthLabel(ly, p.lengthUnit, api)}
-          {p.grid ? `; grid ${p.grid.cellsX} × ${p.grid.cellsY} cells` : ''}{f.toScale ? '' : '; not to scale'}
+          x 0 … {lengthLabel(lx, p.lengthUnit, api)}
+          {radial ? ' (axis)' : ''}, {radial ? 'r' : 'y'} 0 … {lengthLabel(ly, p.lengthUnit, api)}
+          {p.grid ? `; grid ${p.grid.cellsX} × ${p.grid.cellsY} cells` : ''}
+          {f.toScale ? '' : '; not to scale'}
         </text>
       </svg>
       <figcaption className="hint">
-        {p.onDraw ? `Drag a rectangle on the domain to add a block${p.grid ? '; its corners snap to the cell edges of the planned grid' : ''}.` : 'The case comes from JSON: blocks are edited there.'}
+        {p.onDraw
+          ? `Drag a rectangle on the domain to add a block${p.grid ? '; its corners snap to the cell edges of the planned grid' : ''}.`
+          : 'The case comes from JSON: blocks are edited there.'}
         {radial ? ' Axisymmetric: y is the radius and a block is a ring (a disc when it touches the axis).' : ''}
       </figcaption>
     </figure>

@@ -30,5 +30,9 @@ export function DropTarget() {
       window.removeEventListener('drop', onDrop);
     };
   }, []);
-  return over ? <div className="drop-overlay" aria-hidden="true">Drop the case file to open it</div> : null;
+  return over ? (
+    <div className="drop-overlay" aria-hidden="true">
+      Drop the case file to open it
+    </div>
+  ) : null;
 }

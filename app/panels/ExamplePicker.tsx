@@ -12,12 +12,20 @@ export function ExamplePicker({ examples }: { examples: readonly ExampleEntry[] 
       <h2 id="examples-title">Start from an example</h2>
       <div className="field">
         <label htmlFor="example-select">example case</label>
-        <select id="example-select" value={chosen?.id ?? ''} onChange={(e) => {
-          const ex = examples.find((x) => x.id === e.target.value);
-          if (ex) void openExample(appStore, ex);
-        }}>
+        <select
+          id="example-select"
+          value={chosen?.id ?? ''}
+          onChange={(e) => {
+            const ex = examples.find((x) => x.id === e.target.value);
+            if (ex) void openExample(appStore, ex);
+          }}
+        >
           <option value="">(none: own set-up)</option>
-          {examples.map((e) => <option key={e.id} value={e.id}>{e.title}</option>)}
+          {examples.map((e) => (
+            <option key={e.id} value={e.id}>
+              {e.title}
+            </option>
+          ))}
         </select>
       </div>
       {chosen && <p className="hint">{chosen.scenario}</p>}

@@ -7,7 +7,13 @@ import { setupApi } from '../engine/loadEngine';
 import type { SpeciesId } from '../../engine/gas/species';
 import { QuantityField } from '../fields/QuantityField';
 import {
-  MOLECULAR_MASS_UNITS, convertEntry, entryOfSI, numberText, type CustomGasEdit, type GasEdit, type ParamEntry,
+  MOLECULAR_MASS_UNITS,
+  convertEntry,
+  entryOfSI,
+  numberText,
+  type CustomGasEdit,
+  type GasEdit,
+  type ParamEntry,
 } from '../setup/formModel';
 import { appStore, useApp } from '../store/appStore';
 
@@ -28,16 +34,66 @@ function customFrom(speciesId: string, model: string): CustomGasEdit {
 }
 
 type QuantityKey = 'mass' | 'diameter' | 'referenceTemperature';
-const QUANTITIES: readonly { key: QuantityKey; field: string; label: string; units: readonly string[]; description: string }[] = [
-  { key: 'mass', field: 'massKg', label: 'molecular mass', units: MOLECULAR_MASS_UNITS, description: 'molar mass (g/mol), or the mass of one molecule (kg)' },
-  { key: 'diameter', field: 'referenceDiameterM', label: 'reference diameter', units: ['nm', 'µm', 'm'], description: 'VHS/VSS molecular diameter at the reference temperature' },
-  { key: 'referenceTemperature', field: 'referenceTemperatureK', label: 'reference temperature', units: ['K', '°C'], description: 'temperature at which the diameter holds' },
+const QUANTITIES: readonly {
+  key: QuantityKey;
+  field: string;
+  label: string;
+  units: readonly string[];
+  description: string;
+}[] = [
+  {
+    key: 'mass',
+    field: 'massKg',
+    label: 'molecular mass',
+    units: MOLECULAR_MASS_UNITS,
+    description: 'molar mass (g/mol), or the mass of one molecule (kg)',
+  },
+  {
+    key: 'diameter',
+    field: 'referenceDiameterM',
+    label: 'reference diameter',
+    units: ['nm', 'µm', 'm'],
+    description: 'VHS/VSS molecular diameter at the reference temperature',
+  },
+  {
+    key: 'referenceTemperature',
+    field: 'referenceTemperatureK',
+    label: 'reference temperature',
+    units: ['K', '°C'],
+    description: 'temperature at which the diameter holds',
+  },
 ];
-const NUMBERS: readonly { key: 'viscosityIndex' | 'scatteringExponent'; field: string; label: string; description: string }[] = [
-  { key: 'viscosityIndex', field: 'viscosityIndex', label: 'viscosity index ω', description: 'μ ∝ T^ω: 0.5 hard sphere … 1 Maxwell molecules (HS uses 0.5 whatever is typed)' },
-  { key: 'scatteringExponent', field: 'scatteringExponent', label: 'VSS scattering exponent α', description: '1 isotropic … 2; used by the VSS model only' },
+const NUMBERS: readonly {
+  key: 'viscosityIndex' | 'scatteringExponent';
+  field: string;
+  label: string;
+  description: string;
+}[] = [
+  {
+    key: 'viscosityIndex',
+    field: 'viscosityIndex',
+    label: 'viscosity index ω',
+    description: 'μ ∝ T^ω: 0.5 hard sphere … 1 Maxwell molecules (HS uses 0.5 whatever is typed)',
+  },
+  {
+    key: 'scatteringExponent',
+    field: 'scatteringExponent',
+    label: 'VSS scattering exponent α',
+    description: '1 isotropic … 2; used by the VSS model only',
+  },
 ];
-const SHOWN_FIELDS = new Set(['name', 'massKg', 'referenceDiameterM', 'referenceTemperatureK', 'viscosityIndex', 'scatteringExponent', 'rotationalDof', 'rotationalCollisionNumber', 'model', 'species']);
+const SHOWN_FIELDS = new Set([
+  'name',
+  'massKg',
+  'referenceDiameterM',
+  'referenceTemperatureK',
+  'viscosityIndex',
+  'scatteringExponent',
+  'rotationalDof',
+  'rotationalCollisionNumber',
+  'model',
+  'species',
+]);
 
 function CustomGasFields({ gas, custom: c }: { gas: GasEdit; custom: CustomGasEdit }) {
   const errors = useApp((s) => s.derived?.fieldErrors);
@@ -51,8 +107,19 @@ function CustomGasFields({ gas, custom: c }: { gas: GasEdit; custom: CustomGasEd
       <legend>Custom gas (gas.custom)</legend>
       <div className={`field${nameError ? ' field-invalid' : ''}`}>
         <label htmlFor="gas-name">gas name</label>
-        <div className="field-input"><input id="gas-name" value={c.name} aria-invalid={nameError ? true : undefined} onChange={(e) => set({ name: e.target.value })} /></div>
-        {nameError && <p className="field-error" role="alert">{nameError}</p>}
+        <div className="field-input">
+          <input
+            id="gas-name"
+            value={c.name}
+            aria-invalid={nameError ? true : undefined}
+            onChange={(e) => set({ name: e.target.value })}
+          />
+        </div>
+        {nameError && (
+          <p className="field-error" role="alert">
+            {nameError}
+          </p>
+        )}
       </div>
       {QUANTITIES.map((q) => (
         <QuantityField
@@ -85,13 +152,21 @@ function CustomGasFields({ gas, custom: c }: { gas: GasEdit; custom: CustomGasEd
       <div className={`field${dofError ? ' field-invalid' : ''}`}>
         <label htmlFor="gas-rotationalDof">rotational degrees of freedom [1]</label>
         <div className="field-input">
-          <select id="gas-rotationalDof" value={c.rotationalDof} onChange={(e) => set({ rotationalDof: e.target.value })}>
+          <select
+            id="gas-rotationalDof"
+            value={c.rotationalDof}
+            onChange={(e) => set({ rotationalDof: e.target.value })}
+          >
             <option value="0">0 (monatomic)</option>
             <option value="2">2 (linear molecule)</option>
             <option value="3">3 (non-linear molecule)</option>
           </select>
         </div>
-        {dofError && <p className="field-error" role="alert">{dofError}</p>}
+        {dofError && (
+          <p className="field-error" role="alert">
+            {dofError}
+          </p>
+        )}
       </div>
     </fieldset>
   );
@@ -123,29 +198,70 @@ export function GasForm() {
         <div className="field">
           <span className="field-label">gas from</span>
           <div className="field-input" role="radiogroup" aria-label="gas from">
-            <label className="field-inline"><input type="radio" name="gas-source" checked={!custom} onChange={() => st.setGas({ ...edit, source: 'table' })} /> the table</label>
-            <label className="field-inline"><input type="radio" name="gas-source" checked={custom} onChange={() => st.setGas({ ...edit, source: 'custom', custom: edit.custom ?? customFrom(species, model) })} /> my own data (custom gas)</label>
+            <label className="field-inline">
+              <input
+                type="radio"
+                name="gas-source"
+                checked={!custom}
+                onChange={() => st.setGas({ ...edit, source: 'table' })}
+              />{' '}
+              the table
+            </label>
+            <label className="field-inline">
+              <input
+                type="radio"
+                name="gas-source"
+                checked={custom}
+                onChange={() =>
+                  st.setGas({ ...edit, source: 'custom', custom: edit.custom ?? customFrom(species, model) })
+                }
+              />{' '}
+              my own data (custom gas)
+            </label>
           </div>
         </div>
         {!custom && (
           <div className={`field${speciesError ? ' field-invalid' : ''}`}>
-            <label htmlFor="gas-species">table gas<span className="field-description">molecular data of Bird (1994), Appendix A</span></label>
+            <label htmlFor="gas-species">
+              table gas<span className="field-description">molecular data of Bird (1994), Appendix A</span>
+            </label>
             <div className="field-input">
               <select id="gas-species" value={species} onChange={(e) => st.setParamText('gas', e.target.value)}>
-                {api.SPECIES_IDS.map((id) => <option key={id} value={id}>{id} — {api.SPECIES[id].name}</option>)}
+                {api.SPECIES_IDS.map((id) => (
+                  <option key={id} value={id}>
+                    {id} — {api.SPECIES[id].name}
+                  </option>
+                ))}
               </select>
             </div>
-            {speciesError && <p className="field-error" role="alert">{speciesError}</p>}
+            {speciesError && (
+              <p className="field-error" role="alert">
+                {speciesError}
+              </p>
+            )}
           </div>
         )}
         <div className={`field${modelError ? ' field-invalid' : ''}`}>
-          <label htmlFor="gas-model">collision model<span className="field-description">HS hard sphere, VHS variable hard sphere, VSS variable soft sphere</span></label>
+          <label htmlFor="gas-model">
+            collision model
+            <span className="field-description">
+              HS hard sphere, VHS variable hard sphere, VSS variable soft sphere
+            </span>
+          </label>
           <div className="field-input">
             <select id="gas-model" value={model} onChange={(e) => st.setParamText('model', e.target.value)}>
-              {api.COLLISION_MODELS.map((m) => <option key={m} value={m}>{m}</option>)}
+              {api.COLLISION_MODELS.map((m) => (
+                <option key={m} value={m}>
+                  {m}
+                </option>
+              ))}
             </select>
           </div>
-          {modelError && <p className="field-error" role="alert">{modelError}</p>}
+          {modelError && (
+            <p className="field-error" role="alert">
+              {modelError}
+            </p>
+          )}
         </div>
         <QuantityField
           id="gas-rotationalCollisionNumber"
@@ -160,8 +276,21 @@ export function GasForm() {
           onUnit={() => undefined}
         />
         {custom && <CustomGasFields gas={edit} custom={edit.custom!} />}
-        {custom && <p className="hint">The Knudsen number of the geometry form holds for this gas: every pressure of the case is set for it (the JSON shows the result).</p>}
-        {others.length > 0 && <ul className="errors">{others.map(([k, m]) => <li key={k} role="alert">{k.slice(4)}: {m}</li>)}</ul>}
+        {custom && (
+          <p className="hint">
+            The Knudsen number of the geometry form holds for this gas: every pressure of the case is set for it (the
+            JSON shows the result).
+          </p>
+        )}
+        {others.length > 0 && (
+          <ul className="errors">
+            {others.map(([k, m]) => (
+              <li key={k} role="alert">
+                {k.slice(4)}: {m}
+              </li>
+            ))}
+          </ul>
+        )}
       </fieldset>
     </section>
   );

@@ -14,8 +14,17 @@ export function LiveProfilePanel({ result }: { result: SimulationResult }) {
   const rows = Array.from({ length: t.rows }, (_, r) => r);
   return (
     <section className="panel" aria-labelledby="live-profile-title">
-      <h2 id="live-profile-title">Live profile along y ({result.numerics.sampleSteps.toLocaleString('en-US')} sampled steps so far)</h2>
-      <QuantitySelect id="live-quantity" label="quantity" names={t.names} units={t.units} value={t.names[f]} onChange={(q) => appStore.getState().select({ profileQuantity: q })} />
+      <h2 id="live-profile-title">
+        Live profile along y ({result.numerics.sampleSteps.toLocaleString('en-US')} sampled steps so far)
+      </h2>
+      <QuantitySelect
+        id="live-quantity"
+        label="quantity"
+        names={t.names}
+        units={t.units}
+        value={t.names[f]}
+        onChange={(q) => appStore.getState().select({ profileQuantity: q })}
+      />
       <LiveProfileChart
         x={rows.map((r) => result.profileY[r] / len.factor)}
         y={rows.map((r) => t.mean[r * w + f])}

@@ -1,6 +1,12 @@
 /** One checkbox per continuum model overlaid on a profile: which predictions are drawn (and exported with the cut). */
-export function ModelToggles({ models, hidden, onToggle }: {
-  models: readonly string[]; hidden: ReadonlySet<string>; onToggle: (model: string, shown: boolean) => void;
+export function ModelToggles({
+  models,
+  hidden,
+  onToggle,
+}: {
+  models: readonly string[];
+  hidden: ReadonlySet<string>;
+  onToggle: (model: string, shown: boolean) => void;
 }) {
   if (models.length === 0) return null;
   return (

@@ -14,7 +14,15 @@ export function FlowNumbersCard({ ext }: { ext: ResultExtensions }) {
       {ext.flowContext && <p className="hint">{ext.flowContext}</p>}
       <table className="kv">
         <tbody>
-          {ext.flow.map((f) => <tr key={f.name}><th scope="row">{f.label}{f.unit ? ` [${f.unit}]` : ''}</th><td>{estimateText(f.mean, f.ci95)}</td></tr>)}
+          {ext.flow.map((f) => (
+            <tr key={f.name}>
+              <th scope="row">
+                {f.label}
+                {f.unit ? ` [${f.unit}]` : ''}
+              </th>
+              <td>{estimateText(f.mean, f.ci95)}</td>
+            </tr>
+          ))}
         </tbody>
       </table>
     </section>
@@ -27,7 +35,13 @@ export function VerdictCard({ ext }: { ext: ResultExtensions }) {
     <section className="panel" aria-labelledby="verdict-title" data-testid="verdict">
       <h2 id="verdict-title">Which model is good enough</h2>
       <p>{ext.verdict.text}</p>
-      {ext.verdict.reasons.length > 0 && <ul>{ext.verdict.reasons.map((r) => <li key={r}>{r}</li>)}</ul>}
+      {ext.verdict.reasons.length > 0 && (
+        <ul>
+          {ext.verdict.reasons.map((r) => (
+            <li key={r}>{r}</li>
+          ))}
+        </ul>
+      )}
     </section>
   );
 }
@@ -41,11 +55,23 @@ export function ComparisonCard({ view }: { view: ComparisonView | null }) {
       <p className="hint">{view.description}</p>
       {view.verdicts.length > 0 && (
         <table className="grid">
-          <thead><tr><th>quantity</th><th>model values</th><th>verdict</th></tr></thead>
+          <thead>
+            <tr>
+              <th>quantity</th>
+              <th>model values</th>
+              <th>verdict</th>
+            </tr>
+          </thead>
           <tbody>
             {view.verdicts.map((v) => (
-              <tr key={v.quantity} className={v.category === 'withinError' || v.category === 'adequate' ? 'pass' : 'warn'}>
-                <td>{v.quantity}{v.unit && v.unit !== '1' ? ` [${v.unit}]` : ''}</td>
+              <tr
+                key={v.quantity}
+                className={v.category === 'withinError' || v.category === 'adequate' ? 'pass' : 'warn'}
+              >
+                <td>
+                  {v.quantity}
+                  {v.unit && v.unit !== '1' ? ` [${v.unit}]` : ''}
+                </td>
                 <td>{v.values.map((x) => `${x.label} ${sig(x.value, 4)}`).join('; ') || 'profile (see plot)'}</td>
                 <td>{v.text}</td>
               </tr>

@@ -18,7 +18,12 @@ import { LiveProfilePanel } from './LiveProfilePanel';
 /** The run view's live profile and wall numbers (plain SVG while live; the plotly panel once final). */
 export function LiveProfile() {
   const { entry, live } = useShownResult();
-  if (!entry) return <section className="panel"><p className="hint">Live profiles appear here once the replicas have sampled.</p></section>;
+  if (!entry)
+    return (
+      <section className="panel">
+        <p className="hint">Live profiles appear here once the replicas have sampled.</p>
+      </section>
+    );
   return (
     <div className="results">
       {live ? <LiveProfilePanel result={entry.result} /> : <ProfilePanel result={entry.result} live={false} />}
@@ -35,17 +40,25 @@ export function ResultPanels() {
     const units = runApiIfLoaded()?.flowQuantityUnits(!(entry.result as { axisymmetric?: boolean }).axisymmetric) ?? {};
     return extensionsOf(entry.result, units);
   }, [entry?.result]);
-  const comparison = useMemo(() => comparisonView(entry?.comparison, runApiIfLoaded()?.MODEL_LABELS ?? {}), [entry?.comparison]);
+  const comparison = useMemo(
+    () => comparisonView(entry?.comparison, runApiIfLoaded()?.MODEL_LABELS ?? {}),
+    [entry?.comparison],
+  );
   const curves = useMemo(() => [...(ext?.continuum ?? []), ...(comparison?.curves ?? [])], [ext, comparison]);
   // Walls, blocks, no-gas cells and gas constants from the case's plan (null if the run API is not loaded).
-  const geometry = useMemo(() => (entry ? runApiIfLoaded()?.resultGeometryOf(entry.caseInput) ?? null : null), [entry?.caseInput]);
+  const geometry = useMemo(
+    () => (entry ? (runApiIfLoaded()?.resultGeometryOf(entry.caseInput) ?? null) : null),
+    [entry?.caseInput],
+  );
   if (!entry || !ext) return <p className="hint">No result yet: run a case, or open a saved run.</p>;
   const r = entry.result;
   const n = r.numerics;
   if (live) {
     return (
       <div className="results" data-testid="results" data-result-id={id ?? ''}>
-        <p className="note">The run is still going: these are live estimates. Plots, field maps and exports appear when it ends.</p>
+        <p className="note">
+          The run is still going: these are live estimates. Plots, field maps and exports appear when it ends.
+        </p>
         <LiveProfilePanel result={r} />
         <WallNumbersCard result={r} />
       </div>
@@ -54,10 +67,14 @@ export function ResultPanels() {
   return (
     <div className="results" data-testid="results" data-result-id={id ?? ''}>
       <section className="panel" aria-labelledby="result-head">
-        <h2 id="result-head">{entry.caseName}{live ? ' (live, run still going)' : ''}</h2>
+        <h2 id="result-head">
+          {entry.caseName}
+          {live ? ' (live, run still going)' : ''}
+        </h2>
         <p data-testid="result-facts">
-          Kn = {r.reference.knudsen.toPrecision(4)}, {n.replicas} replica{n.replicas === 1 ? '' : 's'}, {countText(n.sampleSteps)} sampled steps in all,{' '}
-          {countText(n.particles)} particles at the end{entry.performance ? `, ${durationText(entry.performance.wallSeconds)} wall time` : ''}.
+          Kn = {r.reference.knudsen.toPrecision(4)}, {n.replicas} replica{n.replicas === 1 ? '' : 's'},{' '}
+          {countText(n.sampleSteps)} sampled steps in all, {countText(n.particles)} particles at the end
+          {entry.performance ? `, ${durationText(entry.performance.wallSeconds)} wall time` : ''}.
         </p>
         <CompareSelect />
       </section>
@@ -66,8 +83,19 @@ export function ResultPanels() {
       <WallNumbersCard result={r} />
       <ComparisonCard view={comparison} />
       <WarningsList warnings={r.warnings} />
-      <ProfilePanel result={r} live={live} compare={compared.entry ? { result: compared.entry.result, name: compared.name } : undefined} continuum={curves} geometry={geometry} exportName={entry.caseName} />
-      {curves.length === 0 && <p className="hint">No continuum overlay for this case{comparison && !comparison.recognised ? `: ${comparison.description}` : ''}.</p>}
+      <ProfilePanel
+        result={r}
+        live={live}
+        compare={compared.entry ? { result: compared.entry.result, name: compared.name } : undefined}
+        continuum={curves}
+        geometry={geometry}
+        exportName={entry.caseName}
+      />
+      {curves.length === 0 && (
+        <p className="hint">
+          No continuum overlay for this case{comparison && !comparison.recognised ? `: ${comparison.description}` : ''}.
+        </p>
+      )}
       <FieldMapPanel result={r} geometry={geometry} />
       <WallDistributionPanel result={r} geometry={geometry} />
       {!live && <ExportPanel entry={entry} />}

@@ -14,7 +14,9 @@ export function RunLauncher() {
   const replicas = useApp((s) => s.replicas);
   const cores = useApp((s) => s.cores);
   const ready = useApp((s) => s.plan !== null && s.derived?.caseInput != null);
-  const problems = useApp((s) => Object.keys(s.derived?.fieldErrors ?? {}).length + (s.derived?.caseErrors.length ?? 0) + s.planErrors.length);
+  const problems = useApp(
+    (s) => Object.keys(s.derived?.fieldErrors ?? {}).length + (s.derived?.caseErrors.length ?? 0) + s.planErrors.length,
+  );
   const busy = useApp((s) => BUSY.includes(s.status));
   // A sweep's points use the cores' workers already: one pool at a time.
   const sweeping = useSweep((s) => SWEEP_BUSY.includes(s.status));
@@ -22,8 +24,15 @@ export function RunLauncher() {
   const paths = useApp((s) => s.plan?.targetPaths);
   const checked = targetRequestOf(target, paths ?? []);
   const targetError = checked.ok ? null : checked.message;
-  const reason = busy ? 'a run is going on' : sweeping ? 'a sweep is going on (Sweep view)' : !ready ? `fix the ${problems || ''} marked problem${problems === 1 ? '' : 's'} first`
-    : targetError ? 'fix the precision target first' : null;
+  const reason = busy
+    ? 'a run is going on'
+    : sweeping
+      ? 'a sweep is going on (Sweep view)'
+      : !ready
+        ? `fix the ${problems || ''} marked problem${problems === 1 ? '' : 's'} first`
+        : targetError
+          ? 'fix the precision target first'
+          : null;
   const st = appStore.getState();
   return (
     <section className="panel run-launcher" aria-labelledby="launch-title">
@@ -31,8 +40,15 @@ export function RunLauncher() {
       <div className="field">
         <label htmlFor="replica-count">replicas (Web Workers; this browser reports {cores} cores)</label>
         <div className="field-input">
-          <input id="replica-count" type="number" min={1} max={64} step={1} value={replicas}
-            onChange={(e) => appStore.getState().setReplicas(Number(e.target.value))} />
+          <input
+            id="replica-count"
+            type="number"
+            min={1}
+            max={64}
+            step={1}
+            value={replicas}
+            onChange={(e) => appStore.getState().setReplicas(Number(e.target.value))}
+          />
         </div>
       </div>
       {paths && paths.length > 0 && (
@@ -40,9 +56,17 @@ export function RunLauncher() {
           <legend>Precision target (optional)</legend>
           <div className="field">
             <label htmlFor="target-quantity">quantity (as named in summary.json)</label>
-            <select id="target-quantity" value={paths.includes(target.path) ? target.path : ''} onChange={(e) => st.setTarget({ path: e.target.value })}>
+            <select
+              id="target-quantity"
+              value={paths.includes(target.path) ? target.path : ''}
+              onChange={(e) => st.setTarget({ path: e.target.value })}
+            >
               <option value="">(none: run the planned samples)</option>
-              {paths.map((p) => <option key={p} value={p}>{p}</option>)}
+              {paths.map((p) => (
+                <option key={p} value={p}>
+                  {p}
+                </option>
+              ))}
             </select>
           </div>
           {paths.includes(target.path) && (
@@ -50,14 +74,28 @@ export function RunLauncher() {
               <div className={`field${targetError ? ' field-invalid' : ''}`}>
                 <label htmlFor="target-goal">goal: 95 % half-width / |mean| [%]</label>
                 <div className="field-input">
-                  <input id="target-goal" inputMode="decimal" value={target.goalPercent} aria-invalid={targetError ? true : undefined}
-                    onChange={(e) => st.setTarget({ goalPercent: e.target.value })} />
+                  <input
+                    id="target-goal"
+                    inputMode="decimal"
+                    value={target.goalPercent}
+                    aria-invalid={targetError ? true : undefined}
+                    onChange={(e) => st.setTarget({ goalPercent: e.target.value })}
+                  />
                 </div>
-                {targetError && <p className="field-error" role="alert">{targetError}</p>}
+                {targetError && (
+                  <p className="field-error" role="alert">
+                    {targetError}
+                  </p>
+                )}
               </div>
               <div className="field">
                 <label htmlFor="target-stop">
-                  <input id="target-stop" type="checkbox" checked={target.stopWhenReached} onChange={(e) => st.setTarget({ stopWhenReached: e.target.checked })} />{' '}
+                  <input
+                    id="target-stop"
+                    type="checkbox"
+                    checked={target.stopWhenReached}
+                    onChange={(e) => st.setTarget({ stopWhenReached: e.target.checked })}
+                  />{' '}
                   stop when the goal is met (sampling may then run up to 50 × the planned steps)
                 </label>
               </div>
@@ -65,8 +103,14 @@ export function RunLauncher() {
           )}
         </fieldset>
       )}
-      <button type="button" className="primary" disabled={reason !== null} onClick={() => void startRun(appStore)}>Run the case</button>
-      {reason && <p className="hint" data-testid="run-disabled-reason">Run is disabled: {reason}.</p>}
+      <button type="button" className="primary" disabled={reason !== null} onClick={() => void startRun(appStore)}>
+        Run the case
+      </button>
+      {reason && (
+        <p className="hint" data-testid="run-disabled-reason">
+          Run is disabled: {reason}.
+        </p>
+      )}
     </section>
   );
 }

@@ -12,23 +12,52 @@ function SavedRunRow({ run }: { run: SavedRunMeta }) {
     <tr data-testid="saved-run">
       <td>
         {editing ? (
-          <form onSubmit={(e) => { e.preventDefault(); setEditing(false); void renameSavedRun(appStore, run.id, name); }}>
+          <form
+            onSubmit={(e) => {
+              e.preventDefault();
+              setEditing(false);
+              void renameSavedRun(appStore, run.id, name);
+            }}
+          >
             <input aria-label="new name" value={name} onChange={(e) => setName(e.target.value)} autoFocus />
             <button type="submit">Keep name</button>
           </form>
-        ) : <span className="run-name">{run.name}</span>}
+        ) : (
+          <span className="run-name">{run.name}</span>
+        )}
       </td>
-      <td>{run.status}{run.lostReplicas ? `, ${run.lostReplicas} replica(s) lost` : ''}</td>
+      <td>
+        {run.status}
+        {run.lostReplicas ? `, ${run.lostReplicas} replica(s) lost` : ''}
+      </td>
       <td>{run.knudsen.toPrecision(3)}</td>
       <td>{run.replicas}</td>
       <td>{countText(run.sampledSteps)}</td>
       <td>{new Date(run.finishedAt).toLocaleString()}</td>
       <td>
         <div className="actions">
-        <button type="button" onClick={() => void openSavedRun(appStore, run.id)}>Open</button>
-        <button type="button" onClick={() => void compareWithSavedRun(appStore, run.id).then(() => appStore.getState().setView('results'))}>Overlay on shown result</button>
-        <button type="button" onClick={() => setEditing(true)}>Rename</button>
-        <button type="button" onClick={() => { if (window.confirm(`Delete the saved run “${run.name}”?`)) void deleteSavedRun(appStore, run.id); }}>Delete</button>
+          <button type="button" onClick={() => void openSavedRun(appStore, run.id)}>
+            Open
+          </button>
+          <button
+            type="button"
+            onClick={() =>
+              void compareWithSavedRun(appStore, run.id).then(() => appStore.getState().setView('results'))
+            }
+          >
+            Overlay on shown result
+          </button>
+          <button type="button" onClick={() => setEditing(true)}>
+            Rename
+          </button>
+          <button
+            type="button"
+            onClick={() => {
+              if (window.confirm(`Delete the saved run “${run.name}”?`)) void deleteSavedRun(appStore, run.id);
+            }}
+          >
+            Delete
+          </button>
         </div>
       </td>
     </tr>
@@ -40,10 +69,26 @@ export function SavedRunsView() {
   return (
     <section className="panel" aria-labelledby="saved-title">
       <h2 id="saved-title">Saved runs in this browser</h2>
-      {runs.length === 0 ? <p>No saved runs yet: every finished or stopped run is kept here.</p> : (
+      {runs.length === 0 ? (
+        <p>No saved runs yet: every finished or stopped run is kept here.</p>
+      ) : (
         <table className="grid" aria-label="saved runs">
-          <thead><tr><th>name</th><th>status</th><th>Kn [1]</th><th>replicas</th><th>sampled steps</th><th>finished</th><th>actions</th></tr></thead>
-          <tbody>{runs.map((r) => <SavedRunRow key={r.id} run={r} />)}</tbody>
+          <thead>
+            <tr>
+              <th>name</th>
+              <th>status</th>
+              <th>Kn [1]</th>
+              <th>replicas</th>
+              <th>sampled steps</th>
+              <th>finished</th>
+              <th>actions</th>
+            </tr>
+          </thead>
+          <tbody>
+            {runs.map((r) => (
+              <SavedRunRow key={r.id} run={r} />
+            ))}
+          </tbody>
         </table>
       )}
     </section>

@@ -18,7 +18,10 @@ const COEFFICIENTS = {
 
 /** Bottom and top walls move along x, left and right walls along y (the schema allows no other in-plane motion). */
 const ALONG: Readonly<Record<SideName, { axis: 0 | 1; name: string }>> = {
-  left: { axis: 1, name: 'y' }, right: { axis: 1, name: 'y' }, bottom: { axis: 0, name: 'x' }, top: { axis: 0, name: 'x' },
+  left: { axis: 1, name: 'y' },
+  right: { axis: 1, name: 'y' },
+  bottom: { axis: 0, name: 'x' },
+  top: { axis: 0, name: 'x' },
 };
 
 /** The wall's value in an entry: the user's own text if any, else empty with the built value as placeholder. */
@@ -35,7 +38,8 @@ function WallQuantities({ side, wall }: { side: SideName; wall: WallSpec }) {
   const along = ALONG[side];
   const temperature = shown(edit?.temperature, wall.temperatureK, 'K');
   const speed = shown(edit?.speed, wall.velocityMPerS?.[along.axis] ?? 0, 'm/s');
-  const convert = (e: ParamEntry | undefined, builtSI: number, to: string) => (e && e.text.trim() !== '' ? convertEntry(e, to, api) : { ...entryOfSI(builtSI, to, api), text: '' });
+  const convert = (e: ParamEntry | undefined, builtSI: number, to: string) =>
+    e && e.text.trim() !== '' ? convertEntry(e, to, api) : { ...entryOfSI(builtSI, to, api), text: '' };
   return (
     <>
       <QuantityField
@@ -54,7 +58,9 @@ function WallQuantities({ side, wall }: { side: SideName; wall: WallSpec }) {
         units={unitChoices('speed', api)}
         error={errors?.[`wall:${side}:velocityMPerS`]}
         onText={(text) => st.setWall(side, { speed: { text, unit: speed.unit } })}
-        onUnit={(unit) => st.setWall(side, { speed: convert(edit?.speed, wall.velocityMPerS?.[along.axis] ?? 0, unit) })}
+        onUnit={(unit) =>
+          st.setWall(side, { speed: convert(edit?.speed, wall.velocityMPerS?.[along.axis] ?? 0, unit) })
+        }
       />
     </>
   );
@@ -74,33 +80,67 @@ function WallRow({ side, wall }: { side: SideName; wall: WallSpec }) {
   const modelError = errors?.[`wall:${side}:model`];
   return (
     <fieldset className="wall-row" data-testid={`wall-${side}`}>
-      <legend>{side} wall{wall.name ? ` (reported as ${wall.name})` : ''}</legend>
+      <legend>
+        {side} wall{wall.name ? ` (reported as ${wall.name})` : ''}
+      </legend>
       <div className={`field${modelError && coefficients.length === 0 ? ' field-invalid' : ''}`}>
         <label htmlFor={`wall-${side}-model`}>{side} wall model</label>
         <select id={`wall-${side}-model`} value={model} onChange={(e) => st.setWall(side, { model: e.target.value })}>
-          {setupApi().WALL_MODELS.map((m) => <option key={m} value={m}>{m}</option>)}
+          {setupApi().WALL_MODELS.map((m) => (
+            <option key={m} value={m}>
+              {m}
+            </option>
+          ))}
         </select>
-        {modelError && coefficients.length === 0 && <p className="field-error" role="alert">{modelError}</p>}
+        {modelError && coefficients.length === 0 && (
+          <p className="field-error" role="alert">
+            {modelError}
+          </p>
+        )}
       </div>
       {coefficients.map(([key, label]) => {
         const error = errors?.[`wall:${side}:${key}`] ?? (key === 'accommodation' ? modelError : undefined);
         const id = `wall-${side}-${key}`;
-        const value = edit?.[key as 'accommodation'] ?? (typeof (wall as Record<string, unknown>)[key] === 'number' ? String((wall as Record<string, unknown>)[key]) : '');
+        const value =
+          edit?.[key as 'accommodation'] ??
+          (typeof (wall as Record<string, unknown>)[key] === 'number'
+            ? String((wall as Record<string, unknown>)[key])
+            : '');
         return (
           <div key={key} className={`field${error ? ' field-invalid' : ''}`}>
-            <label htmlFor={id}>{side} {label} [1]</label>
+            <label htmlFor={id}>
+              {side} {label} [1]
+            </label>
             <div className="field-input">
-              <input id={id} inputMode="decimal" value={value} aria-invalid={error ? true : undefined} onChange={(e) => st.setWall(side, { [key]: e.target.value })} />
+              <input
+                id={id}
+                inputMode="decimal"
+                value={value}
+                aria-invalid={error ? true : undefined}
+                onChange={(e) => st.setWall(side, { [key]: e.target.value })}
+              />
             </div>
-            {error && <p className="field-error" role="alert">{error}</p>}
+            {error && (
+              <p className="field-error" role="alert">
+                {error}
+              </p>
+            )}
           </div>
         );
       })}
       <WallQuantities side={side} wall={wall} />
       {/* Messages of fields not shown for this model (e.g. an accommodation typed before switching to diffuse). */}
       {Object.entries(errors ?? {})
-        .filter(([k]) => k.startsWith(`wall:${side}:`) && !shownKeys(coefficients.map(([key]) => key)).has(k.slice(`wall:${side}:`.length)))
-        .map(([k, m]) => <p key={k} className="field-error" role="alert">{side} wall, {k.slice(`wall:${side}:`.length)}: {m}</p>)}
+        .filter(
+          ([k]) =>
+            k.startsWith(`wall:${side}:`) &&
+            !shownKeys(coefficients.map(([key]) => key)).has(k.slice(`wall:${side}:`.length)),
+        )
+        .map(([k, m]) => (
+          <p key={k} className="field-error" role="alert">
+            {side} wall, {k.slice(`wall:${side}:`.length)}: {m}
+          </p>
+        ))}
     </fieldset>
   );
 }
@@ -113,8 +153,12 @@ export function WallForm() {
   return (
     <section className="panel" aria-labelledby="walls-title">
       <h2 id="walls-title">Walls</h2>
-      {sides.length === 0 && <p className="hint">No side of this domain is a wall; the solid walls are blocks (below).</p>}
-      {sides.map((side) => <WallRow key={side} side={side} wall={draft.boundaries[side] as WallSpec} />)}
+      {sides.length === 0 && (
+        <p className="hint">No side of this domain is a wall; the solid walls are blocks (below).</p>
+      )}
+      {sides.map((side) => (
+        <WallRow key={side} side={side} wall={draft.boundaries[side] as WallSpec} />
+      ))}
     </section>
   );
 }

@@ -10,7 +10,9 @@ const LABELS: Readonly<Record<string, string>> = {
 };
 
 export function WallNumbersCard({ result }: { result: SimulationResult }) {
-  const walls = Object.entries(result.walls).filter((w): w is [string, Record<string, IntegralEstimate>] => w[1] !== undefined);
+  const walls = Object.entries(result.walls).filter(
+    (w): w is [string, Record<string, IntegralEstimate>] => w[1] !== undefined,
+  );
   if (!walls.length) return null;
   const unitOf = (q: string): string => {
     for (const bins of Object.values(result.wallBins)) {
@@ -25,7 +27,14 @@ export function WallNumbersCard({ result }: { result: SimulationResult }) {
       <h2 id="wall-numbers-title">Wall numbers (mean ± 95 % half-width)</h2>
       <table className="grid">
         <thead>
-          <tr><th>wall</th>{quantities.map((q) => <th key={q}>{LABELS[q] ?? q} [{unitOf(q)}]</th>)}</tr>
+          <tr>
+            <th>wall</th>
+            {quantities.map((q) => (
+              <th key={q}>
+                {LABELS[q] ?? q} [{unitOf(q)}]
+              </th>
+            ))}
+          </tr>
         </thead>
         <tbody>
           {walls.map(([side, e]) => (
@@ -34,9 +43,15 @@ export function WallNumbersCard({ result }: { result: SimulationResult }) {
               {quantities.map((q) => {
                 const x = e[q];
                 return (
-                  <td key={q} data-testid={`wall-${side}-${q}`} data-mean={String(x.mean)} data-ci95={String(x.ci95)}
-                    title={`effective samples ${sig(x.effectiveSamples, 3)}, correlation time ${sig(x.correlationTimeSteps, 3)} steps`}>
-                    {estimateText(x.mean, x.ci95)}{x.plateauFound ? '' : ' (half-width a lower bound)'}
+                  <td
+                    key={q}
+                    data-testid={`wall-${side}-${q}`}
+                    data-mean={String(x.mean)}
+                    data-ci95={String(x.ci95)}
+                    title={`effective samples ${sig(x.effectiveSamples, 3)}, correlation time ${sig(x.correlationTimeSteps, 3)} steps`}
+                  >
+                    {estimateText(x.mean, x.ci95)}
+                    {x.plateauFound ? '' : ' (half-width a lower bound)'}
                   </td>
                 );
               })}
@@ -44,7 +59,10 @@ export function WallNumbersCard({ result }: { result: SimulationResult }) {
           ))}
         </tbody>
       </table>
-      <p className="hint">Signs: shear stress is the force per area of the gas on the wall along +x (bottom, top walls); heat flux is from the gas into the wall.</p>
+      <p className="hint">
+        Signs: shear stress is the force per area of the gas on the wall along +x (bottom, top walls); heat flux is from
+        the gas into the wall.
+      </p>
     </section>
   );
 }

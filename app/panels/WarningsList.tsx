@@ -4,7 +4,11 @@ export function WarningsList({ warnings }: { warnings: readonly string[] }) {
   return (
     <section className="panel" aria-labelledby="warnings-title">
       <h2 id="warnings-title">Warnings</h2>
-      <ul className="warnings" data-testid="result-warnings">{warnings.map((w) => <li key={w}>⚠ {w}</li>)}</ul>
+      <ul className="warnings" data-testid="result-warnings">
+        {warnings.map((w) => (
+          <li key={w}>⚠ {w}</li>
+        ))}
+      </ul>
     </section>
   );
 }

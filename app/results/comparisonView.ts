@@ -22,7 +22,10 @@ export interface ComparisonView {
   readonly verdicts: readonly VerdictRow[];
 }
 
-export function comparisonView(c: ContinuumComparisonResult | undefined, labels: Readonly<Record<string, string>>): ComparisonView | null {
+export function comparisonView(
+  c: ContinuumComparisonResult | undefined,
+  labels: Readonly<Record<string, string>>,
+): ComparisonView | null {
   if (!c) return null;
   if (!c.recognised) return { recognised: false, description: c.reason, curves: [], verdicts: [] };
   const label = (m: string) => labels[m] ?? m;
@@ -30,7 +33,14 @@ export function comparisonView(c: ContinuumComparisonResult | undefined, labels:
   for (const p of c.predictions.profiles) {
     const line = p.line.kind === 'rows' ? undefined : { kind: p.line.kind, atM: p.line.atM };
     for (const [model, values] of Object.entries(p.values)) {
-      if (values) curves.push({ model: label(model), quantity: p.field, values: Array.from(values), y: Array.from(p.positionsM), ...(line ? { line } : {}) });
+      if (values)
+        curves.push({
+          model: label(model),
+          quantity: p.field,
+          values: Array.from(values),
+          y: Array.from(p.positionsM),
+          ...(line ? { line } : {}),
+        });
     }
   }
   const verdicts: VerdictRow[] = Object.values(c.verdict).map((v) => {

@@ -40,7 +40,12 @@ export function speedOf(u: readonly number[], ci: readonly number[]): Propagated
   return { mean, ci95 };
 }
 
-export function machOf(speed: Propagated, temperatureK: number, temperatureCi95: number, gas: GasConstants): Propagated {
+export function machOf(
+  speed: Propagated,
+  temperatureK: number,
+  temperatureCi95: number,
+  gas: GasConstants,
+): Propagated {
   const a = Math.sqrt((gas.heatCapacityRatio * K_B * temperatureK) / gas.massKg);
   const mean = speed.mean / a;
   const ci95 = Math.sqrt((speed.ci95 / a) ** 2 + ((mean * temperatureCi95) / (2 * temperatureK)) ** 2);
@@ -69,7 +74,10 @@ export function withDerivedFields(t: FieldTable, gas: GasConstants | null): Fiel
     mean.set(t.mean.subarray(r * w, r * w + w), r * width);
     ci95.set(t.ci95.subarray(r * w, r * w + w), r * width);
     const comps = [ux, uy, ...(uz >= 0 ? [uz] : [])];
-    const s = speedOf(comps.map((f) => t.mean[r * w + f]), comps.map((f) => t.ci95[r * w + f]));
+    const s = speedOf(
+      comps.map((f) => t.mean[r * w + f]),
+      comps.map((f) => t.ci95[r * w + f]),
+    );
     let o = r * width + w;
     if (addSpeed) {
       mean[o] = s.mean;

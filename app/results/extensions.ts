@@ -47,7 +47,8 @@ export interface ResultExtensions {
 type Loose = Record<string, unknown>;
 const isObject = (v: unknown): v is Loose => typeof v === 'object' && v !== null;
 const isNumberList = (v: unknown): v is ArrayLike<number> =>
-  (Array.isArray(v) || ArrayBuffer.isView(v)) && Array.from(v as ArrayLike<unknown>).every((x) => typeof x === 'number');
+  (Array.isArray(v) || ArrayBuffer.isView(v)) &&
+  Array.from(v as ArrayLike<unknown>).every((x) => typeof x === 'number');
 
 const FLOW_LABELS: Readonly<Record<string, string>> = {
   massFlowRate: 'mass flow rate',
@@ -67,7 +68,13 @@ function flowOf(v: unknown, units: Readonly<Record<string, string>>): FlowEstima
   const out: FlowEstimate[] = [];
   for (const [name, e] of Object.entries(source)) {
     if (isObject(e) && typeof e.mean === 'number' && typeof e.ci95 === 'number') {
-      out.push({ name, label: typeof e.label === 'string' ? e.label : FLOW_LABELS[name] ?? name, mean: e.mean, ci95: e.ci95, unit: typeof e.unit === 'string' ? e.unit : units[name] ?? '' });
+      out.push({
+        name,
+        label: typeof e.label === 'string' ? e.label : (FLOW_LABELS[name] ?? name),
+        mean: e.mean,
+        ci95: e.ci95,
+        unit: typeof e.unit === 'string' ? e.unit : (units[name] ?? ''),
+      });
     }
   }
   return out;
@@ -80,10 +87,16 @@ function continuumOf(v: unknown): ContinuumCurve[] {
     if (!isObject(c)) continue;
     const label = typeof c.label === 'string' ? c.label : model;
     if (typeof c.quantity === 'string' && isNumberList(c.values)) {
-      out.push({ model: label, quantity: c.quantity, values: Array.from(c.values), y: isNumberList(c.y) ? Array.from(c.y) : undefined });
+      out.push({
+        model: label,
+        quantity: c.quantity,
+        values: Array.from(c.values),
+        y: isNumberList(c.y) ? Array.from(c.y) : undefined,
+      });
       continue;
     }
-    for (const [quantity, values] of Object.entries(c)) if (isNumberList(values)) out.push({ model: label, quantity, values: Array.from(values) });
+    for (const [quantity, values] of Object.entries(c))
+      if (isNumberList(values)) out.push({ model: label, quantity, values: Array.from(values) });
   }
   return out;
 }
@@ -102,14 +115,25 @@ function flowContextOf(v: unknown): string | null {
   if (!isObject(v)) return null;
   const parts: string[] = [];
   if (typeof v.section === 'string') parts.push(`through section ${v.section}`);
-  if (typeof v.upstreamPressurePa === 'number' && Number.isFinite(v.upstreamPressurePa)) parts.push(`upstream ${v.upstreamPressurePa.toPrecision(4)} Pa`);
-  if (typeof v.downstreamPressurePa === 'number' && Number.isFinite(v.downstreamPressurePa)) parts.push(`downstream ${v.downstreamPressurePa.toPrecision(4)} Pa`);
-  if (typeof v.temperatureK === 'number' && Number.isFinite(v.temperatureK)) parts.push(`${v.temperatureK.toPrecision(4)} K`);
+  if (typeof v.upstreamPressurePa === 'number' && Number.isFinite(v.upstreamPressurePa))
+    parts.push(`upstream ${v.upstreamPressurePa.toPrecision(4)} Pa`);
+  if (typeof v.downstreamPressurePa === 'number' && Number.isFinite(v.downstreamPressurePa))
+    parts.push(`downstream ${v.downstreamPressurePa.toPrecision(4)} Pa`);
+  if (typeof v.temperatureK === 'number' && Number.isFinite(v.temperatureK))
+    parts.push(`${v.temperatureK.toPrecision(4)} K`);
   return parts.length ? parts.join(', ') : null;
 }
 
 /** flowUnits: unit of each flow number by name (the engine's table for this result), if known. */
-export function extensionsOf(result: SimulationResult, flowUnits: Readonly<Record<string, string>> = {}): ResultExtensions {
+export function extensionsOf(
+  result: SimulationResult,
+  flowUnits: Readonly<Record<string, string>> = {},
+): ResultExtensions {
   const r = result as unknown as Loose;
-  return { flow: flowOf(r.flow, flowUnits), flowContext: flowContextOf(r.flow), continuum: continuumOf(r.continuum), verdict: verdictOf(r.verdict) };
+  return {
+    flow: flowOf(r.flow, flowUnits),
+    flowContext: flowContextOf(r.flow),
+    continuum: continuumOf(r.continuum),
+    verdict: verdictOf(r.verdict),
+  };
 }

@@ -27,20 +27,90 @@ export function geometryOverlay(g: ResultGeometry | null, lengthFactor: number):
   const shapes: Partial<Shape>[] = [];
   const annotations: Partial<Annotation>[] = [];
   for (const b of g.blocks) {
-    shapes.push({ type: 'rect', xref: 'x', yref: 'y', x0: s(b.x0), x1: s(b.x1), y0: s(b.y0), y1: s(b.y1), fillcolor: BLOCK_FILL, opacity: 1, line: { color: BLOCK_LINE, width: 1.5 }, layer: 'above', name: `block ${b.name}` });
-    annotations.push({ x: s((b.x0 + b.x1) / 2), y: s((b.y0 + b.y1) / 2), xref: 'x', yref: 'y', text: b.name, showarrow: false, font: { size: 11, color: '#111' } });
+    shapes.push({
+      type: 'rect',
+      xref: 'x',
+      yref: 'y',
+      x0: s(b.x0),
+      x1: s(b.x1),
+      y0: s(b.y0),
+      y1: s(b.y1),
+      fillcolor: BLOCK_FILL,
+      opacity: 1,
+      line: { color: BLOCK_LINE, width: 1.5 },
+      layer: 'above',
+      name: `block ${b.name}`,
+    });
+    annotations.push({
+      x: s((b.x0 + b.x1) / 2),
+      y: s((b.y0 + b.y1) / 2),
+      xref: 'x',
+      yref: 'y',
+      text: b.name,
+      showarrow: false,
+      font: { size: 11, color: '#111' },
+    });
   }
   for (const w of g.walls) {
     const along = [s(w.fromM), s(w.toM)];
     const at = s(w.planeM);
-    shapes.push(w.normalIsX
-      ? { type: 'line', xref: 'x', yref: 'y', x0: at, x1: at, y0: along[0], y1: along[1], line: { color: WALL_COLOUR, width: 5 }, layer: 'above', name: `wall ${w.name}` }
-      : { type: 'line', xref: 'x', yref: 'y', x0: along[0], x1: along[1], y0: at, y1: at, line: { color: WALL_COLOUR, width: 5 }, layer: 'above', name: `wall ${w.name}` });
+    shapes.push(
+      w.normalIsX
+        ? {
+            type: 'line',
+            xref: 'x',
+            yref: 'y',
+            x0: at,
+            x1: at,
+            y0: along[0],
+            y1: along[1],
+            line: { color: WALL_COLOUR, width: 5 },
+            layer: 'above',
+            name: `wall ${w.name}`,
+          }
+        : {
+            type: 'line',
+            xref: 'x',
+            yref: 'y',
+            x0: along[0],
+            x1: along[1],
+            y0: at,
+            y1: at,
+            line: { color: WALL_COLOUR, width: 5 },
+            layer: 'above',
+            name: `wall ${w.name}`,
+          },
+    );
     const mid = (along[0] + along[1]) / 2;
     // Labels sit just inside the domain next to their wall, so they never cover the colour bar or the axes.
-    annotations.push(w.normalIsX
-      ? { x: at, y: mid, xref: 'x', yref: 'y', text: `wall ${w.name}`, showarrow: false, textangle: -90, xanchor: w.side === 'left' ? 'left' : 'right', xshift: w.side === 'left' ? 4 : -4, bgcolor: LABEL_BACKGROUND, font: { size: 11 } }
-      : { x: mid, y: at, xref: 'x', yref: 'y', text: `wall ${w.name}`, showarrow: false, yanchor: w.side === 'bottom' ? 'bottom' : 'top', yshift: w.side === 'bottom' ? 4 : -4, bgcolor: LABEL_BACKGROUND, font: { size: 11 } });
+    annotations.push(
+      w.normalIsX
+        ? {
+            x: at,
+            y: mid,
+            xref: 'x',
+            yref: 'y',
+            text: `wall ${w.name}`,
+            showarrow: false,
+            textangle: -90,
+            xanchor: w.side === 'left' ? 'left' : 'right',
+            xshift: w.side === 'left' ? 4 : -4,
+            bgcolor: LABEL_BACKGROUND,
+            font: { size: 11 },
+          }
+        : {
+            x: mid,
+            y: at,
+            xref: 'x',
+            yref: 'y',
+            text: `wall ${w.name}`,
+            showarrow: false,
+            yanchor: w.side === 'bottom' ? 'bottom' : 'top',
+            yshift: w.side === 'bottom' ? 4 : -4,
+            bgcolor: LABEL_BACKGROUND,
+            font: { size: 11 },
+          },
+    );
   }
   return { shapes, annotations, wallCount: g.walls.length, blockCount: g.blocks.length };
 }

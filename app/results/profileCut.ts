@@ -49,11 +49,16 @@ export interface ProfileCut {
 /** Centres of the columns (along x) or rows (along y) of the grid, m. */
 export function cellCentres(src: CutSource, axis: 'x' | 'y'): Float64Array {
   const { cellsX, cellsY } = src.numerics;
-  return axis === 'x' ? Float64Array.from({ length: cellsX }, (_, ix) => src.cellX[ix]) : Float64Array.from({ length: cellsY }, (_, iy) => src.cellY[iy * cellsX]);
+  return axis === 'x'
+    ? Float64Array.from({ length: cellsX }, (_, ix) => src.cellX[ix])
+    : Float64Array.from({ length: cellsY }, (_, iy) => src.cellY[iy * cellsX]);
 }
 
 /** Cell size along x and y, m, from the centres (a uniform grid; a single cell spans twice its centre). */
-export function cellSizeOf(src: Pick<CutSource, 'numerics' | 'cellX' | 'cellY'>): { readonly x: number; readonly y: number } {
+export function cellSizeOf(src: Pick<CutSource, 'numerics' | 'cellX' | 'cellY'>): {
+  readonly x: number;
+  readonly y: number;
+} {
   const { cellsX, cellsY } = src.numerics;
   return {
     x: cellsX > 1 ? src.cellX[1] - src.cellX[0] : 2 * src.cellX[0],
@@ -64,7 +69,8 @@ export function cellSizeOf(src: Pick<CutSource, 'numerics' | 'cellX' | 'cellY'>)
 /** Index of the centre nearest to positionM (the cut snaps to cell centres). */
 export function nearestCentre(centres: ArrayLike<number>, positionM: number): number {
   let best = 0;
-  for (let k = 1; k < centres.length; k++) if (Math.abs(centres[k] - positionM) < Math.abs(centres[best] - positionM)) best = k;
+  for (let k = 1; k < centres.length; k++)
+    if (Math.abs(centres[k] - positionM) < Math.abs(centres[best] - positionM)) best = k;
   return best;
 }
 
@@ -89,7 +95,8 @@ export function extractCut(src: CutSource, spec: CutSpec, solidCells?: ArrayLike
   const w = table.names.length;
   const n = spec.kind === 'horizontal' ? cellsX : cellsY;
   const index = Math.max(0, Math.min((spec.kind === 'vertical' ? cellsX : cellsY) - 1, Math.round(spec.index)));
-  const rowOf = (k: number): number => (spec.kind === 'average' ? k : spec.kind === 'vertical' ? index + cellsX * k : k + cellsX * index);
+  const rowOf = (k: number): number =>
+    spec.kind === 'average' ? k : spec.kind === 'vertical' ? index + cellsX * k : k + cellsX * index;
   const solid = (k: number): boolean => {
     if (!solidCells) return false;
     if (spec.kind !== 'average') return solidCells[rowOf(k)] === 1;
@@ -111,9 +118,20 @@ export function extractCut(src: CutSource, spec: CutSpec, solidCells?: ArrayLike
     mean.set(table.mean.subarray(r * w, r * w + w), k * w);
     ci95.set(table.ci95.subarray(r * w, r * w + w), k * w);
   }
-  const positionsM = spec.kind === 'average' ? Float64Array.from(src.profileY) : cellCentres(src, spec.kind === 'vertical' ? 'y' : 'x');
+  const positionsM =
+    spec.kind === 'average' ? Float64Array.from(src.profileY) : cellCentres(src, spec.kind === 'vertical' ? 'y' : 'x');
   const atM = spec.kind === 'average' ? NaN : spec.kind === 'vertical' ? src.cellX[index] : src.cellY[index * cellsX];
-  return { kind: spec.kind, along: spec.kind === 'horizontal' ? 'x' : 'y', positionsM, atM, names: table.names, units: table.units, mean, ci95, gap };
+  return {
+    kind: spec.kind,
+    along: spec.kind === 'horizontal' ? 'x' : 'y',
+    positionsM,
+    atM,
+    names: table.names,
+    units: table.units,
+    mean,
+    ci95,
+    gap,
+  };
 }
 
 /** Mean and ci95 of quantity `name` along the cut (NaN at gaps); empty arrays when the cut lacks it. */
@@ -122,5 +140,8 @@ export function cutColumn(cut: ProfileCut, name: string): { mean: number[]; ci95
   const w = cut.names.length;
   const n = cut.positionsM.length;
   if (f < 0) return { mean: [], ci95: [] };
-  return { mean: Array.from({ length: n }, (_, k) => cut.mean[k * w + f]), ci95: Array.from({ length: n }, (_, k) => cut.ci95[k * w + f]) };
+  return {
+    mean: Array.from({ length: n }, (_, k) => cut.mean[k * w + f]),
+    ci95: Array.from({ length: n }, (_, k) => cut.ci95[k * w + f]),
+  };
 }

@@ -48,6 +48,9 @@ export interface ResultGeometry {
 }
 
 /** The geometry's no-gas cells, if its grid is the result's (else null: a case edited since would mislabel cells). */
-export function solidCellsFor(g: ResultGeometry | null, grid: { readonly cellsX: number; readonly cellsY: number }): Uint8Array | null {
+export function solidCellsFor(
+  g: ResultGeometry | null,
+  grid: { readonly cellsX: number; readonly cellsY: number },
+): Uint8Array | null {
   return g && g.cellsX === grid.cellsX && g.cellsY === grid.cellsY ? g.solidCells : null;
 }

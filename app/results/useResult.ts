@@ -2,7 +2,12 @@
 import { useApp } from '../store/appStore';
 import { getResult, type CachedResult } from './resultCache';
 
-export function useShownResult(): { entry: CachedResult | undefined; live: boolean; version: number; id: string | null } {
+export function useShownResult(): {
+  entry: CachedResult | undefined;
+  live: boolean;
+  version: number;
+  id: string | null;
+} {
   const id = useApp((s) => s.resultId);
   const version = useApp((s) => s.resultVersion);
   const live = useApp((s) => s.resultIsLive);

@@ -45,7 +45,13 @@ export async function startRun(store: AppStore): Promise<void> {
   try {
     const api = await loadRunApi();
     const handle = api.startRun(
-      { caseInput, replicas, liveEveryMs: liveIntervalMs(s.plan.cellsX * s.plan.cellsY), target: target.request, hooks: readTestHooks() },
+      {
+        caseInput,
+        replicas,
+        liveEveryMs: liveIntervalMs(s.plan.cellsX * s.plan.cellsY),
+        target: target.request,
+        hooks: readTestHooks(),
+      },
       {
         onProgress: (p) => {
           if (finished) return;
@@ -68,7 +74,11 @@ export async function startRun(store: AppStore): Promise<void> {
         },
         onReplicaLost: (stream, reason) => {
           const others = replicas - 1;
-          store.getState().addNotice(`Replica ${stream} stopped: ${reason}. ${others > 0 ? `The other ${others} go on; its samples up to its last snapshot are kept.` : ''}`.trim());
+          store
+            .getState()
+            .addNotice(
+              `Replica ${stream} stopped: ${reason}. ${others > 0 ? `The other ${others} go on; its samples up to its last snapshot are kept.` : ''}`.trim(),
+            );
         },
       },
     );
@@ -94,8 +104,22 @@ export async function startRun(store: AppStore): Promise<void> {
   }
 }
 
-async function keepRun(store: AppStore, id: string, caseInput: CaseInput, caseName: string, run: FinishedRun, replicas: number): Promise<void> {
-  putResult(id, { result: run.result, caseInput, caseName, performance: run.performance, samples: run.samples, comparison: run.comparison });
+async function keepRun(
+  store: AppStore,
+  id: string,
+  caseInput: CaseInput,
+  caseName: string,
+  run: FinishedRun,
+  replicas: number,
+): Promise<void> {
+  putResult(id, {
+    result: run.result,
+    caseInput,
+    caseName,
+    performance: run.performance,
+    samples: run.samples,
+    comparison: run.comparison,
+  });
   const st = store.getState();
   st.setRunState({ status: run.cancelled ? 'stopped' : 'finished' });
   st.showResult(id, false);

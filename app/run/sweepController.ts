@@ -41,7 +41,12 @@ export interface SweepHandle {
   stop(): void;
 }
 
-export function runSweepPoints(points: readonly SweepPointInput[], options: SweepOptions, deps: SweepRunDeps, events: SweepEvents): SweepHandle {
+export function runSweepPoints(
+  points: readonly SweepPointInput[],
+  options: SweepOptions,
+  deps: SweepRunDeps,
+  events: SweepEvents,
+): SweepHandle {
   let stopped = false;
   let current: RunHandle | null = null;
   const rows: SweepRow[] = [];
@@ -72,7 +77,16 @@ export function runSweepPoints(points: readonly SweepPointInput[], options: Swee
       const end = await handle.done;
       if (end.ok) {
         const { result, comparison, performance, cancelled } = end.run;
-        push(deps.rowOf(p.point, p.value, { kind: 'sampled', result, comparison, performance, caseName: p.caseName, interrupted: cancelled }));
+        push(
+          deps.rowOf(p.point, p.value, {
+            kind: 'sampled',
+            result,
+            comparison,
+            performance,
+            caseName: p.caseName,
+            interrupted: cancelled,
+          }),
+        );
       } else if (stopped) {
         // Stopped before any replica sampled: an interrupted point with nothing to show, as `tenuis sweep` writes it.
         push(deps.rowOf(p.point, p.value, { kind: 'nothingSampled' }));

@@ -6,8 +6,7 @@ import type { TargetSetting } from '../store/types';
 import type { TargetRequest } from '../engine/runApi';
 
 export type TargetCheck =
-  | { readonly ok: true; readonly request: TargetRequest | undefined }
-  | { readonly ok: false; readonly message: string };
+  { readonly ok: true; readonly request: TargetRequest | undefined } | { readonly ok: false; readonly message: string };
 
 /**
  * No target when no quantity is chosen, or when the chosen one is not among this case's quantities (a case changed
@@ -17,7 +16,15 @@ export function targetRequestOf(setting: TargetSetting, knownPaths: readonly str
   if (setting.path === '' || !knownPaths.includes(setting.path)) return { ok: true, request: undefined };
   const text = setting.goalPercent.trim().replace(/%$/, '').trim().replace('\u2212', '-');
   const value = text === '' ? Number.NaN : Number(text);
-  if (!Number.isFinite(value)) return { ok: false, message: `"${setting.goalPercent}" is not a number: give the goal as a percentage, e.g. 2` };
-  if (!(value > 0 && value <= 100)) return { ok: false, message: `a goal of ${setting.goalPercent} % is outside the allowed range: give a percentage above 0 and at most 100` };
-  return { ok: true, request: { path: setting.path, relativeHalfWidth: value / 100, stopWhenReached: setting.stopWhenReached } };
+  if (!Number.isFinite(value))
+    return { ok: false, message: `"${setting.goalPercent}" is not a number: give the goal as a percentage, e.g. 2` };
+  if (!(value > 0 && value <= 100))
+    return {
+      ok: false,
+      message: `a goal of ${setting.goalPercent} % is outside the allowed range: give a percentage above 0 and at most 100`,
+    };
+  return {
+    ok: true,
+    request: { path: setting.path, relativeHalfWidth: value / 100, stopWhenReached: setting.stopWhenReached },
+  };
 }

@@ -90,11 +90,18 @@ function convertText(t: string, from: string, to: string, api: UnitApi): string 
 }
 
 /** The same blocks with their coordinates (or temperatures) in another unit: the values are converted, not kept. */
-export function convertBlockTable(table: BlockTable, units: { lengthUnit?: string; temperatureUnit?: string }, api: UnitApi): BlockTable {
+export function convertBlockTable(
+  table: BlockTable,
+  units: { lengthUnit?: string; temperatureUnit?: string },
+  api: UnitApi,
+): BlockTable {
   const lengthUnit = units.lengthUnit ?? table.lengthUnit;
   const temperatureUnit = units.temperatureUnit ?? table.temperatureUnit;
   const rows = table.rows.map((r) => {
-    const out: Record<string, unknown> = { ...r, temperature: convertText(r.temperature, table.temperatureUnit, temperatureUnit, api) };
+    const out: Record<string, unknown> = {
+      ...r,
+      temperature: convertText(r.temperature, table.temperatureUnit, temperatureUnit, api),
+    };
     for (const k of COORDINATES) out[k] = convertText(r[k], table.lengthUnit, lengthUnit, api);
     return out as unknown as BlockEdit;
   });

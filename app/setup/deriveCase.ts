@@ -24,7 +24,16 @@ import { modelFromSpecies, viscosityPaS, type MolecularModel } from '../../engin
 import { SPECIES_IDS, type SpeciesId } from '../../engine/gas/species';
 import { AVOGADRO_PER_MOL } from '../../engine/physics/constants';
 import { convertFromSI, unitsOf } from '../../engine/units/engineeringUnits';
-import { entrySI, numberOf, toSI, type BlockEdit, type CustomGasEdit, type FormState, type ParamEntry, type UnitApi } from './formModel';
+import {
+  entrySI,
+  numberOf,
+  toSI,
+  type BlockEdit,
+  type CustomGasEdit,
+  type FormState,
+  type ParamEntry,
+  type UnitApi,
+} from './formModel';
 import { lengthLabel } from './blockEdits';
 
 export interface CaseDerivation {
@@ -115,10 +124,15 @@ function applyWallEdit(c: CaseInput, side: SideName, form: FormState, fieldError
     else wall[f] = v;
   }
   const t = entrySI(edit.temperature, UNIT_API);
-  if (t !== null && Number.isNaN(t)) fieldErrors[`wall:${side}:temperatureK`] = notANumber(edit.temperature!.text, `the wall temperature in ${edit.temperature!.unit}`);
+  if (t !== null && Number.isNaN(t))
+    fieldErrors[`wall:${side}:temperatureK`] = notANumber(
+      edit.temperature!.text,
+      `the wall temperature in ${edit.temperature!.unit}`,
+    );
   else if (t !== null) wall.temperatureK = t;
   const u = entrySI(edit.speed, UNIT_API);
-  if (u !== null && Number.isNaN(u)) fieldErrors[`wall:${side}:velocityMPerS`] = notANumber(edit.speed!.text, `the wall speed in ${edit.speed!.unit}`);
+  if (u !== null && Number.isNaN(u))
+    fieldErrors[`wall:${side}:velocityMPerS`] = notANumber(edit.speed!.text, `the wall speed in ${edit.speed!.unit}`);
   else if (u !== null) {
     const velocity = [...((wall.velocityMPerS as number[] | undefined) ?? [0, 0, 0])];
     velocity[ALONG_WALL[side]] = u;
@@ -136,7 +150,8 @@ function customGasOf(g: CustomGasEdit, fieldErrors: Record<string, string>): Rec
   ];
   for (const [key, field, what] of quantities) {
     const v = entrySI(g[key], UNIT_API);
-    if (v !== null && Number.isNaN(v)) fieldErrors[`gas:${field}`] = notANumber(g[key].text, `${what} in ${g[key].unit}`);
+    if (v !== null && Number.isNaN(v))
+      fieldErrors[`gas:${field}`] = notANumber(g[key].text, `${what} in ${g[key].unit}`);
     else if (v !== null) out[field] = v;
   }
   const numbers: [string, string, string][] = [
@@ -161,17 +176,24 @@ function customModel(gas: CaseInput['gas']): MolecularModel | null {
 
 /** Everything but the gas, valid, so that parseCase judges the gas alone. */
 const minimalCase = {
-  schemaVersion: 1, name: 'gas check',
+  schemaVersion: 1,
+  name: 'gas check',
   initial: { pressurePa: 1, temperatureK: 300 },
   domain: { lengthXM: 1, lengthYM: 1 },
-  boundaries: { left: { type: 'periodic' }, right: { type: 'periodic' }, bottom: { type: 'symmetry' }, top: { type: 'symmetry' } },
+  boundaries: {
+    left: { type: 'periodic' },
+    right: { type: 'periodic' },
+    bottom: { type: 'symmetry' },
+    top: { type: 'symmetry' },
+  },
 };
 
 function applyGas(c: CaseInput, form: FormState, preset: Preset, fieldErrors: Record<string, string>): void {
   const g = form.gas;
   if (!g) return;
   const z = numberOf(g.rotationalCollisionNumber);
-  if (z !== null && Number.isNaN(z)) fieldErrors['gas:rotationalCollisionNumber'] = notANumber(g.rotationalCollisionNumber!, 'a number of at least 1');
+  if (z !== null && Number.isNaN(z))
+    fieldErrors['gas:rotationalCollisionNumber'] = notANumber(g.rotationalCollisionNumber!, 'a number of at least 1');
   const collisionNumber = z !== null && !Number.isNaN(z) ? { rotationalCollisionNumber: z } : {};
   if (g.source !== 'custom' || !g.custom) {
     c.gas = { ...c.gas, ...collisionNumber };
@@ -179,7 +201,11 @@ function applyGas(c: CaseInput, form: FormState, preset: Preset, fieldErrors: Re
   }
   const table = c.gas.species as SpeciesId | undefined;
   const model = (form.params.model?.text.trim() || c.gas.model || 'VHS') as NonNullable<CaseInput['gas']['model']>;
-  c.gas = { custom: customGasOf(g.custom, fieldErrors) as NonNullable<CaseInput['gas']['custom']>, model, ...collisionNumber };
+  c.gas = {
+    custom: customGasOf(g.custom, fieldErrors) as NonNullable<CaseInput['gas']['custom']>,
+    model,
+    ...collisionNumber,
+  };
   const name = String(c.gas.custom!.name) || 'custom gas';
   if (table && (SPECIES_IDS as readonly string[]).includes(table)) {
     const word = new RegExp(`\\b${table}\\b(?: \\((?:HS|VHS|VSS)\\))?`);
@@ -190,17 +216,24 @@ function applyGas(c: CaseInput, form: FormState, preset: Preset, fieldErrors: Re
   if (!mine || !table) return;
   const reference = modelFromSpecies(table, 'VHS');
   const t = c.initial.temperatureK;
-  const factor = (viscosityPaS(mine, t) / Math.sqrt(mine.massKg)) / (viscosityPaS(reference, t) / Math.sqrt(reference.massKg));
+  const factor =
+    viscosityPaS(mine, t) / Math.sqrt(mine.massKg) / (viscosityPaS(reference, t) / Math.sqrt(reference.massKg));
   if (!Number.isFinite(factor) || factor <= 0) return;
   const scaled = scalePressures(c as unknown as Case, factor);
   c.initial = scaled.initial;
   c.boundaries = scaled.boundaries;
   if (scaled.flowReport) c.flowReport = scaled.flowReport;
-  const acceleration = preset.parameters.some((p) => p.name === 'acceleration') && !form.params.acceleration?.text.trim();
+  const acceleration =
+    preset.parameters.some((p) => p.name === 'acceleration') && !form.params.acceleration?.text.trim();
   if (acceleration && c.bodyAccelerationXMPerS2) c.bodyAccelerationXMPerS2 *= reference.massKg / mine.massKg;
 }
 
-const COORDINATE_FIELDS = [['xMin', 'xMinM', 'x min'], ['xMax', 'xMaxM', 'x max'], ['yMin', 'yMinM', 'y min'], ['yMax', 'yMaxM', 'y max']] as const;
+const COORDINATE_FIELDS = [
+  ['xMin', 'xMinM', 'x min'],
+  ['xMax', 'xMaxM', 'x max'],
+  ['yMin', 'yMinM', 'y min'],
+  ['yMax', 'yMaxM', 'y max'],
+] as const;
 
 /**
  * A coordinate within a relative 1e-9 of the domain's far edge is that edge: the table shows six digits, so a preset's
@@ -224,19 +257,33 @@ function applyBlocks(c: CaseInput, form: FormState, fieldErrors: Record<string, 
       const v = numberOf(r[key]);
       if (v === null) fieldErrors[at(field)] = `give ${what} in ${table.lengthUnit}`;
       else if (Number.isNaN(v)) fieldErrors[at(field)] = notANumber(r[key], `${what} in ${table.lengthUnit}`);
-      else coordinates[field] = onEdge(toSI(v, table.lengthUnit, UNIT_API), field.startsWith('x') ? c.domain.lengthXM : c.domain.lengthYM);
+      else
+        coordinates[field] = onEdge(
+          toSI(v, table.lengthUnit, UNIT_API),
+          field.startsWith('x') ? c.domain.lengthXM : c.domain.lengthYM,
+        );
     }
     const t = numberOf(r.temperature);
     if (t === null) fieldErrors[at('temperatureK')] = `give the block's wall temperature in ${table.temperatureUnit}`;
-    else if (Number.isNaN(t)) fieldErrors[at('temperatureK')] = notANumber(r.temperature, `the wall temperature in ${table.temperatureUnit}`);
-    const wall: Record<string, unknown> = { type: 'wall', model: r.model || 'diffuse', temperatureK: t === null || Number.isNaN(t) ? 0 : toSI(t, table.temperatureUnit, UNIT_API) };
+    else if (Number.isNaN(t))
+      fieldErrors[at('temperatureK')] = notANumber(r.temperature, `the wall temperature in ${table.temperatureUnit}`);
+    const wall: Record<string, unknown> = {
+      type: 'wall',
+      model: r.model || 'diffuse',
+      temperatureK: t === null || Number.isNaN(t) ? 0 : toSI(t, table.temperatureUnit, UNIT_API),
+    };
     for (const f of ACCOMMODATIONS) {
       const v = numberOf(r[f]);
       if (v !== null && Number.isNaN(v)) fieldErrors[at(f)] = notANumber(r[f]!, 'a number between 0 and 1');
       else if (v !== null) wall[f] = v;
     }
     if (Object.keys(fieldErrors).length > before) return;
-    blocks.push({ name: r.name.trim(), ...coordinates, wall, ...(r.faces !== undefined ? { faces: r.faces } : {}) } as (typeof blocks)[number]);
+    blocks.push({
+      name: r.name.trim(),
+      ...coordinates,
+      wall,
+      ...(r.faces !== undefined ? { faces: r.faces } : {}),
+    } as (typeof blocks)[number]);
     rows.push(i);
   });
   c.blocks = blocks;
@@ -250,7 +297,16 @@ interface Placement {
   readonly caseErrors: string[];
 }
 
-const BLOCK_MESSAGE_FIELDS = new Set(['name', 'xMinM', 'xMaxM', 'yMinM', 'yMaxM', 'temperatureK', 'model', ...ACCOMMODATIONS]);
+const BLOCK_MESSAGE_FIELDS = new Set([
+  'name',
+  'xMinM',
+  'xMaxM',
+  'yMinM',
+  'yMaxM',
+  'temperatureK',
+  'model',
+  ...ACCOMMODATIONS,
+]);
 
 /** A block message's field: its own (xMaxM …), the wall's (temperatureK, model …), or `other` (faces). */
 function blockField(rest: string[]): string {
@@ -260,7 +316,9 @@ function blockField(rest: string[]): string {
 
 /** The schema's lengths in metres ("(0.0005 m)") in the block table's unit ("(500 µm)"). */
 function inUnit(text: string, unit: string): string {
-  return text.replace(/([+-]?\d+(?:\.\d+)?(?:e[+-]?\d+)?) m\b/g, (_, n: string) => lengthLabel(Number(n), unit, UNIT_API));
+  return text.replace(/([+-]?\d+(?:\.\d+)?(?:e[+-]?\d+)?) m\b/g, (_, n: string) =>
+    lengthLabel(Number(n), unit, UNIT_API),
+  );
 }
 
 /** Puts a validation message at its form field when its path names one, else in caseErrors. */
@@ -271,7 +329,10 @@ function placeMessage(message: string, p: Placement): void {
   const m = /^boundaries\.(left|right|bottom|top)\.(\w+)(?:\.|:)/.exec(message);
   if (fromForm && m && (WALL_FIELDS as readonly string[]).includes(m[2])) {
     // A preset parameter of the same name (e.g. the ducts' accommodation) set the wall's value: mark it there too.
-    if (!form.walls[m[1] as SideName]?.[m[2] as 'accommodation'] && presetOf(form.presetName)?.parameters.some((q) => q.name === m[2])) {
+    if (
+      !form.walls[m[1] as SideName]?.[m[2] as 'accommodation'] &&
+      presetOf(form.presetName)?.parameters.some((q) => q.name === m[2])
+    ) {
       fieldErrors[`param:${m[2]}`] ??= text;
     }
     fieldErrors[`wall:${m[1]}:${m[2]}`] ??= text;
@@ -313,7 +374,13 @@ export function deriveCase(form: FormState): CaseDerivation {
     try {
       draft = JSON.parse(form.caseText) as CaseInput;
     } catch (err) {
-      return { caseInput: null, draft: null, caseText, fieldErrors, caseErrors: [`the case is not valid JSON: ${(err as Error).message}`] };
+      return {
+        caseInput: null,
+        draft: null,
+        caseText,
+        fieldErrors,
+        caseErrors: [`the case is not valid JSON: ${(err as Error).message}`],
+      };
     }
   }
   if (!draft) return { caseInput: null, draft: null, caseText, fieldErrors, caseErrors };

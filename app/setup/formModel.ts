@@ -162,7 +162,8 @@ export function entryFor(p: PresetParameter, api: SetupApi, given?: string): Par
   if (given !== undefined) {
     const m = NUMBER_THEN_UNIT.exec(given);
     if (units.length && m && units.includes(m[2])) return { text: m[1], unit: m[2] };
-    if (units.length && m && m[2] === '') return { text: numberText(api.convertFromSI(Number(m[1]), shown)), unit: shown };
+    if (units.length && m && m[2] === '')
+      return { text: numberText(api.convertFromSI(Number(m[1]), shown)), unit: shown };
     return { text: given.trim(), unit: units.length ? shown : '' };
   }
   if (p.default === null) return { text: '', unit: shown };
@@ -171,7 +172,11 @@ export function entryFor(p: PresetParameter, api: SetupApi, given?: string): Par
 }
 
 /** Entries of every parameter of a preset; `given` (e.g. an example's parameters) overrides defaults by name. */
-export function entriesFor(presetName: string, api: SetupApi, given: Readonly<Record<string, string>> = {}): ParamEntries {
+export function entriesFor(
+  presetName: string,
+  api: SetupApi,
+  given: Readonly<Record<string, string>> = {},
+): ParamEntries {
   const preset = (api.PRESETS as Readonly<Record<string, { parameters: readonly PresetParameter[] }>>)[presetName];
   const out: Record<string, ParamEntry> = {};
   for (const p of preset?.parameters ?? []) out[p.name] = entryFor(p, api, given[p.name]);

@@ -69,7 +69,11 @@ export function describePlan(caseInput: unknown, o: PlanOptions): PlanViewResult
   const p = planned.plan;
   const r = p.ratios;
   const row = (label: string, value: number, limit: number, bound: 'max' | 'min'): AdvisorRow => ({
-    label, value, limit, bound, pass: bound === 'max' ? value <= limit + 1e-9 : value >= limit - 1e-9,
+    label,
+    value,
+    limit,
+    bound,
+    pass: bound === 'max' ? value <= limit + 1e-9 : value >= limit - 1e-9,
   });
   let flowSpeed = Math.hypot(...p.caseData.initial.velocityMPerS);
   for (const side of SIDE_NAMES) {
@@ -108,7 +112,12 @@ export function describePlan(caseInput: unknown, o: PlanOptions): PlanViewResult
         independentSamples: samples,
         densityRelative: densityRelativeError(p.particlesPerCell, samples),
         temperatureRelative: temperatureRelativeError(p.particlesPerCell, samples),
-        velocityStandardErrorMPerS: velocityStandardErrorMPerS(model.massKg, ref.temperatureK, p.particlesPerCell, samples),
+        velocityStandardErrorMPerS: velocityStandardErrorMPerS(
+          model.massKg,
+          ref.temperatureK,
+          p.particlesPerCell,
+          samples,
+        ),
       },
       estimatedSeconds: (steps * p.initialParticles) / (o.particleStepsPerSecond * share),
       warnings: p.warnings,

@@ -4,7 +4,10 @@ import { setupApi } from '../engine/loadEngine';
 import { createAppStore } from './store';
 import type { AppState } from './types';
 
-export const appStore = createAppStore({ setup: setupApi }, typeof navigator !== 'undefined' ? navigator.hardwareConcurrency || 1 : 1);
+export const appStore = createAppStore(
+  { setup: setupApi },
+  typeof navigator !== 'undefined' ? navigator.hardwareConcurrency || 1 : 1,
+);
 
 export function useApp<T>(selector: (s: AppState) => T): T {
   return useStore(appStore, selector);

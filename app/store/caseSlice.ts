@@ -10,16 +10,32 @@ export interface StoreDeps {
 }
 
 export function formOf(s: FormState): FormState {
-  return { presetName: s.presetName, params: s.params, walls: s.walls, gas: s.gas, blocks: s.blocks ?? null, source: s.source, caseText: s.caseText };
+  return {
+    presetName: s.presetName,
+    params: s.params,
+    walls: s.walls,
+    gas: s.gas,
+    blocks: s.blocks ?? null,
+    source: s.source,
+    caseText: s.caseText,
+  };
 }
 
 /** Derives case, messages and plan from a form and the run settings. */
-export function derive(api: SetupApi, form: FormState, s: Pick<AppState, 'replicas' | 'cores' | 'speed'>): Pick<CaseSlice, 'derived' | 'plan' | 'planErrors' | 'caseText'> {
+export function derive(
+  api: SetupApi,
+  form: FormState,
+  s: Pick<AppState, 'replicas' | 'cores' | 'speed'>,
+): Pick<CaseSlice, 'derived' | 'plan' | 'planErrors' | 'caseText'> {
   const derived = api.deriveCase(form);
   let plan = null;
   let planErrors: string[] = [];
   if (derived.caseInput) {
-    const r = api.describePlan(derived.caseInput, { replicas: s.replicas, cores: s.cores, particleStepsPerSecond: s.speed.particleStepsPerSecond });
+    const r = api.describePlan(derived.caseInput, {
+      replicas: s.replicas,
+      cores: s.cores,
+      particleStepsPerSecond: s.speed.particleStepsPerSecond,
+    });
     if (r.ok) plan = r.view;
     else planErrors = r.errors;
   }
@@ -45,16 +61,41 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
       planErrors: [],
       fileMessage: null,
       exampleTitle: null,
-      selectPreset: (name) => update({ presetName: name, params: entriesFor(name, deps.setup()), walls: {}, gas: undefined, blocks: null, source: { kind: 'form' }, fileMessage: null, exampleTitle: null }),
+      selectPreset: (name) =>
+        update({
+          presetName: name,
+          params: entriesFor(name, deps.setup()),
+          walls: {},
+          gas: undefined,
+          blocks: null,
+          source: { kind: 'form' },
+          fileMessage: null,
+          exampleTitle: null,
+        }),
       applyExample: (example, caseText) => {
         const api = deps.setup();
         if (example.preset && Object.hasOwn(api.PRESETS, example.preset)) {
-          update({ presetName: example.preset, params: entriesFor(example.preset, api, example.parameters ?? {}), walls: {}, gas: undefined, blocks: null, source: { kind: 'form' }, fileMessage: null, exampleTitle: example.title });
+          update({
+            presetName: example.preset,
+            params: entriesFor(example.preset, api, example.parameters ?? {}),
+            walls: {},
+            gas: undefined,
+            blocks: null,
+            source: { kind: 'form' },
+            fileMessage: null,
+            exampleTitle: example.title,
+          });
         } else if (caseText !== null) {
-          update({ source: { kind: 'json', label: `example ${example.file}` }, caseText, fileMessage: null, exampleTitle: example.title });
+          update({
+            source: { kind: 'json', label: `example ${example.file}` },
+            caseText,
+            fileMessage: null,
+            exampleTitle: example.title,
+          });
         }
       },
-      setParamText: (name, text) => update({ params: { ...get().params, [name]: { ...(get().params[name] ?? { unit: '' }), text } } }),
+      setParamText: (name, text) =>
+        update({ params: { ...get().params, [name]: { ...(get().params[name] ?? { unit: '' }), text } } }),
       setParamUnit: (name, unit) => {
         const entry = get().params[name];
         if (entry) update({ params: { ...get().params, [name]: convertEntry(entry, unit, deps.setup()) } });
@@ -66,10 +107,21 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
       openCaseText: (text, label) => {
         const checked = deps.setup().checkCaseText(text);
         if (!checked.ok) {
-          set({ fileMessage: { kind: 'error', text: `${label} was not opened: it is not a valid case. Nothing was changed.`, details: checked.errors } });
+          set({
+            fileMessage: {
+              kind: 'error',
+              text: `${label} was not opened: it is not a valid case. Nothing was changed.`,
+              details: checked.errors,
+            },
+          });
           return false;
         }
-        update({ source: { kind: 'json', label }, caseText: text, fileMessage: { kind: 'info', text: `Opened ${label}.` }, exampleTitle: null });
+        update({
+          source: { kind: 'json', label },
+          caseText: text,
+          fileMessage: { kind: 'info', text: `Opened ${label}.` },
+          exampleTitle: null,
+        });
         return true;
       },
       rebuildFromForm: () => update({ source: { kind: 'form' }, fileMessage: null }),

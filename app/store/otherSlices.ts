@@ -46,7 +46,8 @@ export const createResultsSlice: StateCreator<AppState, [], [], ResultsSlice> = 
   compareId: null,
   showResult: (id, live) => set({ resultId: id, resultIsLive: live, resultVersion: get().resultVersion + 1 }),
   bumpResult: () => set({ resultVersion: get().resultVersion + 1 }),
-  setSavedRuns: (runs) => set({ savedRuns: runs, compareId: runs.some((r) => r.id === get().compareId) ? get().compareId : null }),
+  setSavedRuns: (runs) =>
+    set({ savedRuns: runs, compareId: runs.some((r) => r.id === get().compareId) ? get().compareId : null }),
   setCompare: (id) => set({ compareId: id }),
 });
 

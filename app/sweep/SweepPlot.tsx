@@ -29,20 +29,41 @@ export function SweepPlot({ points, curves, quantityKey, quantityLabel, unit, xT
     const labels = runApiIfLoaded()?.MODEL_LABELS as Readonly<Record<string, string>> | undefined;
     return [
       {
-        type: 'scatter', mode: 'markers', name: 'DSMC (95 % error bars)', x: dsmc.map((p) => xOf(p.value)), y: dsmc.map((p) => p.mean),
-        error_y: { type: 'data', array: dsmc.map((p) => (Number.isFinite(p.ci95) ? p.ci95 : 0)), visible: true }, marker: { size: 8 },
+        type: 'scatter',
+        mode: 'markers',
+        name: 'DSMC (95 % error bars)',
+        x: dsmc.map((p) => xOf(p.value)),
+        y: dsmc.map((p) => p.mean),
+        error_y: { type: 'data', array: dsmc.map((p) => (Number.isFinite(p.ci95) ? p.ci95 : 0)), visible: true },
+        marker: { size: 8 },
       },
       ...lines.map((l, k): Data => ({
-        type: 'scatter', mode: 'lines', name: labels?.[l.model] ?? l.model, x: l.x.map(xOf), y: l.y, line: { dash: DASHES[k % DASHES.length] },
+        type: 'scatter',
+        mode: 'lines',
+        name: labels?.[l.model] ?? l.model,
+        x: l.x.map(xOf),
+        y: l.y,
+        line: { dash: DASHES[k % DASHES.length] },
       })),
     ];
   }, [points, lines, xOf]);
   const logY = allPositive([...points.map((p) => p.mean), ...lines.flatMap((l) => l.y)]);
-  const layout = useMemo((): Partial<Layout> => ({
-    xaxis: { title: { text: xTitle }, type: 'log' },
-    yaxis: { title: { text: `${quantityLabel} [${unit}]` }, type: logY ? 'log' : 'linear' },
-    legend: { orientation: 'h', y: -0.22 },
-    height: 420,
-  }), [xTitle, quantityLabel, unit, logY]);
-  return <Plot data={data} layout={layout} filename={`sweep-${quantityLabel.replace(/\s+/g, '-')}`} label={`${quantityLabel} against the swept parameter`} testId="sweep-plot" />;
+  const layout = useMemo(
+    (): Partial<Layout> => ({
+      xaxis: { title: { text: xTitle }, type: 'log' },
+      yaxis: { title: { text: `${quantityLabel} [${unit}]` }, type: logY ? 'log' : 'linear' },
+      legend: { orientation: 'h', y: -0.22 },
+      height: 420,
+    }),
+    [xTitle, quantityLabel, unit, logY],
+  );
+  return (
+    <Plot
+      data={data}
+      layout={layout}
+      filename={`sweep-${quantityLabel.replace(/\s+/g, '-')}`}
+      label={`${quantityLabel} against the swept parameter`}
+      testId="sweep-plot"
+    />
+  );
 }

@@ -19,8 +19,18 @@ export function SweepTable({ points, quantityLabel, unit, xHeader, xOf, failures
       <table className="grid" data-testid="sweep-values">
         <thead>
           <tr>
-            <th>point</th><th>{xHeader}</th><th>status</th><th>reference Kn [1]</th><th>{quantityLabel} [{unit}] ± 95 %</th>
-            {models.map((m) => <th key={m}>{m} [{unit}]</th>)}
+            <th>point</th>
+            <th>{xHeader}</th>
+            <th>status</th>
+            <th>reference Kn [1]</th>
+            <th>
+              {quantityLabel} [{unit}] ± 95 %
+            </th>
+            {models.map((m) => (
+              <th key={m}>
+                {m} [{unit}]
+              </th>
+            ))}
           </tr>
         </thead>
         <tbody>
@@ -28,10 +38,19 @@ export function SweepTable({ points, quantityLabel, unit, xHeader, xOf, failures
             <tr key={p.point} data-testid={`sweep-point-${p.point}`} data-status={p.status}>
               <td>{p.point}</td>
               <td data-value={String(p.value)}>{sig(xOf(p.value), 6)}</td>
-              <td title={failures[p.point]}>{p.status}{failures[p.point] ? `: ${failures[p.point]}` : ''}</td>
+              <td title={failures[p.point]}>
+                {p.status}
+                {failures[p.point] ? `: ${failures[p.point]}` : ''}
+              </td>
               <td>{sig(p.knudsen, 4)}</td>
-              <td data-mean={String(p.mean)} data-ci95={String(p.ci95)}>{estimateText(p.mean, p.ci95)}</td>
-              {models.map((m) => <td key={m} data-model={m} data-value={String(p.predictions[m] ?? NaN)}>{sig(p.predictions[m] ?? NaN, 4)}</td>)}
+              <td data-mean={String(p.mean)} data-ci95={String(p.ci95)}>
+                {estimateText(p.mean, p.ci95)}
+              </td>
+              {models.map((m) => (
+                <td key={m} data-model={m} data-value={String(p.predictions[m] ?? NaN)}>
+                  {sig(p.predictions[m] ?? NaN, 4)}
+                </td>
+              ))}
             </tr>
           ))}
         </tbody>

@@ -25,23 +25,51 @@ function SweepResults() {
   const chosen = planned?.quantities.find((q) => q.key === quantity) ?? planned?.quantities[0];
   const points = useMemo(() => (chosen ? sweepSeries(rows, chosen.key) : []), [rows, chosen]);
   const parameter = request?.parameter ?? 'knudsen';
-  const xOf = useCallback((v: number) => (parameter === 'knudsen' ? v : setupApi().convertFromSI(v, pressureUnit)), [parameter, pressureUnit]);
+  const xOf = useCallback(
+    (v: number) => (parameter === 'knudsen' ? v : setupApi().convertFromSI(v, pressureUnit)),
+    [parameter, pressureUnit],
+  );
   if (!planned || !chosen) return null;
   const xTitle = parameter === 'knudsen' ? 'Knudsen number [1]' : `pressure [${pressureUnit}]`;
   const reason = curves && 'reason' in curves ? curves.reason : null;
   return (
     <section className="panel" aria-labelledby="sweep-plot-title">
-      <h2 id="sweep-plot-title">{chosen.label} against the {parameter === 'knudsen' ? 'Knudsen number' : 'pressure'}</h2>
+      <h2 id="sweep-plot-title">
+        {chosen.label} against the {parameter === 'knudsen' ? 'Knudsen number' : 'pressure'}
+      </h2>
       <span className="field-inline">
         <label htmlFor="sweep-quantity">quantity</label>
-        <select id="sweep-quantity" value={chosen.key} onChange={(e) => sweepStore.getState().setForm({ quantity: e.target.value })}>
-          {planned.quantities.map((q) => <option key={q.key} value={q.key}>{q.label} [{q.unit}]</option>)}
+        <select
+          id="sweep-quantity"
+          value={chosen.key}
+          onChange={(e) => sweepStore.getState().setForm({ quantity: e.target.value })}
+        >
+          {planned.quantities.map((q) => (
+            <option key={q.key} value={q.key}>
+              {q.label} [{q.unit}]
+            </option>
+          ))}
         </select>
       </span>
       {planned.planar && planned.hasFlow && <p className="hint">Planar case: flow numbers per metre of depth.</p>}
-      <SweepPlot points={points} curves={curves} quantityKey={chosen.key} quantityLabel={chosen.label} unit={chosen.unit} xTitle={xTitle} xOf={xOf} />
+      <SweepPlot
+        points={points}
+        curves={curves}
+        quantityKey={chosen.key}
+        quantityLabel={chosen.label}
+        unit={chosen.unit}
+        xTitle={xTitle}
+        xOf={xOf}
+      />
       {reason && <p className="hint">No continuum curves: {reason}.</p>}
-      <SweepTable points={points} quantityLabel={chosen.label} unit={chosen.unit} xHeader={xTitle.replace(/^Knudsen number/, 'Kn')} xOf={xOf} failures={failures} />
+      <SweepTable
+        points={points}
+        quantityLabel={chosen.label}
+        unit={chosen.unit}
+        xHeader={xTitle.replace(/^Knudsen number/, 'Kn')}
+        xOf={xOf}
+        failures={failures}
+      />
     </section>
   );
 }

@@ -50,10 +50,15 @@ export function keepSweep(record: SavedSweepRecord): SweepKeeper {
     warned = true;
     notice(`The sweep could not be saved in this browser: ${(e as Error).message}`);
   };
-  let chain = putSweep(record).then(() => showMeta(sweepMetaOf(record))).catch(failed);
+  let chain = putSweep(record)
+    .then(() => showMeta(sweepMetaOf(record)))
+    .catch(failed);
   return {
     update(patch) {
-      chain = chain.then(() => patchSweep(record.id, patch)).then(showMeta).catch(failed);
+      chain = chain
+        .then(() => patchSweep(record.id, patch))
+        .then(showMeta)
+        .catch(failed);
     },
     settled: () => chain,
   };

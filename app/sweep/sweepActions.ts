@@ -74,19 +74,37 @@ export async function startSweep(): Promise<void> {
       return;
     }
     const s = sweepStore.getState();
-    if (!planned.quantities.some((q) => q.key === s.quantity)) s.setForm({ quantity: planned.quantities[0]?.key ?? '' });
-    const plan = { caseName: planned.caseName, planar: planned.planar, hasFlow: planned.hasFlow, quantities: planned.quantities, pointCount: planned.points.length };
+    if (!planned.quantities.some((q) => q.key === s.quantity))
+      s.setForm({ quantity: planned.quantities[0]?.key ?? '' });
+    const plan = {
+      caseName: planned.caseName,
+      planar: planned.planar,
+      hasFlow: planned.hasFlow,
+      quantities: planned.quantities,
+      pointCount: planned.points.length,
+    };
     const id = newSweepId();
     const replicas = appStore.getState().replicas;
-    const kept = keepSweep(newSweepRecord({ id, now: now(), form: sweepStore.getState(), baseCase: caseInput, request, plan, replicas }));
+    const kept = keepSweep(
+      newSweepRecord({ id, now: now(), form: sweepStore.getState(), baseCase: caseInput, request, plan, replicas }),
+    );
     keeper = kept;
-    set({ status: 'running', planned: plan, savedId: id, request, baseCase: caseInput, current: { index: 0, count: planned.points.length, progress: null } });
+    set({
+      status: 'running',
+      planned: plan,
+      savedId: id,
+      request,
+      baseCase: caseInput,
+      current: { index: 0, count: planned.points.length, progress: null },
+    });
     // The curves are evaluated a few values per macrotask, beside the first point's run.
     const withCurves = (curves: SweepContinuumCurves | { reason: string }) => {
       kept.update({ curves });
       if (sweepStore.getState().request === request) set({ curves });
     };
-    api.sweepCurves(caseInput, request, planned.points).then(withCurves, (e: Error) => withCurves({ reason: e.message }));
+    api
+      .sweepCurves(caseInput, request, planned.points)
+      .then(withCurves, (e: Error) => withCurves({ reason: e.message }));
     const progress = throttled((p) => {
       const c = sweepStore.getState().current;
       if (c) set({ current: { ...c, progress: p } });

@@ -29,8 +29,10 @@ export function readSweepForm(f: SweepFormState, toSI: (value: number, unit: str
   const from = end('from', f.fromText);
   const to = end('to', f.toText);
   const points = Number(f.pointsText);
-  if (!/^\s*\d+\s*$/.test(f.pointsText) || points < 1 || points > 999) errors.points = `points: give a whole number from 1 to 999${f.pointsText.trim() ? `, not “${f.pointsText.trim()}”` : ''}`;
-  else if (points > 1 && !errors.from && !errors.to && from === to) errors.to = 'to: the same as from; give two different ends, or 1 point';
+  if (!/^\s*\d+\s*$/.test(f.pointsText) || points < 1 || points > 999)
+    errors.points = `points: give a whole number from 1 to 999${f.pointsText.trim() ? `, not “${f.pointsText.trim()}”` : ''}`;
+  else if (points > 1 && !errors.from && !errors.to && from === to)
+    errors.to = 'to: the same as from; give two different ends, or 1 point';
   if (Object.keys(errors).length) return { ok: false, errors };
   return { ok: true, request: { parameter: f.parameter, from, to, points, spacing: f.spacing } };
 }

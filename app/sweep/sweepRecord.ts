@@ -54,14 +54,20 @@ export function newSweepRecord(s: NewSweep): SavedSweepRecord {
 }
 
 /** The fields that change when a point ends. */
-export function pointEndedPatch(rows: readonly SweepRow[], failures: Readonly<Record<number, string>>, now: string): Partial<SavedSweepRecord> {
+export function pointEndedPatch(
+  rows: readonly SweepRow[],
+  failures: Readonly<Record<number, string>>,
+  now: string,
+): Partial<SavedSweepRecord> {
   return { rows, failures, ...sweepCounts(rows), updatedAt: now };
 }
 
 /** What the view shows of a saved sweep reopened in a page that is not running it. */
 export function shownSweepOf(r: SavedSweepRecord): { readonly form: SweepFormState; readonly run: SweepRunState } {
   const standing = sweepStanding(r, null);
-  const quantity = r.plan.quantities.some((q) => q.key === r.form.quantity) ? r.form.quantity : (r.plan.quantities[0]?.key ?? '');
+  const quantity = r.plan.quantities.some((q) => q.key === r.form.quantity)
+    ? r.form.quantity
+    : (r.plan.quantities[0]?.key ?? '');
   return {
     form: { ...r.form, quantity },
     run: {

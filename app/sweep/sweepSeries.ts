@@ -25,7 +25,8 @@ export function estimateIn(s: SummaryJson | null, key: string): { mean: number; 
   const parts = key.split('.');
   let e: unknown;
   if (s && parts[0] === 'flow' && parts.length === 2) e = s.flow?.[parts[1]];
-  else if (s && parts[0] === 'walls' && parts.length >= 3) e = (s.walls[parts.slice(1, -1).join('.')] as Record<string, unknown> | undefined)?.[parts[parts.length - 1]];
+  else if (s && parts[0] === 'walls' && parts.length >= 3)
+    e = (s.walls[parts.slice(1, -1).join('.')] as Record<string, unknown> | undefined)?.[parts[parts.length - 1]];
   const o = (e ?? {}) as { mean?: unknown; ci95?: unknown };
   return { mean: finite(o.mean), ci95: finite(o.ci95) };
 }
@@ -37,12 +38,23 @@ export function sweepSeries(rows: readonly SweepRow[], key: string): SweepPointV
       const v = finite(values[key]);
       if (Number.isFinite(v)) predictions[model] = v;
     }
-    return { point: r.point, value: r.value, status: r.status, knudsen: finite(r.summary?.reference.knudsen), ...estimateIn(r.summary, key), predictions };
+    return {
+      point: r.point,
+      value: r.value,
+      status: r.status,
+      knudsen: finite(r.summary?.reference.knudsen),
+      ...estimateIn(r.summary, key),
+      predictions,
+    };
   });
 }
 
 /** The models to draw as lines and their values: the fine curves when there are any for `key`, else the points' own predictions. */
-export function modelLines(points: readonly SweepPointValue[], curves: SweepContinuumCurves | { reason: string } | null, key: string): { model: string; x: number[]; y: number[] }[] {
+export function modelLines(
+  points: readonly SweepPointValue[],
+  curves: SweepContinuumCurves | { reason: string } | null,
+  key: string,
+): { model: string; x: number[]; y: number[] }[] {
   if (curves && !('reason' in curves) && curves.curves[key]) {
     const x = [...curves.values];
     return Object.entries(curves.curves[key]).map(([model, y]) => ({ model, x, y: y! }));

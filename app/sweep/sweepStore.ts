@@ -42,7 +42,11 @@ export interface SweepRunState {
   readonly rows: readonly SweepRow[];
   /** Why a failed point failed, by point number. */
   readonly failures: Readonly<Record<number, string>>;
-  readonly current: { readonly index: number; readonly count: number; readonly progress: RunProgressView | null } | null;
+  readonly current: {
+    readonly index: number;
+    readonly count: number;
+    readonly progress: RunProgressView | null;
+  } | null;
   readonly curves: SweepContinuumCurves | { readonly reason: string } | null;
   readonly error: string | null;
   readonly notices: readonly string[];
@@ -57,7 +61,17 @@ export interface SweepState extends SweepFormState, SweepRunState {
 }
 
 const initialRun: SweepRunState = {
-  status: 'idle', planned: null, savedId: null, request: null, baseCase: null, rows: [], failures: {}, current: null, curves: null, error: null, notices: [],
+  status: 'idle',
+  planned: null,
+  savedId: null,
+  request: null,
+  baseCase: null,
+  rows: [],
+  failures: {},
+  current: null,
+  curves: null,
+  error: null,
+  notices: [],
 };
 
 export function createSweepStore() {

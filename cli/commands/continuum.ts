@@ -6,7 +6,11 @@
  */
 import { parseArgs } from 'node:util';
 import { solveCavity, type CavityResult } from '../../engine/continuum/cavity/solveCavity';
-import { cavityOptionProblems, type CavityOptions, type CavitySlipModel } from '../../engine/continuum/cavity/cavityOptions';
+import {
+  cavityOptionProblems,
+  type CavityOptions,
+  type CavitySlipModel,
+} from '../../engine/continuum/cavity/cavityOptions';
 import { csvDocument } from '../../engine/results/exports';
 import { CliError, UsageError, EXIT_OK } from '../errors';
 import { CONTINUUM_USAGE } from '../usage';
@@ -79,9 +83,11 @@ export function continuumCommand(args: string[], io: CommandIO): number {
   }
   const [problem, ...extra] = positionals;
   if (problem === undefined) throw new UsageError(`continuum needs a problem: ${PROBLEMS.join(', ')}`, CONTINUUM_USAGE);
-  if (problem !== 'cavity') throw new UsageError(`unknown continuum problem "${problem}": give one of ${PROBLEMS.join(', ')}`, CONTINUUM_USAGE);
+  if (problem !== 'cavity')
+    throw new UsageError(`unknown continuum problem "${problem}": give one of ${PROBLEMS.join(', ')}`, CONTINUUM_USAGE);
   if (extra.length > 0) throw new UsageError(`unexpected argument "${extra[0]}"`, CONTINUUM_USAGE);
-  if (values.reynolds === undefined) throw new UsageError('continuum cavity needs --reynolds R (a number above 0)', CONTINUUM_USAGE);
+  if (values.reynolds === undefined)
+    throw new UsageError('continuum cavity needs --reynolds R (a number above 0)', CONTINUUM_USAGE);
   if (!values.out) throw new UsageError('continuum cavity needs an output folder: --out DIR', CONTINUUM_USAGE);
 
   const options: CavityOptions = {
@@ -100,7 +106,9 @@ export function continuumCommand(args: string[], io: CommandIO): number {
       const text = (values as Record<string, unknown>)[OPTION_NAMES[field].slice(2)];
       return typeof text === 'string' ? ` ${text}` : '';
     };
-    const lines = problems.map((p) => `${OPTION_NAMES[p.field]}${given(p.field)}: ${p.allowed.replace('slip "first"', '--slip first')}`);
+    const lines = problems.map(
+      (p) => `${OPTION_NAMES[p.field]}${given(p.field)}: ${p.allowed.replace('slip "first"', '--slip first')}`,
+    );
     throw new UsageError(lines.join('\n'), CONTINUUM_USAGE);
   }
   checkOutputDir(values.out);

@@ -18,7 +18,15 @@ import type { CommandIO } from './io';
 export function mergeCommand(args: string[], io: CommandIO): number {
   let parsed;
   try {
-    parsed = parseArgs({ args, allowPositionals: true, options: { out: { type: 'string', short: 'o' }, quiet: { type: 'boolean', short: 'q' }, help: { type: 'boolean', short: 'h' } } });
+    parsed = parseArgs({
+      args,
+      allowPositionals: true,
+      options: {
+        out: { type: 'string', short: 'o' },
+        quiet: { type: 'boolean', short: 'q' },
+        help: { type: 'boolean', short: 'h' },
+      },
+    });
   } catch (e) {
     throw new UsageError((e as Error).message, MERGE_USAGE);
   }
@@ -52,11 +60,18 @@ export function mergeCommand(args: string[], io: CommandIO): number {
   const result = summarizeSamples(merged);
   const particleSteps = merged.counters.particleSteps;
   const files = {
-    ...resultFiles(result, { performance: { wallSeconds: NaN, particleSteps, particleStepsPerSecond: NaN }, caseName: merged.plan.caseData.name, plan: merged.plan }),
+    ...resultFiles(result, {
+      performance: { wallSeconds: NaN, particleSteps, particleStepsPerSecond: NaN },
+      caseName: merged.plan.caseData.name,
+      plan: merged.plan,
+    }),
     'case.json': `${prettyJson(merged.plan.caseData)}\n`,
   };
   writeResultsAtomically(values.out, files);
   for (const w of result.warnings) io.stderr.write(`warning: ${w}\n`);
-  if (!values.quiet) io.stderr.write(`merged ${sets.length} file(s), ${merged.replicas} replica(s), ${merged.counters.sampledSteps} sampled steps: results in ${values.out}\n`);
+  if (!values.quiet)
+    io.stderr.write(
+      `merged ${sets.length} file(s), ${merged.replicas} replica(s), ${merged.counters.sampledSteps} sampled steps: results in ${values.out}\n`,
+    );
   return EXIT_OK;
 }

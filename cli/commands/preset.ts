@@ -52,7 +52,8 @@ export function presetCommand(args: string[], io: CommandIO): number {
     }
     throw new UsageError(`which preset? Presets:\n${presetList()}`, PRESET_USAGE);
   }
-  if (positionals.length > 1) throw new UsageError(`one preset name expected, got ${positionals.join(' ')}`, PRESET_USAGE);
+  if (positionals.length > 1)
+    throw new UsageError(`one preset name expected, got ${positionals.join(' ')}`, PRESET_USAGE);
   const name = positionals[0];
   let caseInput;
   try {
@@ -66,10 +67,13 @@ export function presetCommand(args: string[], io: CommandIO): number {
     throw new CliError((e as Error).message);
   }
   const parsedCase = parseCase(caseInput);
-  if (!parsedCase.ok) throw new CliError(`preset ${name} gave an invalid case:\n${parsedCase.errors.map((m) => `  ${m}`).join('\n')}`);
+  if (!parsedCase.ok)
+    throw new CliError(`preset ${name} gave an invalid case:\n${parsedCase.errors.map((m) => `  ${m}`).join('\n')}`);
   const planned = plan(parsedCase.value);
   if (!planned.ok) {
-    io.stderr.write(`warning: \`tenuis check\` will reject this case as it stands:\n${planned.errors.map((m) => `  ${m}`).join('\n')}\n`);
+    io.stderr.write(
+      `warning: \`tenuis check\` will reject this case as it stands:\n${planned.errors.map((m) => `  ${m}`).join('\n')}\n`,
+    );
   } else {
     for (const w of planned.plan.warnings) io.stderr.write(`warning: ${w}\n`);
   }

@@ -42,8 +42,12 @@ function watchInterrupt(): { readonly interrupted: boolean; dispose(): void } {
 }
 
 /** --target, --max-steps, --max-seconds → the pool's stopping options (undefined when none is given). */
-function stoppingOptions(values: { target?: string; 'max-steps'?: string; 'max-seconds'?: string }, plan: Plan): StoppingOptions | undefined {
-  if (values.target === undefined && values['max-steps'] === undefined && values['max-seconds'] === undefined) return undefined;
+function stoppingOptions(
+  values: { target?: string; 'max-steps'?: string; 'max-seconds'?: string },
+  plan: Plan,
+): StoppingOptions | undefined {
+  if (values.target === undefined && values['max-steps'] === undefined && values['max-seconds'] === undefined)
+    return undefined;
   const knownPaths = targetPathsOf(plan);
   let target;
   try {
@@ -54,7 +58,8 @@ function stoppingOptions(values: { target?: string; 'max-steps'?: string; 'max-s
   const positive = (name: string, text: string | undefined, integer: boolean): number | undefined => {
     if (text === undefined) return undefined;
     const v = Number(text);
-    if (!Number.isFinite(v) || v <= 0 || (integer && !Number.isInteger(v))) throw new UsageError(`--${name} ${text}: give a ${integer ? 'whole ' : ''}number above 0`, RUN_USAGE);
+    if (!Number.isFinite(v) || v <= 0 || (integer && !Number.isInteger(v)))
+      throw new UsageError(`--${name} ${text}: give a ${integer ? 'whole ' : ''}number above 0`, RUN_USAGE);
     return v;
   };
   const maxSteps = positive('max-steps', values['max-steps'], true);
@@ -65,7 +70,8 @@ function stoppingOptions(values: { target?: string; 'max-steps'?: string; 'max-s
 
 function parseCheckpointEvery(text: string): number {
   const n = Number(text);
-  if (!Number.isInteger(n) || n < 1) throw new UsageError(`--checkpoint-every ${text}: give a whole number of steps, at least 1`, RUN_USAGE);
+  if (!Number.isInteger(n) || n < 1)
+    throw new UsageError(`--checkpoint-every ${text}: give a whole number of steps, at least 1`, RUN_USAGE);
   return n;
 }
 
@@ -74,7 +80,9 @@ function readCheckpoint(path: string): { sim: Simulation } {
   try {
     bytes = readFileSync(path);
   } catch (e) {
-    throw new CliError(`--resume ${path}: cannot read it (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`);
+    throw new CliError(
+      `--resume ${path}: cannot read it (${(e as NodeJS.ErrnoException).code ?? (e as Error).message})`,
+    );
   }
   try {
     return decodeCheckpoint(bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength) as ArrayBuffer);
@@ -85,7 +93,11 @@ function readCheckpoint(path: string): { sim: Simulation } {
 
 function parseReplicasOption(text: string): number {
   const n = Number(text);
-  if (!Number.isInteger(n) || n < 1 || n > 256) throw new UsageError(`--replicas ${text}: give a whole number from 1 to 256 (one per core is the useful maximum)`, RUN_USAGE);
+  if (!Number.isInteger(n) || n < 1 || n > 256)
+    throw new UsageError(
+      `--replicas ${text}: give a whole number from 1 to 256 (one per core is the useful maximum)`,
+      RUN_USAGE,
+    );
   return n;
 }
 
@@ -119,14 +131,18 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
     return EXIT_OK;
   }
   const resumed = values.resume === undefined ? undefined : readCheckpoint(values.resume);
-  if (resumed ? positionals.length > 1 : positionals.length !== 1) throw new UsageError('run needs exactly one case file (none with --resume)', RUN_USAGE);
+  if (resumed ? positionals.length > 1 : positionals.length !== 1)
+    throw new UsageError('run needs exactly one case file (none with --resume)', RUN_USAGE);
   if (!values.out) throw new UsageError('run needs an output folder: --out DIR', RUN_USAGE);
   const outDir = values.out;
   const quiet = values.quiet === true;
-  if (resumed && values.seed !== undefined) throw new UsageError('--seed cannot change a resumed run: its random stream is in the checkpoint', RUN_USAGE);
+  if (resumed && values.seed !== undefined)
+    throw new UsageError('--seed cannot change a resumed run: its random stream is in the checkpoint', RUN_USAGE);
 
   const seed = values.seed === undefined ? undefined : parseSeedOption(values.seed);
-  const { caseData, plan } = resumed ? { caseData: resumed.sim.plan.caseData, plan: resumed.sim.plan } : loadCase(positionals[0], { seed });
+  const { caseData, plan } = resumed
+    ? { caseData: resumed.sim.plan.caseData, plan: resumed.sim.plan }
+    : loadCase(positionals[0], { seed });
   checkOutputDir(outDir);
   for (const w of plan.warnings) io.stderr.write(`warning: ${w}\n`);
 
@@ -134,13 +150,21 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
   const stopping = stoppingOptions(values, plan);
   const checkpointPath = values.checkpoint;
   if ((checkpointPath || resumed) && (replicas > 1 || stopping)) {
-    throw new UsageError('--checkpoint and --resume work with a single replica and the case\'s own step count (no --replicas, --target, --max-steps or --max-seconds)', RUN_USAGE);
+    throw new UsageError(
+      "--checkpoint and --resume work with a single replica and the case's own step count (no --replicas, --target, --max-steps or --max-seconds)",
+      RUN_USAGE,
+    );
   }
-  const checkpointEvery = values['checkpoint-every'] === undefined ? undefined : parseCheckpointEvery(values['checkpoint-every']);
+  const checkpointEvery =
+    values['checkpoint-every'] === undefined ? undefined : parseCheckpointEvery(values['checkpoint-every']);
   const savePath = values['save-samples'];
   const progress = quiet
     ? undefined
-    : createProgress({ stream: io.stderr, totalSteps: plan.transientSteps + (stopping?.maxSampleSteps ?? plan.sampleSteps), transientSteps: plan.transientSteps });
+    : createProgress({
+        stream: io.stderr,
+        totalSteps: plan.transientSteps + (stopping?.maxSampleSteps ?? plan.sampleSteps),
+        transientSteps: plan.transientSteps,
+      });
   const interrupt = watchInterrupt();
   let samples: SampleSet | null;
   let wallSeconds: number;
@@ -159,7 +183,10 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
       const saveCheckpoint = () => writeBinaryAtomically(checkpointPath!, encodeCheckpoint(sim, 0));
       const outcome = await advanceInChunks(sim, {
         onProgress: (d) => {
-          progress?.setTotals(sim.state.step + stepsRemaining(sim), Number.isFinite(sim.transientEndStep) ? sim.transientEndStep : Infinity);
+          progress?.setTotals(
+            sim.state.step + stepsRemaining(sim),
+            Number.isFinite(sim.transientEndStep) ? sim.transientEndStep : Infinity,
+          );
           progress?.update(d);
           if (checkpointPath && d >= nextCheckpoint && d < total) {
             saveCheckpoint();
@@ -173,33 +200,49 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
         progress?.clear();
         if (checkpointPath) {
           saveCheckpoint();
-          io.stderr.write(`checkpoint written to ${checkpointPath}; continue with tenuis run --resume ${checkpointPath} --out ${outDir}\n`);
+          io.stderr.write(
+            `checkpoint written to ${checkpointPath}; continue with tenuis run --resume ${checkpointPath} --out ${outDir}\n`,
+          );
         }
         if (sim.sampledSteps === 0) {
-          io.stderr.write(`interrupted at step ${outcome.stepsDone}, still in the transient: nothing was sampled, nothing was written\n`);
+          io.stderr.write(
+            `interrupted at step ${outcome.stepsDone}, still in the transient: nothing was sampled, nothing was written\n`,
+          );
           return EXIT_INTERRUPTED;
         }
-        io.stderr.write(`interrupted at step ${outcome.stepsDone}: writing the ${sim.sampledSteps} steps sampled so far\n`);
+        io.stderr.write(
+          `interrupted at step ${outcome.stepsDone}: writing the ${sim.sampledSteps} steps sampled so far\n`,
+        );
       } else progress?.finish(outcome.stepsDone);
       samples = sampleSetOf(sim);
       wallSeconds = outcome.wallSeconds;
       particleSteps = sim.state.particleSteps;
       interrupted = !outcome.completed;
     } else {
-      const outcome = await runReplicas(caseData, replicas, { progress, isInterrupted: () => interrupt.interrupted, stopping });
+      const outcome = await runReplicas(caseData, replicas, {
+        progress,
+        isInterrupted: () => interrupt.interrupted,
+        stopping,
+      });
       progress?.finish(Math.round(outcome.replicas.reduce((sum, r) => sum + r.stepsDone, 0) / outcome.replicas.length));
       samples = outcome.merged;
       wallSeconds = outcome.wallSeconds;
       particleSteps = outcome.particleSteps;
       interrupted = outcome.cancelled;
       if (outcome.stoppedBy) stopNote = `stopped: ${outcome.stoppedBy}`;
-      extraFiles['replicas.json'] = `${prettyJson({ replicas: outcome.replicas.map((r) => replicaReportJson(r, caseData.name)) })}\n`;
+      extraFiles['replicas.json'] =
+        `${prettyJson({ replicas: outcome.replicas.map((r) => replicaReportJson(r, caseData.name)) })}\n`;
       for (const r of outcome.replicas) {
         if (r.status === 'lost') {
-          lostWarnings.push(`replica ${r.stream} was lost (${r.reason}); ${r.samples ? `its ${r.samples.counters.sampledSteps} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`);
+          lostWarnings.push(
+            `replica ${r.stream} was lost (${r.reason}); ${r.samples ? `its ${r.samples.counters.sampledSteps} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`,
+          );
         }
       }
-      if (!samples) throw new CliError(`no replica sampled anything:\n${outcome.replicas.map((r) => `  replica ${r.stream}: ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('\n')}`);
+      if (!samples)
+        throw new CliError(
+          `no replica sampled anything:\n${outcome.replicas.map((r) => `  replica ${r.stream}: ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('\n')}`,
+        );
     }
   } finally {
     interrupt.dispose();
@@ -207,7 +250,10 @@ export async function runCommand(args: string[], io: CommandIO): Promise<number>
 
   const result = summarizeSamples(samples);
   result.warnings.push(...lostWarnings);
-  if (interrupted) result.warnings.push(`interrupted by the user: the result holds the ${samples.counters.sampledSteps} steps sampled until then`);
+  if (interrupted)
+    result.warnings.push(
+      `interrupted by the user: the result holds the ${samples.counters.sampledSteps} steps sampled until then`,
+    );
   const performance: Performance = {
     wallSeconds,
     particleSteps,

@@ -13,7 +13,15 @@ import { CASE_SCHEMA_VERSION } from './schema';
 import type { SpeciesId } from '../gas/species';
 import { modelFromSpecies, type CollisionModelKind } from '../gas/molecularModel';
 import { formatQuantity } from '../units/engineeringUnits';
-import { type Preset, type PresetValues, gasParameter, modelParameter, knudsenParameter, pressureForKnudsenPa, presetSampling } from './presetParameters';
+import {
+  type Preset,
+  type PresetValues,
+  gasParameter,
+  modelParameter,
+  knudsenParameter,
+  pressureForKnudsenPa,
+  presetSampling,
+} from './presetParameters';
 
 export const CAVITY_WALL_MODELS = ['diffuse', 'maxwell'] as const;
 
@@ -24,7 +32,10 @@ function wallOf(v: PresetValues, speedXMPerS: number): Wall {
   const a = v.accommodation as number;
   const velocityMPerS: [number, number, number] = [speedXMPerS, 0, 0];
   if (v.wallModel === 'diffuse') {
-    if (a !== 1) throw new Error(`accommodation ${a} applies to Maxwell walls only: set wallModel=maxwell, or leave accommodation at 1`);
+    if (a !== 1)
+      throw new Error(
+        `accommodation ${a} applies to Maxwell walls only: set wallModel=maxwell, or leave accommodation at 1`,
+      );
     return { type: 'wall', model: 'diffuse', temperatureK: t, velocityMPerS };
   }
   if (!(a > 0 && a <= 1)) throw new Error(`accommodation ${a} must be above 0 and at most 1`);
@@ -33,20 +44,92 @@ function wallOf(v: PresetValues, speedXMPerS: number): Wall {
 
 export const cavity: Preset = {
   name: 'cavity',
-  description: 'lid-driven square cavity: gas in a square box whose top wall (the lid, reported as `lid`) slides along +x; the other walls (left, right, bottom) are at rest',
+  description:
+    'lid-driven square cavity: gas in a square box whose top wall (the lid, reported as `lid`) slides along +x; the other walls (left, right, bottom) are at rest',
   parameters: [
     gasParameter,
     modelParameter,
-    { ...knudsenParameter, description: 'Knudsen number λ/L on the side L, λ = (μ/p)·sqrt(πkT/(2m)) the viscosity-based mean free path; sets the pressure' },
-    { name: 'side', kind: 'length', unitShown: 'mm', default: 1e-3, min: 0, exclusiveMin: true, description: 'side L of the square' },
-    { name: 'lidSpeed', kind: 'speed', unitShown: 'm/s', default: 100, min: 0, exclusiveMin: true, description: 'speed U of the lid (top wall) along +x' },
-    { name: 'temperature', kind: 'temperature', unitShown: 'K', default: 300, min: 0, exclusiveMin: true, description: 'gas and wall temperature' },
-    { name: 'wallModel', kind: 'choice', unitShown: '', default: 'diffuse', choices: CAVITY_WALL_MODELS, description: 'gas–wall interaction of all four walls' },
-    { name: 'accommodation', kind: 'dimensionless', unitShown: '', default: 1, min: 0, exclusiveMin: true, description: 'accommodation coefficient of Maxwell walls (1 = diffuse)' },
-    { name: 'cells', kind: 'count', unitShown: '', default: null, min: 1, description: 'cells along each side; default: cells of at most λ/3, at least 20 along a side' },
-    { name: 'particlesPerCell', kind: 'count', unitShown: '', default: null, min: 1, description: 'simulated particles per cell at the start; default 30' },
-    { name: 'transientSteps', kind: 'count', unitShown: '', default: null, min: 0, description: 'steps before sampling starts; default: ended automatically at steady state' },
-    { name: 'sampleSteps', kind: 'count', unitShown: '', default: null, min: 1, description: 'sampled steps; default chosen by the planner' },
+    {
+      ...knudsenParameter,
+      description:
+        'Knudsen number λ/L on the side L, λ = (μ/p)·sqrt(πkT/(2m)) the viscosity-based mean free path; sets the pressure',
+    },
+    {
+      name: 'side',
+      kind: 'length',
+      unitShown: 'mm',
+      default: 1e-3,
+      min: 0,
+      exclusiveMin: true,
+      description: 'side L of the square',
+    },
+    {
+      name: 'lidSpeed',
+      kind: 'speed',
+      unitShown: 'm/s',
+      default: 100,
+      min: 0,
+      exclusiveMin: true,
+      description: 'speed U of the lid (top wall) along +x',
+    },
+    {
+      name: 'temperature',
+      kind: 'temperature',
+      unitShown: 'K',
+      default: 300,
+      min: 0,
+      exclusiveMin: true,
+      description: 'gas and wall temperature',
+    },
+    {
+      name: 'wallModel',
+      kind: 'choice',
+      unitShown: '',
+      default: 'diffuse',
+      choices: CAVITY_WALL_MODELS,
+      description: 'gas–wall interaction of all four walls',
+    },
+    {
+      name: 'accommodation',
+      kind: 'dimensionless',
+      unitShown: '',
+      default: 1,
+      min: 0,
+      exclusiveMin: true,
+      description: 'accommodation coefficient of Maxwell walls (1 = diffuse)',
+    },
+    {
+      name: 'cells',
+      kind: 'count',
+      unitShown: '',
+      default: null,
+      min: 1,
+      description: 'cells along each side; default: cells of at most λ/3, at least 20 along a side',
+    },
+    {
+      name: 'particlesPerCell',
+      kind: 'count',
+      unitShown: '',
+      default: null,
+      min: 1,
+      description: 'simulated particles per cell at the start; default 30',
+    },
+    {
+      name: 'transientSteps',
+      kind: 'count',
+      unitShown: '',
+      default: null,
+      min: 0,
+      description: 'steps before sampling starts; default: ended automatically at steady state',
+    },
+    {
+      name: 'sampleSteps',
+      kind: 'count',
+      unitShown: '',
+      default: null,
+      min: 1,
+      description: 'sampled steps; default chosen by the planner',
+    },
     { name: 'seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
   ],
   build(v) {
@@ -68,7 +151,12 @@ export const cavity: Preset = {
       gas: { species: v.gas as SpeciesId, model: v.model as CollisionModelKind },
       initial: { pressurePa: pressureForKnudsenPa(model, t, v.knudsen as number, side), temperatureK: t },
       domain: { lengthXM: side, lengthYM: side, characteristicLengthM: side },
-      boundaries: { left: wallOf(v, 0), right: wallOf(v, 0), bottom: wallOf(v, 0), top: { ...wallOf(v, u), name: 'lid' } },
+      boundaries: {
+        left: wallOf(v, 0),
+        right: wallOf(v, 0),
+        bottom: wallOf(v, 0),
+        top: { ...wallOf(v, u), name: 'lid' },
+      },
       numerics,
       sampling,
       seed: v.seed as number,

@@ -18,24 +18,76 @@ import type { SpeciesId } from '../gas/species';
 import { modelFromSpecies, mostProbableSpeedMPerS, type CollisionModelKind } from '../gas/molecularModel';
 import { formatQuantity } from '../units/engineeringUnits';
 import {
-  type Preset, type PresetParameter, type PresetValues, gasParameter, modelParameter, knudsenParameter,
-  pressureForKnudsenPa, defaultGapNumerics, presetSampling,
+  type Preset,
+  type PresetParameter,
+  type PresetValues,
+  gasParameter,
+  modelParameter,
+  knudsenParameter,
+  pressureForKnudsenPa,
+  defaultGapNumerics,
+  presetSampling,
 } from './presetParameters';
 
 const temperatureParameter: PresetParameter = {
-  name: 'temperature', kind: 'temperature', unitShown: 'K', default: 300, min: 0, exclusiveMin: true, description: 'gas, wall and vessel temperature',
+  name: 'temperature',
+  kind: 'temperature',
+  unitShown: 'K',
+  default: 300,
+  min: 0,
+  exclusiveMin: true,
+  description: 'gas, wall and vessel temperature',
 };
 const accommodationParameter: PresetParameter = {
-  name: 'accommodation', kind: 'dimensionless', unitShown: '', default: 1, min: 0, description: 'tangential momentum accommodation of the walls (Maxwell model; 1 = diffuse)',
+  name: 'accommodation',
+  kind: 'dimensionless',
+  unitShown: '',
+  default: 1,
+  min: 0,
+  description: 'tangential momentum accommodation of the walls (Maxwell model; 1 = diffuse)',
 };
 const pressureRatioParameter: PresetParameter = {
-  name: 'pressureRatio', kind: 'dimensionless', unitShown: '', default: 2, min: 1, exclusiveMin: true, description: 'upstream over downstream vessel pressure',
+  name: 'pressureRatio',
+  kind: 'dimensionless',
+  unitShown: '',
+  default: 2,
+  min: 1,
+  exclusiveMin: true,
+  description: 'upstream over downstream vessel pressure',
 };
 const ductNumerics: readonly PresetParameter[] = [
-  { name: 'cellsY', kind: 'count', unitShown: '', default: null, min: 1, description: 'cells across the domain; default: cells of at most λ/3 at the densest state, at least 20 across' },
-  { name: 'particlesPerCell', kind: 'count', unitShown: '', default: null, min: 1, description: 'simulated particles per cell at the start; default 30' },
-  { name: 'transientSteps', kind: 'count', unitShown: '', default: null, min: 0, description: 'steps before sampling starts; default: ended automatically at steady state' },
-  { name: 'sampleSteps', kind: 'count', unitShown: '', default: null, min: 1, description: 'sampled steps; default chosen by the planner' },
+  {
+    name: 'cellsY',
+    kind: 'count',
+    unitShown: '',
+    default: null,
+    min: 1,
+    description: 'cells across the domain; default: cells of at most λ/3 at the densest state, at least 20 across',
+  },
+  {
+    name: 'particlesPerCell',
+    kind: 'count',
+    unitShown: '',
+    default: null,
+    min: 1,
+    description: 'simulated particles per cell at the start; default 30',
+  },
+  {
+    name: 'transientSteps',
+    kind: 'count',
+    unitShown: '',
+    default: null,
+    min: 0,
+    description: 'steps before sampling starts; default: ended automatically at steady state',
+  },
+  {
+    name: 'sampleSteps',
+    kind: 'count',
+    unitShown: '',
+    default: null,
+    min: 1,
+    description: 'sampled steps; default chosen by the planner',
+  },
   { name: 'seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
 ];
 
@@ -45,11 +97,18 @@ function wallOf(v: PresetValues): Wall {
   const t = v.temperature as number;
   const a = v.accommodation as number;
   if (a > 1) throw new Error(`accommodation ${a} must be between 0 and 1`);
-  return a === 1 ? { type: 'wall', model: 'diffuse', temperatureK: t } : { type: 'wall', model: 'maxwell', accommodation: a, temperatureK: t };
+  return a === 1
+    ? { type: 'wall', model: 'diffuse', temperatureK: t }
+    : { type: 'wall', model: 'maxwell', accommodation: a, temperatureK: t };
 }
 
 /** Gas, numerics and sampling shared by the duct presets; `cellsAcross` cells in y, square cells along x. */
-function common(v: PresetValues, pressurePa: number, lengthXM: number, lengthYM: number): Pick<CaseInput, 'schemaVersion' | 'gas' | 'initial' | 'numerics' | 'sampling' | 'seed'> {
+function common(
+  v: PresetValues,
+  pressurePa: number,
+  lengthXM: number,
+  lengthYM: number,
+): Pick<CaseInput, 'schemaVersion' | 'gas' | 'initial' | 'numerics' | 'sampling' | 'seed'> {
   const numerics: NonNullable<CaseInput['numerics']> = {};
   if (v.cellsY !== undefined) {
     numerics.cellsY = v.cellsY as number;
@@ -86,12 +145,33 @@ function reservoirs(v: PresetValues, p: { up: number; down: number }) {
 
 const poiseuille: Preset = {
   name: 'poiseuille',
-  description: 'force-driven planar channel: gas between two parallel walls, periodic along x, driven by a uniform body acceleration (the stand-in for a long pressure-driven channel in the linear regime)',
+  description:
+    'force-driven planar channel: gas between two parallel walls, periodic along x, driven by a uniform body acceleration (the stand-in for a long pressure-driven channel in the linear regime)',
   parameters: [
-    gasParameter, modelParameter, knudsenParameter,
-    { name: 'gap', kind: 'length', unitShown: 'µm', default: 1e-6, min: 0, exclusiveMin: true, description: 'distance H between the walls' },
-    { name: 'acceleration', kind: 'acceleration', unitShown: 'm/s²', default: null, min: 0, exclusiveMin: true, description: 'body acceleration along x; default: a mean speed of about 5 % of v0 = sqrt(2kT/m) (linear regime)' },
-    temperatureParameter, accommodationParameter, ...ductNumerics,
+    gasParameter,
+    modelParameter,
+    knudsenParameter,
+    {
+      name: 'gap',
+      kind: 'length',
+      unitShown: 'µm',
+      default: 1e-6,
+      min: 0,
+      exclusiveMin: true,
+      description: 'distance H between the walls',
+    },
+    {
+      name: 'acceleration',
+      kind: 'acceleration',
+      unitShown: 'm/s²',
+      default: null,
+      min: 0,
+      exclusiveMin: true,
+      description: 'body acceleration along x; default: a mean speed of about 5 % of v0 = sqrt(2kT/m) (linear regime)',
+    },
+    temperatureParameter,
+    accommodationParameter,
+    ...ductNumerics,
   ],
   build(v) {
     const h = v.gap as number;
@@ -114,22 +194,40 @@ const poiseuille: Preset = {
       bodyAccelerationXMPerS2: a,
       flowSections: [{ name: 'middle', xM: lx / 2 }],
       flowReport: { duct: 'channel', sizeM: h },
-      numerics: { ...c.numerics, cellsX: 1, cellsY, particlesPerCell: (v.particlesPerCell as number | undefined) ?? auto.particlesPerCell },
+      numerics: {
+        ...c.numerics,
+        cellsX: 1,
+        cellsY,
+        particlesPerCell: (v.particlesPerCell as number | undefined) ?? auto.particlesPerCell,
+      },
     };
   },
 };
 
 const lengthParameter = (name: string, of: string, def: number, description: string): PresetParameter => ({
-  name, kind: 'dimensionless', unitShown: '', default: def, min: 0, description: `${description} (in units of the ${of})`,
+  name,
+  kind: 'dimensionless',
+  unitShown: '',
+  default: def,
+  min: 0,
+  description: `${description} (in units of the ${of})`,
 });
 
 /**
  * A duct of size `size` (gap or radius) and length `length` between two vessel regions of length `vessel` and
  * height (planar) or radius (axisymmetric) `vesselSize`, the vessels' far ends held at the vessel pressures.
  */
-function ductBetweenVessels(v: PresetValues, o: {
-  planar: boolean; size: number; length: number; vessel: number; vesselSize: number; blocks: 'channel' | 'tube' | 'slit' | 'orifice';
-}): CaseInput {
+function ductBetweenVessels(
+  v: PresetValues,
+  o: {
+    planar: boolean;
+    size: number;
+    length: number;
+    vessel: number;
+    vesselSize: number;
+    blocks: 'channel' | 'tube' | 'slit' | 'orifice';
+  },
+): CaseInput {
   const p = vesselPressures(v, o.size);
   const lx = 2 * o.vessel + o.length;
   const ly = o.planar ? o.vesselSize : o.vesselSize;
@@ -139,8 +237,22 @@ function ductBetweenVessels(v: PresetValues, o: {
   // Planar ducts are centred in y; axisymmetric ones run along the axis.
   const blocks = o.planar
     ? [
-        { name: o.blocks === 'slit' ? 'lowerPlate' : 'lowerWall', xMinM: x0, xMaxM: x1, yMinM: 0, yMaxM: (ly - o.size) / 2, wall },
-        { name: o.blocks === 'slit' ? 'upperPlate' : 'upperWall', xMinM: x0, xMaxM: x1, yMinM: (ly + o.size) / 2, yMaxM: ly, wall },
+        {
+          name: o.blocks === 'slit' ? 'lowerPlate' : 'lowerWall',
+          xMinM: x0,
+          xMaxM: x1,
+          yMinM: 0,
+          yMaxM: (ly - o.size) / 2,
+          wall,
+        },
+        {
+          name: o.blocks === 'slit' ? 'upperPlate' : 'upperWall',
+          xMinM: x0,
+          xMaxM: x1,
+          yMinM: (ly + o.size) / 2,
+          yMaxM: ly,
+          wall,
+        },
       ]
     : [{ name: o.blocks === 'orifice' ? 'plate' : 'wall', xMinM: x0, xMaxM: x1, yMinM: o.size, yMaxM: ly, wall }];
   const opening = o.blocks === 'slit' || o.blocks === 'orifice';
@@ -162,7 +274,12 @@ function ductBetweenVessels(v: PresetValues, o: {
     ...c,
     name: `${o.blocks} ${v.gas} Kn ${v.knudsen} ratio ${v.pressureRatio}`,
     description: `${o.blocks} of ${v.gas} (${v.model}) between vessels at ${formatQuantity(p.up, 'Pa')} and ${formatQuantity(p.down, 'Pa')}, Kn = ${v.knudsen} at the mean pressure`,
-    domain: { lengthXM: lx, lengthYM: ly, characteristicLengthM: o.size, geometry: o.planar ? 'planar' : 'axisymmetric' },
+    domain: {
+      lengthXM: lx,
+      lengthYM: ly,
+      characteristicLengthM: o.size,
+      geometry: o.planar ? 'planar' : 'axisymmetric',
+    },
     boundaries: {
       ...reservoirs(v, p),
       // Without vessel regions the duct's own walls are the domain's sides.
@@ -177,37 +294,93 @@ function ductBetweenVessels(v: PresetValues, o: {
 
 const channel: Preset = {
   name: 'channel',
-  description: 'planar channel of gap H and length L between two vessels held at different pressures (e.g. a MEMS microchannel)',
+  description:
+    'planar channel of gap H and length L between two vessels held at different pressures (e.g. a MEMS microchannel)',
   parameters: [
-    gasParameter, modelParameter, { ...knudsenParameter, default: 0.5, description: 'Knudsen number λ/H at the mean of the two vessel pressures' },
-    { name: 'gap', kind: 'length', unitShown: 'µm', default: 1e-6, min: 0, exclusiveMin: true, description: 'channel gap H' },
-    pressureRatioParameter, lengthParameter('lengthToGap', 'gap', 5, 'channel length L'),
-    lengthParameter('vesselLengthToGap', 'gap', 2, 'length of each vessel region; 0 puts the vessels right at the channel ends'),
+    gasParameter,
+    modelParameter,
+    { ...knudsenParameter, default: 0.5, description: 'Knudsen number λ/H at the mean of the two vessel pressures' },
+    {
+      name: 'gap',
+      kind: 'length',
+      unitShown: 'µm',
+      default: 1e-6,
+      min: 0,
+      exclusiveMin: true,
+      description: 'channel gap H',
+    },
+    pressureRatioParameter,
+    lengthParameter('lengthToGap', 'gap', 5, 'channel length L'),
+    lengthParameter(
+      'vesselLengthToGap',
+      'gap',
+      2,
+      'length of each vessel region; 0 puts the vessels right at the channel ends',
+    ),
     lengthParameter('vesselHeightToGap', 'gap', 3, 'height of the vessel regions'),
-    temperatureParameter, accommodationParameter, ...ductNumerics,
+    temperatureParameter,
+    accommodationParameter,
+    ...ductNumerics,
   ],
   build(v) {
     const h = v.gap as number;
     const vessel = (v.vesselLengthToGap as number) * h;
-    return ductBetweenVessels(v, { planar: true, size: h, length: (v.lengthToGap as number) * h, vessel, vesselSize: vessel > 0 ? Math.max(1, v.vesselHeightToGap as number) * h : h, blocks: 'channel' });
+    return ductBetweenVessels(v, {
+      planar: true,
+      size: h,
+      length: (v.lengthToGap as number) * h,
+      vessel,
+      vesselSize: vessel > 0 ? Math.max(1, v.vesselHeightToGap as number) * h : h,
+      blocks: 'channel',
+    });
   },
 };
 
 const tube: Preset = {
   name: 'tube',
-  description: 'round tube of radius R and length L between two vessels held at different pressures (axisymmetric; e.g. a pumping line)',
+  description:
+    'round tube of radius R and length L between two vessels held at different pressures (axisymmetric; e.g. a pumping line)',
   parameters: [
-    gasParameter, modelParameter, { ...knudsenParameter, default: 0.5, description: 'Knudsen number λ/R on the radius, at the mean of the two vessel pressures' },
-    { name: 'radius', kind: 'length', unitShown: 'mm', default: 1e-3, min: 0, exclusiveMin: true, description: 'tube radius R' },
-    pressureRatioParameter, lengthParameter('lengthToRadius', 'radius', 5, 'tube length L'),
-    lengthParameter('vesselLengthToRadius', 'radius', 2, 'length of each vessel region; 0 puts the vessels right at the tube ends'),
+    gasParameter,
+    modelParameter,
+    {
+      ...knudsenParameter,
+      default: 0.5,
+      description: 'Knudsen number λ/R on the radius, at the mean of the two vessel pressures',
+    },
+    {
+      name: 'radius',
+      kind: 'length',
+      unitShown: 'mm',
+      default: 1e-3,
+      min: 0,
+      exclusiveMin: true,
+      description: 'tube radius R',
+    },
+    pressureRatioParameter,
+    lengthParameter('lengthToRadius', 'radius', 5, 'tube length L'),
+    lengthParameter(
+      'vesselLengthToRadius',
+      'radius',
+      2,
+      'length of each vessel region; 0 puts the vessels right at the tube ends',
+    ),
     lengthParameter('vesselRadiusToRadius', 'radius', 3, 'radius of the vessel regions'),
-    temperatureParameter, accommodationParameter, ...ductNumerics,
+    temperatureParameter,
+    accommodationParameter,
+    ...ductNumerics,
   ],
   build(v) {
     const r = v.radius as number;
     const vessel = (v.vesselLengthToRadius as number) * r;
-    return ductBetweenVessels(v, { planar: false, size: r, length: (v.lengthToRadius as number) * r, vessel, vesselSize: vessel > 0 ? Math.max(1, v.vesselRadiusToRadius as number) * r : r, blocks: 'tube' });
+    return ductBetweenVessels(v, {
+      planar: false,
+      size: r,
+      length: (v.lengthToRadius as number) * r,
+      vessel,
+      vesselSize: vessel > 0 ? Math.max(1, v.vesselRadiusToRadius as number) * r : r,
+      blocks: 'tube',
+    });
   },
 };
 
@@ -215,16 +388,40 @@ const slit: Preset = {
   name: 'slit',
   description: 'thin plate with a slit of width H between two vessels (planar)',
   parameters: [
-    gasParameter, modelParameter, { ...knudsenParameter, default: 0.5, description: 'Knudsen number λ/H on the slit width, at the mean of the two vessel pressures' },
-    { name: 'gap', kind: 'length', unitShown: 'µm', default: 10e-6, min: 0, exclusiveMin: true, description: 'slit width H' },
-    pressureRatioParameter, lengthParameter('thicknessToGap', 'slit width', 0.1, 'plate thickness'),
+    gasParameter,
+    modelParameter,
+    {
+      ...knudsenParameter,
+      default: 0.5,
+      description: 'Knudsen number λ/H on the slit width, at the mean of the two vessel pressures',
+    },
+    {
+      name: 'gap',
+      kind: 'length',
+      unitShown: 'µm',
+      default: 10e-6,
+      min: 0,
+      exclusiveMin: true,
+      description: 'slit width H',
+    },
+    pressureRatioParameter,
+    lengthParameter('thicknessToGap', 'slit width', 0.1, 'plate thickness'),
     lengthParameter('vesselLengthToGap', 'slit width', 3, 'length of each vessel region'),
     lengthParameter('vesselHeightToGap', 'slit width', 4, 'height of the vessel regions'),
-    temperatureParameter, accommodationParameter, ...ductNumerics,
+    temperatureParameter,
+    accommodationParameter,
+    ...ductNumerics,
   ],
   build(v) {
     const h = v.gap as number;
-    return ductBetweenVessels(v, { planar: true, size: h, length: Math.max(1e-3, v.thicknessToGap as number) * h, vessel: Math.max(0.5, v.vesselLengthToGap as number) * h, vesselSize: Math.max(1.5, v.vesselHeightToGap as number) * h, blocks: 'slit' });
+    return ductBetweenVessels(v, {
+      planar: true,
+      size: h,
+      length: Math.max(1e-3, v.thicknessToGap as number) * h,
+      vessel: Math.max(0.5, v.vesselLengthToGap as number) * h,
+      vesselSize: Math.max(1.5, v.vesselHeightToGap as number) * h,
+      blocks: 'slit',
+    });
   },
 };
 
@@ -232,16 +429,40 @@ const orifice: Preset = {
   name: 'orifice',
   description: 'thin plate with a circular orifice of radius R between two vessels (axisymmetric)',
   parameters: [
-    gasParameter, modelParameter, { ...knudsenParameter, default: 0.5, description: 'Knudsen number λ/R on the orifice radius, at the mean of the two vessel pressures' },
-    { name: 'radius', kind: 'length', unitShown: 'mm', default: 0.5e-3, min: 0, exclusiveMin: true, description: 'orifice radius R' },
-    pressureRatioParameter, lengthParameter('thicknessToRadius', 'radius', 0.1, 'plate thickness'),
+    gasParameter,
+    modelParameter,
+    {
+      ...knudsenParameter,
+      default: 0.5,
+      description: 'Knudsen number λ/R on the orifice radius, at the mean of the two vessel pressures',
+    },
+    {
+      name: 'radius',
+      kind: 'length',
+      unitShown: 'mm',
+      default: 0.5e-3,
+      min: 0,
+      exclusiveMin: true,
+      description: 'orifice radius R',
+    },
+    pressureRatioParameter,
+    lengthParameter('thicknessToRadius', 'radius', 0.1, 'plate thickness'),
     lengthParameter('vesselLengthToRadius', 'radius', 3, 'length of each vessel region'),
     lengthParameter('vesselRadiusToRadius', 'radius', 4, 'radius of the vessel regions'),
-    temperatureParameter, accommodationParameter, ...ductNumerics,
+    temperatureParameter,
+    accommodationParameter,
+    ...ductNumerics,
   ],
   build(v) {
     const r = v.radius as number;
-    return ductBetweenVessels(v, { planar: false, size: r, length: Math.max(1e-3, v.thicknessToRadius as number) * r, vessel: Math.max(0.5, v.vesselLengthToRadius as number) * r, vesselSize: Math.max(1.5, v.vesselRadiusToRadius as number) * r, blocks: 'orifice' });
+    return ductBetweenVessels(v, {
+      planar: false,
+      size: r,
+      length: Math.max(1e-3, v.thicknessToRadius as number) * r,
+      vessel: Math.max(0.5, v.vesselLengthToRadius as number) * r,
+      vesselSize: Math.max(1.5, v.vesselRadiusToRadius as number) * r,
+      blocks: 'orifice',
+    });
   },
 };
 

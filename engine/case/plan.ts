@@ -5,7 +5,13 @@
  */
 import type { Case, SideName, BoundarySpec } from './schema';
 import { SIDE_NAMES, parseCase } from './schema';
-import { cellGeometryOf, gasVolumeOfBoxM3, boxVolumeM3, type BlockRectangle, type CellGeometry } from '../geometry/cellGeometry';
+import {
+  cellGeometryOf,
+  gasVolumeOfBoxM3,
+  boxVolumeM3,
+  type BlockRectangle,
+  type CellGeometry,
+} from '../geometry/cellGeometry';
 import { surfacesOf, type SurfacePlan } from '../geometry/surfaces';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import {
@@ -159,7 +165,8 @@ function boundaryStates(c: Case): { temperatureK: number; velocityMPerS: readonl
     const b = c.boundaries[side];
     if (b.type === 'wall' || b.type === 'reservoir') out.push(b);
   }
-  for (const k of c.blocks) for (const w of [k.wall, k.faces?.left, k.faces?.right, k.faces?.bottom, k.faces?.top]) if (w) out.push(w);
+  for (const k of c.blocks)
+    for (const w of [k.wall, k.faces?.left, k.faces?.right, k.faces?.bottom, k.faces?.top]) if (w) out.push(w);
   return out;
 }
 
@@ -252,7 +259,8 @@ export function plan(c: Case): PlanResult {
         `more than numerics.maxParticles (${c.numerics.maxParticles}); use fewer or larger cells, fewer particles per cell, or raise maxParticles if the machine has the memory`,
     );
   }
-  if (initialParticles < 2) errors.push('numerics.particlesPerCell: the domain must hold at least 2 simulated particles');
+  if (initialParticles < 2)
+    errors.push('numerics.particlesPerCell: the domain must hold at least 2 simulated particles');
 
   // Transient: ballistic crossings and viscous diffusion across the domain; ~7 e-folds of the slowest shear mode
   // (time constant L²ρ/(π²μ)) — common practice, no source. A user can set it, and the parallel-runs work detects it.
@@ -260,7 +268,11 @@ export function plan(c: Case): PlanResult {
   // A body force keeps accelerating molecules between collisions: the slowest part of the distribution (grazing
   // molecules) settles over a few collision times, which near free-molecular flow is far longer than the crossings.
   const forcedRelaxTime = c.bodyAccelerationXMPerS2 !== 0 ? 5 * ref.meanCollisionTimeS : 0;
-  const relaxTime = Math.max(10 * length / ref.mostProbableSpeedMPerS, (0.7 * length * length * ref.massDensityKgPerM3) / ref.viscosityPaS, forcedRelaxTime);
+  const relaxTime = Math.max(
+    (10 * length) / ref.mostProbableSpeedMPerS,
+    (0.7 * length * length * ref.massDensityKgPerM3) / ref.viscosityPaS,
+    forcedRelaxTime,
+  );
   const transientSteps = c.sampling.transientSteps ?? Math.ceil(relaxTime / timeStepS);
   const requestedSampleSteps = c.sampling.sampleSteps ?? Math.max(2000, 4 * transientSteps);
   // At least 10 steps per base batch: closing a batch touches every cell, and consecutive steps are strongly
@@ -279,16 +291,25 @@ export function plan(c: Case): PlanResult {
   const denseCellRatio = largestCell / denseRef.meanFreePathM;
   const denseStepRatio = timeStepS / denseRef.meanCollisionTimeS;
   if (Math.max(ratios.cellSizeOverMeanFreePath, denseCellRatio) > 1 / 3 + 1e-9)
-    warnings.push(`cell size is ${Math.max(ratios.cellSizeOverMeanFreePath, denseCellRatio).toFixed(2)} mean free paths${denseCellRatio > ratios.cellSizeOverMeanFreePath ? ' (at the densest reservoir)' : ''}; keep it below about 1/3 (set numerics.cellsX/cellsY higher)`);
+    warnings.push(
+      `cell size is ${Math.max(ratios.cellSizeOverMeanFreePath, denseCellRatio).toFixed(2)} mean free paths${denseCellRatio > ratios.cellSizeOverMeanFreePath ? ' (at the densest reservoir)' : ''}; keep it below about 1/3 (set numerics.cellsX/cellsY higher)`,
+    );
   if (Math.max(ratios.timeStepOverCollisionTime, denseStepRatio) > 0.25 + 1e-9)
-    warnings.push(`time step is ${Math.max(ratios.timeStepOverCollisionTime, denseStepRatio).toFixed(2)} mean collision times${denseStepRatio > ratios.timeStepOverCollisionTime ? ' (at the densest reservoir)' : ''}; keep it below about 1/4 (lower numerics.timeStepS)`);
+    warnings.push(
+      `time step is ${Math.max(ratios.timeStepOverCollisionTime, denseStepRatio).toFixed(2)} mean collision times${denseStepRatio > ratios.timeStepOverCollisionTime ? ' (at the densest reservoir)' : ''}; keep it below about 1/4 (lower numerics.timeStepS)`,
+    );
   if (ratios.timeStepOverCellTransitTime > 0.25 + 1e-9)
-    warnings.push(`time step is ${ratios.timeStepOverCellTransitTime.toFixed(2)} cell transit times; keep it below about 1/4 (lower numerics.timeStepS)`);
-  if (particlesPerCell < 20) warnings.push(`${particlesPerCell} particles per cell; at least about 20 are advised (numerics.particlesPerCell)`);
+    warnings.push(
+      `time step is ${ratios.timeStepOverCellTransitTime.toFixed(2)} cell transit times; keep it below about 1/4 (lower numerics.timeStepS)`,
+    );
+  if (particlesPerCell < 20)
+    warnings.push(`${particlesPerCell} particles per cell; at least about 20 are advised (numerics.particlesPerCell)`);
 
   const wallBinTotal = surfaces.reduce((s, f) => s + f.bins, 0);
   const memoryBytesEstimate =
-    initialParticles * 1.25 * BYTES_PER_PARTICLE + cells * RAW_CELL_SUMS * 8 * (FIELD_BATCH_CAPACITY + 3) + wallBinTotal * 5 * 8 * (FIELD_BATCH_CAPACITY + 3);
+    initialParticles * 1.25 * BYTES_PER_PARTICLE +
+    cells * RAW_CELL_SUMS * 8 * (FIELD_BATCH_CAPACITY + 3) +
+    wallBinTotal * 5 * 8 * (FIELD_BATCH_CAPACITY + 3);
 
   if (errors.length) return { ok: false, errors };
   return {
@@ -298,8 +319,17 @@ export function plan(c: Case): PlanResult {
       gas,
       reference: ref,
       grid: {
-        cellsX, cellsY, lengthXM: lx, lengthYM: ly, cellSizeXM: dx, cellSizeYM: dy, cellVolumeM3: cellGeometry.referenceVolumeM3,
-        subcellsPerCellSide: c.numerics.subcellsPerCellSide, axisymmetric, cells: cellGeometry, blocks,
+        cellsX,
+        cellsY,
+        lengthXM: lx,
+        lengthYM: ly,
+        cellSizeXM: dx,
+        cellSizeYM: dy,
+        cellVolumeM3: cellGeometry.referenceVolumeM3,
+        subcellsPerCellSide: c.numerics.subcellsPerCellSide,
+        axisymmetric,
+        cells: cellGeometry,
+        blocks,
       },
       boundaries: b,
       surfaces,

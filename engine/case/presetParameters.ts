@@ -38,31 +38,88 @@ export interface Preset {
 }
 
 export const gasParameter: PresetParameter = {
-  name: 'gas', kind: 'choice', unitShown: '', default: 'Ar', choices: SPECIES_IDS, description: 'table gas',
+  name: 'gas',
+  kind: 'choice',
+  unitShown: '',
+  default: 'Ar',
+  choices: SPECIES_IDS,
+  description: 'table gas',
 };
 export const modelParameter: PresetParameter = {
-  name: 'model', kind: 'choice', unitShown: '', default: 'VHS', choices: COLLISION_MODELS, description: 'collision model',
+  name: 'model',
+  kind: 'choice',
+  unitShown: '',
+  default: 'VHS',
+  choices: COLLISION_MODELS,
+  description: 'collision model',
 };
 export const knudsenParameter: PresetParameter = {
-  name: 'knudsen', kind: 'dimensionless', unitShown: '', default: 0.1, min: 0, exclusiveMin: true,
+  name: 'knudsen',
+  kind: 'dimensionless',
+  unitShown: '',
+  default: 0.1,
+  min: 0,
+  exclusiveMin: true,
   description: 'Knudsen number λ/H, λ = (μ/p)·sqrt(πkT/(2m)) the viscosity-based mean free path; sets the pressure',
 };
 export const gapParameter: PresetParameter = {
-  name: 'gap', kind: 'length', unitShown: 'mm', default: 1e-3, min: 0, exclusiveMin: true, description: 'distance H between the walls',
+  name: 'gap',
+  kind: 'length',
+  unitShown: 'mm',
+  default: 1e-3,
+  min: 0,
+  exclusiveMin: true,
+  description: 'distance H between the walls',
 };
 export const numericsParameters: readonly PresetParameter[] = [
-  { name: 'cellsY', kind: 'count', unitShown: '', default: null, min: 1, description: 'cells across the gap; default max(20, ceil(3/Kn))' },
-  { name: 'particlesPerCell', kind: 'count', unitShown: '', default: null, min: 1, description: 'simulated particles per cell at the start; default 100' },
-  { name: 'transientSteps', kind: 'count', unitShown: '', default: null, min: 0, description: 'steps before sampling starts; default chosen by the planner' },
-  { name: 'sampleSteps', kind: 'count', unitShown: '', default: null, min: 1, description: 'sampled steps; default about 8e8 particle-steps of sampling (8e8 / (cellsY × particlesPerCell)), between 20000 and 400000' },
+  {
+    name: 'cellsY',
+    kind: 'count',
+    unitShown: '',
+    default: null,
+    min: 1,
+    description: 'cells across the gap; default max(20, ceil(3/Kn))',
+  },
+  {
+    name: 'particlesPerCell',
+    kind: 'count',
+    unitShown: '',
+    default: null,
+    min: 1,
+    description: 'simulated particles per cell at the start; default 100',
+  },
+  {
+    name: 'transientSteps',
+    kind: 'count',
+    unitShown: '',
+    default: null,
+    min: 0,
+    description: 'steps before sampling starts; default chosen by the planner',
+  },
+  {
+    name: 'sampleSteps',
+    kind: 'count',
+    unitShown: '',
+    default: null,
+    min: 1,
+    description:
+      'sampled steps; default about 8e8 particle-steps of sampling (8e8 / (cellsY × particlesPerCell)), between 20000 and 400000',
+  },
   { name: 'seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
 ];
 
 /** p = μ(T)·sqrt(πkT/(2m)) / (Kn·H), Pa: the pressure at which λ (viscosity-based) equals Kn·H. */
-export function pressureForKnudsenPa(model: MolecularModel, temperatureK: number, knudsen: number, gapM: number): number {
-  return (viscosityPaS(model, temperatureK) * Math.sqrt((Math.PI * K_B * temperatureK) / (2 * model.massKg))) / (knudsen * gapM);
+export function pressureForKnudsenPa(
+  model: MolecularModel,
+  temperatureK: number,
+  knudsen: number,
+  gapM: number,
+): number {
+  return (
+    (viscosityPaS(model, temperatureK) * Math.sqrt((Math.PI * K_B * temperatureK) / (2 * model.massKg))) /
+    (knudsen * gapM)
+  );
 }
-
 
 // ─── Numerics defaults: the one place to tune accuracy against speed ────────────────────────────────────────────
 /**

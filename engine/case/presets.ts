@@ -15,10 +15,17 @@ import { modelFromSpecies, viscosityPaS, type CollisionModelKind, type Molecular
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { parseQuantity, formatQuantity, unitsOf, type QuantityKind } from '../units/engineeringUnits';
 
-
 import {
-  type Preset, type PresetParameter, type PresetValues, gasParameter, modelParameter, knudsenParameter, gapParameter,
-  numericsParameters, pressureForKnudsenPa, defaultGapNumerics,
+  type Preset,
+  type PresetParameter,
+  type PresetValues,
+  gasParameter,
+  modelParameter,
+  knudsenParameter,
+  gapParameter,
+  numericsParameters,
+  pressureForKnudsenPa,
+  defaultGapNumerics,
 } from './presetParameters';
 import { DUCT_PRESETS } from './ductPresets';
 import { cavity } from './cavityPreset';
@@ -51,7 +58,9 @@ function gapCase(s: GapSetup): CaseInput {
     temperatureK: w.temperatureK,
     velocityMPerS: [w.velocityXMPerS, 0, 0] as [number, number, number],
   });
-  const sampling: NonNullable<CaseInput['sampling']> = { sampleSteps: (v.sampleSteps as number | undefined) ?? auto.sampleSteps };
+  const sampling: NonNullable<CaseInput['sampling']> = {
+    sampleSteps: (v.sampleSteps as number | undefined) ?? auto.sampleSteps,
+  };
   if (v.transientSteps !== undefined) sampling.transientSteps = v.transientSteps as number;
   return {
     schemaVersion: CASE_SCHEMA_VERSION,
@@ -65,7 +74,11 @@ function gapCase(s: GapSetup): CaseInput {
     },
     domain: { lengthXM: gapM / cellsY, lengthYM: gapM, characteristicLengthM: gapM },
     boundaries: { left: { type: 'periodic' }, right: { type: 'periodic' }, bottom: wall(s.bottom), top: wall(s.top) },
-    numerics: { cellsX: 1, cellsY, particlesPerCell: (v.particlesPerCell as number | undefined) ?? auto.particlesPerCell },
+    numerics: {
+      cellsX: 1,
+      cellsY,
+      particlesPerCell: (v.particlesPerCell as number | undefined) ?? auto.particlesPerCell,
+    },
     sampling,
     seed: v.seed as number,
   };
@@ -79,8 +92,22 @@ const couette: Preset = {
     modelParameter,
     knudsenParameter,
     gapParameter,
-    { name: 'temperature', kind: 'temperature', unitShown: 'K', default: 273, min: 0, exclusiveMin: true, description: 'gas and wall temperature' },
-    { name: 'wallSpeed', kind: 'speed', unitShown: 'm/s', default: 100, description: 'relative speed U of the walls: bottom moves at −U/2, top at +U/2 along x' },
+    {
+      name: 'temperature',
+      kind: 'temperature',
+      unitShown: 'K',
+      default: 273,
+      min: 0,
+      exclusiveMin: true,
+      description: 'gas and wall temperature',
+    },
+    {
+      name: 'wallSpeed',
+      kind: 'speed',
+      unitShown: 'm/s',
+      default: 100,
+      description: 'relative speed U of the walls: bottom moves at −U/2, top at +U/2 along x',
+    },
     ...numericsParameters,
   ],
   build(v) {
@@ -105,8 +132,24 @@ const fourier: Preset = {
     modelParameter,
     { ...knudsenParameter, description: `${knudsenParameter.description}, at the mean wall temperature` },
     gapParameter,
-    { name: 'hotTemperature', kind: 'temperature', unitShown: 'K', default: 283, min: 0, exclusiveMin: true, description: 'top wall temperature' },
-    { name: 'coldTemperature', kind: 'temperature', unitShown: 'K', default: 263, min: 0, exclusiveMin: true, description: 'bottom wall temperature' },
+    {
+      name: 'hotTemperature',
+      kind: 'temperature',
+      unitShown: 'K',
+      default: 283,
+      min: 0,
+      exclusiveMin: true,
+      description: 'top wall temperature',
+    },
+    {
+      name: 'coldTemperature',
+      kind: 'temperature',
+      unitShown: 'K',
+      default: 263,
+      min: 0,
+      exclusiveMin: true,
+      description: 'bottom wall temperature',
+    },
     ...numericsParameters,
   ],
   build(v) {
@@ -125,7 +168,10 @@ const fourier: Preset = {
 };
 
 /** All presets by name. */
-export const PRESETS = Object.freeze({ couette, fourier, ...DUCT_PRESETS, cavity } as const satisfies Record<string, Preset>);
+export const PRESETS = Object.freeze({ couette, fourier, ...DUCT_PRESETS, cavity } as const satisfies Record<
+  string,
+  Preset
+>);
 export type PresetName = keyof typeof PRESETS;
 
 export function presetNames(): PresetName[] {
@@ -153,10 +199,13 @@ export function presetHelp(name: string): string {
   const preset = presetOrThrow(name);
   const rows = preset.parameters.map((p) => {
     const accepted =
-      p.kind === 'choice' ? `one of ${p.choices!.join(', ')}`
-      : p.kind === 'count' ? 'whole number'
-      : p.kind === 'dimensionless' ? 'number'
-      : `${p.kind}: ${unitsOf(p.kind).join(', ')}`;
+      p.kind === 'choice'
+        ? `one of ${p.choices!.join(', ')}`
+        : p.kind === 'count'
+          ? 'whole number'
+          : p.kind === 'dimensionless'
+            ? 'number'
+            : `${p.kind}: ${unitsOf(p.kind).join(', ')}`;
     return { head: `${p.name}=${formatDefault(p)}`, tail: `${p.description} [${accepted}]` };
   });
   const width = Math.max(...rows.map((r) => r.head.length));
@@ -171,8 +220,11 @@ export function presetHelp(name: string): string {
 function parseParameter(preset: Preset, p: PresetParameter, text: string): number | string {
   const where = `preset ${preset.name}, parameter ${p.name}`;
   if (p.kind === 'choice') {
-    const choice = p.choices!.find((c) => c === text.trim()) ?? p.choices!.find((c) => c.toLowerCase() === text.trim().toLowerCase());
-    if (choice === undefined) throw new Error(`${where}: "${text}" is not allowed; choose one of ${p.choices!.join(', ')}`);
+    const choice =
+      p.choices!.find((c) => c === text.trim()) ??
+      p.choices!.find((c) => c.toLowerCase() === text.trim().toLowerCase());
+    if (choice === undefined)
+      throw new Error(`${where}: "${text}" is not allowed; choose one of ${p.choices!.join(', ')}`);
     return choice;
   }
   let value: number;
@@ -199,7 +251,10 @@ export function buildPreset(name: string, overrides: Readonly<Record<string, str
   for (const p of preset.parameters) values[p.name] = p.default ?? undefined;
   for (const [key, text] of Object.entries(overrides)) {
     const p = preset.parameters.find((q) => q.name === key);
-    if (!p) throw new Error(`preset ${preset.name} has no parameter "${key}"; its parameters are ${preset.parameters.map((q) => q.name).join(', ')}`);
+    if (!p)
+      throw new Error(
+        `preset ${preset.name} has no parameter "${key}"; its parameters are ${preset.parameters.map((q) => q.name).join(', ')}`,
+      );
     values[key] = parseParameter(preset, p, text);
   }
   try {

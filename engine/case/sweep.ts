@@ -27,7 +27,9 @@ export const SWEEP_PARAMETERS = ['knudsen', 'pressure'] as const;
 export type SweepParameter = (typeof SWEEP_PARAMETERS)[number];
 
 /** How each parameter is read on the command line (unit kind for parseQuantity) and its SI unit in exports. */
-export const SWEEP_PARAMETER_UNITS: Readonly<Record<SweepParameter, { readonly kind: QuantityKind; readonly unit: string }>> = {
+export const SWEEP_PARAMETER_UNITS: Readonly<
+  Record<SweepParameter, { readonly kind: QuantityKind; readonly unit: string }>
+> = {
   knudsen: { kind: 'dimensionless', unit: '1' },
   pressure: { kind: 'pressure', unit: 'Pa' },
 };
@@ -156,15 +158,15 @@ export interface SweepRow {
  */
 export type SweepPointRun =
   | {
-    readonly kind: 'sampled';
-    readonly result: SimulationResult;
-    readonly comparison: ContinuumComparisonResult;
-    readonly performance: Performance;
-    /** The point's case name (caseAtSweepPoint names it after the point). */
-    readonly caseName: string;
-    /** Stopped by the user: the result holds what was sampled until then. */
-    readonly interrupted: boolean;
-  }
+      readonly kind: 'sampled';
+      readonly result: SimulationResult;
+      readonly comparison: ContinuumComparisonResult;
+      readonly performance: Performance;
+      /** The point's case name (caseAtSweepPoint names it after the point). */
+      readonly caseName: string;
+      /** Stopped by the user: the result holds what was sampled until then. */
+      readonly interrupted: boolean;
+    }
   | { readonly kind: 'nothingSampled' }
   | { readonly kind: 'failed' };
 
@@ -173,7 +175,9 @@ export type SweepPointRun =
  * the table holds exactly the numbers of the point's summary.json (JSON has no NaN: they are null there too).
  */
 export function sweepPointSummary(run: Extract<SweepPointRun, { kind: 'sampled' }>): SummaryJson {
-  return JSON.parse(summaryJsonText(run.result, { performance: run.performance, caseName: run.caseName, comparison: run.comparison })) as SummaryJson;
+  return JSON.parse(
+    summaryJsonText(run.result, { performance: run.performance, caseName: run.caseName, comparison: run.comparison }),
+  ) as SummaryJson;
 }
 
 /**
@@ -202,11 +206,13 @@ const REFERENCE_COLUMNS = [
 const WALL_COLUMNS = ['shearStress', 'heatFlux'] as const;
 
 const estimateOf = (x: unknown): { mean: JsonNumber; ci95: JsonNumber } | undefined =>
-  x !== null && typeof x === 'object' && 'mean' in x && 'ci95' in x ? (x as { mean: JsonNumber; ci95: JsonNumber }) : undefined;
+  x !== null && typeof x === 'object' && 'mean' in x && 'ci95' in x
+    ? (x as { mean: JsonNumber; ci95: JsonNumber })
+    : undefined;
 const num = (x: JsonNumber | undefined): number => (typeof x === 'number' ? x : NaN);
 /** summary.continuum: model → quantity key → predicted value (absent for cases no continuum model fits). */
 const continuumOf = (s: SummaryJson | null): Record<string, Record<string, unknown>> =>
-  ((s as { continuum?: Record<string, Record<string, unknown>> } | null)?.continuum ?? {});
+  (s as { continuum?: Record<string, Record<string, unknown>> } | null)?.continuum ?? {};
 
 /**
  * sweep.csv: one row per point — point, swept value, status, the point's reference Knudsen number, rarefaction δ and
@@ -221,16 +227,26 @@ export function sweepCsv(rows: readonly SweepRow[], o: SweepTableOptions): strin
   const pairs: { label: string; unit: string; key: string; pick: (s: SummaryJson) => unknown }[] = [];
   if (o.hasFlow) {
     const units = flowQuantityUnits(o.planar);
-    for (const q of FLOW_QUANTITIES) pairs.push({ label: q, unit: units[q], key: `flow.${q}`, pick: (s) => s.flow?.[q] });
+    for (const q of FLOW_QUANTITIES)
+      pairs.push({ label: q, unit: units[q], key: `flow.${q}`, pick: (s) => s.flow?.[q] });
   } else {
     const walls: string[] = [];
     for (const r of rows) for (const w of Object.keys(r.summary?.walls ?? {})) if (!walls.includes(w)) walls.push(w);
-    for (const w of walls) for (const q of WALL_COLUMNS) pairs.push({ label: `${w} ${q}`, unit: WALL_QUANTITY_UNITS[q], key: `walls.${w}.${q}`, pick: (s) => s.walls[w]?.[q] });
+    for (const w of walls)
+      for (const q of WALL_COLUMNS)
+        pairs.push({
+          label: `${w} ${q}`,
+          unit: WALL_QUANTITY_UNITS[q],
+          key: `walls.${w}.${q}`,
+          pick: (s) => s.walls[w]?.[q],
+        });
   }
   // Continuum and free-molecular predictions next to the DSMC numbers (summary.continuum), for every model any point has.
   const models: string[] = [];
   for (const r of rows) for (const m of Object.keys(continuumOf(r.summary))) if (!models.includes(m)) models.push(m);
-  const predicted = pairs.filter((p) => rows.some((r) => models.some((m) => typeof continuumOf(r.summary)[m]?.[p.key] === 'number')));
+  const predicted = pairs.filter((p) =>
+    rows.some((r) => models.some((m) => typeof continuumOf(r.summary)[m]?.[p.key] === 'number')),
+  );
   for (const p of pairs) header.push(`${p.label} [${p.unit}]`, `${p.label} ci95 [${p.unit}]`);
   for (const p of predicted) for (const m of models) header.push(`${p.label} ${m} [${p.unit}]`);
   const body = rows.map((r) => {
@@ -241,10 +257,11 @@ export function sweepCsv(rows: readonly SweepRow[], o: SweepTableOptions): strin
       const e = s ? estimateOf(p.pick(s)) : undefined;
       cells.push(num(e?.mean), num(e?.ci95));
     }
-    for (const p of predicted) for (const m of models) {
-      const v = continuumOf(s)[m]?.[p.key];
-      cells.push(typeof v === 'number' ? v : NaN);
-    }
+    for (const p of predicted)
+      for (const m of models) {
+        const v = continuumOf(s)[m]?.[p.key];
+        cells.push(typeof v === 'number' ? v : NaN);
+      }
     return cells;
   });
   return csvDocument(header, body);
@@ -256,7 +273,15 @@ export const SWEEP_FORMAT_VERSION = 1;
 /** sweep.json: what was asked for, whether it was interrupted, and every point's summary.json in one array. */
 export function sweepJson(
   rows: readonly SweepRow[],
-  o: { caseName: string; parameter: SweepParameter; from: number; to: number; points: number; spacing: SweepSpacing; interrupted: boolean },
+  o: {
+    caseName: string;
+    parameter: SweepParameter;
+    from: number;
+    to: number;
+    points: number;
+    spacing: SweepSpacing;
+    interrupted: boolean;
+  },
 ) {
   return {
     format: SWEEP_FORMAT,
@@ -269,7 +294,13 @@ export function sweepJson(
     pointsRequested: o.points,
     spacing: o.spacing,
     interrupted: o.interrupted,
-    points: rows.map((r) => ({ point: r.point, value: r.value, status: r.status, folder: r.summary ? sweepPointFolder(r.point) : null, summary: r.summary })),
+    points: rows.map((r) => ({
+      point: r.point,
+      value: r.value,
+      status: r.status,
+      folder: r.summary ? sweepPointFolder(r.point) : null,
+      summary: r.summary,
+    })),
   };
 }
 
@@ -294,7 +325,10 @@ export interface SweepContinuumCurves {
  * give it few values. Returns the reason when no continuum model fits the case.
  */
 export function sweepContinuumCurves(
-  c: Case, parameter: SweepParameter, values: readonly number[], cells: { readonly cellsX: number; readonly cellsY: number },
+  c: Case,
+  parameter: SweepParameter,
+  values: readonly number[],
+  cells: { readonly cellsX: number; readonly cellsY: number },
 ): SweepContinuumCurves | { readonly reason: string } {
   const onGrid: Case = { ...c, numerics: { ...c.numerics, cellsX: cells.cellsX, cellsY: cells.cellsY } };
   const curves: Record<string, Partial<Record<ContinuumModelName, number[]>>> = {};
@@ -313,7 +347,8 @@ export function sweepContinuumCurves(
     for (const q of models.quantities) {
       units[q.key] = q.unit;
       const byModel = (curves[q.key] ??= {});
-      for (const [model, v] of Object.entries(q.values) as [ContinuumModelName, number][]) (byModel[model] ??= values.map(() => NaN))[k] = v;
+      for (const [model, v] of Object.entries(q.values) as [ContinuumModelName, number][])
+        (byModel[model] ??= values.map(() => NaN))[k] = v;
     }
   });
   return problem ? { problem, values: [...values], curves, units } : { reason };

@@ -35,7 +35,14 @@ import { couettePredictions, fourierPredictions, type SlipChoice } from './caseM
 import { forceDrivenChannelPredictions, forceDrivenTubePredictions } from './caseModelsForceDriven';
 import { pressureDrivenPredictions } from './caseModelsDuct';
 import { cavityPredictions } from './caseModelsCavity';
-import type { CaseModels, CaseModelsResult, CaseProblem, ContinuumModelName, PredictedProfile, PredictedQuantity } from './caseModelTypes';
+import type {
+  CaseModels,
+  CaseModelsResult,
+  CaseProblem,
+  ContinuumModelName,
+  PredictedProfile,
+  PredictedQuantity,
+} from './caseModelTypes';
 
 export interface CaseModelOptions {
   /**
@@ -69,7 +76,8 @@ function commonAccommodation(walls: readonly [WallSpec, string][]): number | str
   for (const [w, where] of walls) {
     const s = accommodationOf(w, where);
     if (typeof s === 'string') return s;
-    if (sigma !== undefined && Math.abs(s - sigma) > 1e-12) return `the walls have different accommodation coefficients (${sigma} and ${s}); the slip models assume one`;
+    if (sigma !== undefined && Math.abs(s - sigma) > 1e-12)
+      return `the walls have different accommodation coefficients (${sigma} and ${s}); the slip models assume one`;
     sigma = s;
   }
   return sigma ?? 1;
@@ -77,7 +85,8 @@ function commonAccommodation(walls: readonly [WallSpec, string][]): number | str
 
 const isWall = (b: BoundarySpec): b is WallSpec => b.type === 'wall';
 const atRest = (w: WallSpec) => w.velocityMPerS.every((v) => v === 0);
-const sameTemperature = (a: WallSpec, b: WallSpec) => Math.abs(a.temperatureK - b.temperatureK) <= 1e-9 * a.temperatureK;
+const sameTemperature = (a: WallSpec, b: WallSpec) =>
+  Math.abs(a.temperatureK - b.temperatureK) <= 1e-9 * a.temperatureK;
 
 function describeSecondOrder(set: SecondOrderSlipCoefficients): string {
   return `second-order slip, ${set.id} coefficients C1 = ${set.c1}, C2 = ${set.c2} in the ${set.meanFreePath} mean free path (${set.source}), with the Smoluchowski jump`;
@@ -90,7 +99,12 @@ interface Context {
   readonly slip: SlipChoice;
   /** Descriptions of the models; a recogniser may reword them for its problem before building the result. */
   readonly models: Partial<Record<ContinuumModelName, string>>;
-  readonly result: (problem: CaseProblem, description: string, p: { quantities: PredictedQuantity[]; profiles: PredictedProfile[] }, present: ContinuumModelName[]) => CaseModels;
+  readonly result: (
+    problem: CaseProblem,
+    description: string,
+    p: { quantities: PredictedQuantity[]; profiles: PredictedProfile[] },
+    present: ContinuumModelName[],
+  ) => CaseModels;
 }
 
 /** Long pressure-driven channel or tube between vessels (flowReport with lengthM). */
@@ -100,7 +114,8 @@ function ductCase(x: Context, report: FlowReportSpec & { lengthM: number }): Cas
   const walls: [WallSpec, string][] = [];
   for (const k of c.blocks) {
     walls.push([k.wall, `block ${k.name}`]);
-    for (const f of ['left', 'right', 'bottom', 'top'] as const) if (k.faces?.[f]) walls.push([k.faces[f]!, `block ${k.name}.${f}`]);
+    for (const f of ['left', 'right', 'bottom', 'top'] as const)
+      if (k.faces?.[f]) walls.push([k.faces[f]!, `block ${k.name}.${f}`]);
   }
   for (const side of ['bottom', 'top'] as const) {
     const w = plan.boundaries[side];
@@ -109,39 +124,79 @@ function ductCase(x: Context, report: FlowReportSpec & { lengthM: number }): Cas
   const sigma = commonAccommodation(walls);
   if (typeof sigma === 'string') return unrecognised(sigma);
   const { up, down, temperatureK } = flowReferenceOf(plan);
-  if (!(up > down && down > 0)) return unrecognised(`pressure-driven ${report.duct}: the long-duct models need an upstream pressure above a downstream pressure above 0 (have ${up} Pa and ${down} Pa)`);
-  const state = { viscosityPaS: viscosityPaS(plan.gas.model, temperatureK), massKg: plan.gas.model.massKg, temperatureK, upstreamPressurePa: up, downstreamPressurePa: down };
+  if (!(up > down && down > 0))
+    return unrecognised(
+      `pressure-driven ${report.duct}: the long-duct models need an upstream pressure above a downstream pressure above 0 (have ${up} Pa and ${down} Pa)`,
+    );
+  const state = {
+    viscosityPaS: viscosityPaS(plan.gas.model, temperatureK),
+    massKg: plan.gas.model.massKg,
+    temperatureK,
+    upstreamPressurePa: up,
+    downstreamPressurePa: down,
+  };
   const quantities = pressureDrivenPredictions(plan, report, state, sigma, x.slip);
   const tube = report.duct === 'tube';
-  return x.result(tube ? 'pressureDrivenTube' : 'pressureDrivenChannel',
+  return x.result(
+    tube ? 'pressureDrivenTube' : 'pressureDrivenChannel',
     `long pressure-driven ${report.duct} (isothermal, locally fully developed; entrance effects of a short duct are not modelled), p_in/p_out = ${(up / down).toPrecision(4)}`,
-    { quantities, profiles: [] }, tube ? ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular'] : ['noSlip', 'firstOrder', 'secondOrder', 'unified']);
+    { quantities, profiles: [] },
+    tube
+      ? ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular']
+      : ['noSlip', 'firstOrder', 'secondOrder', 'unified'],
+  );
 }
 
 /** Planar and periodic in x: force-driven channel, Couette or Fourier between the bottom and top walls. */
 function gapCase(x: Context): CaseModelsResult {
   const { plan, gas, slip } = x;
   const { bottom, top } = plan.boundaries;
-  if (!isWall(bottom) || !isWall(top)) return unrecognised('periodic in x, but the bottom and top sides are not both walls: no gap problem to compare');
-  if (bottom.velocityMPerS.some((v, i) => i > 0 && v !== 0) || top.velocityMPerS.some((v, i) => i > 0 && v !== 0)) return unrecognised('a wall moves along z: the gap models are for motion along x');
-  const sigma = commonAccommodation([[bottom, 'bottom'], [top, 'top']]);
+  if (!isWall(bottom) || !isWall(top))
+    return unrecognised('periodic in x, but the bottom and top sides are not both walls: no gap problem to compare');
+  if (bottom.velocityMPerS.some((v, i) => i > 0 && v !== 0) || top.velocityMPerS.some((v, i) => i > 0 && v !== 0))
+    return unrecognised('a wall moves along z: the gap models are for motion along x');
+  const sigma = commonAccommodation([
+    [bottom, 'bottom'],
+    [top, 'top'],
+  ]);
   if (typeof sigma === 'string') return unrecognised(sigma);
   const same = sameTemperature(bottom, top);
   if (plan.bodyAccelerationXMPerS2 !== 0) {
-    if (!(atRest(bottom) && atRest(top) && same)) return unrecognised('a body-force-driven channel is compared only with both walls at rest at one temperature');
-    return x.result('forceDrivenChannel', 'force-driven Poiseuille flow in a planar channel (linearized, fully developed)', forceDrivenChannelPredictions(plan, gas, bottom.temperatureK, sigma, slip), ['noSlip', 'firstOrder', 'secondOrder', 'unified']);
+    if (!(atRest(bottom) && atRest(top) && same))
+      return unrecognised('a body-force-driven channel is compared only with both walls at rest at one temperature');
+    return x.result(
+      'forceDrivenChannel',
+      'force-driven Poiseuille flow in a planar channel (linearized, fully developed)',
+      forceDrivenChannelPredictions(plan, gas, bottom.temperatureK, sigma, slip),
+      ['noSlip', 'firstOrder', 'secondOrder', 'unified'],
+    );
   }
   const du = top.velocityMPerS[0] - bottom.velocityMPerS[0];
   if (du !== 0 && same) {
-    return x.result('couette', 'planar Couette flow (linearized: constant μ and κ; viscous heating to first order)', couettePredictions(plan, gas, bottom, top, sigma, slip), ['noSlip', 'firstOrder', 'secondOrder', 'freeMolecular']);
+    return x.result(
+      'couette',
+      'planar Couette flow (linearized: constant μ and κ; viscous heating to first order)',
+      couettePredictions(plan, gas, bottom, top, sigma, slip),
+      ['noSlip', 'firstOrder', 'secondOrder', 'freeMolecular'],
+    );
   }
   if (du === 0 && atRest(bottom) && atRest(top) && !same) {
     x.models.noSlip = 'Fourier conduction with no temperature jump';
     x.models.firstOrder = 'Fourier conduction with the Smoluchowski temperature jump (Smoluchowski 1898)';
-    return x.result('fourier', 'planar Fourier heat conduction (linearized: constant κ)', fourierPredictions(plan, gas, bottom, top, sigma), ['noSlip', 'firstOrder', 'freeMolecular']);
+    return x.result(
+      'fourier',
+      'planar Fourier heat conduction (linearized: constant κ)',
+      fourierPredictions(plan, gas, bottom, top, sigma),
+      ['noSlip', 'firstOrder', 'freeMolecular'],
+    );
   }
-  if (du === 0 && same) return unrecognised('both walls move together at one temperature: the gas is in equilibrium, there is nothing to compare');
-  return unrecognised('the walls both move and have different temperatures: the gap models treat shear and heat conduction one at a time');
+  if (du === 0 && same)
+    return unrecognised(
+      'both walls move together at one temperature: the gas is in equilibrium, there is nothing to compare',
+    );
+  return unrecognised(
+    'the walls both move and have different temperatures: the gap models treat shear and heat conduction one at a time',
+  );
 }
 
 /** Walls on all four sides: the lid-driven square cavity, lid the top side moving along x. */
@@ -149,22 +204,44 @@ function cavityCase(x: Context, left: WallSpec, right: WallSpec, bottom: WallSpe
   const { plan } = x;
   const square = Math.abs(plan.grid.lengthXM - plan.grid.lengthYM) <= 1e-9 * plan.grid.lengthYM;
   const lid = top.velocityMPerS[0];
-  const lidOnly = atRest(left) && atRest(right) && atRest(bottom) && lid !== 0 && top.velocityMPerS[1] === 0 && top.velocityMPerS[2] === 0;
+  const lidOnly =
+    atRest(left) &&
+    atRest(right) &&
+    atRest(bottom) &&
+    lid !== 0 &&
+    top.velocityMPerS[1] === 0 &&
+    top.velocityMPerS[2] === 0;
   const oneTemperature = [left, right, bottom].every((w) => sameTemperature(w, top));
-  if (!(square && lidOnly && oneTemperature)) return unrecognised('walls on all four sides, but not a lid-driven square cavity (square domain, only the top wall moving along x, one wall temperature)');
-  const sigma = commonAccommodation([[left, 'left'], [right, 'right'], [bottom, 'bottom'], [top, 'top']]);
+  if (!(square && lidOnly && oneTemperature))
+    return unrecognised(
+      'walls on all four sides, but not a lid-driven square cavity (square domain, only the top wall moving along x, one wall temperature)',
+    );
+  const sigma = commonAccommodation([
+    [left, 'left'],
+    [right, 'right'],
+    [bottom, 'bottom'],
+    [top, 'top'],
+  ]);
   if (typeof sigma === 'string') return unrecognised(sigma);
   const first = x.slip.firstOrder;
   const perLambda = first.value * pathPerViscosityPath(first.meanFreePath);
   const p = cavityPredictions(plan, lid, sigma, perLambda);
   x.models.noSlip = `incompressible Navier–Stokes (stream function–vorticity, cavity/solveCavity.ts) at Re = ρUL/μ = ${p.reynolds.toPrecision(4)}, no slip`;
   x.models.firstOrder = `the same with first-order slip on all walls (slip length ((2 − σ)/σ)·${perLambda.toPrecision(5)}·Kn sides, Kn = ${plan.reference.knudsen.toPrecision(4)})${p.notes.length ? `; ${p.notes.join('; ')}` : ''}`;
-  return x.result('cavity', `lid-driven square cavity (incompressible, Re = ${p.reynolds.toPrecision(4)}; centreline profiles)`, { quantities: [], profiles: p.profiles }, ['noSlip', 'firstOrder']);
+  return x.result(
+    'cavity',
+    `lid-driven square cavity (incompressible, Re = ${p.reynolds.toPrecision(4)}; centreline profiles)`,
+    { quantities: [], profiles: p.profiles },
+    ['noSlip', 'firstOrder'],
+  );
 }
 
 /** What the continuum models predict for a planned case, or why none applies (see the file header). */
 export function caseModelsOf(plan: Plan, options: CaseModelOptions = {}): CaseModelsResult {
-  const slip: SlipChoice = { firstOrder: options.firstOrder ?? KINETIC_BGK_SLIP, secondOrder: options.secondOrder ?? HADJICONSTANTINOU_SECOND_ORDER };
+  const slip: SlipChoice = {
+    firstOrder: options.firstOrder ?? KINETIC_BGK_SLIP,
+    secondOrder: options.secondOrder ?? HADJICONSTANTINOU_SECOND_ORDER,
+  };
   const first = slip.firstOrder;
   const c = plan.caseData;
   const ref = plan.reference;
@@ -186,25 +263,46 @@ export function caseModelsOf(plan: Plan, options: CaseModelOptions = {}): CaseMo
       description,
       meanFreePath: { kind: 'viscosity', valueM: meanFreePathOfKind('viscosity', ref.meanFreePathM) },
       knudsen: ref.knudsen,
-      models: Object.fromEntries(present.map((m) => [m, models[m] ?? m])) as Partial<Record<ContinuumModelName, string>>,
+      models: Object.fromEntries(present.map((m) => [m, models[m] ?? m])) as Partial<
+        Record<ContinuumModelName, string>
+      >,
       quantities: p.quantities,
       profiles: p.profiles,
     }),
   };
   const report = c.flowReport;
-  if (report && (report.duct === 'channel' || report.duct === 'tube') && report.lengthM !== undefined && c.bodyAccelerationXMPerS2 === 0) {
+  if (
+    report &&
+    (report.duct === 'channel' || report.duct === 'tube') &&
+    report.lengthM !== undefined &&
+    c.bodyAccelerationXMPerS2 === 0
+  ) {
     return ductCase(x, { ...report, lengthM: report.lengthM });
   }
-  if (c.blocks.length > 0) return unrecognised('the case has solid blocks and is not a long duct with flowReport.lengthM: no analytic continuum solution applies');
+  if (c.blocks.length > 0)
+    return unrecognised(
+      'the case has solid blocks and is not a long duct with flowReport.lengthM: no analytic continuum solution applies',
+    );
   const { left, right, bottom, top } = plan.boundaries;
   const periodicX = left.type === 'periodic' && right.type === 'periodic';
   if (plan.grid.axisymmetric) {
-    if (!(periodicX && c.bodyAccelerationXMPerS2 !== 0 && isWall(top) && atRest(top))) return unrecognised('axisymmetric cases are compared only as a force-driven tube: periodic in x, body acceleration ≠ 0, the top side a wall at rest');
+    if (!(periodicX && c.bodyAccelerationXMPerS2 !== 0 && isWall(top) && atRest(top)))
+      return unrecognised(
+        'axisymmetric cases are compared only as a force-driven tube: periodic in x, body acceleration ≠ 0, the top side a wall at rest',
+      );
     const sigma = commonAccommodation([[top, 'top']]);
     if (typeof sigma === 'string') return unrecognised(sigma);
-    return x.result('forceDrivenTube', 'force-driven Poiseuille flow in a round tube (linearized, fully developed)', forceDrivenTubePredictions(plan, x.gas, top.temperatureK, sigma, slip), ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular']);
+    return x.result(
+      'forceDrivenTube',
+      'force-driven Poiseuille flow in a round tube (linearized, fully developed)',
+      forceDrivenTubePredictions(plan, x.gas, top.temperatureK, sigma, slip),
+      ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular'],
+    );
   }
   if (periodicX) return gapCase(x);
-  if (isWall(left) && isWall(right) && isWall(bottom) && isWall(top) && c.bodyAccelerationXMPerS2 === 0) return cavityCase(x, left, right, bottom, top);
-  return unrecognised('not one of the analytic problems (Couette, Fourier, force-driven channel or tube, long pressure-driven channel or tube, lid-driven cavity)');
+  if (isWall(left) && isWall(right) && isWall(bottom) && isWall(top) && c.bodyAccelerationXMPerS2 === 0)
+    return cavityCase(x, left, right, bottom, top);
+  return unrecognised(
+    'not one of the analytic problems (Couette, Fourier, force-driven channel or tube, long pressure-driven channel or tube, lid-driven cavity)',
+  );
 }

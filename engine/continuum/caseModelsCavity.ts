@@ -34,7 +34,12 @@ export interface CavityPredictions {
  * Centreline predictions for a square cavity of side L with the lid (top side) moving along x at lidSpeed (m/s);
  * σ the accommodation of all walls, slipPerViscosityPath the first-order slip coefficient in viscosity λ.
  */
-export function cavityPredictions(plan: Plan, lidSpeedMPerS: number, sigma: number, slipPerViscosityPath: number): CavityPredictions {
+export function cavityPredictions(
+  plan: Plan,
+  lidSpeedMPerS: number,
+  sigma: number,
+  slipPerViscosityPath: number,
+): CavityPredictions {
   const ref = plan.reference;
   const side = plan.grid.lengthXM;
   const u = Math.abs(lidSpeedMPerS);
@@ -55,7 +60,9 @@ export function cavityPredictions(plan: Plan, lidSpeedMPerS: number, sigma: numb
   const sign = Math.sign(lidSpeedMPerS);
   for (const [name, s] of solutions) {
     if (!s.converged) {
-      notes.push(`${name}: the cavity solution did not converge (residual ${s.residual.toExponential(1)} after ${s.iterations} steps); left out`);
+      notes.push(
+        `${name}: the cavity solution did not converge (residual ${s.residual.toExponential(1)} after ${s.iterations} steps); left out`,
+      );
       continue;
     }
     const c = s.centerline;
@@ -67,8 +74,24 @@ export function cavityPredictions(plan: Plan, lidSpeedMPerS: number, sigma: numb
     reynolds,
     notes,
     profiles: [
-      { key: 'centerline.x.velocityX', field: 'velocityX', unit: 'm/s', line: { kind: 'column', atM: side / 2 }, positionsM: ys, values: uLine, scale },
-      { key: 'centerline.y.velocityY', field: 'velocityY', unit: 'm/s', line: { kind: 'row', atM: plan.grid.lengthYM / 2 }, positionsM: xs, values: vLine, scale },
+      {
+        key: 'centerline.x.velocityX',
+        field: 'velocityX',
+        unit: 'm/s',
+        line: { kind: 'column', atM: side / 2 },
+        positionsM: ys,
+        values: uLine,
+        scale,
+      },
+      {
+        key: 'centerline.y.velocityY',
+        field: 'velocityY',
+        unit: 'm/s',
+        line: { kind: 'row', atM: plan.grid.lengthYM / 2 },
+        positionsM: xs,
+        values: vLine,
+        scale,
+      },
     ],
   };
 }

@@ -42,15 +42,20 @@ function simpson(f: (x: number) => number, a: number, b: number): number {
 
 /** Mass flow rate and G_P of a long channel or tube (flowReport's duct, size and length) for each model. */
 export function pressureDrivenPredictions(
-  plan: Plan, report: FlowReportSpec & { lengthM: number }, state: DuctState, sigma: number, slipChoice: SlipChoice,
+  plan: Plan,
+  report: FlowReportSpec & { lengthM: number },
+  state: DuctState,
+  sigma: number,
+  slipChoice: SlipChoice,
 ): PredictedQuantity[] {
   const planar = !plan.grid.axisymmetric;
   const units = flowQuantityUnits(planar);
   const size = report.sizeM;
   const length = report.lengthM;
-  const geometry: DuctGeometry = report.duct === 'channel'
-    ? { kind: 'channel', heightM: size, widthM: 1, lengthM: length }
-    : { kind: 'tube', radiusM: size, lengthM: length };
+  const geometry: DuctGeometry =
+    report.duct === 'channel'
+      ? { kind: 'channel', heightM: size, widthM: 1, lengthM: length }
+      : { kind: 'tube', radiusM: size, lengthM: length };
   const { upstreamPressurePa: pin, downstreamPressurePa: pout } = state;
   const v0 = mostProbableSpeedMPerS(state.massKg, state.temperatureK);
   const scale = report.duct === 'channel' ? size * size : Math.PI * size ** 3;
@@ -69,12 +74,26 @@ export function pressureDrivenPredictions(
   ];
   const gas = { viscosityPaS: state.viscosityPaS, massKg: state.massKg, temperatureK: state.temperatureK };
   for (const [name, slip] of slips) {
-    set(name, pressureDrivenDuctFlow({ gas, geometry, inletPressurePa: pin, outletPressurePa: pout, slip, accommodation: sigma }).massFlowRateKgPerS);
+    set(
+      name,
+      pressureDrivenDuctFlow({
+        gas,
+        geometry,
+        inletPressurePa: pin,
+        outletPressurePa: pout,
+        slip,
+        accommodation: sigma,
+      }).massFlowRateKgPerS,
+    );
   }
   // δ(p) = p·size/(μ v0): ℓ = μ v0/p.
   const deltaOf = (p: number) => (p * size) / (state.viscosityPaS * v0);
   const kind = report.duct === 'channel' ? 'channel' : 'tube';
   set('unified', ((scale / v0) * simpson((p) => unifiedReducedFlowRate(kind, deltaOf(p), sigma), pout, pin)) / length);
-  if (kind === 'tube') set('freeMolecular', ((scale / v0) * ((pin - pout) / length)) * tubeReducedFlowRate(1, { kind: 'freeMolecular' }, sigma));
+  if (kind === 'tube')
+    set(
+      'freeMolecular',
+      (scale / v0) * ((pin - pout) / length) * tubeReducedFlowRate(1, { kind: 'freeMolecular' }, sigma),
+    );
   return [mdot, gp];
 }

@@ -25,7 +25,11 @@ import { jumpDistanceFor, rowPositionsM, velocityModels, type GapPredictions, ty
 
 /** Force-driven planar channel between the bottom and top walls (temperature T_w, accommodation σ). */
 export function forceDrivenChannelPredictions(
-  plan: Plan, gas: GasState, wallTemperatureK: number, sigma: number, slipChoice: SlipChoice,
+  plan: Plan,
+  gas: GasState,
+  wallTemperatureK: number,
+  sigma: number,
+  slipChoice: SlipChoice,
 ): GapPredictions {
   const h = plan.grid.lengthYM;
   const a = plan.bodyAccelerationXMPerS2;
@@ -33,8 +37,12 @@ export function forceDrivenChannelPredictions(
   const y = rowPositionsM(plan);
   const q = (key: string, unit: string): PredictedQuantity => ({ key, unit, values: {} });
   const [mdot, gp, shearBottom, shearTop, heatBottom, heatTop] = [
-    q('flow.massFlowRate', 'kg/(s m)'), q('flow.reducedFlowRate', '1'), q('walls.bottom.shearStress', 'Pa'),
-    q('walls.top.shearStress', 'Pa'), q('walls.bottom.heatFlux', 'W/m^2'), q('walls.top.heatFlux', 'W/m^2'),
+    q('flow.massFlowRate', 'kg/(s m)'),
+    q('flow.reducedFlowRate', '1'),
+    q('walls.bottom.shearStress', 'Pa'),
+    q('walls.top.shearStress', 'Pa'),
+    q('walls.bottom.heatFlux', 'W/m^2'),
+    q('walls.top.heatFlux', 'W/m^2'),
   ];
   const velocity: PredictedProfile['values'] = {};
   const temperature: PredictedProfile['values'] = {};
@@ -55,7 +63,12 @@ export function forceDrivenChannelPredictions(
     const atWall = wallTemperatureK + jumpDistanceFor(name, gas, sigma) * 4 * heating * (h / 2) ** 3;
     temperature[name] = y.map((yy) => atWall + heating * ((h / 2) ** 4 - (yy - h / 2) ** 4));
   }
-  const u = unifiedFlow({ gas, geometry: { kind: 'channel', heightM: h }, pressureGradientPaPerM: rho * a, accommodation: sigma });
+  const u = unifiedFlow({
+    gas,
+    geometry: { kind: 'channel', heightM: h },
+    pressureGradientPaPerM: rho * a,
+    accommodation: sigma,
+  });
   if (u.kind === 'channel') {
     mdot.values.unified = u.massFlowRateKgPerSM;
     gp.values.unified = u.reducedFlowRate;
@@ -65,22 +78,51 @@ export function forceDrivenChannelPredictions(
   return {
     quantities: [mdot, gp, shearBottom, shearTop, heatBottom, heatTop],
     profiles: [
-      { key: 'profile.velocityX', field: 'velocityX', unit: 'm/s', line: { kind: 'rows' }, positionsM: y, values: velocity, scale: { kind: 'dsmcRange', base: 0, what: 'largest DSMC speed (centre of the channel)' } },
-      { key: 'profile.temperature', field: 'temperature', unit: 'K', line: { kind: 'rows' }, positionsM: y, values: temperature, scale: { kind: 'dsmcRange', base: wallTemperatureK, what: 'largest DSMC |T − T_wall| (the viscous heating and jump)' } },
+      {
+        key: 'profile.velocityX',
+        field: 'velocityX',
+        unit: 'm/s',
+        line: { kind: 'rows' },
+        positionsM: y,
+        values: velocity,
+        scale: { kind: 'dsmcRange', base: 0, what: 'largest DSMC speed (centre of the channel)' },
+      },
+      {
+        key: 'profile.temperature',
+        field: 'temperature',
+        unit: 'K',
+        line: { kind: 'rows' },
+        positionsM: y,
+        values: temperature,
+        scale: {
+          kind: 'dsmcRange',
+          base: wallTemperatureK,
+          what: 'largest DSMC |T − T_wall| (the viscous heating and jump)',
+        },
+      },
     ],
   };
 }
 
 /** Force-driven tube, wall the top side of an axisymmetric domain (temperature T_w, accommodation σ). */
 export function forceDrivenTubePredictions(
-  plan: Plan, gas: GasState, wallTemperatureK: number, sigma: number, slipChoice: SlipChoice,
+  plan: Plan,
+  gas: GasState,
+  wallTemperatureK: number,
+  sigma: number,
+  slipChoice: SlipChoice,
 ): GapPredictions {
   const r = plan.grid.lengthYM;
   const a = plan.bodyAccelerationXMPerS2;
   const rho = densityKgPerM3(gas);
   const radial = rowPositionsM(plan);
   const q = (key: string, unit: string): PredictedQuantity => ({ key, unit, values: {} });
-  const [mdot, gp, shear, heat] = [q('flow.massFlowRate', 'kg/s'), q('flow.reducedFlowRate', '1'), q('walls.top.shearStress', 'Pa'), q('walls.top.heatFlux', 'W/m^2')];
+  const [mdot, gp, shear, heat] = [
+    q('flow.massFlowRate', 'kg/s'),
+    q('flow.reducedFlowRate', '1'),
+    q('walls.top.shearStress', 'Pa'),
+    q('walls.top.heatFlux', 'W/m^2'),
+  ];
   const velocity: PredictedProfile['values'] = {};
   const temperature: PredictedProfile['values'] = {};
   const g = (rho * a) / gas.viscosityPaS;
@@ -98,7 +140,12 @@ export function forceDrivenTubePredictions(
     const atWall = wallTemperatureK + jumpDistanceFor(name, gas, sigma) * 4 * heating * r ** 3;
     temperature[name] = radial.map((rr) => atWall + heating * (r ** 4 - rr ** 4));
   }
-  const u = unifiedFlow({ gas, geometry: { kind: 'tube', radiusM: r }, pressureGradientPaPerM: rho * a, accommodation: sigma });
+  const u = unifiedFlow({
+    gas,
+    geometry: { kind: 'tube', radiusM: r },
+    pressureGradientPaPerM: rho * a,
+    accommodation: sigma,
+  });
   if (u.kind === 'tube') {
     mdot.values.unified = u.massFlowRateKgPerS;
     gp.values.unified = u.reducedFlowRate;
@@ -107,8 +154,28 @@ export function forceDrivenTubePredictions(
   return {
     quantities: [mdot, gp, shear, heat],
     profiles: [
-      { key: 'profile.velocityX', field: 'velocityX', unit: 'm/s', line: { kind: 'rows' }, positionsM: radial, values: velocity, scale: { kind: 'dsmcRange', base: 0, what: 'largest DSMC speed (on the axis)' } },
-      { key: 'profile.temperature', field: 'temperature', unit: 'K', line: { kind: 'rows' }, positionsM: radial, values: temperature, scale: { kind: 'dsmcRange', base: wallTemperatureK, what: 'largest DSMC |T − T_wall| (the viscous heating and jump)' } },
+      {
+        key: 'profile.velocityX',
+        field: 'velocityX',
+        unit: 'm/s',
+        line: { kind: 'rows' },
+        positionsM: radial,
+        values: velocity,
+        scale: { kind: 'dsmcRange', base: 0, what: 'largest DSMC speed (on the axis)' },
+      },
+      {
+        key: 'profile.temperature',
+        field: 'temperature',
+        unit: 'K',
+        line: { kind: 'rows' },
+        positionsM: radial,
+        values: temperature,
+        scale: {
+          kind: 'dsmcRange',
+          base: wallTemperatureK,
+          what: 'largest DSMC |T − T_wall| (the viscous heating and jump)',
+        },
+      },
     ],
   };
 }

@@ -59,7 +59,12 @@ export interface GapPredictions {
 
 /** Couette flow between the bottom and top walls (both at temperature T_w, speeds along x), σ both walls. */
 export function couettePredictions(
-  plan: Plan, gas: GasState, bottom: WallSpec, top: WallSpec, sigma: number, slipChoice: SlipChoice,
+  plan: Plan,
+  gas: GasState,
+  bottom: WallSpec,
+  top: WallSpec,
+  sigma: number,
+  slipChoice: SlipChoice,
 ): GapPredictions {
   const h = plan.grid.lengthYM;
   const ub = bottom.velocityMPerS[0];
@@ -74,7 +79,14 @@ export function couettePredictions(
   const velocity: PredictedProfile['values'] = {};
   const temperature: PredictedProfile['values'] = {};
   for (const [name, slip] of velocityModels(slipChoice)) {
-    const s = couetteFlow({ gas, gapM: h, bottomWallSpeedMPerS: ub, topWallSpeedMPerS: ut, slip, accommodation: sigma });
+    const s = couetteFlow({
+      gas,
+      gapM: h,
+      bottomWallSpeedMPerS: ub,
+      topWallSpeedMPerS: ut,
+      slip,
+      accommodation: sigma,
+    });
     const tau = s.shearStressPa;
     shearBottom.values[name] = tau;
     shearTop.values[name] = -tau;
@@ -91,14 +103,36 @@ export function couettePredictions(
   return {
     quantities: [shearBottom, shearTop, heatBottom, heatTop],
     profiles: [
-      { key: 'profile.velocityX', field: 'velocityX', unit: 'm/s', line: { kind: 'rows' }, positionsM: y, values: velocity, scale: { kind: 'fixed', value: Math.abs(du), what: 'wall speed difference |U_top − U_bottom|' } },
-      { key: 'profile.temperature', field: 'temperature', unit: 'K', line: { kind: 'rows' }, positionsM: y, values: temperature, scale: { kind: 'dsmcRange', base: tw, what: 'largest DSMC |T − T_wall| (the viscous heating and jump)' } },
+      {
+        key: 'profile.velocityX',
+        field: 'velocityX',
+        unit: 'm/s',
+        line: { kind: 'rows' },
+        positionsM: y,
+        values: velocity,
+        scale: { kind: 'fixed', value: Math.abs(du), what: 'wall speed difference |U_top − U_bottom|' },
+      },
+      {
+        key: 'profile.temperature',
+        field: 'temperature',
+        unit: 'K',
+        line: { kind: 'rows' },
+        positionsM: y,
+        values: temperature,
+        scale: { kind: 'dsmcRange', base: tw, what: 'largest DSMC |T − T_wall| (the viscous heating and jump)' },
+      },
     ],
   };
 }
 
 /** Fourier heat conduction between walls at rest at different temperatures, thermal accommodation σ both walls. */
-export function fourierPredictions(plan: Plan, gas: GasState, bottom: WallSpec, top: WallSpec, sigma: number): GapPredictions {
+export function fourierPredictions(
+  plan: Plan,
+  gas: GasState,
+  bottom: WallSpec,
+  top: WallSpec,
+  sigma: number,
+): GapPredictions {
   const h = plan.grid.lengthYM;
   const y = rowPositionsM(plan);
   const jumps: [ContinuumModelName, TemperatureJumpModel][] = [
@@ -110,7 +144,14 @@ export function fourierPredictions(plan: Plan, gas: GasState, bottom: WallSpec, 
   const heatTop: PredictedQuantity = { key: 'walls.top.heatFlux', unit: 'W/m^2', values: {} };
   const temperature: PredictedProfile['values'] = {};
   for (const [name, jump] of jumps) {
-    const s = fourierFlow({ gas, gapM: h, bottomWallTemperatureK: bottom.temperatureK, topWallTemperatureK: top.temperatureK, jump, thermalAccommodation: sigma });
+    const s = fourierFlow({
+      gas,
+      gapM: h,
+      bottomWallTemperatureK: bottom.temperatureK,
+      topWallTemperatureK: top.temperatureK,
+      jump,
+      thermalAccommodation: sigma,
+    });
     heatBottom.values[name] = -s.heatFluxWPerM2;
     heatTop.values[name] = s.heatFluxWPerM2;
     temperature[name] = y.map((yy) => s.temperatureK(yy));
@@ -119,7 +160,15 @@ export function fourierPredictions(plan: Plan, gas: GasState, bottom: WallSpec, 
   return {
     quantities: [heatBottom, heatTop],
     profiles: [
-      { key: 'profile.temperature', field: 'temperature', unit: 'K', line: { kind: 'rows' }, positionsM: y, values: temperature, scale: { kind: 'fixed', value: dt, what: 'wall temperature difference |T_top − T_bottom|' } },
+      {
+        key: 'profile.temperature',
+        field: 'temperature',
+        unit: 'K',
+        line: { kind: 'rows' },
+        positionsM: y,
+        values: temperature,
+        scale: { kind: 'fixed', value: dt, what: 'wall temperature difference |T_top − T_bottom|' },
+      },
     ],
   };
 }

@@ -52,7 +52,11 @@ function column(t: FieldTable, field: string, row: number): { mean: number; ci95
  * is the mean of the two cells beside it, with the mean of their half-widths: the bound for perfectly correlated
  * neighbours, larger than for independent ones (neighbouring cells are positively correlated).
  */
-export function dsmcProfile(result: SimulationResult, line: ProfileLine, field: string): { mean: Float64Array; ci95: Float64Array } {
+export function dsmcProfile(
+  result: SimulationResult,
+  line: ProfileLine,
+  field: string,
+): { mean: Float64Array; ci95: Float64Array } {
   const { cellsX, cellsY } = result.numerics;
   if (line.kind === 'rows') {
     const mean = new Float64Array(result.profile.rows);
@@ -89,7 +93,11 @@ function scaleOf(p: PredictedProfile, dsmc: Float64Array): number {
 }
 
 /** Continuum predictions beside a DSMC result of the same plan, with verdicts; or why there are none. */
-export function continuumComparisonOf(plan: Plan, result: SimulationResult, options: ComparisonOptions = {}): ContinuumComparisonResult {
+export function continuumComparisonOf(
+  plan: Plan,
+  result: SimulationResult,
+  options: ComparisonOptions = {},
+): ContinuumComparisonResult {
   const predictions = caseModelsOf(plan, options);
   if (!predictions.recognised) return predictions;
   const continuum: ContinuumComparison['continuum'] = {};
@@ -98,13 +106,15 @@ export function continuumComparisonOf(plan: Plan, result: SimulationResult, opti
   const verdict: Record<string, QuantityVerdict> = {};
   for (const q of predictions.quantities) {
     units[q.key] = q.unit;
-    for (const [model, value] of Object.entries(q.values) as [ContinuumModelName, number][]) (continuum[model] ??= {})[q.key] = value;
+    for (const [model, value] of Object.entries(q.values) as [ContinuumModelName, number][])
+      (continuum[model] ??= {})[q.key] = value;
     const dsmc = dsmcIntegral(result, q.key);
     if (dsmc) verdict[q.key] = integralVerdict(q.key, q.unit, dsmc, q.values, options);
   }
   for (const p of predictions.profiles) {
     units[p.key] = p.unit;
-    for (const [model, values] of Object.entries(p.values) as [ContinuumModelName, Float64Array][]) (profiles[model] ??= {})[p.key] = values;
+    for (const [model, values] of Object.entries(p.values) as [ContinuumModelName, Float64Array][])
+      (profiles[model] ??= {})[p.key] = values;
     const dsmc = dsmcProfile(result, p.line, p.field);
     if (dsmc.mean.length !== p.positionsM.length) continue;
     verdict[p.key] = profileVerdict(p.key, p.unit, dsmc.mean, dsmc.ci95, scaleOf(p, dsmc.mean), p.values, options);

@@ -9,7 +9,14 @@
  * 1/(δ + 2σ_P), the large-δ limit of the linearized BGK solution (reference notes §2).
  * Free-molecular: Π = σ/((2 − σ)√π) for Maxwell walls of accommodation σ (reference notes §2; 1/√π for diffuse walls).
  */
-import { checkedGasState, densityKgPerM3, equivalentPathOf, mostProbableSpeedOf, viscosityPathOf, type GasState } from './gasState';
+import {
+  checkedGasState,
+  densityKgPerM3,
+  equivalentPathOf,
+  mostProbableSpeedOf,
+  viscosityPathOf,
+  type GasState,
+} from './gasState';
 import { rarefactionOf } from './meanFreePath';
 import {
   checkedAccommodation,
@@ -108,6 +115,6 @@ export function couetteFlow(input: CouetteInput): CouetteSolution {
     velocityMPerS: (y) => atBottom + gradient * y,
     slipAtBottomMPerS: zeta * gradient,
     slipAtTopMPerS: -zeta * gradient,
-    massFlowRateKgPerSM: rho * h * (ub + ut) / 2,
+    massFlowRateKgPerSM: (rho * h * (ub + ut)) / 2,
   };
 }

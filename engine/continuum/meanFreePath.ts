@@ -14,7 +14,11 @@
  *   molecular diameter, not of the viscosity, so its ratio to λ depends on the gas; the conversions here assume a
  *   hard-sphere gas (the only gas for which coefficients quoted in λ_HS were derived).
  */
-import { viscosityMeanFreePathM, mostProbableSpeedMPerS, HARD_SPHERE_VISCOSITY_CORRECTION } from '../gas/molecularModel';
+import {
+  viscosityMeanFreePathM,
+  mostProbableSpeedMPerS,
+  HARD_SPHERE_VISCOSITY_CORRECTION,
+} from '../gas/molecularModel';
 
 export type MeanFreePathKind = 'viscosity' | 'equivalent' | 'hardSphere';
 

@@ -19,7 +19,14 @@
  * Maxwell walls (Smoluchowski 1910; from memory). The channel has no free-molecular limit (G_P grows like
  * (1/√π) ln(1/δ), reference notes §2), so its slip model excludes 'freeMolecular'.
  */
-import { checkedGasState, densityKgPerM3, equivalentPathOf, mostProbableSpeedOf, viscosityPathOf, type GasState } from './gasState';
+import {
+  checkedGasState,
+  densityKgPerM3,
+  equivalentPathOf,
+  mostProbableSpeedOf,
+  viscosityPathOf,
+  type GasState,
+} from './gasState';
 import { VISCOSITY_PER_EQUIVALENT_PATH, rarefactionOf } from './meanFreePath';
 import {
   checkedAccommodation,
@@ -104,8 +111,10 @@ export function channelReducedFlowRate(delta: number, slip: ContinuumSlipModel, 
 export function tubeReducedFlowRate(delta: number, slip: VelocitySlipModel, accommodation = 1): number {
   requirePositive(delta, 'rarefaction parameter δ');
   if (slip.kind === 'freeMolecular') {
-    return maxwellFactor(checkedAccommodation(accommodation, 'velocity accommodation')) *
-      FREE_MOLECULAR_TUBE_REDUCED_FLOW_RATE;
+    return (
+      maxwellFactor(checkedAccommodation(accommodation, 'velocity accommodation')) *
+      FREE_MOLECULAR_TUBE_REDUCED_FLOW_RATE
+    );
   }
   const { first, second } = slipLengthCoefficients(slip, accommodation);
   const r = VISCOSITY_PER_EQUIVALENT_PATH;
@@ -128,9 +137,10 @@ export function forceDrivenChannelFlow(input: ForceDrivenChannelInput): ForceDri
     slip: slip.kind,
     rarefactionParameter: rarefactionOf(equivalentPathOf(gas), h),
     // G_P = ṁ′ v0/(H² ρa); a = 0 leaves the linear ratio undefined, so it is taken from δ instead.
-    reducedFlowRate: a !== 0
-      ? (massFlow * mostProbableSpeedOf(gas)) / (h * h * rho * a)
-      : channelReducedFlowRate(rarefactionOf(equivalentPathOf(gas), h), slip, input.accommodation ?? 1),
+    reducedFlowRate:
+      a !== 0
+        ? (massFlow * mostProbableSpeedOf(gas)) / (h * h * rho * a)
+        : channelReducedFlowRate(rarefactionOf(equivalentPathOf(gas), h), slip, input.accommodation ?? 1),
     slipVelocityMPerS: us,
     velocityMPerS: (y) => (g / 2) * y * (h - y) + us,
     massFlowRateKgPerSM: massFlow,
@@ -162,12 +172,16 @@ export function forceDrivenTubeFlow(input: ForceDrivenTubeInput): ForceDrivenTub
   const g = (rho * a) / gas.viscosityPaS;
   const lambda = viscosityPathOf(gas);
   const us = g * ((first * lambda * r) / 2 + (second * lambda * lambda) / 2);
-  const massFlow = Math.PI * rho * g *
+  const massFlow =
+    Math.PI *
+    rho *
+    g *
     ((r * r * r * r) / 8 + (first * lambda * r * r * r) / 2 + (second * lambda * lambda * r * r) / 2);
   return {
     slip: slip.kind,
     rarefactionParameter: delta,
-    reducedFlowRate: a !== 0 ? (massFlow * v0) / (Math.PI * r * r * r * rho * a) : tubeReducedFlowRate(delta, slip, sigma),
+    reducedFlowRate:
+      a !== 0 ? (massFlow * v0) / (Math.PI * r * r * r * rho * a) : tubeReducedFlowRate(delta, slip, sigma),
     slipVelocityMPerS: us,
     velocityMPerS: (radial) => (g / 4) * (r * r - radial * radial) + us,
     massFlowRateKgPerS: massFlow,

@@ -21,21 +21,21 @@ import { slipLengthCoefficients, type ContinuumSlipModel, type VelocitySlipKind 
 
 export type DuctGeometry =
   | {
-    readonly kind: 'channel';
-    /** H, gap between the plates, m (the Knudsen number is on H). */
-    readonly heightM: number;
-    /** W, m (W ≫ H: side walls neglected). */
-    readonly widthM: number;
-    /** L, m. */
-    readonly lengthM: number;
-  }
+      readonly kind: 'channel';
+      /** H, gap between the plates, m (the Knudsen number is on H). */
+      readonly heightM: number;
+      /** W, m (W ≫ H: side walls neglected). */
+      readonly widthM: number;
+      /** L, m. */
+      readonly lengthM: number;
+    }
   | {
-    readonly kind: 'tube';
-    /** R, m (the Knudsen number is on R). */
-    readonly radiusM: number;
-    /** L, m. */
-    readonly lengthM: number;
-  };
+      readonly kind: 'tube';
+      /** R, m (the Knudsen number is on R). */
+      readonly radiusM: number;
+      /** L, m. */
+      readonly lengthM: number;
+    };
 
 export interface PressureDrivenDuctInput {
   /** μ in Pa·s at temperatureK (K), molecular mass in kg. */

@@ -12,12 +12,7 @@
  * their dependence on σ (our choice; exact for σ = 1).
  */
 import { pathPerViscosityPath, type MeanFreePathKind } from './meanFreePath';
-import {
-  heatCapacityRatioOf,
-  prandtlNumberOf,
-  viscosityPathOf,
-  type GasState,
-} from './gasState';
+import { heatCapacityRatioOf, prandtlNumberOf, viscosityPathOf, type GasState } from './gasState';
 
 /** How a value is known, as in the project's reference notes: read, solved from a published equation, or recalled. */
 export type ReferenceFlag = 'published' | 'computed' | 'from memory' | 'common practice';

@@ -20,7 +20,14 @@
  * rate between infinite plates grows like (1/√π) ln(1/δ) (reference notes §2): it is 17 % below the BGK value at
  * δ = 1 and cannot follow it into the free-molecular regime. Use it for tubes, or for channels only at δ ≳ 10.
  */
-import { checkedGasState, densityKgPerM3, mostProbableSpeedOf, equivalentPathOf, viscosityPathOf, type GasState } from './gasState';
+import {
+  checkedGasState,
+  densityKgPerM3,
+  mostProbableSpeedOf,
+  equivalentPathOf,
+  viscosityPathOf,
+  type GasState,
+} from './gasState';
 import { knudsenNumber, rarefactionOf } from './meanFreePath';
 import { checkedAccommodation, maxwellFactor, type ReferenceFlag } from './slipCoefficients';
 
@@ -106,15 +113,15 @@ interface UnifiedFlowCommon {
 /** Channel: ṁ′ = (H²/v0)(−dp/dx)G_P per metre of depth; tube: ṁ = (πR³/v0)(−dp/dx)G_P. Volume rates at ρ of the state. */
 export type UnifiedFlow =
   | (UnifiedFlowCommon & {
-    readonly kind: 'channel';
-    readonly massFlowRateKgPerSM: number;
-    readonly volumeFlowRateM2PerS: number;
-  })
+      readonly kind: 'channel';
+      readonly massFlowRateKgPerSM: number;
+      readonly volumeFlowRateM2PerS: number;
+    })
   | (UnifiedFlowCommon & {
-    readonly kind: 'tube';
-    readonly massFlowRateKgPerS: number;
-    readonly volumeFlowRateM3PerS: number;
-  });
+      readonly kind: 'tube';
+      readonly massFlowRateKgPerS: number;
+      readonly volumeFlowRateM3PerS: number;
+    });
 
 /** The unified model's local flow rate in SI for a gas state and pressure gradient (units in UnifiedFlowInput). */
 export function unifiedFlow(input: UnifiedFlowInput): UnifiedFlow {

@@ -80,17 +80,32 @@ function joinWords(words: string[]): string {
 
 /** Category, best model and text from the per-model deviations (rules in the file header). */
 function decide(
-  quantity: string, kind: 'integral' | 'profile', unit: string, scale: number, relativeHalfWidth: number,
-  tolerance: number, points: number, models: ModelDeviation[],
+  quantity: string,
+  kind: 'integral' | 'profile',
+  unit: string,
+  scale: number,
+  relativeHalfWidth: number,
+  tolerance: number,
+  points: number,
+  models: ModelDeviation[],
 ): QuantityVerdict {
   const threshold = Number.isFinite(relativeHalfWidth) ? Math.max(relativeHalfWidth, tolerance) : tolerance;
   const base = { quantity, kind, unit, scale, relativeHalfWidth, threshold, points, models };
   if (models.length === 0) {
-    return { ...base, bestModel: null, deviation: NaN, category: 'noData', text: 'no comparison: DSMC or the models give no value here' };
+    return {
+      ...base,
+      bestModel: null,
+      deviation: NaN,
+      category: 'noData',
+      text: 'no comparison: DSMC or the models give no value here',
+    };
   }
   const rms = kind === 'profile' ? ' RMS' : '';
-  const error = Number.isFinite(relativeHalfWidth) ? `DSMC ±${percent(relativeHalfWidth)}${rms}` : 'DSMC error not available';
-  const off = (d: ModelDeviation) => `${MODEL_LABELS[d.model]} off by ${percent(d.deviation)}${rms}${kind === 'profile' ? `, max ${percent(d.maxDeviation)}` : ''}`;
+  const error = Number.isFinite(relativeHalfWidth)
+    ? `DSMC ±${percent(relativeHalfWidth)}${rms}`
+    : 'DSMC error not available';
+  const off = (d: ModelDeviation) =>
+    `${MODEL_LABELS[d.model]} off by ${percent(d.deviation)}${rms}${kind === 'profile' ? `, max ${percent(d.maxDeviation)}` : ''}`;
   const best = models.find((d) => d.adequate);
   if (best) {
     const simpler = models.slice(0, models.indexOf(best));
@@ -113,12 +128,18 @@ function decide(
   const continuum = models.filter((d) => d.model !== 'freeMolecular');
   if (continuum.length > 0 && continuum.every((d) => Math.abs(d.deviation) > KINETIC_THRESHOLD)) {
     return {
-      ...base, bestModel: closest.model, deviation: closest.deviation, category: 'kinetic',
+      ...base,
+      bestModel: closest.model,
+      deviation: closest.deviation,
+      category: 'kinetic',
       text: `continuum models off by more than ${percent(KINETIC_THRESHOLD)}: kinetic effects dominate (closest: ${off(closest)}; ${error})`,
     };
   }
   return {
-    ...base, bestModel: closest.model, deviation: closest.deviation, category: 'noneAdequate',
+    ...base,
+    bestModel: closest.model,
+    deviation: closest.deviation,
+    category: 'noneAdequate',
     text: `no model within tolerance: closest is ${off(closest)} (tolerance ${percent(tolerance)}, ${error})`,
   };
 }
@@ -128,8 +149,11 @@ function decide(
  * value, all in `unit`. Scale |DSMC mean|.
  */
 export function integralVerdict(
-  quantity: string, unit: string, dsmc: { readonly mean: number; readonly ci95: number },
-  predictions: Partial<Record<ContinuumModelName, number>>, options: VerdictOptions = {},
+  quantity: string,
+  unit: string,
+  dsmc: { readonly mean: number; readonly ci95: number },
+  predictions: Partial<Record<ContinuumModelName, number>>,
+  options: VerdictOptions = {},
 ): QuantityVerdict {
   const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
   const scale = Math.abs(dsmc.mean);
@@ -141,7 +165,13 @@ export function integralVerdict(
     for (const [model, value] of ordered(predictions)) {
       if (!Number.isFinite(value)) continue;
       const deviation = (value - dsmc.mean) / scale;
-      models.push({ model, deviation, maxDeviation: Math.abs(deviation), normalizedDeviation: (value - dsmc.mean) / dsmc.ci95, adequate: Math.abs(deviation) <= threshold });
+      models.push({
+        model,
+        deviation,
+        maxDeviation: Math.abs(deviation),
+        normalizedDeviation: (value - dsmc.mean) / dsmc.ci95,
+        adequate: Math.abs(deviation) <= threshold,
+      });
     }
   }
   return decide(quantity, 'integral', unit, scale, relativeHalfWidth, tolerance, 1, models);
@@ -152,8 +182,13 @@ export function integralVerdict(
  * same points, all in `unit`; `scale` (> 0, same unit) divides the deviations. Profile-wide measures in the file header.
  */
 export function profileVerdict(
-  quantity: string, unit: string, dsmcMean: ArrayLike<number>, dsmcCi95: ArrayLike<number>, scale: number,
-  predictions: Partial<Record<ContinuumModelName, ArrayLike<number>>>, options: VerdictOptions = {},
+  quantity: string,
+  unit: string,
+  dsmcMean: ArrayLike<number>,
+  dsmcCi95: ArrayLike<number>,
+  scale: number,
+  predictions: Partial<Record<ContinuumModelName, ArrayLike<number>>>,
+  options: VerdictOptions = {},
 ): QuantityVerdict {
   const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
   const entries = ordered(predictions);
@@ -165,7 +200,11 @@ export function profileVerdict(
   const n = at.length;
   let hw2 = 0;
   let hwKnown = 0;
-  for (const i of at) if (Number.isFinite(dsmcCi95[i]) && dsmcCi95[i] > 0) { hw2 += (dsmcCi95[i] / scale) ** 2; hwKnown++; }
+  for (const i of at)
+    if (Number.isFinite(dsmcCi95[i]) && dsmcCi95[i] > 0) {
+      hw2 += (dsmcCi95[i] / scale) ** 2;
+      hwKnown++;
+    }
   const relativeHalfWidth = hwKnown === n && n > 0 ? Math.sqrt(hw2 / n) : NaN;
   const threshold = Number.isFinite(relativeHalfWidth) ? Math.max(relativeHalfWidth, tolerance) : tolerance;
   const models: ModelDeviation[] = [];
@@ -181,7 +220,13 @@ export function profileVerdict(
         z2 += ((values[i] - dsmcMean[i]) / dsmcCi95[i]) ** 2;
       }
       const deviation = Math.sqrt(sum2 / n);
-      models.push({ model, deviation, maxDeviation: max, normalizedDeviation: Math.sqrt(z2 / n), adequate: deviation <= threshold });
+      models.push({
+        model,
+        deviation,
+        maxDeviation: max,
+        normalizedDeviation: Math.sqrt(z2 / n),
+        adequate: deviation <= threshold,
+      });
     }
   }
   return decide(quantity, 'profile', unit, scale, relativeHalfWidth, tolerance, models.length ? n : 0, models);

@@ -97,7 +97,8 @@ export function modelFromSpecies(id: SpeciesId, kind: CollisionModelKind): Molec
     }
     case 'HS': {
       // Solve (5/16)·sqrt(πmkT_ref)/(πd²) = μ_ref for d.
-      const d2 = ((5 / 16) * Math.sqrt(Math.PI * s.massKg * K_B * s.referenceTemperatureK)) /
+      const d2 =
+        ((5 / 16) * Math.sqrt(Math.PI * s.massKg * K_B * s.referenceTemperatureK)) /
         (Math.PI * s.referenceViscosityPaS);
       return Object.freeze({
         ...common,
@@ -195,8 +196,7 @@ export function sigmaCrCoefficient(model: MolecularModel): number {
   const { massKg, referenceDiameterM: d, referenceTemperatureK, viscosityIndex: w } = model;
   const reducedMassKg = massKg / 2;
   return (
-    (Math.PI * d * d * Math.pow((2 * K_B * referenceTemperatureK) / reducedMassKg, w - 0.5)) /
-    jStat.gammafn(2.5 - w)
+    (Math.PI * d * d * Math.pow((2 * K_B * referenceTemperatureK) / reducedMassKg, w - 0.5)) / jStat.gammafn(2.5 - w)
   );
 }
 
@@ -221,7 +221,10 @@ export function equilibriumCollisionRatePerParticle(
 ): number {
   const { massKg, referenceDiameterM: d, referenceTemperatureK, viscosityIndex: w } = model;
   return (
-    4 * d * d * numberDensityPerM3 *
+    4 *
+    d *
+    d *
+    numberDensityPerM3 *
     Math.sqrt((Math.PI * K_B * referenceTemperatureK) / massKg) *
     Math.pow(temperatureK / referenceTemperatureK, 1 - w)
   );

@@ -83,5 +83,15 @@ export const SPECIES: Readonly<Record<SpeciesId, SpeciesData>> = Object.freeze({
 
 /** All table gases, in table order; a tuple type so that it can feed z.enum() directly. */
 export const SPECIES_IDS = Object.freeze([
-  'H2', 'He', 'Ne', 'Ar', 'Kr', 'Xe', 'N2', 'O2', 'air', 'CO2', 'CH4',
+  'H2',
+  'He',
+  'Ne',
+  'Ar',
+  'Kr',
+  'Xe',
+  'N2',
+  'O2',
+  'air',
+  'CO2',
+  'CH4',
 ] as const satisfies readonly SpeciesId[]);

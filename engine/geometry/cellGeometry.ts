@@ -46,14 +46,27 @@ export function boxVolumeM3(x0: number, x1: number, y0: number, y1: number, axis
  * edge inside it, and each piece is gas or solid as a whole.
  */
 export function gasVolumeOfBoxM3(
-  x0: number, x1: number, y0: number, y1: number, blocks: readonly BlockRectangle[], axisymmetric: boolean,
+  x0: number,
+  x1: number,
+  y0: number,
+  y1: number,
+  blocks: readonly BlockRectangle[],
+  axisymmetric: boolean,
 ): number {
   const touching = blocks.filter((b) => b.x0 < x1 && b.x1 > x0 && b.y0 < y1 && b.y1 > y0);
   if (touching.length === 0) return boxVolumeM3(x0, x1, y0, y1, axisymmetric);
   const cuts = (lo: number, hi: number, edges: number[]) =>
     [...new Set([lo, hi, ...edges.filter((e) => e > lo && e < hi)])].sort((a, b) => a - b);
-  const xs = cuts(x0, x1, touching.flatMap((b) => [b.x0, b.x1]));
-  const ys = cuts(y0, y1, touching.flatMap((b) => [b.y0, b.y1]));
+  const xs = cuts(
+    x0,
+    x1,
+    touching.flatMap((b) => [b.x0, b.x1]),
+  );
+  const ys = cuts(
+    y0,
+    y1,
+    touching.flatMap((b) => [b.y0, b.y1]),
+  );
   let volume = 0;
   for (let i = 0; i + 1 < xs.length; i++) {
     for (let j = 0; j + 1 < ys.length; j++) {
@@ -66,7 +79,12 @@ export function gasVolumeOfBoxM3(
 }
 
 export function cellGeometryOf(
-  cellsX: number, cellsY: number, lengthXM: number, lengthYM: number, blocks: readonly BlockRectangle[], axisymmetric: boolean,
+  cellsX: number,
+  cellsY: number,
+  lengthXM: number,
+  lengthYM: number,
+  blocks: readonly BlockRectangle[],
+  axisymmetric: boolean,
 ): CellGeometry {
   const dx = lengthXM / cellsX;
   const dy = lengthYM / cellsY;

@@ -36,7 +36,10 @@ export const INFLOW_STRIDE = 13;
 
 /** One-way number flux through a plane (1/(m² s)) of a Maxwellian gas, n in 1/m³, v_mp in m/s, s = u_n/v_mp. */
 export function maxwellianInfluxPerM2S(numberDensity: number, mostProbableSpeed: number, s: number): number {
-  return ((numberDensity * mostProbableSpeed) / (2 * Math.sqrt(Math.PI))) * (Math.exp(-s * s) + Math.sqrt(Math.PI) * s * (1 + jStat.erf(s)));
+  return (
+    ((numberDensity * mostProbableSpeed) / (2 * Math.sqrt(Math.PI))) *
+    (Math.exp(-s * s) + Math.sqrt(Math.PI) * s * (1 + jStat.erf(s)))
+  );
 }
 
 /**
@@ -73,8 +76,19 @@ export function inflowTableOf(plan: Plan): Float64Array {
       const cellRow = f.normalIsX ? k : f.inward > 0 ? 0 : g.cellsY - 1;
       const cell = cellRow * g.cellsX + column;
       rows.push(
-        row, a, c, (flux * area * plan.timeStepS) / (plan.moleculesPerParticle * weight), s, weight,
-        t, drift[0], drift[1], drift[2], cell, g.cells.gasVolumesM3[cell], area,
+        row,
+        a,
+        c,
+        (flux * area * plan.timeStepS) / (plan.moleculesPerParticle * weight),
+        s,
+        weight,
+        t,
+        drift[0],
+        drift[1],
+        drift[2],
+        cell,
+        g.cells.gasVolumesM3[cell],
+        area,
       );
     }
   });

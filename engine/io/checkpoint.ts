@@ -22,9 +22,13 @@ import { TextEncoder, TextDecoder } from './utf8';
 export const CHECKPOINT_MAGIC = Uint8Array.of(0x89, 0x54, 0x4e, 0x43, 0x0d, 0x0a, 0x1a, 0x0a);
 export const CHECKPOINT_VERSION = 1;
 
-
 type Dtype = 'f64' | 'u32';
-interface ArrayEntry { name: string; dtype: Dtype; offset: number; length: number }
+interface ArrayEntry {
+  name: string;
+  dtype: Dtype;
+  offset: number;
+  length: number;
+}
 interface CheckpointHeader {
   format: 'tenuis-checkpoint';
   caseData: unknown;
@@ -37,19 +41,42 @@ interface CheckpointHeader {
 
 const align8 = (n: number) => Math.ceil(n / 8) * 8;
 /** The state's scalars that a step reads or accumulates. */
-const STATE_SCALARS = ['count', 'step', 'collisionCount', 'candidateCount', 'separationSum', 'particleSteps', 'cellSumSteps', 'leaks'] as const;
+const STATE_SCALARS = [
+  'count',
+  'step',
+  'collisionCount',
+  'candidateCount',
+  'separationSum',
+  'particleSteps',
+  'cellSumSteps',
+  'leaks',
+] as const;
 
 /** The simulation at this moment as a checkpoint (a fresh ArrayBuffer). `stream` is the replica's random stream. */
 export function encodeCheckpoint(sim: Simulation, stream: number): ArrayBuffer {
   const st = sim.state;
   const n = st.count;
   const arrays: [string, Float64Array | Uint32Array][] = [
-    ['x', st.x.subarray(0, n)], ['y', st.y.subarray(0, n)],
-    ['vx', st.vx.subarray(0, n)], ['vy', st.vy.subarray(0, n)], ['vz', st.vz.subarray(0, n)], ['erot', st.erot.subarray(0, n)],
-    ['rng', st.rng], ['sigmaCrMax', st.sigmaCrMax], ['collisionRemainder', st.collisionRemainder],
-    ['cellSums', st.cellSums], ['wallSums', st.wallSums], ['sectionSums', st.sectionSums], ['inflowRemainder', st.inflowRemainder], ['weightCarry', st.weightCarry], ['inflowTable', st.inflowTable], ['outletMoments', st.outletMoments],
-    ['cellStore.values', sim.cellStore.values], ['cellStore.pending', sim.cellStore.pending],
-    ['wallStore.values', sim.wallStore.values], ['wallStore.pending', sim.wallStore.pending],
+    ['x', st.x.subarray(0, n)],
+    ['y', st.y.subarray(0, n)],
+    ['vx', st.vx.subarray(0, n)],
+    ['vy', st.vy.subarray(0, n)],
+    ['vz', st.vz.subarray(0, n)],
+    ['erot', st.erot.subarray(0, n)],
+    ['rng', st.rng],
+    ['sigmaCrMax', st.sigmaCrMax],
+    ['collisionRemainder', st.collisionRemainder],
+    ['cellSums', st.cellSums],
+    ['wallSums', st.wallSums],
+    ['sectionSums', st.sectionSums],
+    ['inflowRemainder', st.inflowRemainder],
+    ['weightCarry', st.weightCarry],
+    ['inflowTable', st.inflowTable],
+    ['outletMoments', st.outletMoments],
+    ['cellStore.values', sim.cellStore.values],
+    ['cellStore.pending', sim.cellStore.pending],
+    ['wallStore.values', sim.wallStore.values],
+    ['wallStore.pending', sim.wallStore.pending],
   ];
   // The transient monitor's samples, 5 per row: replaying them rebuilds its detector exactly.
   arrays.push(['monitorHistory', Float64Array.from((sim.monitor?.history ?? []).flat())]);
@@ -68,7 +95,11 @@ export function encodeCheckpoint(sim: Simulation, stream: number): ArrayBuffer {
   for (const k of STATE_SCALARS) scalars[k] = st[k];
   scalars.sampling = st.sampling ? 1 : 0;
   scalars.transientEndStep = Number.isFinite(sim.transientEndStep) ? sim.transientEndStep : -1;
-  const store = (s: Simulation['cellStore']) => ({ batches: s.batches, batchLength: s.batchLength, pendingLength: s.pendingLength });
+  const store = (s: Simulation['cellStore']) => ({
+    batches: s.batches,
+    batchLength: s.batchLength,
+    pendingLength: s.pendingLength,
+  });
   const header: CheckpointHeader = {
     format: 'tenuis-checkpoint',
     caseData: sim.plan.caseData,
@@ -102,10 +133,12 @@ function fail(message: string): never {
 /** Rebuilds the simulation from a checkpoint; the next advance() continues exactly where it stopped. */
 export function decodeCheckpoint(buffer: ArrayBuffer): { sim: Simulation; stream: number } {
   const bytes = new Uint8Array(buffer);
-  if (bytes.length < 16 || CHECKPOINT_MAGIC.some((b, i) => bytes[i] !== b)) fail('not a checkpoint file (wrong magic bytes)');
+  if (bytes.length < 16 || CHECKPOINT_MAGIC.some((b, i) => bytes[i] !== b))
+    fail('not a checkpoint file (wrong magic bytes)');
   const view = new DataView(buffer);
   const version = view.getUint32(8, true);
-  if (version !== CHECKPOINT_VERSION) fail(`format version ${version} is not supported (this build reads version ${CHECKPOINT_VERSION})`);
+  if (version !== CHECKPOINT_VERSION)
+    fail(`format version ${version} is not supported (this build reads version ${CHECKPOINT_VERSION})`);
   const headerLength = view.getUint32(12, true);
   if (16 + headerLength > bytes.length) fail('truncated: the header runs past the end of the file');
   let header: CheckpointHeader;
@@ -124,7 +157,8 @@ export function decodeCheckpoint(buffer: ArrayBuffer): { sim: Simulation; stream
     const at = dataStart + e.offset;
     if (at + e.length * size > bytes.length) fail(`truncated: array ${name} runs past the end of the file`);
     const out = e.dtype === 'u32' ? new Uint32Array(e.length) : new Float64Array(e.length);
-    for (let i = 0; i < e.length; i++) out[i] = e.dtype === 'u32' ? view.getUint32(at + 4 * i, true) : view.getFloat64(at + 8 * i, true);
+    for (let i = 0; i < e.length; i++)
+      out[i] = e.dtype === 'u32' ? view.getUint32(at + 4 * i, true) : view.getFloat64(at + 8 * i, true);
     return out;
   };
   const into = (target: Float64Array | Uint32Array, name: string) => {

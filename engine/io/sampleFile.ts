@@ -23,13 +23,18 @@ import type { BatchList } from '../stats/batchList';
 import { seriesKeysOf } from '../results/seriesKeys';
 import { geometryOf, geometryDifferences, wallBinTotalOf } from '../results/samplingGeometry';
 import type { SampleSet } from '../results/sampleSet';
-import { parseSampleFileHeader, SAMPLE_FILE_FORMAT, SAMPLE_FILE_DTYPE, type SampleFileHeader, type BatchStoreHeader } from './sampleFileHeader';
+import {
+  parseSampleFileHeader,
+  SAMPLE_FILE_FORMAT,
+  SAMPLE_FILE_DTYPE,
+  type SampleFileHeader,
+  type BatchStoreHeader,
+} from './sampleFileHeader';
 import { TextEncoder, TextDecoder } from './utf8';
 
 export const SAMPLE_FILE_MAGIC = Uint8Array.of(0x89, 0x54, 0x4e, 0x53, 0x0d, 0x0a, 0x1a, 0x0a);
 export const SAMPLE_FILE_VERSION = 1;
 const PREAMBLE_BYTES = 16;
-
 
 /** True on every platform we know of; the big-endian path is there so the format never depends on it. */
 const HOST_LITTLE_ENDIAN = new Uint8Array(Float64Array.of(1).buffer)[7] === 0x3f;
@@ -51,7 +56,8 @@ function arraysOf(set: SampleSet): [string, Float64Array][] {
     ['pendingCellSums', set.pendingCellSums],
     ['pendingWallSums', set.pendingWallSums],
   ];
-  for (const [key, replicas] of set.series) replicas.forEach((values, r) => out.push([seriesArrayName(key, r), values]));
+  for (const [key, replicas] of set.series)
+    replicas.forEach((values, r) => out.push([seriesArrayName(key, r), values]));
   return out;
 }
 
@@ -85,8 +91,16 @@ export function encodeSampleSet(set: SampleSet): ArrayBuffer {
       moleculesPerParticle: p.moleculesPerParticle,
     },
     geometry: {
-      cells: g.cells, cellsX: g.cellsX, cellsY: g.cellsY, lengthX: g.lengthX, lengthY: g.lengthY, cellVolume: g.cellVolume,
-      timeStep: g.timeStep, massKg: g.massKg, moleculesPerParticle: g.moleculesPerParticle, rotationalDof: g.rotationalDof,
+      cells: g.cells,
+      cellsX: g.cellsX,
+      cellsY: g.cellsY,
+      lengthX: g.lengthX,
+      lengthY: g.lengthY,
+      cellVolume: g.cellVolume,
+      timeStep: g.timeStep,
+      massKg: g.massKg,
+      moleculesPerParticle: g.moleculesPerParticle,
+      rotationalDof: g.rotationalDof,
       axisymmetric: g.axisymmetric,
     },
     wallNames: [...set.wallNames],
@@ -126,8 +140,12 @@ function checkMagic(bytes: Uint8Array): void {
   if (same) return;
   const found = Array.from(bytes.subarray(0, 8), (b) => b.toString(16).padStart(2, '0')).join(' ');
   const ours = bytes.length >= 4 && bytes[1] === 0x54 && bytes[2] === 0x4e && bytes[3] === 0x53;
-  if (ours && bytes[0] === 0x09) fail(`the first 8 bytes (${found}) lost their high bit in a 7-bit transfer; copy the file as binary`);
-  if (ours && bytes[0] === 0x89) fail(`the first 8 bytes (${found}) were altered, probably by a text-mode transfer that converted line ends; copy the file as binary`);
+  if (ours && bytes[0] === 0x09)
+    fail(`the first 8 bytes (${found}) lost their high bit in a 7-bit transfer; copy the file as binary`);
+  if (ours && bytes[0] === 0x89)
+    fail(
+      `the first 8 bytes (${found}) were altered, probably by a text-mode transfer that converted line ends; copy the file as binary`,
+    );
   fail(`not a sample file: it starts with bytes ${found}, a sample file with 89 54 4e 53 0d 0a 1a 0a`);
 }
 
@@ -135,16 +153,26 @@ function checkMagic(bytes: Uint8Array): void {
 function readHeader(buffer: ArrayBuffer): { header: SampleFileHeader; dataStart: number } {
   const bytes = new Uint8Array(buffer);
   checkMagic(bytes);
-  if (bytes.length < PREAMBLE_BYTES) fail(`truncated: ${bytes.length} bytes, fewer than the ${PREAMBLE_BYTES}-byte preamble`);
+  if (bytes.length < PREAMBLE_BYTES)
+    fail(`truncated: ${bytes.length} bytes, fewer than the ${PREAMBLE_BYTES}-byte preamble`);
   const view = new DataView(buffer);
   const version = view.getUint32(8, true);
-  if (version > SAMPLE_FILE_VERSION) fail(`format version ${version} is newer than this version of Tenuis reads (${SAMPLE_FILE_VERSION}); update Tenuis to read it`);
-  if (version !== SAMPLE_FILE_VERSION) fail(`unknown format version ${version}; this version of Tenuis reads version ${SAMPLE_FILE_VERSION}`);
+  if (version > SAMPLE_FILE_VERSION)
+    fail(
+      `format version ${version} is newer than this version of Tenuis reads (${SAMPLE_FILE_VERSION}); update Tenuis to read it`,
+    );
+  if (version !== SAMPLE_FILE_VERSION)
+    fail(`unknown format version ${version}; this version of Tenuis reads version ${SAMPLE_FILE_VERSION}`);
   const headerLength = view.getUint32(12, true);
-  if (PREAMBLE_BYTES + headerLength > bytes.length) fail(`truncated: the header needs ${headerLength} bytes after the preamble, but the file has only ${bytes.length} bytes in all`);
+  if (PREAMBLE_BYTES + headerLength > bytes.length)
+    fail(
+      `truncated: the header needs ${headerLength} bytes after the preamble, but the file has only ${bytes.length} bytes in all`,
+    );
   let text: string;
   try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes.subarray(PREAMBLE_BYTES, PREAMBLE_BYTES + headerLength));
+    text = new TextDecoder('utf-8', { fatal: true }).decode(
+      bytes.subarray(PREAMBLE_BYTES, PREAMBLE_BYTES + headerLength),
+    );
   } catch {
     fail('the header is not valid UTF-8 (damaged file?)');
   }
@@ -166,10 +194,15 @@ function readArrays(buffer: ArrayBuffer, header: SampleFileHeader, dataStart: nu
   for (const a of header.arrays) {
     const at = dataStart + a.offset;
     const end = at + 8 * a.length;
-    if (end > buffer.byteLength) fail(`truncated: array ${a.name} needs bytes ${at}–${end}, but the file has only ${buffer.byteLength} bytes`);
+    if (end > buffer.byteLength)
+      fail(`truncated: array ${a.name} needs bytes ${at}–${end}, but the file has only ${buffer.byteLength} bytes`);
     if (out.has(a.name)) fail(`the header lists array ${a.name} twice`);
-    const values = HOST_LITTLE_ENDIAN ? new Float64Array(buffer.slice(at, end)) : Float64Array.from({ length: a.length }, (_, i) => view.getFloat64(at + 8 * i, true));
-    for (let i = 0; i < values.length; i++) if (!Number.isFinite(values[i])) fail(`array ${a.name} holds ${values[i]} at index ${i}; sample sums are always finite (damaged file?)`);
+    const values = HOST_LITTLE_ENDIAN
+      ? new Float64Array(buffer.slice(at, end))
+      : Float64Array.from({ length: a.length }, (_, i) => view.getFloat64(at + 8 * i, true));
+    for (let i = 0; i < values.length; i++)
+      if (!Number.isFinite(values[i]))
+        fail(`array ${a.name} holds ${values[i]} at index ${i}; sample sums are always finite (damaged file?)`);
     out.set(a.name, values);
   }
   return out;
@@ -182,10 +215,18 @@ function arrayOf(arrays: Map<string, Float64Array>, name: string, length: number
   return a;
 }
 
-function batchList(h: BatchStoreHeader, name: string, width: number, unitSteps: number, arrays: Map<string, Float64Array>): BatchList {
+function batchList(
+  h: BatchStoreHeader,
+  name: string,
+  width: number,
+  unitSteps: number,
+  arrays: Map<string, Float64Array>,
+): BatchList {
   if (h.width !== width) fail(`${name}.width is ${h.width}; the case needs ${width}`);
-  if (h.unitSteps !== unitSteps) fail(`${name}.unitSteps is ${h.unitSteps}; the case's base batch is ${unitSteps} steps`);
-  if (h.segments.reduce((s, n) => s + n, 0) !== h.batches) fail(`${name}.segments add up to ${h.segments.reduce((s, n) => s + n, 0)}, not to batches = ${h.batches}`);
+  if (h.unitSteps !== unitSteps)
+    fail(`${name}.unitSteps is ${h.unitSteps}; the case's base batch is ${unitSteps} steps`);
+  if (h.segments.reduce((s, n) => s + n, 0) !== h.batches)
+    fail(`${name}.segments add up to ${h.segments.reduce((s, n) => s + n, 0)}, not to batches = ${h.batches}`);
   return {
     width,
     unitSteps,
@@ -215,18 +256,24 @@ export function decodeSampleSet(buffer: ArrayBuffer): SampleSet {
   const geometry = geometryOf(plan);
   const stored = { ...header.geometry, sideTable: arrayOf(arrays, 'sideTable', geometry.sideTable.length) };
   const differs = geometryDifferences(stored, geometry);
-  if (differs.length) fail(`this version of Tenuis plans its case differently from the one that wrote it: ${differs.join('; ')}`);
+  if (differs.length)
+    fail(`this version of Tenuis plans its case differently from the one that wrote it: ${differs.join('; ')}`);
   const wallNames = wallNamesOf(plan);
-  if (header.wallNames.join() !== wallNames.join()) fail(`header.wallNames is [${header.wallNames.join(', ')}]; its case has walls [${wallNames.join(', ')}]`);
+  if (header.wallNames.join() !== wallNames.join())
+    fail(`header.wallNames is [${header.wallNames.join(', ')}]; its case has walls [${wallNames.join(', ')}]`);
 
-  if (header.seeds.length !== header.replicas) fail(`header.seeds lists ${header.seeds.length} seeds for ${header.replicas} replicas`);
+  if (header.seeds.length !== header.replicas)
+    fail(`header.seeds lists ${header.seeds.length} seeds for ${header.replicas} replicas`);
   const series = new Map<string, Float64Array[]>();
   for (const key of seriesKeysOf(wallNames, geometry.sectionNames)) {
-    series.set(key, Array.from({ length: header.replicas }, (_, r) => {
-      const a = arrays.get(seriesArrayName(key, r));
-      if (!a) fail(`array ${seriesArrayName(key, r)} is missing (header.replicas is ${header.replicas})`);
-      return a;
-    }));
+    series.set(
+      key,
+      Array.from({ length: header.replicas }, (_, r) => {
+        const a = arrays.get(seriesArrayName(key, r));
+        if (!a) fail(`array ${seriesArrayName(key, r)} is missing (header.replicas is ${header.replicas})`);
+        return a;
+      }),
+    );
   }
   const cellWidth = geometry.cells * RAW_CELL_SUMS;
   const wallWidth = wallBinTotalOf(geometry) * SUMS_PER_WALL_BIN;

@@ -84,8 +84,13 @@ export type SampleFileHeader = z.infer<typeof sampleFileHeaderSchema>;
 export type BatchStoreHeader = z.infer<typeof batchStoreHeader>;
 
 /** Validates a parsed header: the header itself, or messages "header.field: problem". */
-export function parseSampleFileHeader(input: unknown): { ok: true; value: SampleFileHeader } | { ok: false; errors: string[] } {
+export function parseSampleFileHeader(
+  input: unknown,
+): { ok: true; value: SampleFileHeader } | { ok: false; errors: string[] } {
   const r = sampleFileHeaderSchema.safeParse(input);
   if (r.success) return { ok: true, value: r.data };
-  return { ok: false, errors: r.error.issues.map((i) => `header${i.path.length ? `.${i.path.join('.')}` : ''}: ${i.message}`) };
+  return {
+    ok: false,
+    errors: r.error.issues.map((i) => `header${i.path.length ? `.${i.path.join('.')}` : ''}: ${i.message}`),
+  };
 }

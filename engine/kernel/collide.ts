@@ -115,14 +115,20 @@ export function collideParticles(st: SimState, sample = false): void {
       // First partner: anywhere in the cell.
       m = Math.imul(s1, 5);
       const u1 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
-      t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = (s3 << 11) | (s3 >>> 21);
+      t = s1 << 9;
+      s2 ^= s0;
+      s3 ^= s1;
+      s1 ^= s2;
+      s0 ^= s3;
+      s2 ^= t;
+      s3 = (s3 << 11) | (s3 >>> 21);
       const pi = first + ((u1 * nCell) | 0);
       const i = order[pi];
       // Sub-cell of position pi: the last key of the cell whose range starts at or before pi. A binary search over
       // the cell's S² range starts (one or two cache lines) replaces a dependent read of key[i], and lets the
       // reorder leave the key array behind.
       let ki = cellKey0;
-      for (let hi = cellKey0 + subcells; hi - ki > 1; ) {
+      for (let hi = cellKey0 + subcells; hi - ki > 1;) {
         const mid = (ki + hi) >> 1;
         if (start[mid] <= pi) ki = mid;
         else hi = mid;
@@ -132,7 +138,13 @@ export function collideParticles(st: SimState, sample = false): void {
       // Second partner: another particle of the same sub-cell if there is one, else of the cell.
       m = Math.imul(s1, 5);
       const u2 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
-      t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = (s3 << 11) | (s3 >>> 21);
+      t = s1 << 9;
+      s2 ^= s0;
+      s3 ^= s1;
+      s1 ^= s2;
+      s0 ^= s3;
+      s2 ^= t;
+      s3 = (s3 << 11) | (s3 >>> 21);
       let pj = nSub > 1 ? sub0 + ((u2 * (nSub - 1)) | 0) : first + ((u2 * (nCell - 1)) | 0);
       if (pj >= pi) pj++;
       const j = order[pj];
@@ -148,7 +160,13 @@ export function collideParticles(st: SimState, sample = false): void {
       // Acceptance with probability σc / (σc)max.
       m = Math.imul(s1, 5);
       const u3 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
-      t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = (s3 << 11) | (s3 >>> 21);
+      t = s1 << 9;
+      s2 ^= s0;
+      s3 ^= s1;
+      s1 ^= s2;
+      s0 ^= s3;
+      s2 ^= t;
+      s3 = (s3 << 11) | (s3 >>> 21);
       if (u3 * sigmaCrMax >= sigmaCr) continue;
 
       collisions++;
@@ -160,18 +178,46 @@ export function collideParticles(st: SimState, sample = false): void {
       pairList[listed++] = j;
       let cr = Math.sqrt(cr2);
       if (rotational) {
-        rng[0] = s0; rng[1] = s1; rng[2] = s2; rng[3] = s3;
-        const crNew = relaxRotation(rng, erot, i, j, quarterMass * cr2, quarterMass, relaxProbability, lbTranslational, lbRotational);
-        s0 = rng[0] | 0; s1 = rng[1] | 0; s2 = rng[2] | 0; s3 = rng[3] | 0;
+        rng[0] = s0;
+        rng[1] = s1;
+        rng[2] = s2;
+        rng[3] = s3;
+        const crNew = relaxRotation(
+          rng,
+          erot,
+          i,
+          j,
+          quarterMass * cr2,
+          quarterMass,
+          relaxProbability,
+          lbTranslational,
+          lbRotational,
+        );
+        s0 = rng[0] | 0;
+        s1 = rng[1] | 0;
+        s2 = rng[2] | 0;
+        s3 = rng[3] | 0;
         if (crNew >= 0) cr = crNew;
       }
       // Deflection: cos χ and the azimuth ε.
       m = Math.imul(s1, 5);
       const u4 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
-      t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = (s3 << 11) | (s3 >>> 21);
+      t = s1 << 9;
+      s2 ^= s0;
+      s3 ^= s1;
+      s1 ^= s2;
+      s0 ^= s3;
+      s2 ^= t;
+      s3 = (s3 << 11) | (s3 >>> 21);
       m = Math.imul(s1, 5);
       const u5 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
-      t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = (s3 << 11) | (s3 >>> 21);
+      t = s1 << 9;
+      s2 ^= s0;
+      s3 ^= s1;
+      s1 ^= s2;
+      s0 ^= s3;
+      s2 ^= t;
+      s3 = (s3 << 11) | (s3 >>> 21);
       // Post-collision velocities: centre-of-mass velocity kept, relative velocity of magnitude cr (differs from
       // |c_r| after a Larsen–Borgnakke exchange) in the new direction. Isotropic scattering (HS, VHS) is written
       // out here: as a call, each of its float arguments was boxed on the heap, every collision.
@@ -201,7 +247,8 @@ export function collideParticles(st: SimState, sample = false): void {
       vy[j] = cmy - 0.5 * ny;
       vz[j] = cmz - 0.5 * nz;
     }
-    if (sample) sampleCell(sums, c * RAW_CELL_SUMS, order, first, first + nCell, vx, vy, vz, erot, rotational, weights[c]);
+    if (sample)
+      sampleCell(sums, c * RAW_CELL_SUMS, order, first, first + nCell, vx, vy, vz, erot, rotational, weights[c]);
   }
   rng[0] = s0;
   rng[1] = s1;
@@ -222,7 +269,14 @@ const DEFLECTED = new Float64Array(3);
  * azimuth eps (rad) (Bird 1994 eq. 2.22).
  */
 function deflectVss(
-  out: Float64Array, crx: number, cry: number, crz: number, crOld: number, crNew: number, cosChi: number, eps: number,
+  out: Float64Array,
+  crx: number,
+  cry: number,
+  crz: number,
+  crOld: number,
+  crNew: number,
+  cosChi: number,
+  eps: number,
 ): void {
   const sinChi = Math.sqrt(1 - cosChi * cosChi);
   const cosEps = Math.cos(eps);
@@ -251,8 +305,15 @@ function deflectVss(
  * Returns the new relative speed (m/s), or −1 when neither partner relaxed. Draws from rng.
  */
 function relaxRotation(
-  rng: Uint32Array, erot: Float64Array, i: number, j: number, etr: number, quarterMass: number,
-  relaxProbability: number, lbTranslational: number, lbRotational: number,
+  rng: Uint32Array,
+  erot: Float64Array,
+  i: number,
+  j: number,
+  etr: number,
+  quarterMass: number,
+  relaxProbability: number,
+  lbTranslational: number,
+  lbRotational: number,
 ): number {
   let changed = false;
   if (uniform(rng) < relaxProbability) {

@@ -14,9 +14,27 @@
  */
 import {
   type SimState,
-  SIDE_STRIDE, SIDE_TYPE, SIDE_LEFT, SIDE_RIGHT, SIDE_BOTTOM, SIDE_TOP, DOMAIN_SIDES,
-  BOUNDARY_PERIODIC, BOUNDARY_SPECULAR, BOUNDARY_WALL, BOUNDARY_RESERVOIR, BOUNDARY_PRESSURE_OUTLET,
-  BLOCK_STRIDE, BLOCK_X0, BLOCK_X1, BLOCK_Y0, BLOCK_Y1, SECTION_STRIDE, SECTION_X, SECTION_Y0, SECTION_Y1,
+  SIDE_STRIDE,
+  SIDE_TYPE,
+  SIDE_LEFT,
+  SIDE_RIGHT,
+  SIDE_BOTTOM,
+  SIDE_TOP,
+  DOMAIN_SIDES,
+  BOUNDARY_PERIODIC,
+  BOUNDARY_SPECULAR,
+  BOUNDARY_WALL,
+  BOUNDARY_RESERVOIR,
+  BOUNDARY_PRESSURE_OUTLET,
+  BLOCK_STRIDE,
+  BLOCK_X0,
+  BLOCK_X1,
+  BLOCK_Y0,
+  BLOCK_Y1,
+  SECTION_STRIDE,
+  SECTION_X,
+  SECTION_Y0,
+  SECTION_Y1,
 } from './state';
 import { reflectAtWall } from './wallReflection';
 
@@ -32,12 +50,22 @@ const MAX_HITS = 64;
  * the radius at a crossing comes from the 3D line (r0 at the start, radial and azimuthal speeds vr, vt, time t) —
  * with the particle's weight, +1 towards +x. Only while sampling (the sums belong to the open batch).
  */
-function countSections(st: SimState, x0: number, y0: number, x1: number, y1: number, vr: number, vt: number, t: number, weight: number): void {
+function countSections(
+  st: SimState,
+  x0: number,
+  y0: number,
+  x1: number,
+  y1: number,
+  vr: number,
+  vt: number,
+  t: number,
+  weight: number,
+): void {
   if (!st.sampling) return;
   const sec = st.sectionTable;
   for (let s = 0; s < st.sectionCount; s++) {
     const xs = sec[s * SECTION_STRIDE + SECTION_X];
-    if ((x0 < xs) === (x1 < xs)) continue;
+    if (x0 < xs === x1 < xs) continue;
     const f = (xs - x0) / (x1 - x0);
     let yc: number;
     if (st.axisymmetric) {
@@ -48,7 +76,8 @@ function countSections(st: SimState, x0: number, y0: number, x1: number, y1: num
     } else {
       yc = y0 + f * (y1 - y0);
     }
-    if (yc >= sec[s * SECTION_STRIDE + SECTION_Y0] && yc <= sec[s * SECTION_STRIDE + SECTION_Y1]) st.sectionSums[s] += x1 >= xs ? weight : -weight;
+    if (yc >= sec[s * SECTION_STRIDE + SECTION_Y0] && yc <= sec[s * SECTION_STRIDE + SECTION_Y1])
+      st.sectionSums[s] += x1 >= xs ? weight : -weight;
   }
 }
 
@@ -105,20 +134,35 @@ export function flyParticle(st: SimState, i: number, dt: number, weight: number)
     let row = -1;
     if (vxi > 0) {
       const t = (lx - px) / vxi;
-      if (t < tHit) { tHit = t; row = SIDE_RIGHT; }
+      if (t < tHit) {
+        tHit = t;
+        row = SIDE_RIGHT;
+      }
     } else if (vxi < 0) {
       const t = -px / vxi;
-      if (t < tHit) { tHit = t; row = SIDE_LEFT; }
+      if (t < tHit) {
+        tHit = t;
+        row = SIDE_LEFT;
+      }
     }
     if (axi) {
       const t = timeToCylinderOutward(py, vyi, a, ly);
-      if (t < tHit) { tHit = t; row = SIDE_TOP; }
+      if (t < tHit) {
+        tHit = t;
+        row = SIDE_TOP;
+      }
     } else if (vyi > 0) {
       const t = (ly - py) / vyi;
-      if (t < tHit) { tHit = t; row = SIDE_TOP; }
+      if (t < tHit) {
+        tHit = t;
+        row = SIDE_TOP;
+      }
     } else if (vyi < 0) {
       const t = -py / vyi;
-      if (t < tHit) { tHit = t; row = SIDE_BOTTOM; }
+      if (t < tHit) {
+        tHit = t;
+        row = SIDE_BOTTOM;
+      }
     }
     for (let b = 0; b < nb; b++) {
       const o = b * BLOCK_STRIDE;
@@ -131,13 +175,19 @@ export function flyParticle(st: SimState, i: number, dt: number, weight: number)
         const t = (x0 - px) / vxi;
         if (t < tHit) {
           const yh = axi ? radiusAt(py, vyi, vzi, t) : py + vyi * t;
-          if (yh >= y0 && yh <= y1) { tHit = t; row = base; }
+          if (yh >= y0 && yh <= y1) {
+            tHit = t;
+            row = base;
+          }
         }
       } else if (vxi < 0 && px >= x1) {
         const t = (x1 - px) / vxi;
         if (t < tHit) {
           const yh = axi ? radiusAt(py, vyi, vzi, t) : py + vyi * t;
-          if (yh >= y0 && yh <= y1) { tHit = t; row = base + 1; }
+          if (yh >= y0 && yh <= y1) {
+            tHit = t;
+            row = base + 1;
+          }
         }
       }
       // The bottom face: met from below. In axisymmetric domains a block on the axis (y0 = 0) has no such face, and a
@@ -146,14 +196,20 @@ export function flyParticle(st: SimState, i: number, dt: number, weight: number)
         const t = axi ? timeToCylinderOutward(py, vyi, a, y0) : (y0 - py) / vyi;
         if (t < tHit) {
           const xh = px + vxi * t;
-          if (xh >= x0 && xh <= x1) { tHit = t; row = base + 2; }
+          if (xh >= x0 && xh <= x1) {
+            tHit = t;
+            row = base + 2;
+          }
         }
       }
       if (py >= y1 && (axi || vyi < 0)) {
         const t = axi ? timeToCylinderFromOutside(py, vyi, a, y1) : (y1 - py) / vyi;
         if (t < tHit) {
           const xh = px + vxi * t;
-          if (xh >= x0 && xh <= x1) { tHit = t; row = base + 3; }
+          if (xh >= x0 && xh <= x1) {
+            tHit = t;
+            row = base + 3;
+          }
         }
       }
     }
@@ -178,7 +234,8 @@ export function flyParticle(st: SimState, i: number, dt: number, weight: number)
     remaining -= tHit;
     if (row < 0) break;
     const r = row * SIDE_STRIDE;
-    const along = row === SIDE_LEFT || row === SIDE_RIGHT || (row >= DOMAIN_SIDES && (row - DOMAIN_SIDES) % 4 < 2) ? py : px;
+    const along =
+      row === SIDE_LEFT || row === SIDE_RIGHT || (row >= DOMAIN_SIDES && (row - DOMAIN_SIDES) % 4 < 2) ? py : px;
     // Snap onto the surface met.
     if (row < DOMAIN_SIDES) {
       if (row === SIDE_LEFT) px = 0;
@@ -225,7 +282,8 @@ export function insideAnyBlock(st: SimState, x: number, y: number): boolean {
   const blocks = st.blockTable;
   for (let b = 0; b < st.blockCount; b++) {
     const o = b * BLOCK_STRIDE;
-    if (x > blocks[o + BLOCK_X0] && x < blocks[o + BLOCK_X1] && y > blocks[o + BLOCK_Y0] && y < blocks[o + BLOCK_Y1]) return true;
+    if (x > blocks[o + BLOCK_X0] && x < blocks[o + BLOCK_X1] && y > blocks[o + BLOCK_Y0] && y < blocks[o + BLOCK_Y1])
+      return true;
   }
   return false;
 }

@@ -9,8 +9,16 @@ import { uniform, standardNormal, rotationalEnergyOverKT, type RngState } from '
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { type SimState, addParticle, SIDE_STRIDE, SIDE_NORMAL_IS_X, SIDE_INWARD, SIDE_PLANE } from './state';
 import {
-  INFLOW_STRIDE, INFLOW_SURFACE, INFLOW_FROM, INFLOW_TO, INFLOW_PER_STEP, INFLOW_SPEED_RATIO, INFLOW_TEMPERATURE,
-  INFLOW_DRIFT_X, INFLOW_DRIFT_Y, INFLOW_DRIFT_Z,
+  INFLOW_STRIDE,
+  INFLOW_SURFACE,
+  INFLOW_FROM,
+  INFLOW_TO,
+  INFLOW_PER_STEP,
+  INFLOW_SPEED_RATIO,
+  INFLOW_TEMPERATURE,
+  INFLOW_DRIFT_X,
+  INFLOW_DRIFT_Y,
+  INFLOW_DRIFT_Z,
 } from '../geometry/inflow';
 import { flyAndSettle } from './settle';
 

@@ -101,7 +101,7 @@ function movePlanar(st: SimState, dt: number): number {
     for (let s = 0; s < sections; s++) {
       for (let image = 0; image < (shift === 0 ? 1 : 2); image++) {
         const xs = sec[3 * s] - image * shift;
-        if ((xo < xs) !== (xo + dx < xs)) {
+        if (xo < xs !== xo + dx < xs) {
           const yc = yo + (dy * (xs - xo)) / dx;
           if (yc >= sec[3 * s + 1] && yc <= sec[3 * s + 2]) sectionSums[s] += dx > 0 ? 1 : -1;
         }
@@ -198,12 +198,13 @@ function moveAxisymmetric(st: SimState, dt: number): number {
     for (let s = 0; s < sections; s++) {
       for (let image = 0; image < (shift === 0 ? 1 : 2); image++) {
         const xs = sec[3 * s] - image * shift;
-        if ((xo < xs) !== (xo + dx < xs)) {
+        if (xo < xs !== xo + dx < xs) {
           const tc = (h * (xs - xo)) / dx;
           const a = ro + v * tc;
           const b = w * tc;
           const rc = Math.sqrt(a * a + b * b);
-          if (rc >= sec[3 * s + 1] && rc <= sec[3 * s + 2]) sectionSums[s] += dx > 0 ? rowWeight[rowOld] : -rowWeight[rowOld];
+          if (rc >= sec[3 * s + 1] && rc <= sec[3 * s + 2])
+            sectionSums[s] += dx > 0 ? rowWeight[rowOld] : -rowWeight[rowOld];
         }
       }
     }

@@ -16,8 +16,19 @@ import type { Plan } from '../case/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { type SimState, SIDE_STRIDE, SIDE_TYPE, SIDE_INWARD, SIDE_PRESSURE, BOUNDARY_PRESSURE_OUTLET } from './state';
 import {
-  INFLOW_STRIDE, INFLOW_SURFACE, INFLOW_PER_STEP, INFLOW_SPEED_RATIO, INFLOW_WEIGHT, INFLOW_TEMPERATURE, INFLOW_DRIFT_X,
-  INFLOW_DRIFT_Y, INFLOW_DRIFT_Z, INFLOW_CELL, INFLOW_CELL_VOLUME, INFLOW_AREA, maxwellianInfluxPerM2S,
+  INFLOW_STRIDE,
+  INFLOW_SURFACE,
+  INFLOW_PER_STEP,
+  INFLOW_SPEED_RATIO,
+  INFLOW_WEIGHT,
+  INFLOW_TEMPERATURE,
+  INFLOW_DRIFT_X,
+  INFLOW_DRIFT_Y,
+  INFLOW_DRIFT_Z,
+  INFLOW_CELL,
+  INFLOW_CELL_VOLUME,
+  INFLOW_AREA,
+  maxwellianInfluxPerM2S,
 } from '../geometry/inflow';
 
 /** Weight of the newest step in the running average of the outlet cells (memory of about 50 steps). */
@@ -34,7 +45,9 @@ export function initialOutletMoments(plan: Plan, table: Float64Array): Float64Ar
   const c2 = (3 * K_B * init.temperatureK) / plan.gas.model.massKg;
   for (let g = 0; g < segments; g++) {
     const o = g * INFLOW_STRIDE;
-    const n = (init.pressurePa / (K_B * init.temperatureK)) * table[o + INFLOW_CELL_VOLUME] / (plan.moleculesPerParticle * table[o + INFLOW_WEIGHT]);
+    const n =
+      ((init.pressurePa / (K_B * init.temperatureK)) * table[o + INFLOW_CELL_VOLUME]) /
+      (plan.moleculesPerParticle * table[o + INFLOW_WEIGHT]);
     out.set([n, n * u, n * v, n * w, n * (u * u + v * v + w * w + c2)], g * MOMENTS);
   }
   return out;
@@ -53,11 +66,21 @@ export function updatePressureOutlets(st: SimState): void {
     const row = table[o + INFLOW_SURFACE] * SIDE_STRIDE;
     if (tab[row + SIDE_TYPE] !== BOUNDARY_PRESSURE_OUTLET) continue;
     const c = table[o + INFLOW_CELL];
-    let n = 0, sx = 0, sy = 0, sz = 0, s2 = 0;
+    let n = 0,
+      sx = 0,
+      sy = 0,
+      sz = 0,
+      s2 = 0;
     for (let k = st.keyStart[c * st.subcellsPerCell]; k < st.keyStart[(c + 1) * st.subcellsPerCell]; k++) {
       const i = st.order[k];
-      const vx = st.vx[i], vy = st.vy[i], vz = st.vz[i];
-      n++; sx += vx; sy += vy; sz += vz; s2 += vx * vx + vy * vy + vz * vz;
+      const vx = st.vx[i],
+        vy = st.vy[i],
+        vz = st.vz[i];
+      n++;
+      sx += vx;
+      sy += vy;
+      sz += vz;
+      s2 += vx * vx + vy * vy + vz * vz;
     }
     const mo = g * MOMENTS;
     // Exponential running averages, written out: the step allocates nothing.
@@ -91,6 +114,8 @@ export function updatePressureOutlets(st: SimState): void {
     table[o + INFLOW_DRIFT_Y] = uy;
     table[o + INFLOW_DRIFT_Z] = uz;
     table[o + INFLOW_SPEED_RATIO] = s;
-    table[o + INFLOW_PER_STEP] = (maxwellianInfluxPerM2S(nb, vmp, s) * table[o + INFLOW_AREA] * st.timeStep) / (st.moleculesPerParticle * table[o + INFLOW_WEIGHT]);
+    table[o + INFLOW_PER_STEP] =
+      (maxwellianInfluxPerM2S(nb, vmp, s) * table[o + INFLOW_AREA] * st.timeStep) /
+      (st.moleculesPerParticle * table[o + INFLOW_WEIGHT]);
   }
 }

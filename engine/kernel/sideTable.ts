@@ -12,11 +12,35 @@ import type { Plan } from '../case/plan';
 import type { SurfacePlan } from '../geometry/surfaces';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import {
-  SIDE_STRIDE, SIDE_TYPE, SIDE_MODEL, SIDE_TEMPERATURE, SIDE_UX, SIDE_UY, SIDE_UZ, SIDE_ACCOMMODATION,
-  SIDE_TANGENTIAL_ENERGY_ACCOMMODATION, SIDE_BIN_OFFSET, SIDE_BIN_COUNT, SIDE_THERMAL_SPEED, SIDE_NORMAL_IS_X,
-  SIDE_INWARD, SIDE_PLANE, SIDE_FROM, SIDE_TO, SIDE_NUMBER_DENSITY, SIDE_PRESSURE,
-  BOUNDARY_PERIODIC, BOUNDARY_SPECULAR, BOUNDARY_WALL, BOUNDARY_RESERVOIR, BOUNDARY_AXIS, BOUNDARY_PRESSURE_OUTLET,
-  WALL_DIFFUSE, WALL_SPECULAR, WALL_MAXWELL, WALL_CERCIGNANI_LAMPIS,
+  SIDE_STRIDE,
+  SIDE_TYPE,
+  SIDE_MODEL,
+  SIDE_TEMPERATURE,
+  SIDE_UX,
+  SIDE_UY,
+  SIDE_UZ,
+  SIDE_ACCOMMODATION,
+  SIDE_TANGENTIAL_ENERGY_ACCOMMODATION,
+  SIDE_BIN_OFFSET,
+  SIDE_BIN_COUNT,
+  SIDE_THERMAL_SPEED,
+  SIDE_NORMAL_IS_X,
+  SIDE_INWARD,
+  SIDE_PLANE,
+  SIDE_FROM,
+  SIDE_TO,
+  SIDE_NUMBER_DENSITY,
+  SIDE_PRESSURE,
+  BOUNDARY_PERIODIC,
+  BOUNDARY_SPECULAR,
+  BOUNDARY_WALL,
+  BOUNDARY_RESERVOIR,
+  BOUNDARY_AXIS,
+  BOUNDARY_PRESSURE_OUTLET,
+  WALL_DIFFUSE,
+  WALL_SPECULAR,
+  WALL_MAXWELL,
+  WALL_CERCIGNANI_LAMPIS,
 } from './state';
 
 function surfaceRow(plan: Plan, f: SurfacePlan, binOffset: number): number[] {
@@ -57,7 +81,12 @@ function surfaceRow(plan: Plan, f: SurfacePlan, binOffset: number): number[] {
     return row;
   }
   row[SIDE_TYPE] = BOUNDARY_WALL;
-  row[SIDE_MODEL] = { diffuse: WALL_DIFFUSE, specular: WALL_SPECULAR, maxwell: WALL_MAXWELL, cercignaniLampis: WALL_CERCIGNANI_LAMPIS }[b.model];
+  row[SIDE_MODEL] = {
+    diffuse: WALL_DIFFUSE,
+    specular: WALL_SPECULAR,
+    maxwell: WALL_MAXWELL,
+    cercignaniLampis: WALL_CERCIGNANI_LAMPIS,
+  }[b.model];
   if (b.model === 'maxwell') row[SIDE_ACCOMMODATION] = b.accommodation ?? 1;
   if (b.model === 'cercignaniLampis') {
     row[SIDE_ACCOMMODATION] = b.normalAccommodation ?? 1;

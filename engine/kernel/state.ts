@@ -266,7 +266,9 @@ export function createState(plan: Plan, stream = 0): SimState {
     cellSizeX: g.cellSizeXM,
     cellSizeY: g.cellSizeYM,
     rowWeight: cg.rowWeights,
-    selectionFactor: cg.gasVolumesM3.map((v, c) => (v > 0 ? (0.5 * plan.moleculesPerParticle * cg.weights[c] * plan.timeStepS) / v : 0)),
+    selectionFactor: cg.gasVolumesM3.map((v, c) =>
+      v > 0 ? (0.5 * plan.moleculesPerParticle * cg.weights[c] * plan.timeStepS) / v : 0,
+    ),
     blockTable: Float64Array.from(g.blocks.flatMap((b) => [b.x0, b.x1, b.y0, b.y1])),
     blockCount: g.blocks.length,
     nearSolid: nearSolidTable(g.cellsX, g.cellsY, g.cellSizeXM, g.cellSizeYM, g.subcellsPerCellSide, g.blocks),
@@ -312,7 +314,14 @@ export function createState(plan: Plan, stream = 0): SimState {
  * Flags (per sub-cell key) the cells that touch a block or neighbour one that does: see SimState.nearSolid. A cell is
  * flagged when its closed rectangle grown by one cell on every side meets a block's closed rectangle.
  */
-function nearSolidTable(nx: number, ny: number, dx: number, dy: number, s: number, blocks: readonly BlockRectangle[]): Uint8Array {
+function nearSolidTable(
+  nx: number,
+  ny: number,
+  dx: number,
+  dy: number,
+  s: number,
+  blocks: readonly BlockRectangle[],
+): Uint8Array {
   const subcells = s * s;
   const flags = new Uint8Array(nx * ny * subcells);
   for (let j = 0; j < ny; j++) {
@@ -321,7 +330,8 @@ function nearSolidTable(nx: number, ny: number, dx: number, dy: number, s: numbe
       const x1 = (i + 2) * dx;
       const y0 = (j - 1) * dy;
       const y1 = (j + 2) * dy;
-      if (blocks.some((b) => b.x0 <= x1 && b.x1 >= x0 && b.y0 <= y1 && b.y1 >= y0)) flags.fill(1, (j * nx + i) * subcells, (j * nx + i + 1) * subcells);
+      if (blocks.some((b) => b.x0 <= x1 && b.x1 >= x0 && b.y0 <= y1 && b.y1 >= y0))
+        flags.fill(1, (j * nx + i) * subcells, (j * nx + i + 1) * subcells);
     }
   }
   return flags;

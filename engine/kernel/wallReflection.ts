@@ -69,7 +69,7 @@ export function reflectAtWall(st: SimState, i: number, side: number, along: numb
   const vz0 = st.vz[i];
   const e0 = st.erot[i];
   // Wall-frame components: normal (positive into the gas), tangential t1 (x or y along the side), t2 = z.
-  let cn = ((normalIsX ? vx0 - uwx : vy0 - uwy)) * inward; // negative: moving into the wall
+  let cn = (normalIsX ? vx0 - uwx : vy0 - uwy) * inward; // negative: moving into the wall
   let ct1 = normalIsX ? vy0 - uwy : vx0 - uwx;
   let ct2 = vz0 - uwz;
   let erot = e0;

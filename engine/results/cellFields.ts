@@ -4,8 +4,21 @@
  */
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import {
-  SUM_N, SUM_VX, SUM_VY, SUM_VZ, SUM_VXX, SUM_VYY, SUM_VZZ, SUM_VXY, SUM_VXZ, SUM_VYZ,
-  SUM_V2VX, SUM_V2VY, SUM_EROT, SUM_EROT_VX, SUM_EROT_VY,
+  SUM_N,
+  SUM_VX,
+  SUM_VY,
+  SUM_VZ,
+  SUM_VXX,
+  SUM_VYY,
+  SUM_VZZ,
+  SUM_VXY,
+  SUM_VXZ,
+  SUM_VYZ,
+  SUM_V2VX,
+  SUM_V2VY,
+  SUM_EROT,
+  SUM_EROT_VX,
+  SUM_EROT_VY,
 } from '../kernel/sampleCells';
 
 /** Field names with their SI unit; the order is the column order of every export. */
@@ -41,7 +54,13 @@ export interface CellFieldConstants {
  * shearStressXY is the viscous stress τ_xy = −P_xy = −ρ⟨C_x C_y⟩; heat flux q = n ⟨(½ m C² + e_rot) C⟩.
  */
 export function deriveCellFields(
-  raw: Float64Array, o: number, steps: number, volumeM3: number, k: CellFieldConstants, out: Float64Array, outOffset: number,
+  raw: Float64Array,
+  o: number,
+  steps: number,
+  volumeM3: number,
+  k: CellFieldConstants,
+  out: Float64Array,
+  outOffset: number,
 ): void {
   const n = raw[o + SUM_N];
   if (n === 0 || steps === 0) {

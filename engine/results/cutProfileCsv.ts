@@ -34,11 +34,18 @@ export function cutProfileCsv(cut: CutProfileTable, predictions: readonly CutPre
   const other = cut.along === 'x' ? 'y' : 'x';
   const models = cut.names.map((name) => predictions.filter((p) => p.quantity === name && p.values.length === n));
   const header = [`${cut.along} [m]`, ...(fixed ? [`${other} [m]`] : [])];
-  cut.names.forEach((name, f) => header.push(`${name} [${cut.units[f]}]`, `${name} ci95 [${cut.units[f]}]`, ...models[f].map((p) => `${name} ${p.model} [${cut.units[f]}]`)));
+  cut.names.forEach((name, f) =>
+    header.push(
+      `${name} [${cut.units[f]}]`,
+      `${name} ci95 [${cut.units[f]}]`,
+      ...models[f].map((p) => `${name} ${p.model} [${cut.units[f]}]`),
+    ),
+  );
   const rows: number[][] = [];
   for (let k = 0; k < n; k++) {
     const row = [cut.positionsM[k], ...(fixed ? [cut.atM] : [])];
-    for (let f = 0; f < w; f++) row.push(cut.mean[k * w + f], cut.ci95[k * w + f], ...models[f].map((p) => p.values[k]));
+    for (let f = 0; f < w; f++)
+      row.push(cut.mean[k * w + f], cut.ci95[k * w + f], ...models[f].map((p) => p.values[k]));
     rows.push(row);
   }
   return csvDocument(header, rows);

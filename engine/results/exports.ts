@@ -116,7 +116,13 @@ export interface SummaryJson {
   /** Per compared quantity or profile: which model is good enough, and the numbers behind it (continuum/verdict.ts). */
   verdict?: Record<string, VerdictJson>;
   /** The analytic problem recognised and what each model means. */
-  continuumModels?: { problem: string; description: string; meanFreePath: { kind: string; value: JsonNumber }; knudsen: JsonNumber; models: Record<string, string> };
+  continuumModels?: {
+    problem: string;
+    description: string;
+    meanFreePath: { kind: string; value: JsonNumber };
+    knudsen: JsonNumber;
+    models: Record<string, string>;
+  };
   /** Why no continuum model is compared, when none applies. */
   continuumNote?: string;
   /** SI unit of every quantity named in this file; a wall estimate's mean and ci95 share its quantity's unit. */
@@ -136,7 +142,10 @@ export interface VerdictJson {
   relativeHalfWidth: JsonNumber;
   threshold: JsonNumber;
   scale: JsonNumber;
-  models: Record<string, { deviation: JsonNumber; maxDeviation: JsonNumber; normalizedDeviation: JsonNumber; adequate: boolean }>;
+  models: Record<
+    string,
+    { deviation: JsonNumber; maxDeviation: JsonNumber; normalizedDeviation: JsonNumber; adequate: boolean }
+  >;
 }
 
 /** What summaryJson and resultFiles take besides the result; `comparison` adds the continuum sections. */
@@ -156,17 +165,29 @@ function verdictJson(v: QuantityVerdict): VerdictJson {
     relativeHalfWidth: jsonNumber(v.relativeHalfWidth),
     threshold: jsonNumber(v.threshold),
     scale: jsonNumber(v.scale),
-    models: Object.fromEntries(v.models.map((d) => [d.model, {
-      deviation: jsonNumber(d.deviation), maxDeviation: jsonNumber(d.maxDeviation), normalizedDeviation: jsonNumber(d.normalizedDeviation), adequate: d.adequate,
-    }])),
+    models: Object.fromEntries(
+      v.models.map((d) => [
+        d.model,
+        {
+          deviation: jsonNumber(d.deviation),
+          maxDeviation: jsonNumber(d.maxDeviation),
+          normalizedDeviation: jsonNumber(d.normalizedDeviation),
+          adequate: d.adequate,
+        },
+      ]),
+    ),
   };
 }
 
 /** The continuum sections of summary.json (see the file header); units of their quantities go into `units`. */
-function continuumJson(c: ContinuumComparisonResult, units: Record<string, string>): Pick<SummaryJson, 'continuum' | 'verdict' | 'continuumModels' | 'continuumNote'> {
+function continuumJson(
+  c: ContinuumComparisonResult,
+  units: Record<string, string>,
+): Pick<SummaryJson, 'continuum' | 'verdict' | 'continuumModels' | 'continuumNote'> {
   if (!c.recognised) return { continuumNote: c.reason };
   const continuum: Record<string, Record<string, JsonNumber>> = {};
-  for (const [model, values] of Object.entries(c.continuum)) continuum[model] = Object.fromEntries(Object.entries(values!).map(([k, x]) => [k, jsonNumber(x)]));
+  for (const [model, values] of Object.entries(c.continuum))
+    continuum[model] = Object.fromEntries(Object.entries(values!).map(([k, x]) => [k, jsonNumber(x)]));
   Object.assign(units, c.units);
   units.deviation = '1';
   const p = c.predictions;
@@ -174,8 +195,11 @@ function continuumJson(c: ContinuumComparisonResult, units: Record<string, strin
     continuum,
     verdict: Object.fromEntries(Object.entries(c.verdict).map(([k, v]) => [k, verdictJson(v)])),
     continuumModels: {
-      problem: p.problem, description: p.description, meanFreePath: { kind: p.meanFreePath.kind, value: jsonNumber(p.meanFreePath.valueM) },
-      knudsen: jsonNumber(p.knudsen), models: { ...p.models } as Record<string, string>,
+      problem: p.problem,
+      description: p.description,
+      meanFreePath: { kind: p.meanFreePath.kind, value: jsonNumber(p.meanFreePath.valueM) },
+      knudsen: jsonNumber(p.knudsen),
+      models: { ...p.models } as Record<string, string>,
     },
   };
 }
@@ -192,7 +216,9 @@ export interface FlowJson {
 function flowJson(flow: FlowResult, units: Record<string, string>, planar: boolean): FlowJson {
   const out: FlowJson = {
     section: flow.section,
-    sections: Object.fromEntries(Object.entries(flow.sections).map(([name, e]) => [name, { massFlowRate: wallEstimateJson(e) }])),
+    sections: Object.fromEntries(
+      Object.entries(flow.sections).map(([name, e]) => [name, { massFlowRate: wallEstimateJson(e) }]),
+    ),
     upstreamPressure: jsonNumber(flow.upstreamPressurePa),
     downstreamPressure: jsonNumber(flow.downstreamPressurePa),
     temperature: jsonNumber(flow.temperatureK),
@@ -238,7 +264,10 @@ export function summaryJson(result: SimulationResult, extra: SummaryExtra): Summ
     units[name] = unit;
   }
   const walls: SummaryJson['walls'] = {};
-  for (const [side, estimates] of Object.entries(result.walls) as [string, Record<WallQuantityName, IntegralEstimate>][]) {
+  for (const [side, estimates] of Object.entries(result.walls) as [
+    string,
+    Record<WallQuantityName, IntegralEstimate>,
+  ][]) {
     const entry = {} as Record<WallQuantityName, WallEstimateJson>;
     for (const q of WALL_QUANTITIES) entry[q] = wallEstimateJson(estimates[q]);
     walls[side] = entry;
@@ -320,11 +349,18 @@ export function profilesCsv(result: SimulationResult, comparison?: ContinuumComp
       .map(([model, p]) => [model, p![key]] as [string, Float64Array]);
   });
   const header = ['y [m]'];
-  t.names.forEach((name, f) => header.push(`${name} [${t.units[f]}]`, `${name} ci95 [${t.units[f]}]`, ...models[f].map(([m]) => `${name} ${m} [${t.units[f]}]`)));
+  t.names.forEach((name, f) =>
+    header.push(
+      `${name} [${t.units[f]}]`,
+      `${name} ci95 [${t.units[f]}]`,
+      ...models[f].map(([m]) => `${name} ${m} [${t.units[f]}]`),
+    ),
+  );
   const rows: (number | string)[][] = [];
   for (let r = 0; r < t.rows; r++) {
     const row: number[] = [result.profileY[r]];
-    for (let f = 0; f < width; f++) row.push(t.mean[r * width + f], t.ci95[r * width + f], ...models[f].map(([, v]) => v[r]));
+    for (let f = 0; f < width; f++)
+      row.push(t.mean[r * width + f], t.ci95[r * width + f], ...models[f].map(([, v]) => v[r]));
     rows.push(row);
   }
   return csvDocument(header, rows);
@@ -345,12 +381,16 @@ export function fieldsCsv(result: SimulationResult): string {
 export function surfacesCsv(result: SimulationResult): string {
   let header: string[] | undefined;
   const rows: (number | string)[][] = [];
-  for (const [wall, bins] of Object.entries(result.wallBins) as [string, { position: Float64Array; table: FieldTable }][]) {
+  for (const [wall, bins] of Object.entries(result.wallBins) as [
+    string,
+    { position: Float64Array; table: FieldTable },
+  ][]) {
     header ??= ['wall', 'position [m]', ...fieldHeaders(bins.table)];
     for (let b = 0; b < bins.table.rows; b++) rows.push([wall, bins.position[b], ...fieldValues(bins.table, b)]);
   }
   header ??= [
-    'wall', 'position [m]',
+    'wall',
+    'position [m]',
     ...WALL_QUANTITIES.flatMap((q) => [`${q} [${WALL_QUANTITY_UNITS[q]}]`, `${q} ci95 [${WALL_QUANTITY_UNITS[q]}]`]),
   ];
   return csvDocument(header, rows);
@@ -362,7 +402,11 @@ export function surfacesCsv(result: SimulationResult): string {
  */
 export function resultFiles(result: SimulationResult, extra: SummaryExtra & { plan?: Plan }): Record<string, string> {
   const comparison = extra.comparison ?? (extra.plan ? continuumComparisonOf(extra.plan, result) : undefined);
-  const summaryExtra = { performance: extra.performance, caseName: extra.caseName, ...(comparison ? { comparison } : {}) };
+  const summaryExtra = {
+    performance: extra.performance,
+    caseName: extra.caseName,
+    ...(comparison ? { comparison } : {}),
+  };
   return {
     'summary.json': summaryJsonText(result, summaryExtra),
     'profiles.csv': profilesCsv(result, comparison),

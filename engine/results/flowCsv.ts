@@ -8,7 +8,10 @@ import { FLOW_QUANTITIES, flowQuantityUnits } from './flowQuantities';
 import { csvDocument } from './exports';
 
 /** 1 Pa·m³/s = 10 mbar·L/s (1 mbar = 100 Pa, 1 L = 1e-3 m³); 1 m³/s = 1000 L/s. */
-const ENGINEERING = { throughput: { factor: 10, unit: 'mbar L/s' }, conductance: { factor: 1000, unit: 'L/s' } } as const;
+const ENGINEERING = {
+  throughput: { factor: 10, unit: 'mbar L/s' },
+  conductance: { factor: 1000, unit: 'L/s' },
+} as const;
 
 export function flowCsv(flow: FlowResult, planar: boolean): string {
   const units = flowQuantityUnits(planar);
@@ -23,6 +26,7 @@ export function flowCsv(flow: FlowResult, planar: boolean): string {
       rows.push([q, planar ? `${unit}/m` : unit, e.mean * factor, e.ci95 * factor]);
     }
   }
-  for (const [name, e] of Object.entries(flow.sections)) rows.push([`sections.${name}.massFlowRate`, `kg/s${perDepth}`, e.mean, e.ci95]);
+  for (const [name, e] of Object.entries(flow.sections))
+    rows.push([`sections.${name}.massFlowRate`, `kg/s${perDepth}`, e.mean, e.ci95]);
   return csvDocument(['quantity', 'unit', 'mean', 'ci95'], rows);
 }

@@ -19,14 +19,35 @@ import { MOLECULES_PER_S_PER_SCCM } from '../units/engineeringUnits';
 import type { Estimate } from './summarize';
 import type { IntegralEstimate } from './integralEstimate';
 
-export const FLOW_QUANTITIES = ['massFlowRate', 'throughput', 'molarFlow', 'conductance', 'transmissionProbability', 'reducedFlowRate'] as const;
+export const FLOW_QUANTITIES = [
+  'massFlowRate',
+  'throughput',
+  'molarFlow',
+  'conductance',
+  'transmissionProbability',
+  'reducedFlowRate',
+] as const;
 export type FlowQuantityName = (typeof FLOW_QUANTITIES)[number];
 
 /** SI units (and sccm) of the flow numbers, for three-dimensional (axisymmetric) and planar (per metre) cases. */
 export function flowQuantityUnits(planar: boolean): Record<FlowQuantityName, string> {
   return planar
-    ? { massFlowRate: 'kg/(s m)', throughput: 'Pa m^2/s', molarFlow: 'sccm/m', conductance: 'm^2/s', transmissionProbability: '1', reducedFlowRate: '1' }
-    : { massFlowRate: 'kg/s', throughput: 'Pa m^3/s', molarFlow: 'sccm', conductance: 'm^3/s', transmissionProbability: '1', reducedFlowRate: '1' };
+    ? {
+        massFlowRate: 'kg/(s m)',
+        throughput: 'Pa m^2/s',
+        molarFlow: 'sccm/m',
+        conductance: 'm^2/s',
+        transmissionProbability: '1',
+        reducedFlowRate: '1',
+      }
+    : {
+        massFlowRate: 'kg/s',
+        throughput: 'Pa m^3/s',
+        molarFlow: 'sccm',
+        conductance: 'm^3/s',
+        transmissionProbability: '1',
+        reducedFlowRate: '1',
+      };
 }
 
 export interface FlowResult {
@@ -78,7 +99,8 @@ export function flowResultOf(plan: Plan, sections: Record<string, IntegralEstima
     const v0 = Math.sqrt((2 * K_B * t) / m);
     const a = c.bodyAccelerationXMPerS2;
     // −dp/dx: the body force per volume of a force-driven duct, else the mean gradient between the vessels.
-    const gradient = a !== 0 ? plan.reference.massDensityKgPerM3 * a : r.lengthM !== undefined && dp > 0 ? dp / r.lengthM : NaN;
+    const gradient =
+      a !== 0 ? plan.reference.massDensityKgPerM3 * a : r.lengthM !== undefined && dp > 0 ? dp / r.lengthM : NaN;
     const scale = r.duct === 'channel' ? r.sizeM * r.sizeM : Math.PI * r.sizeM ** 3;
     if (Number.isFinite(gradient) && gradient !== 0) values.reducedFlowRate = scaled(v0 / (scale * gradient));
   }

@@ -16,7 +16,14 @@ export interface IntegralEstimate extends Estimate {
 
 /** A blocking result (one replica or combined) as the estimate reported, with its correlation time in steps. */
 function fromBlocking(
-  b: { mean: number; ci95: number; standardError: number; effectiveSamples: number; correlationTime: number; plateauFound: boolean },
+  b: {
+    mean: number;
+    ci95: number;
+    standardError: number;
+    effectiveSamples: number;
+    correlationTime: number;
+    plateauFound: boolean;
+  },
   batchSteps: number,
 ): IntegralEstimate {
   return {
@@ -30,7 +37,15 @@ function fromBlocking(
 }
 
 function integralEstimate(values: Float64Array, batchSteps: number): IntegralEstimate {
-  if (values.length < 2) return { mean: values.length ? values[0] : NaN, ci95: NaN, standardError: NaN, effectiveSamples: values.length, correlationTimeSteps: NaN, plateauFound: false };
+  if (values.length < 2)
+    return {
+      mean: values.length ? values[0] : NaN,
+      ci95: NaN,
+      standardError: NaN,
+      effectiveSamples: values.length,
+      correlationTimeSteps: NaN,
+      plateauFound: false,
+    };
   return fromBlocking(blockingAnalysis(values), batchSteps);
 }
 
@@ -40,15 +55,29 @@ function integralEstimate(values: Float64Array, batchSteps: number): IntegralEst
  * (e.g. one stopped just after its transient) has no error bar of its own: it is left out, and counted in `leftOut` so
  * the result can say so — unless no replica has 2 values, when the pooled mean comes without a half-width.
  */
-export function replicaIntegralEstimate(series: readonly Float64Array[], batchSteps: number): { estimate: IntegralEstimate; leftOut: number } {
+export function replicaIntegralEstimate(
+  series: readonly Float64Array[],
+  batchSteps: number,
+): { estimate: IntegralEstimate; leftOut: number } {
   const filled = series.filter((s) => s.length > 0);
   const usable = filled.filter((s) => s.length >= 2);
   if (usable.length === 0 && filled.length > 1) {
     const n = filled.length;
     const mean = filled.reduce((sum, s) => sum + s[0], 0) / n;
-    return { estimate: { mean, ci95: NaN, standardError: NaN, effectiveSamples: n, correlationTimeSteps: NaN, plateauFound: false }, leftOut: 0 };
+    return {
+      estimate: {
+        mean,
+        ci95: NaN,
+        standardError: NaN,
+        effectiveSamples: n,
+        correlationTimeSteps: NaN,
+        plateauFound: false,
+      },
+      leftOut: 0,
+    };
   }
   const leftOut = filled.length - usable.length;
-  if (usable.length <= 1) return { estimate: integralEstimate(usable[0] ?? filled[0] ?? new Float64Array(0), batchSteps), leftOut };
+  if (usable.length <= 1)
+    return { estimate: integralEstimate(usable[0] ?? filled[0] ?? new Float64Array(0), batchSteps), leftOut };
   return { estimate: fromBlocking(replicaBlockingAnalysis(usable), batchSteps), leftOut };
 }

@@ -25,10 +25,17 @@ function checkSameCase(sets: readonly SampleSet[]): void {
     if (i === 0) return;
     const where = `cannot merge sample set ${i + 1} with set 1`;
     const differs = caseDifferences(first.plan.caseData, s.plan.caseData, REPLICA_FREE_CASE_FIELDS);
-    if (differs.length) throw new Error(`${where}: they are runs of different cases (only the seed may differ):\n  ${differs.join('\n  ')}`);
+    if (differs.length)
+      throw new Error(
+        `${where}: they are runs of different cases (only the seed may differ):\n  ${differs.join('\n  ')}`,
+      );
     const geometry = geometryDifferences(first.geometry, s.geometry);
-    if (geometry.length) throw new Error(`${where}: the same case was planned differently (another version of Tenuis?): ${geometry.join('; ')}`);
-    if (s.plan.batchSteps !== first.plan.batchSteps) throw new Error(`${where}: base batches of ${s.plan.batchSteps} and ${first.plan.batchSteps} steps`);
+    if (geometry.length)
+      throw new Error(
+        `${where}: the same case was planned differently (another version of Tenuis?): ${geometry.join('; ')}`,
+      );
+    if (s.plan.batchSteps !== first.plan.batchSteps)
+      throw new Error(`${where}: base batches of ${s.plan.batchSteps} and ${first.plan.batchSteps} steps`);
     const keys = (set: SampleSet) => [...set.series.keys()].sort().join(', ');
     if (s.wallNames.join() !== first.wallNames.join() || keys(s) !== keys(first)) {
       throw new Error(`${where}: they sampled different walls or quantities (${keys(s)} vs ${keys(first)})`);
@@ -102,7 +109,11 @@ export function mergeSampleSets(sets: readonly SampleSet[]): SampleSet {
   checkDistinctReplicas(sets);
   const first = sets[0];
   const series = new Map<string, Float64Array[]>();
-  for (const key of first.series.keys()) series.set(key, sets.flatMap((s) => s.series.get(key)!.map((v) => v.slice())));
+  for (const key of first.series.keys())
+    series.set(
+      key,
+      sets.flatMap((s) => s.series.get(key)!.map((v) => v.slice())),
+    );
   return {
     plan: first.plan,
     geometry: first.geometry,

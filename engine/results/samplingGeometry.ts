@@ -41,8 +41,17 @@ type GeometryArrays = 'sideTable' | 'surfaceNames' | 'sectionNames' | 'cellVolum
 
 /** The scalar members of SamplingGeometry, typed over every key so a new member fails to compile until listed here. */
 const GEOMETRY_SCALAR_TABLE: { readonly [K in Exclude<keyof SamplingGeometry, GeometryArrays>]: true } = {
-  cells: true, cellsX: true, cellsY: true, lengthX: true, lengthY: true, cellVolume: true, timeStep: true,
-  massKg: true, moleculesPerParticle: true, rotationalDof: true, axisymmetric: true,
+  cells: true,
+  cellsX: true,
+  cellsY: true,
+  lengthX: true,
+  lengthY: true,
+  cellVolume: true,
+  timeStep: true,
+  massKg: true,
+  moleculesPerParticle: true,
+  rotationalDof: true,
+  axisymmetric: true,
 };
 export const GEOMETRY_SCALARS = Object.keys(GEOMETRY_SCALAR_TABLE) as (keyof typeof GEOMETRY_SCALAR_TABLE)[];
 
@@ -104,10 +113,13 @@ export function wallBinTotalOf(g: SamplingGeometry): number {
  * per-cell arrays and names follow from the case, which callers compare on their own.
  */
 export function geometryDifferences(
-  a: Pick<SamplingGeometry, (typeof GEOMETRY_SCALARS)[number] | 'sideTable'>, b: Pick<SamplingGeometry, (typeof GEOMETRY_SCALARS)[number] | 'sideTable'>,
+  a: Pick<SamplingGeometry, (typeof GEOMETRY_SCALARS)[number] | 'sideTable'>,
+  b: Pick<SamplingGeometry, (typeof GEOMETRY_SCALARS)[number] | 'sideTable'>,
 ): string[] {
   const out: string[] = [];
-  for (const key of GEOMETRY_SCALARS) if ((a[key] ?? false) !== (b[key] ?? false)) out.push(`${key}: ${a[key]} vs ${b[key]}`);
-  if (a.sideTable.length !== b.sideTable.length || a.sideTable.some((v, k) => v !== b.sideTable[k])) out.push('sideTable (boundary conditions or wall bins)');
+  for (const key of GEOMETRY_SCALARS)
+    if ((a[key] ?? false) !== (b[key] ?? false)) out.push(`${key}: ${a[key]} vs ${b[key]}`);
+  if (a.sideTable.length !== b.sideTable.length || a.sideTable.some((v, k) => v !== b.sideTable[k]))
+    out.push('sideTable (boundary conditions or wall bins)');
   return out;
 }

@@ -8,7 +8,14 @@
  */
 import type { Plan, ReferenceState } from '../case/plan';
 import type { Simulation } from '../simulation';
-import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN, SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT, SIDE_FROM } from '../kernel/state';
+import {
+  RAW_CELL_SUMS,
+  SUMS_PER_WALL_BIN,
+  SIDE_STRIDE,
+  SIDE_BIN_OFFSET,
+  SIDE_BIN_COUNT,
+  SIDE_FROM,
+} from '../kernel/state';
 import { totalOf, batchView, batchSteps, storedSteps, type BatchSums } from '../stats/doublingBatches';
 import { tQuantile975 } from '../stats/studentT';
 import { sampleSetOf, type SampleSet } from './sampleSet';
@@ -16,7 +23,15 @@ import { flowResultOf, type FlowResult } from './flowQuantities';
 import { sectionSeriesKey } from './seriesKeys';
 import { replicaIntegralEstimate, type IntegralEstimate } from './integralEstimate';
 import { CELL_FIELDS, CELL_FIELD_COUNT, deriveCellFields, type CellFieldConstants } from './cellFields';
-import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, wallQuantitiesFromSums, sideIndex, wallLengthM, wallBinAreaM2, type WallQuantityName } from './wallQuantities';
+import {
+  WALL_QUANTITIES,
+  WALL_QUANTITY_UNITS,
+  wallQuantitiesFromSums,
+  sideIndex,
+  wallLengthM,
+  wallBinAreaM2,
+  type WallQuantityName,
+} from './wallQuantities';
 
 export type { IntegralEstimate };
 
@@ -103,10 +118,12 @@ function groupedFields(set: SampleSet, groupOf: Int32Array, groups: number, volu
   const totalSteps = storedSteps(store) + set.pendingSteps;
   const mean = new Float64Array(groups * CELL_FIELD_COUNT);
   const gt = group(total);
-  for (let g = 0; g < groups; g++) deriveCellFields(gt, g * RAW_CELL_SUMS, totalSteps, volumes[g], k, mean, g * CELL_FIELD_COUNT);
+  for (let g = 0; g < groups; g++)
+    deriveCellFields(gt, g * RAW_CELL_SUMS, totalSteps, volumes[g], k, mean, g * CELL_FIELD_COUNT);
   const ci95 = batchHalfWidths(store, groups * CELL_FIELD_COUNT, (b, out) => {
     const gb = group(batchView(store, b));
-    for (let g = 0; g < groups; g++) deriveCellFields(gb, g * RAW_CELL_SUMS, batchSteps(store), volumes[g], k, out, g * CELL_FIELD_COUNT);
+    for (let g = 0; g < groups; g++)
+      deriveCellFields(gb, g * RAW_CELL_SUMS, batchSteps(store), volumes[g], k, out, g * CELL_FIELD_COUNT);
   });
   return {
     names: CELL_FIELDS.map((f) => f.name),
@@ -120,7 +137,11 @@ function groupedFields(set: SampleSet, groupOf: Int32Array, groups: number, volu
 }
 
 /** 95 % half-widths over the store's complete batches of values produced by `derive` for each batch. */
-function batchHalfWidths(store: BatchSums, width: number, derive: (batch: number, out: Float64Array) => void): Float64Array {
+function batchHalfWidths(
+  store: BatchSums,
+  width: number,
+  derive: (batch: number, out: Float64Array) => void,
+): Float64Array {
   const nb = store.batches;
   const ci = new Float64Array(width).fill(NaN);
   if (nb < 2) return ci;
@@ -174,7 +195,15 @@ function wallBinTable(set: SampleSet, name: string): { position: Float64Array; t
   const position = Float64Array.from({ length: bins }, (_, b) => st.sideTable[row + SIDE_FROM] + (b + 0.5) * binLength);
   return {
     position,
-    table: { names: [...WALL_QUANTITIES], units: WALL_QUANTITIES.map((q) => WALL_QUANTITY_UNITS[q]), rows: bins, mean, ci95, batches: store.batches, batchLengthSteps: batchSteps(store) },
+    table: {
+      names: [...WALL_QUANTITIES],
+      units: WALL_QUANTITIES.map((q) => WALL_QUANTITY_UNITS[q]),
+      rows: bins,
+      mean,
+      ci95,
+      batches: store.batches,
+      batchLengthSteps: batchSteps(store),
+    },
   };
 }
 
@@ -220,15 +249,21 @@ export function summarizeSamples(set: SampleSet): SimulationResult {
       const { estimate: e, leftOut } = replicaIntegralEstimate(set.series.get(`${name}.${q}`) ?? [], plan.batchSteps);
       leftOutReplicas = Math.max(leftOutReplicas, leftOut);
       entry[q] = e;
-      if (Number.isFinite(e.correlationTimeSteps)) longestCorrelationSteps = Math.max(longestCorrelationSteps, e.correlationTimeSteps);
+      if (Number.isFinite(e.correlationTimeSteps))
+        longestCorrelationSteps = Math.max(longestCorrelationSteps, e.correlationTimeSteps);
       if (q === 'shearStress' || q === 'heatFlux') {
-        if (!e.plateauFound && counters.sampledSteps > 0) warnings.push(`walls.${name}.${q}: no plateau in the blocking analysis; its error bar may be too small — sample longer`);
+        if (!e.plateauFound && counters.sampledSteps > 0)
+          warnings.push(
+            `walls.${name}.${q}: no plateau in the blocking analysis; its error bar may be too small — sample longer`,
+          );
       }
     }
     walls[name] = entry;
   }
   if (leftOutReplicas > 0) {
-    warnings.push(`${leftOutReplicas} of ${set.replicas} replicas sampled fewer than 2 base batches and are left out of the wall quantities (their cell samples are kept)`);
+    warnings.push(
+      `${leftOutReplicas} of ${set.replicas} replicas sampled fewer than 2 base batches and are left out of the wall quantities (their cell samples are kept)`,
+    );
   }
 
   const cellX = new Float64Array(st.cells);
@@ -256,7 +291,10 @@ export function summarizeSamples(set: SampleSet): SimulationResult {
   for (const name of st.sectionNames) {
     const { estimate } = replicaIntegralEstimate(set.series.get(sectionSeriesKey(name)) ?? [], plan.batchSteps);
     sections[name] = estimate;
-    if (!estimate.plateauFound && counters.sampledSteps > 0) warnings.push(`flow.sections.${name}.massFlowRate: no plateau in the blocking analysis; its error bar may be too small — sample longer`);
+    if (!estimate.plateauFound && counters.sampledSteps > 0)
+      warnings.push(
+        `flow.sections.${name}.massFlowRate: no plateau in the blocking analysis; its error bar may be too small — sample longer`,
+      );
   }
   const flow = flowResultOf(plan, sections);
 
@@ -265,12 +303,16 @@ export function summarizeSamples(set: SampleSet): SimulationResult {
       `field batches are ${cells.batchLengthSteps} steps long but wall quantities stay correlated for about ${longestCorrelationSteps.toFixed(0)} steps; profile error bars may be too small — sample at least ${Math.ceil((10 * longestCorrelationSteps * 16) / 1000) * 1000} steps`,
     );
   }
-  if (cells.batches < 2 && counters.sampledSteps > 0) warnings.push('fewer than 2 complete batches: profile error bars are not available — sample longer');
+  if (cells.batches < 2 && counters.sampledSteps > 0)
+    warnings.push('fewer than 2 complete batches: profile error bars are not available — sample longer');
 
   const lambda = plan.reference.meanFreePathM;
   const separation = counters.collisionCount > 0 ? counters.separationSum / counters.collisionCount : NaN;
   const mcsRatio = separation / lambda;
-  if (mcsRatio > 0.2) warnings.push(`mean collision separation is ${mcsRatio.toFixed(2)} mean free paths; keep it below about 0.2 (more particles per cell or smaller cells)`);
+  if (mcsRatio > 0.2)
+    warnings.push(
+      `mean collision separation is ${mcsRatio.toFixed(2)} mean free paths; keep it below about 0.2 (more particles per cell or smaller cells)`,
+    );
 
   return {
     reference: plan.reference,
@@ -291,7 +333,8 @@ export function summarizeSamples(set: SampleSet): SimulationResult {
       replicas: set.replicas,
       ...plan.ratios,
       collisionSeparationOverMeanFreePath: mcsRatio,
-      collisionsPerParticlePerStep: counters.particleSteps > 0 ? (2 * counters.collisionCount) / counters.particleSteps : 0,
+      collisionsPerParticlePerStep:
+        counters.particleSteps > 0 ? (2 * counters.collisionCount) / counters.particleSteps : 0,
     },
     walls,
     cellX,

@@ -24,11 +24,14 @@ export function targetPathsOf(plan: Plan): string[] {
  */
 export function estimateAt(result: SimulationResult, path: string): { mean: number; ci95: number } | undefined {
   const flow = result.flow
-    ? { ...result.flow.values, sections: Object.fromEntries(Object.entries(result.flow.sections).map(([n, e]) => [n, { massFlowRate: e }])) }
+    ? {
+        ...result.flow.values,
+        sections: Object.fromEntries(Object.entries(result.flow.sections).map(([n, e]) => [n, { massFlowRate: e }])),
+      }
     : undefined;
   let node: unknown = { walls: result.walls, flow };
   const parts = path.split('.');
-  for (let at = 0; at < parts.length; ) {
+  for (let at = 0; at < parts.length;) {
     if (node === null || typeof node !== 'object') return undefined;
     let end = parts.length;
     while (end > at && !Object.hasOwn(node, parts.slice(at, end).join('.'))) end--;

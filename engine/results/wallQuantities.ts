@@ -10,8 +10,19 @@
  */
 import type { SamplingGeometry } from './samplingGeometry';
 import {
-  SIDE_STRIDE, SIDE_BIN_OFFSET, SIDE_BIN_COUNT, SIDE_NORMAL_IS_X, SIDE_INWARD, SIDE_PLANE, SIDE_FROM, SIDE_TO,
-  SUMS_PER_WALL_BIN, WALL_HITS, WALL_PX, WALL_PY, WALL_ENERGY,
+  SIDE_STRIDE,
+  SIDE_BIN_OFFSET,
+  SIDE_BIN_COUNT,
+  SIDE_NORMAL_IS_X,
+  SIDE_INWARD,
+  SIDE_PLANE,
+  SIDE_FROM,
+  SIDE_TO,
+  SUMS_PER_WALL_BIN,
+  WALL_HITS,
+  WALL_PX,
+  WALL_PY,
+  WALL_ENERGY,
 } from '../kernel/state';
 import { surfaceAreaM2 } from '../geometry/surfaces';
 
@@ -43,7 +54,13 @@ export function wallBinAreaM2(g: SamplingGeometry, side: number, bin: number, bi
   const row = side * SIDE_STRIDE;
   const from = g.sideTable[row + SIDE_FROM];
   const length = g.sideTable[row + SIDE_TO] - from;
-  return surfaceAreaM2(g.sideTable[row + SIDE_NORMAL_IS_X] === 1, g.sideTable[row + SIDE_PLANE], from + (bin * length) / bins, from + ((bin + 1) * length) / bins, g.axisymmetric);
+  return surfaceAreaM2(
+    g.sideTable[row + SIDE_NORMAL_IS_X] === 1,
+    g.sideTable[row + SIDE_PLANE],
+    from + (bin * length) / bins,
+    from + ((bin + 1) * length) / bins,
+    g.axisymmetric,
+  );
 }
 
 /**
@@ -51,7 +68,13 @@ export function wallBinAreaM2(g: SamplingGeometry, side: number, bin: number, bi
  * written into out[0..3] in WALL_QUANTITIES order.
  */
 export function wallQuantitiesFromSums(
-  g: SamplingGeometry, side: number, sums: Float64Array, o: number, areaM2: number, timeS: number, out: Float64Array,
+  g: SamplingGeometry,
+  side: number,
+  sums: Float64Array,
+  o: number,
+  areaM2: number,
+  timeS: number,
+  out: Float64Array,
 ): void {
   const scale = g.moleculesPerParticle / (areaM2 * timeS);
   const normalIsX = g.sideTable[side * SIDE_STRIDE + SIDE_NORMAL_IS_X] === 1;
@@ -72,7 +95,9 @@ const scratchSums = new Float64Array(SUMS_PER_WALL_BIN);
  * (a live SimState is one).
  */
 export function wallTotalsOfBatch(
-  sim: { state: SamplingGeometry; wallNames: readonly string[] }, sums: Float64Array, steps: number,
+  sim: { state: SamplingGeometry; wallNames: readonly string[] },
+  sums: Float64Array,
+  steps: number,
 ): [string, number][] {
   const st = sim.state;
   const out: [string, number][] = [];

@@ -63,7 +63,10 @@ export function pushMonitor(monitor: TransientMonitor, values: number[]): boolea
 }
 
 /** A monitor rebuilt from a saved history (checkpoints): same decisions as the original. */
-export function replayTransientMonitor(estimatedTransientSteps: number, history: readonly number[][]): TransientMonitor {
+export function replayTransientMonitor(
+  estimatedTransientSteps: number,
+  history: readonly number[][],
+): TransientMonitor {
   const monitor = createTransientMonitor(estimatedTransientSteps);
   for (const values of history) pushMonitor(monitor, values);
   return monitor;

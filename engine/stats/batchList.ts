@@ -58,7 +58,16 @@ function halve(list: BatchList): BatchList {
     from += n;
   }
   const batches = to / w;
-  return { width: w, unitSteps: list.unitSteps, batchLength: list.batchLength * 2, batches, values, pending, pendingLength, segments };
+  return {
+    width: w,
+    unitSteps: list.unitSteps,
+    batchLength: list.batchLength * 2,
+    batches,
+    values,
+    pending,
+    pendingLength,
+    segments,
+  };
 }
 
 /**
@@ -69,7 +78,9 @@ function halve(list: BatchList): BatchList {
 export function coarsenBatchList(list: BatchList, batchLength: number): BatchList {
   const ratio = batchLength / list.batchLength;
   if (!(Number.isInteger(ratio) && ratio >= 1 && (ratio & (ratio - 1)) === 0)) {
-    throw new Error(`batch lists: cannot coarsen batches of ${list.batchLength} units to ${batchLength} units (need the same length times a power of two)`);
+    throw new Error(
+      `batch lists: cannot coarsen batches of ${list.batchLength} units to ${batchLength} units (need the same length times a power of two)`,
+    );
   }
   let out = list;
   while (out.batchLength < batchLength) out = halve(out);
@@ -86,7 +97,9 @@ export function mergeBatchLists(lists: readonly BatchList[]): BatchList {
   const first = lists[0];
   for (const l of lists) {
     if (l.width !== first.width || l.unitSteps !== first.unitSteps) {
-      throw new Error(`batch lists: cannot merge batches of ${l.width} numbers × ${l.unitSteps} steps with ${first.width} numbers × ${first.unitSteps} steps`);
+      throw new Error(
+        `batch lists: cannot merge batches of ${l.width} numbers × ${l.unitSteps} steps with ${first.width} numbers × ${first.unitSteps} steps`,
+      );
     }
   }
   const batchLength = Math.max(...lists.map((l) => l.batchLength));
@@ -103,5 +116,14 @@ export function mergeBatchLists(lists: readonly BatchList[]): BatchList {
     for (let k = 0; k < w; k++) pending[k] += l.pending[k];
     pendingLength += l.pendingLength;
   }
-  return { width: w, unitSteps: first.unitSteps, batchLength, batches, values, pending, pendingLength, segments: coarse.flatMap((l) => l.segments) };
+  return {
+    width: w,
+    unitSteps: first.unitSteps,
+    batchLength,
+    batches,
+    values,
+    pending,
+    pendingLength,
+    segments: coarse.flatMap((l) => l.segments),
+  };
 }

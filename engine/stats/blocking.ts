@@ -54,7 +54,8 @@ export const PLATEAU_BLOCK_LENGTH_FACTOR = 20;
 
 function checkFinite(values: ArrayLike<number>, what: string): void {
   for (let i = 0; i < values.length; i++) {
-    if (!Number.isFinite(values[i])) throw new Error(`${what}: value ${values[i]} at index ${i} is not a finite number`);
+    if (!Number.isFinite(values[i]))
+      throw new Error(`${what}: value ${values[i]} at index ${i} is not a finite number`);
   }
 }
 
@@ -70,7 +71,12 @@ function blockingLevels(series: ArrayLike<number>): BlockingLevel[] {
     let squares = 0;
     for (let i = 0; i < n; i++) squares += (current[i] - mean) * (current[i] - mean);
     const standardError = Math.sqrt(squares / n / (n - 1));
-    levels.push({ blockLength, blocks: n, standardError, standardErrorUncertainty: standardError / Math.sqrt(2 * (n - 1)) });
+    levels.push({
+      blockLength,
+      blocks: n,
+      standardError,
+      standardErrorUncertainty: standardError / Math.sqrt(2 * (n - 1)),
+    });
     const next = new Float64Array(n >> 1);
     for (let i = 0; i < next.length; i++) next[i] = 0.5 * (current[2 * i] + current[2 * i + 1]);
     current = next;

@@ -35,7 +35,8 @@ export interface ReplicaBlockingResult {
 export function replicaBlockingAnalysis(series: readonly ArrayLike<number>[]): ReplicaBlockingResult {
   if (series.length === 0) throw new Error('replica blocking analysis: no series given');
   const results = series.map((s, r) => {
-    if (s.length < 2) throw new Error(`replica blocking analysis: replica ${r} has ${s.length} values; each needs at least 2`);
+    if (s.length < 2)
+      throw new Error(`replica blocking analysis: replica ${r} has ${s.length} values; each needs at least 2`);
     return blockingAnalysis(s);
   });
   const total = series.reduce((sum, s) => sum + s.length, 0);

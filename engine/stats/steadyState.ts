@@ -175,9 +175,20 @@ function reportAfterCheck(set: Settings, n: number, drifts: readonly SeriesDrift
     };
   }
   if (n >= set.maxSamples) {
-    return forcedReport(set, n, moving.length ? `still drifting: ${drifting}` : 'not enough consecutive passing checks', drifts);
+    return forcedReport(
+      set,
+      n,
+      moving.length ? `still drifting: ${drifting}` : 'not enough consecutive passing checks',
+      drifts,
+    );
   }
-  const waiting = (reason: string): SteadyStateReport => ({ steady: false, atSample: null, forced: false, drifts, reason });
+  const waiting = (reason: string): SteadyStateReport => ({
+    steady: false,
+    atSample: null,
+    forced: false,
+    drifts,
+    reason,
+  });
   if (moving.length) return waiting(`not steady: ${drifting}`);
   if (inARow < set.consecutive) {
     return waiting(`drift within bounds; ${inARow} of ${set.consecutive} checks ${set.spacing} samples apart passed`);
@@ -185,7 +196,12 @@ function reportAfterCheck(set: Settings, n: number, drifts: readonly SeriesDrift
   return waiting(`drift within bounds; waiting for the minimum transient (${n} of ${set.minSamples} samples)`);
 }
 
-function forcedReport(set: Settings, n: number, detail: string, drifts: readonly SeriesDrift[] = []): SteadyStateReport {
+function forcedReport(
+  set: Settings,
+  n: number,
+  detail: string,
+  drifts: readonly SeriesDrift[] = [],
+): SteadyStateReport {
   const reason = `maximum transient of ${set.maxSamples} samples reached; ${detail}`;
   return { steady: true, atSample: n, forced: true, drifts, reason };
 }
@@ -227,7 +243,9 @@ export function createSteadyStateDetector(options: SteadyStateOptions): SteadySt
       const v = values[name];
       if (v === undefined) throw new Error(`steady-state detector: series "${name}" missing at sample ${sampleIndex}`);
       if (!Number.isFinite(v)) {
-        throw new Error(`steady-state detector: series "${name}" is ${v} at sample ${sampleIndex}; values must be finite`);
+        throw new Error(
+          `steady-state detector: series "${name}" is ${v} at sample ${sampleIndex}; values must be finite`,
+        );
       }
     }
     names.forEach((name, k) => {
@@ -256,7 +274,8 @@ export function createSteadyStateDetector(options: SteadyStateOptions): SteadySt
       inARow < set.consecutive &&
       n - inARow * set.spacing >= w &&
       passed[(n - inARow * set.spacing) % passed.length] === 1
-    ) inARow++;
+    )
+      inARow++;
     report = reportAfterCheck(set, n, drifts, inARow);
   }
 

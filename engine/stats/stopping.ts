@@ -28,12 +28,16 @@ export function parseTarget(text: string, knownPaths?: readonly string[]): Preci
   if (path === '') throw new Error(`${where}: the quantity before "=" is empty (e.g. walls.top.shearStress)`);
   const bad = path.split('.').find((s) => !SEGMENT.test(s));
   if (bad !== undefined) {
-    throw new Error(`${where}: "${path}" is not a dotted name; "${bad}" must start with a letter and hold only letters, digits or _`);
+    throw new Error(
+      `${where}: "${path}" is not a dotted name; "${bad}" must start with a letter and hold only letters, digits or _`,
+    );
   }
   if (knownPaths !== undefined && !knownPaths.includes(path)) {
     const hint = knownPaths.filter((k) => k.toLowerCase().endsWith(path.split('.').pop()!.toLowerCase()));
     const list = (hint.length ? hint : knownPaths).slice(0, 12).join(', ');
-    throw new Error(`${where}: unknown quantity "${path}"; ${hint.length ? 'did you mean' : 'known quantities'}: ${list}`);
+    throw new Error(
+      `${where}: unknown quantity "${path}"; ${hint.length ? 'did you mean' : 'known quantities'}: ${list}`,
+    );
   }
   const percent = valueText.endsWith('%');
   const numberText = (percent ? valueText.slice(0, -1) : valueText).trim();
@@ -43,7 +47,9 @@ export function parseTarget(text: string, knownPaths?: readonly string[]): Preci
   }
   const value = percent ? parsed / 100 : parsed;
   if (!(value > 0 && value <= 1)) {
-    throw new Error(`${where}: relative half-width ${valueText} must be above 0 and at most 1 (100 %), e.g. 0.01 for 1 %`);
+    throw new Error(
+      `${where}: relative half-width ${valueText} must be above 0 and at most 1 (100 %), e.g. 0.01 for 1 %`,
+    );
   }
   return { path, relativeHalfWidth: value };
 }
@@ -149,10 +155,14 @@ export function estimateRemaining(
   secondsSoFar?: number,
 ): RemainingEstimate {
   if (!(Number.isFinite(currentRelativeHalfWidth) && currentRelativeHalfWidth > 0)) {
-    throw new Error(`estimate remaining: current relative half-width = ${currentRelativeHalfWidth}: must be a finite number above 0`);
+    throw new Error(
+      `estimate remaining: current relative half-width = ${currentRelativeHalfWidth}: must be a finite number above 0`,
+    );
   }
   if (!(Number.isFinite(targetRelativeHalfWidth) && targetRelativeHalfWidth > 0)) {
-    throw new Error(`estimate remaining: target relative half-width = ${targetRelativeHalfWidth}: must be a finite number above 0`);
+    throw new Error(
+      `estimate remaining: target relative half-width = ${targetRelativeHalfWidth}: must be a finite number above 0`,
+    );
   }
   if (!(Number.isFinite(samplesSoFar) && samplesSoFar > 0)) {
     throw new Error(`estimate remaining: samples so far = ${samplesSoFar}: must be a finite number above 0`);

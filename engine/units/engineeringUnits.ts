@@ -19,7 +19,15 @@ import {
 } from '../physics/constants';
 
 export const QUANTITY_KINDS = [
-  'dimensionless', 'length', 'pressure', 'temperature', 'speed', 'acceleration', 'massFlow', 'throughput', 'conductance',
+  'dimensionless',
+  'length',
+  'pressure',
+  'temperature',
+  'speed',
+  'acceleration',
+  'massFlow',
+  'throughput',
+  'conductance',
 ] as const;
 export type QuantityKind = (typeof QUANTITY_KINDS)[number];
 
@@ -204,7 +212,12 @@ export function kindOfUnit(unit: string): QuantityKind | undefined {
  * Formats valueSI in `unit` with `significantDigits` significant digits (default 6, trailing zeros dropped),
  * e.g. formatQuantity(0.001, 'mm') → "1 mm". Dimensionless values get no unit.
  */
-export function formatQuantity(valueSI: number, unit: string, significantDigits = 6, context?: ConversionContext): string {
+export function formatQuantity(
+  valueSI: number,
+  unit: string,
+  significantDigits = 6,
+  context?: ConversionContext,
+): string {
   const row = findAnyUnit(unit);
   const v = convertFromSI(valueSI, unit, context);
   const text = Number.isFinite(v) ? String(Number(v.toPrecision(significantDigits))) : String(v);

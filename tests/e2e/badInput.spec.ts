@@ -1,13 +1,19 @@
 import { test, expect } from './fixtures';
 
-test('a negative length, an accommodation of 1.5 and malformed case files each show their message and start nothing', async ({ workbench: w, page }) => {
+test('a negative length, an accommodation of 1.5 and malformed case files each show their message and start nothing', async ({
+  workbench: w,
+  page,
+}) => {
   await w.open();
   await w.pickExample('mems-damping-gap');
   await expect(w.runButton()).toBeEnabled();
 
   // Negative gap: marked at the field with what is allowed; Run disabled.
   await w.setParam('gap', '-2');
-  const gapError = page.locator('.field-invalid').filter({ has: page.locator('#param-gap') }).locator('.field-error');
+  const gapError = page
+    .locator('.field-invalid')
+    .filter({ has: page.locator('#param-gap') })
+    .locator('.field-error');
   await expect(gapError).toContainText('must be greater than');
   await expect(w.runButton()).toBeDisabled();
   await expect(page.getByTestId('run-disabled-reason')).toContainText('fix the');
@@ -18,7 +24,10 @@ test('a negative length, an accommodation of 1.5 and malformed case files each s
   // Accommodation 1.5 on a Maxwell wall.
   await page.locator('#wall-top-model').selectOption('maxwell');
   await page.locator('#wall-top-accommodation').fill('1.5');
-  const accError = page.locator('.field-invalid').filter({ has: page.locator('#wall-top-accommodation') }).locator('.field-error');
+  const accError = page
+    .locator('.field-invalid')
+    .filter({ has: page.locator('#wall-top-accommodation') })
+    .locator('.field-error');
   await expect(accError).toContainText('between 0 and 1');
   await expect(w.runButton()).toBeDisabled();
   await page.locator('#wall-top-accommodation').fill('0.8');
@@ -26,7 +35,13 @@ test('a negative length, an accommodation of 1.5 and malformed case files each s
 
   // A case file that is not JSON: refused with a message; the case is unchanged.
   const before = await page.getByLabel('case JSON').inputValue();
-  await page.getByTestId('open-case-file').setInputFiles({ name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from('{"schemaVersion": 1, "name": ') });
+  await page
+    .getByTestId('open-case-file')
+    .setInputFiles({
+      name: 'broken.json',
+      mimeType: 'application/json',
+      buffer: Buffer.from('{"schemaVersion": 1, "name": '),
+    });
   await expect(page.getByTestId('file-message')).toContainText('broken.json was not opened');
   await expect(page.getByTestId('file-message')).toContainText('not valid JSON');
   await expect(page.getByLabel('case JSON')).toHaveValue(before);

@@ -29,7 +29,9 @@ test('a replica whose worker fails leaves the others running, and the page says 
   // sampling is long enough (600 000 steps) that on an idle machine, where the tiny case runs fast, the worker is
   // still sampling then (120 000 steps were over within 1.5 s in a CI run).
   await page.addInitScript(() => {
-    (window as unknown as { __tenuisTestHooks: unknown }).__tenuisTestHooks = { failReplica: { stream: 1, afterMs: 300 } };
+    (window as unknown as { __tenuisTestHooks: unknown }).__tenuisTestHooks = {
+      failReplica: { stream: 1, afterMs: 300 },
+    };
   });
   await w.open();
   await w.pickExample('mems-damping-gap');

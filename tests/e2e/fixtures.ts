@@ -66,7 +66,10 @@ export class Workbench {
   }
 
   async download(buttonName: string | RegExp): Promise<{ download: Download; text: string }> {
-    const [download] = await Promise.all([this.page.waitForEvent('download'), this.page.getByRole('button', { name: buttonName }).click()]);
+    const [download] = await Promise.all([
+      this.page.waitForEvent('download'),
+      this.page.getByRole('button', { name: buttonName }).click(),
+    ]);
     const path = await download.path();
     return { download, text: await readFile(path, 'utf8') };
   }

@@ -1,6 +1,9 @@
 import { test, expect, TINY } from './fixtures';
 
-test('finished runs are kept in IndexedDB: reload, reopen with the same numbers, rename, overlay, delete', async ({ workbench: w, page }) => {
+test('finished runs are kept in IndexedDB: reload, reopen with the same numbers, rename, overlay, delete', async ({
+  workbench: w,
+  page,
+}) => {
   test.setTimeout(120_000);
   page.on('dialog', (d) => void d.accept());
   await w.open();
@@ -39,11 +42,18 @@ test('finished runs are kept in IndexedDB: reload, reopen with the same numbers,
   await page.locator('#compare-select').selectOption({ label: 'damping gap, Kn 0.6' });
   await page.getByTestId('profile-plot').scrollIntoViewIfNeeded();
   await expect(page.getByTestId('profile-plot')).toHaveAttribute('data-drawn', 'yes');
-  await expect(page.getByTestId('profile-plot').locator('.legendtext')).toContainText(['this run', 'saved: damping gap, Kn 0.6']);
+  await expect(page.getByTestId('profile-plot').locator('.legendtext')).toContainText([
+    'this run',
+    'saved: damping gap, Kn 0.6',
+  ]);
   await page.getByRole('tab', { name: /Saved runs/ }).click();
   await expect(page.getByTestId('saved-run')).toHaveCount(2);
   await w.screenshot('view-saved-runs');
-  await page.getByTestId('saved-run').filter({ hasText: 'damping gap, Kn 0.6' }).getByRole('button', { name: 'Delete' }).click();
+  await page
+    .getByTestId('saved-run')
+    .filter({ hasText: 'damping gap, Kn 0.6' })
+    .getByRole('button', { name: 'Delete' })
+    .click();
   await expect(page.getByTestId('saved-run')).toHaveCount(1);
   await page.reload();
   await page.getByRole('tab', { name: /Saved runs/ }).click();

@@ -1,6 +1,9 @@
 import { test, expect, TINY } from './fixtures';
 
-test('a precision target shows its half-width against the goal while running, and ends the run once met', async ({ workbench: w, page }) => {
+test('a precision target shows its half-width against the goal while running, and ends the run once met', async ({
+  workbench: w,
+  page,
+}) => {
   test.setTimeout(120_000);
   await w.open();
   await w.pickExample('mems-damping-gap');

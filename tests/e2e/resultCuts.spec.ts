@@ -3,19 +3,34 @@ import type { Page } from '@playwright/test';
 
 /** The shapes plotly drew over the field map (its graph div keeps the layout it was given). */
 async function fieldMapShapes(page: Page): Promise<{ type: string; x0: number; x1: number; y0: number; y1: number }[]> {
-  return page.getByTestId('field-map').locator('.plot-area').evaluate((div) => ((div as unknown as { layout?: { shapes?: unknown[] } }).layout?.shapes ?? []) as never);
+  return page
+    .getByTestId('field-map')
+    .locator('.plot-area')
+    .evaluate((div) => ((div as unknown as { layout?: { shapes?: unknown[] } }).layout?.shapes ?? []) as never);
 }
 
 async function shownValues(page: Page): Promise<string[]> {
-  return page.getByTestId('profile-values').locator('tbody td[data-mean]').evaluateAll((tds) => tds.map((td) => td.getAttribute('data-mean') ?? ''));
+  return page
+    .getByTestId('profile-values')
+    .locator('tbody td[data-mean]')
+    .evaluateAll((tds) => tds.map((td) => td.getAttribute('data-mean') ?? ''));
 }
 
-test('a slit with thick plates: the field map draws both plates, a horizontal cut through a plate shows gaps and exports as CSV', async ({ workbench: w, page }) => {
+test('a slit with thick plates: the field map draws both plates, a horizontal cut through a plate shows gaps and exports as CSV', async ({
+  workbench: w,
+  page,
+}) => {
   test.setTimeout(90_000);
   await w.open();
   await w.pickExample('gas-feed-slit');
   // 20 µm slit in an 80 µm high domain; plates 20 µm thick (x 60–80 µm), cells 10 µm: the plate fills whole cells.
-  await w.setParams({ thicknessToGap: '1', cellsY: '8', particlesPerCell: '10', transientSteps: '200', sampleSteps: '2000' });
+  await w.setParams({
+    thicknessToGap: '1',
+    cellsY: '8',
+    particlesPerCell: '10',
+    transientSteps: '200',
+    sampleSteps: '2000',
+  });
   await w.runToEnd();
   await w.view('3 Results');
 
@@ -26,7 +41,10 @@ test('a slit with thick plates: the field map draws both plates, a horizontal cu
   const rects = (await fieldMapShapes(page)).filter((s) => s.type === 'rect');
   expect(rects).toHaveLength(2);
   // Lower plate from the bottom to the slit, upper plate from the slit to the top, both at x 60–80 µm.
-  expect(rects.map((r) => [r.x0, r.x1, r.y0, r.y1].map((v) => Math.round(v)))).toEqual([[60, 80, 0, 30], [60, 80, 50, 80]]);
+  expect(rects.map((r) => [r.x0, r.x1, r.y0, r.y1].map((v) => Math.round(v)))).toEqual([
+    [60, 80, 0, 30],
+    [60, 80, 50, 80],
+  ]);
   expect(await map.locator('.shapelayer path').count()).toBeGreaterThanOrEqual(2);
   await expect(map.locator('.annotation-text')).toContainText(['lowerPlate', 'upperPlate']);
   await page.locator('#field-quantity').selectOption('machNumber');
@@ -71,7 +89,10 @@ test('a slit with thick plates: the field map draws both plates, a horizontal cu
   expect(Number(lines[1].split(',')[1])).toBeCloseTo(5e-6, 12);
 });
 
-test('a Couette gap: continuum predictions are toggled one by one on the row average and a vertical cut, and left off horizontal cuts', async ({ workbench: w, page }) => {
+test('a Couette gap: continuum predictions are toggled one by one on the row average and a vertical cut, and left off horizontal cuts', async ({
+  workbench: w,
+  page,
+}) => {
   test.setTimeout(90_000);
   await w.open();
   await w.pickExample('mems-damping-gap');
@@ -84,28 +105,55 @@ test('a Couette gap: continuum predictions are toggled one by one on the row ave
   await expect(plot).toHaveAttribute('data-drawn', 'yes');
   const toggles = page.getByTestId('continuum-toggles');
   await expect(toggles.getByRole('checkbox')).toHaveCount(4);
-  await expect(plot.locator('.legendtext')).toHaveText(['this run', 'no-slip', 'first-order slip', 'second-order slip', 'free-molecular limit']);
+  await expect(plot.locator('.legendtext')).toHaveText([
+    'this run',
+    'no-slip',
+    'first-order slip',
+    'second-order slip',
+    'free-molecular limit',
+  ]);
   await page.getByText(/^Profile values/).click();
   await expect(page.getByTestId('profile-values').locator('thead')).toContainText('no-slip [m/s]');
 
   await toggles.getByLabel('no-slip').uncheck();
-  await expect(plot.locator('.legendtext')).toHaveText(['this run', 'first-order slip', 'second-order slip', 'free-molecular limit']);
+  await expect(plot.locator('.legendtext')).toHaveText([
+    'this run',
+    'first-order slip',
+    'second-order slip',
+    'free-molecular limit',
+  ]);
   await expect(page.getByTestId('profile-values').locator('thead')).not.toContainText('no-slip');
 
   // A vertical cut (one column): the same overlays, the same choice.
   await page.locator('#profile-cut').selectOption('vertical');
   await expect(page.locator('#profile-title')).toContainText('Profile across y at x =');
   await expect(page.getByTestId('profile-values').locator('tbody tr')).toHaveCount(20);
-  await expect(plot.locator('.legendtext')).toHaveText(['this run', 'first-order slip', 'second-order slip', 'free-molecular limit']);
+  await expect(plot.locator('.legendtext')).toHaveText([
+    'this run',
+    'first-order slip',
+    'second-order slip',
+    'free-molecular limit',
+  ]);
   await w.screenshot('view-results-cut');
   await toggles.getByLabel('no-slip').check();
-  await expect(plot.locator('.legendtext')).toHaveText(['this run', 'no-slip', 'first-order slip', 'second-order slip', 'free-molecular limit']);
+  await expect(plot.locator('.legendtext')).toHaveText([
+    'this run',
+    'no-slip',
+    'first-order slip',
+    'second-order slip',
+    'free-molecular limit',
+  ]);
   const { text } = await w.download('This cut (CSV)');
   const header = text.split('\n')[0].split(',');
   expect(header.slice(0, 2)).toEqual(['y [m]', 'x [m]']);
   const vx = header.indexOf('velocityX [m/s]');
   expect(header.slice(vx, vx + 6)).toEqual([
-    'velocityX [m/s]', 'velocityX ci95 [m/s]', 'velocityX no-slip [m/s]', 'velocityX first-order slip [m/s]', 'velocityX second-order slip [m/s]', 'velocityX free-molecular limit [m/s]',
+    'velocityX [m/s]',
+    'velocityX ci95 [m/s]',
+    'velocityX no-slip [m/s]',
+    'velocityX first-order slip [m/s]',
+    'velocityX second-order slip [m/s]',
+    'velocityX free-molecular limit [m/s]',
   ]);
 
   // Along x the across-gap predictions do not apply.
@@ -125,7 +173,10 @@ test('a Couette gap: continuum predictions are toggled one by one on the row ave
   await expect(walls.locator('.legendtext')).toHaveText(['top (along x)']);
 });
 
-test('a lid-driven cavity: its Navier–Stokes centreline predictions appear on the vertical cut through the centre, not on the row average', async ({ workbench: w, page }) => {
+test('a lid-driven cavity: its Navier–Stokes centreline predictions appear on the vertical cut through the centre, not on the row average', async ({
+  workbench: w,
+  page,
+}) => {
   test.setTimeout(90_000);
   await w.open();
   await w.pickExample('trench-under-moving-lid');

@@ -6,11 +6,21 @@ const AVOGADRO = 6.02214076e23;
 // Many small form steps: on a shared two-core machine each can take a second or more, so allow more than the default.
 test.describe.configure({ timeout: 60_000 });
 
-async function caseJson(page: Page): Promise<{ gas: Record<string, unknown> & { custom?: Record<string, unknown> }; boundaries: Record<string, Record<string, unknown>>; blocks: Record<string, unknown>[]; initial: { pressurePa: number } }> {
+async function caseJson(
+  page: Page,
+): Promise<{
+  gas: Record<string, unknown> & { custom?: Record<string, unknown> };
+  boundaries: Record<string, Record<string, unknown>>;
+  blocks: Record<string, unknown>[];
+  initial: { pressurePa: number };
+}> {
   return JSON.parse(await page.getByLabel('case JSON').inputValue());
 }
 
-test('wall temperature in °C and a custom gas reach the case; a bad gas field is marked and blocks Run', async ({ workbench: w, page }) => {
+test('wall temperature in °C and a custom gas reach the case; a bad gas field is marked and blocks Run', async ({
+  workbench: w,
+  page,
+}) => {
   await w.open();
   await page.locator('#preset-select').selectOption('cavity');
   await expect(w.runButton()).toBeEnabled();
@@ -41,7 +51,10 @@ test('wall temperature in °C and a custom gas reach the case; a bad gas field i
   await expect(w.runButton()).toBeEnabled();
 
   await page.locator('#gas-viscosityIndex').fill('1.4');
-  const omegaError = page.locator('.field-invalid').filter({ has: page.locator('#gas-viscosityIndex') }).locator('.field-error');
+  const omegaError = page
+    .locator('.field-invalid')
+    .filter({ has: page.locator('#gas-viscosityIndex') })
+    .locator('.field-error');
   await expect(omegaError).toContainText('between 0.5 (hard sphere) and 1');
   await expect(w.runButton()).toBeDisabled();
   await page.getByTestId('gas-form').scrollIntoViewIfNeeded();
@@ -50,7 +63,10 @@ test('wall temperature in °C and a custom gas reach the case; a bad gas field i
   await expect(w.runButton()).toBeEnabled();
 });
 
-test('a block drawn on the domain preview appears in the table and the case; one outside the domain is refused at its row', async ({ workbench: w, page }) => {
+test('a block drawn on the domain preview appears in the table and the case; one outside the domain is refused at its row', async ({
+  workbench: w,
+  page,
+}) => {
   await w.open();
   await page.locator('#preset-select').selectOption('channel');
   await expect(w.runButton()).toBeEnabled();
@@ -87,7 +103,9 @@ test('a block drawn on the domain preview appears in the table and the case; one
   // Typed outside the domain: the message is at the block's row, and the run cannot start.
   await page.locator('#block-2-xMax').fill('500');
   await expect(page.getByTestId('block-errors-2')).toContainText('outside the domain');
-  await expect(page.getByTestId('block-errors-2')).toContainText('xMaxM (500 µm) lies outside the domain (lengthXM = 9 µm)');
+  await expect(page.getByTestId('block-errors-2')).toContainText(
+    'xMaxM (500 µm) lies outside the domain (lengthXM = 9 µm)',
+  );
   await expect(w.runButton()).toBeDisabled();
   await page.getByTestId('blocks-form').scrollIntoViewIfNeeded();
   await w.screenshot('view-setup-blocks');

@@ -6,7 +6,10 @@ import { test, expect } from './fixtures';
 
 /** Header and rows of a CSV without quoted fields (the sweep table has none). */
 function readCsv(text: string): { header: string[]; rows: string[][] } {
-  const [header, ...rows] = text.trimEnd().split('\n').map((l) => l.split(','));
+  const [header, ...rows] = text
+    .trimEnd()
+    .split('\n')
+    .map((l) => l.split(','));
   return { header, rows };
 }
 
@@ -19,14 +22,22 @@ function expectSameTable(pageText: string, cliText: string): void {
   const b = readCsv(cliText);
   expect(a.header).toEqual(b.header);
   expect(a.rows.length).toBe(b.rows.length);
-  a.rows.forEach((row, r) => row.forEach((x, c) => {
-    const y = b.rows[r][c];
-    if (x === '' || y === '' || Number.isNaN(Number(x))) expect(x, `row ${r + 1} ${a.header[c]}`).toBe(y);
-    else expect(Math.abs(Number(x) - Number(y)), `row ${r + 1} ${a.header[c]}: ${x} vs ${y}`).toBeLessThanOrEqual(1e-12 * Math.max(Math.abs(Number(x)), Math.abs(Number(y)), 1e-300));
-  }));
+  a.rows.forEach((row, r) =>
+    row.forEach((x, c) => {
+      const y = b.rows[r][c];
+      if (x === '' || y === '' || Number.isNaN(Number(x))) expect(x, `row ${r + 1} ${a.header[c]}`).toBe(y);
+      else
+        expect(Math.abs(Number(x) - Number(y)), `row ${r + 1} ${a.header[c]}: ${x} vs ${y}`).toBeLessThanOrEqual(
+          1e-12 * Math.max(Math.abs(Number(x)), Math.abs(Number(y)), 1e-300),
+        );
+    }),
+  );
 }
 
-test('sweeps the tube over Kn 1 to 10 (3 log-spaced points): points with error bars and continuum lines, sweep.csv with units equal to the table and to `tenuis sweep`', async ({ workbench: w, page }) => {
+test('sweeps the tube over Kn 1 to 10 (3 log-spaced points): points with error bars and continuum lines, sweep.csv with units equal to the table and to `tenuis sweep`', async ({
+  workbench: w,
+  page,
+}) => {
   test.setTimeout(120_000);
   await w.open();
   await w.pickExample('roughing-line-stub');
@@ -73,13 +84,29 @@ test('sweeps the tube over Kn 1 to 10 (3 log-spaced points): points with error b
   // Three DSMC points, each with its error bar; the models as lines in the legend.
   await expect(plot.locator('.scatterlayer .trace').first().locator('.points path')).toHaveCount(3);
   await expect(plot.locator('.scatterlayer .trace').first().locator('.errorbar')).toHaveCount(3);
-  await expect(plot.locator('.legendtext')).toContainText(['DSMC (95 % error bars)', 'no-slip', 'first-order slip', 'second-order slip', 'unified model', 'free-molecular limit']);
+  await expect(plot.locator('.legendtext')).toContainText([
+    'DSMC (95 % error bars)',
+    'no-slip',
+    'first-order slip',
+    'second-order slip',
+    'unified model',
+    'free-molecular limit',
+  ]);
   await expect(plot.locator('.xaxislayer-above')).toBeVisible();
   await w.screenshot('view-sweep');
 
   const csv = (await w.download('sweep.csv')).text;
   const { header, rows: csvRows } = readCsv(csv);
-  expect(header.slice(0, 8)).toEqual(['point [1]', 'knudsen [1]', 'status', 'reference knudsen [1]', 'reference rarefaction [1]', 'reference pressure [Pa]', 'massFlowRate [kg/s]', 'massFlowRate ci95 [kg/s]']);
+  expect(header.slice(0, 8)).toEqual([
+    'point [1]',
+    'knudsen [1]',
+    'status',
+    'reference knudsen [1]',
+    'reference rarefaction [1]',
+    'reference pressure [Pa]',
+    'massFlowRate [kg/s]',
+    'massFlowRate ci95 [kg/s]',
+  ]);
   for (const h of header) if (h !== 'status') expect(h).toMatch(/ \[[^\]]+\]$/);
   expect(header).toContain('massFlowRate freeMolecular [kg/s]');
   expect(csvRows).toHaveLength(3);
@@ -93,7 +120,29 @@ test('sweeps the tube over Kn 1 to 10 (3 log-spaced points): points with error b
   const dir = mkdtempSync(join(tmpdir(), 'tenuis-e2e-sweep-'));
   try {
     writeFileSync(join(dir, 'case.json'), caseText);
-    const cli = spawnSync(process.execPath, ['bin/tenuis.mjs', 'sweep', join(dir, 'case.json'), '--param', 'knudsen', '--from', '1', '--to', '10', '--points', '3', '--log', '--replicas', '1', '--out', join(dir, 'out'), '--quiet'], { encoding: 'utf8', timeout: 100_000 });
+    const cli = spawnSync(
+      process.execPath,
+      [
+        'bin/tenuis.mjs',
+        'sweep',
+        join(dir, 'case.json'),
+        '--param',
+        'knudsen',
+        '--from',
+        '1',
+        '--to',
+        '10',
+        '--points',
+        '3',
+        '--log',
+        '--replicas',
+        '1',
+        '--out',
+        join(dir, 'out'),
+        '--quiet',
+      ],
+      { encoding: 'utf8', timeout: 100_000 },
+    );
     expect(cli.status, cli.stderr).toBe(0);
     expectSameTable(csv, readFileSync(join(dir, 'out', 'sweep.csv'), 'utf8'));
   } finally {

@@ -20,63 +20,100 @@ async function startKnudsenSweep(w: Workbench, page: Page, points: string): Prom
 
 /** Each shown point as the table holds it: swept value, status, mean and half-width (exact strings of the numbers). */
 async function shownRows(page: Page): Promise<{ value: string; status: string; mean: string; ci95: string }[]> {
-  return page.getByTestId('sweep-values').locator('tbody tr').evaluateAll((trs) => trs.map((tr) => ({
-    value: tr.querySelector('td[data-value]')!.getAttribute('data-value')!,
-    status: tr.getAttribute('data-status')!,
-    mean: tr.querySelector('td[data-mean]')!.getAttribute('data-mean')!,
-    ci95: tr.querySelector('td[data-mean]')!.getAttribute('data-ci95')!,
-  })));
+  return page
+    .getByTestId('sweep-values')
+    .locator('tbody tr')
+    .evaluateAll((trs) =>
+      trs.map((tr) => ({
+        value: tr.querySelector('td[data-value]')!.getAttribute('data-value')!,
+        status: tr.getAttribute('data-status')!,
+        mean: tr.querySelector('td[data-mean]')!.getAttribute('data-mean')!,
+        ci95: tr.querySelector('td[data-mean]')!.getAttribute('data-ci95')!,
+      })),
+    );
 }
 
-test('a finished sweep is kept in IndexedDB next to runs an older workbench saved: reload shows the same rows, plot and export; rename and delete', async ({ workbench: w, page }) => {
+test('a finished sweep is kept in IndexedDB next to runs an older workbench saved: reload shows the same rows, plot and export; rename and delete', async ({
+  workbench: w,
+  page,
+}) => {
   test.setTimeout(120_000);
   page.on('dialog', (d) => void d.accept());
   // A database at version 1 (runs and settings, no sweeps) holding one run, seeded on the page's origin before the
   // workbench first opens it; the workbench upgrades it to version 2.
   // A blank page of the workbench's origin (no favicon request) to seed it from.
-  await page.route('**/seed-database', (r) => r.fulfill({ contentType: 'text/html', body: '<!doctype html><link rel="icon" href="data:,"><title>seed</title>' }));
+  await page.route('**/seed-database', (r) =>
+    r.fulfill({ contentType: 'text/html', body: '<!doctype html><link rel="icon" href="data:,"><title>seed</title>' }),
+  );
   await page.goto('/seed-database');
-  await page.evaluate(() => new Promise<void>((resolve, reject) => {
-    const open = indexedDB.open('tenuis-workbench', 1);
-    open.onupgradeneeded = () => {
-      open.result.createObjectStore('runs', { keyPath: 'id' });
-      open.result.createObjectStore('settings');
-    };
-    open.onerror = () => reject(open.error);
-    open.onsuccess = () => {
-      const d = open.result;
-      const tx = d.transaction('runs', 'readwrite');
-      tx.objectStore('runs').put({
-        id: 'run-old-1', name: 'run kept by version 1', finishedAt: '2026-11-30T10:00:00.000Z', caseName: 'mems-damping-gap', status: 'finished',
-        replicas: 1, lostReplicas: 0, sampledSteps: 4000, knudsen: 0.6, caseInput: { name: 'mems-damping-gap' }, samples: new ArrayBuffer(24),
-        runWarnings: [], performance: { wallSeconds: 1, particleSteps: 1, particleStepsPerSecond: 1 }, replicaEnds: [],
-      });
-      tx.oncomplete = () => { d.close(); resolve(); };
-      tx.onerror = () => reject(tx.error);
-    };
-  }));
+  await page.evaluate(
+    () =>
+      new Promise<void>((resolve, reject) => {
+        const open = indexedDB.open('tenuis-workbench', 1);
+        open.onupgradeneeded = () => {
+          open.result.createObjectStore('runs', { keyPath: 'id' });
+          open.result.createObjectStore('settings');
+        };
+        open.onerror = () => reject(open.error);
+        open.onsuccess = () => {
+          const d = open.result;
+          const tx = d.transaction('runs', 'readwrite');
+          tx.objectStore('runs').put({
+            id: 'run-old-1',
+            name: 'run kept by version 1',
+            finishedAt: '2026-11-30T10:00:00.000Z',
+            caseName: 'mems-damping-gap',
+            status: 'finished',
+            replicas: 1,
+            lostReplicas: 0,
+            sampledSteps: 4000,
+            knudsen: 0.6,
+            caseInput: { name: 'mems-damping-gap' },
+            samples: new ArrayBuffer(24),
+            runWarnings: [],
+            performance: { wallSeconds: 1, particleSteps: 1, particleStepsPerSecond: 1 },
+            replicaEnds: [],
+          });
+          tx.oncomplete = () => {
+            d.close();
+            resolve();
+          };
+          tx.onerror = () => reject(tx.error);
+        };
+      }),
+  );
   await w.open();
   await expect(page.getByRole('tab', { name: 'Saved runs (1)' })).toBeVisible();
-  const upgraded = await page.evaluate(() => new Promise<{ version: number; stores: string[]; samplesBytes: number }>((resolve, reject) => {
-    const open = indexedDB.open('tenuis-workbench');
-    open.onerror = () => reject(open.error);
-    open.onsuccess = () => {
-      const d = open.result;
-      const get = d.transaction('runs').objectStore('runs').get('run-old-1');
-      get.onsuccess = () => {
-        resolve({ version: d.version, stores: [...d.objectStoreNames], samplesBytes: (get.result?.samples as ArrayBuffer | undefined)?.byteLength ?? -1 });
-        d.close();
-      };
-      get.onerror = () => reject(get.error);
-    };
-  }));
+  const upgraded = await page.evaluate(
+    () =>
+      new Promise<{ version: number; stores: string[]; samplesBytes: number }>((resolve, reject) => {
+        const open = indexedDB.open('tenuis-workbench');
+        open.onerror = () => reject(open.error);
+        open.onsuccess = () => {
+          const d = open.result;
+          const get = d.transaction('runs').objectStore('runs').get('run-old-1');
+          get.onsuccess = () => {
+            resolve({
+              version: d.version,
+              stores: [...d.objectStoreNames],
+              samplesBytes: (get.result?.samples as ArrayBuffer | undefined)?.byteLength ?? -1,
+            });
+            d.close();
+          };
+          get.onerror = () => reject(get.error);
+        };
+      }),
+  );
   expect(upgraded).toEqual({ version: 2, stores: ['runs', 'settings', 'sweeps'], samplesBytes: 24 });
 
   await tinyTube(w, page, '1000');
   await startKnudsenSweep(w, page, '2');
   await expect(page.getByTestId('sweep-status')).toContainText('finished', { timeout: 90_000 });
   const before = await shownRows(page);
-  expect(before.map((r) => [Number(r.value), r.status])).toEqual([[1, 'complete'], [10, 'complete']]);
+  expect(before.map((r) => [Number(r.value), r.status])).toEqual([
+    [1, 'complete'],
+    [10, 'complete'],
+  ]);
   for (const r of before) expect(Number(r.mean)).toBeGreaterThan(0);
   const saved = page.getByTestId('saved-sweep');
   await expect(saved).toHaveCount(1);
@@ -100,8 +137,13 @@ test('a finished sweep is kept in IndexedDB next to runs an older workbench save
   await expect(plot).toHaveAttribute('data-drawn', 'yes');
   await expect(plot.locator('.scatterlayer .trace').first().locator('.points path')).toHaveCount(2);
   await expect(plot.locator('.legendtext')).toContainText(['DSMC (95 % error bars)', 'free-molecular limit']);
-  const csv = (await w.download('sweep.csv')).text.trimEnd().split('\n').map((l) => l.split(','));
-  expect(csv.slice(1).map((r) => [r[1], r[2], r[6], r[7]])).toEqual(before.map((r) => [r.value, r.status, r.mean, r.ci95]));
+  const csv = (await w.download('sweep.csv')).text
+    .trimEnd()
+    .split('\n')
+    .map((l) => l.split(','));
+  expect(csv.slice(1).map((r) => [r[1], r[2], r[6], r[7]])).toEqual(
+    before.map((r) => [r.value, r.status, r.mean, r.ci95]),
+  );
   await expect(saved.getByTestId('saved-sweep-status')).toHaveText('finished, 2 of 2 points');
   await expect(saved).toHaveAttribute('data-shown', 'yes');
   await w.screenshot('view-sweep-saved');
@@ -129,7 +171,10 @@ test('a finished sweep is kept in IndexedDB next to runs an older workbench save
   await expect(page.getByRole('tab', { name: 'Saved runs (1)' })).toBeVisible();
 });
 
-test('a sweep a reload ends is shown as interrupted at the point that was running, with the points finished before it', async ({ workbench: w, page }) => {
+test('a sweep a reload ends is shown as interrupted at the point that was running, with the points finished before it', async ({
+  workbench: w,
+  page,
+}) => {
   test.setTimeout(120_000);
   await w.open();
   // Longer points (several seconds each), so the reload lands while the second one runs.
@@ -137,7 +182,9 @@ test('a sweep a reload ends is shown as interrupted at the point that was runnin
   await startKnudsenSweep(w, page, '3');
   const saved = page.getByTestId('saved-sweep');
   // The list follows each write: once it says point 1 is done, point 1 is in IndexedDB.
-  await expect(saved.getByTestId('saved-sweep-status')).toHaveText(/^running, [12] of 3 points done$/, { timeout: 90_000 });
+  await expect(saved.getByTestId('saved-sweep-status')).toHaveText(/^running, [12] of 3 points done$/, {
+    timeout: 90_000,
+  });
   await page.reload();
   await w.view(/^Sweep$/);
   const status = page.getByTestId('sweep-status');
@@ -148,7 +195,9 @@ test('a sweep a reload ends is shown as interrupted at the point that was runnin
   expect(Number(rows[0].value)).toBe(1);
   expect(Number(rows[0].mean)).toBeGreaterThan(0);
   await expect(status).toContainText(`${k - 1} finished point${k === 2 ? '' : 's'} kept`);
-  await expect(saved.getByTestId('saved-sweep-status')).toHaveText(`interrupted at point ${k} of 3 (${k - 1} finished point${k === 2 ? '' : 's'} kept)`);
+  await expect(saved.getByTestId('saved-sweep-status')).toHaveText(
+    `interrupted at point ${k} of 3 (${k - 1} finished point${k === 2 ? '' : 's'} kept)`,
+  );
   await expect(page.getByTestId('sweep-plot')).toHaveAttribute('data-drawn', 'yes');
   // Nothing runs any more: a new sweep can start.
   await expect(page.getByRole('button', { name: 'Run the sweep' })).toBeEnabled();

@@ -1,6 +1,9 @@
 import { test, expect, TINY } from './fixtures';
 
-test('a user picks the MEMS damping example, sets Kn, runs it in Web Workers and exports the profile CSV that matches the page', async ({ workbench: w, page }) => {
+test('a user picks the MEMS damping example, sets Kn, runs it in Web Workers and exports the profile CSV that matches the page', async ({
+  workbench: w,
+  page,
+}) => {
   test.setTimeout(120_000);
   // Long tasks on the main thread, recorded from the start (the Long Tasks API; buffered).
   await page.addInitScript(() => {
@@ -26,11 +29,15 @@ test('a user picks the MEMS damping example, sets Kn, runs it in Web Workers and
   // Let the warm-up of the run and plot chunks finish, then measure long tasks from the click to the end.
   await page.waitForLoadState('networkidle');
   // The start-up warm-up (run chunk, then plotly, never during a run) is done: what follows is the run's own work.
-  await page.waitForFunction(() => performance.getEntriesByName('tenuis-warm-done').length > 0, null, { timeout: 60_000 });
+  await page.waitForFunction(() => performance.getEntriesByName('tenuis-warm-done').length > 0, null, {
+    timeout: 60_000,
+  });
   const t0 = await page.evaluate(() => performance.now());
   await w.runButton().click();
   const progress = page.getByTestId('run-progress');
-  await expect.poll(async () => Number(await progress.getAttribute('data-fraction')), { timeout: 30_000 }).toBeGreaterThan(0.05);
+  await expect
+    .poll(async () => Number(await progress.getAttribute('data-fraction')), { timeout: 30_000 })
+    .toBeGreaterThan(0.05);
   const midway = Number(await progress.getAttribute('data-fraction'));
   expect(midway).toBeLessThan(1);
   await expect(page.getByTestId('progress-samples')).not.toHaveText('0', { timeout: 30_000 });
@@ -38,10 +45,20 @@ test('a user picks the MEMS damping example, sets Kn, runs it in Web Workers and
   await w.screenshot('view-run');
   await expect(w.status()).toContainText('finished', { timeout: 90_000 });
   // The run's own work on the page's thread ends at this mark (set when its result is in); drawing the results follows.
-  const t1 = await page.evaluate(() => performance.getEntriesByName('tenuis-run-end').at(-1)?.startTime ?? performance.now());
-  const longTasks = await page.evaluate(([a, b]) => (window as unknown as { __longTasks: { start: number; duration: number }[] }).__longTasks.filter((t) => t.start >= a && t.start <= b), [t0, t1]);
+  const t1 = await page.evaluate(
+    () => performance.getEntriesByName('tenuis-run-end').at(-1)?.startTime ?? performance.now(),
+  );
+  const longTasks = await page.evaluate(
+    ([a, b]) =>
+      (window as unknown as { __longTasks: { start: number; duration: number }[] }).__longTasks.filter(
+        (t) => t.start >= a && t.start <= b,
+      ),
+    [t0, t1],
+  );
   const longest = Math.max(0, ...longTasks.map((t) => t.duration));
-  console.log(`run took ${((t1 - t0) / 1000).toFixed(1)} s; longest main-thread task during it: ${longest.toFixed(0)} ms (${longTasks.length} over 50 ms)`);
+  console.log(
+    `run took ${((t1 - t0) / 1000).toFixed(1)} s; longest main-thread task during it: ${longest.toFixed(0)} ms (${longTasks.length} over 50 ms)`,
+  );
   expect.soft(longest, 'no main-thread task over 200 ms during the run').toBeLessThan(200);
 
   // Numbers with uncertainties; the moving walls are sheared in opposite directions.
@@ -90,7 +107,10 @@ test('a user picks the MEMS damping example, sets Kn, runs it in Web Workers and
   expect(summary.numerics.cellsY).toBe(20);
 });
 
-test('the round-tube example, made tiny, gives flow numbers with uncertainties and units, and a field map of the duct', async ({ workbench: w, page }) => {
+test('the round-tube example, made tiny, gives flow numbers with uncertainties and units, and a field map of the duct', async ({
+  workbench: w,
+  page,
+}) => {
   test.setTimeout(90_000);
   await w.open();
   await w.pickExample('roughing-line-stub');

@@ -2,7 +2,10 @@ import { readFile } from 'node:fs/promises';
 import { test, expect } from './fixtures';
 import { presetNames } from '../../engine/case/presets';
 
-test('the workbench loads cross-origin isolated with its caution, favicon and examples, and offers every engine preset', async ({ workbench: w, page }) => {
+test('the workbench loads cross-origin isolated with its caution, favicon and examples, and offers every engine preset', async ({
+  workbench: w,
+  page,
+}) => {
   await w.open();
   await expect(page.getByTestId('caution')).toContainText('Results are model estimates');
   await expect(page.getByTestId('caution')).toContainText('licensed engineering practice');
@@ -14,12 +17,16 @@ test('the workbench loads cross-origin isolated with its caution, favicon and ex
   expect(icon.headers()['content-type']).toContain('image/svg+xml');
 
   // A first visit opens straight onto the first example.
-  const index = JSON.parse(await readFile('public/examples/index.json', 'utf8')) as { examples: { id: string; preset?: string }[] };
+  const index = JSON.parse(await readFile('public/examples/index.json', 'utf8')) as {
+    examples: { id: string; preset?: string }[];
+  };
   await expect(page.locator('#example-select')).toHaveValue(index.examples[0].id);
   await expect(page.getByTestId('plan-review')).toBeVisible();
 
   // The geometry list is the engine's PRESETS, read at run time: presets added later appear without UI changes.
-  const offered = await page.locator('#preset-select option').evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value).filter(Boolean));
+  const offered = await page
+    .locator('#preset-select option')
+    .evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value).filter(Boolean));
   expect(offered).toEqual(presetNames());
   for (const name of presetNames()) {
     await page.locator('#preset-select').selectOption(name);

@@ -5,7 +5,13 @@ import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
 import { planOrThrow } from './planOrThrow';
 
 /** Kn 0.3 planar Couette, 10 cells × 20 particles, 300 + 4000 steps (base batch 10 steps): about 0.1 s per run. */
-export const SMALL_COUETTE = { knudsen: '0.3', cellsY: '10', particlesPerCell: '20', transientSteps: '300', sampleSteps: '4000' } as const;
+export const SMALL_COUETTE = {
+  knudsen: '0.3',
+  cellsY: '10',
+  particlesPerCell: '20',
+  transientSteps: '300',
+  sampleSteps: '4000',
+} as const;
 
 /**
  * A replica of SMALL_COUETTE with the given seed, run through its transient and `sampledSteps` sampled steps (all of
@@ -23,12 +29,17 @@ export function couetteReplica(seed: number, sampledSteps?: number): SampleSet {
 }
 
 /** Every number in a result (typed arrays element by element), keyed by its path; booleans and strings as text. */
-export function leaves(value: unknown, path = '', out = new Map<string, number | string>()): Map<string, number | string> {
+export function leaves(
+  value: unknown,
+  path = '',
+  out = new Map<string, number | string>(),
+): Map<string, number | string> {
   if (typeof value === 'number') out.set(path, value);
   else if (typeof value === 'string' || typeof value === 'boolean') out.set(path, String(value));
   else if (value instanceof Float64Array) value.forEach((v, i) => out.set(`${path}[${i}]`, v));
   else if (Array.isArray(value)) value.forEach((v, i) => leaves(v, `${path}[${i}]`, out));
-  else if (value && typeof value === 'object') for (const [k, v] of Object.entries(value)) leaves(v, path ? `${path}.${k}` : k, out);
+  else if (value && typeof value === 'object')
+    for (const [k, v] of Object.entries(value)) leaves(v, path ? `${path}.${k}` : k, out);
   return out;
 }
 

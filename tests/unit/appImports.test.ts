@@ -11,10 +11,20 @@ const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 const appDir = join(repoRoot, 'app');
 
 /** Lazily loaded entry points (and modules imported only by them). */
-const LAZY = new Set(['app/engine/setupApi.ts', 'app/engine/runApi.ts', 'app/engine/sweepApi.ts', 'app/engine/liveViews.ts', 'app/engine/liveSummary.worker.ts', 'app/setup/planView.ts', 'app/setup/deriveCase.ts']);
+const LAZY = new Set([
+  'app/engine/setupApi.ts',
+  'app/engine/runApi.ts',
+  'app/engine/sweepApi.ts',
+  'app/engine/liveViews.ts',
+  'app/engine/liveSummary.worker.ts',
+  'app/setup/planView.ts',
+  'app/setup/deriveCase.ts',
+]);
 
 function files(dir: string): string[] {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? files(join(dir, e.name)) : /\.tsx?$/.test(e.name) ? [join(dir, e.name)] : []));
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
+    e.isDirectory() ? files(join(dir, e.name)) : /\.tsx?$/.test(e.name) ? [join(dir, e.name)] : [],
+  );
 }
 
 const valueImport = /^\s*(?:import|export)\s+(?!type\b)[^;]*?from\s+['"]([^'"]+)['"]/gm;
@@ -27,12 +37,17 @@ describe('app/ imports', () => {
       if (LAZY.has(rel)) continue;
       const source = readFileSync(file, 'utf8');
       for (const m of source.matchAll(valueImport)) {
-        const target = relative(repoRoot, join(file, '..', m[1])).split('\\').join('/');
+        const target = relative(repoRoot, join(file, '..', m[1]))
+          .split('\\')
+          .join('/');
         if (m[1].startsWith('.') && /^(engine|workers)\//.test(target)) problems.push(`${rel}: imports ${m[1]}`);
       }
       for (const m of source.matchAll(/import\(\s*['"]([^'"]+)['"]\s*\)/g)) {
-        const target = relative(repoRoot, join(file, '..', m[1])).split('\\').join('/');
-        if (/^(engine|workers)\//.test(target)) problems.push(`${rel}: loads ${m[1]} directly (go through app/engine/loadEngine.ts)`);
+        const target = relative(repoRoot, join(file, '..', m[1]))
+          .split('\\')
+          .join('/');
+        if (/^(engine|workers)\//.test(target))
+          problems.push(`${rel}: loads ${m[1]} directly (go through app/engine/loadEngine.ts)`);
       }
     }
     expect(problems).toEqual([]);

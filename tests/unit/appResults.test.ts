@@ -10,7 +10,11 @@ describe('extensionsOf()', () => {
   it('reads the engine FlowResult: values by name with the given units and the section and vessel pressures', () => {
     const result = {
       flow: {
-        section: 'exit', sections: {}, upstreamPressurePa: 200, downstreamPressurePa: 100, temperatureK: 300,
+        section: 'exit',
+        sections: {},
+        upstreamPressurePa: 200,
+        downstreamPressurePa: 100,
+        temperatureK: 300,
         values: { massFlowRate: { mean: 1e-9, ci95: 1e-11 }, conductance: { mean: 2e-3, ci95: 3e-5 } },
       },
     } as unknown as SimulationResult;
@@ -35,13 +39,37 @@ describe('comparisonView()', () => {
       predictions: {
         description: 'planar Couette flow',
         profiles: [
-          { key: 'profile.velocityX', field: 'velocityX', unit: 'm/s', line: { kind: 'rows' }, positionsM: Float64Array.of(1, 2), values: { noSlip: Float64Array.of(-1, 1) }, scale: { kind: 'fixed', value: 2, what: 'U' } },
-          { key: 'centerline.x.velocityX', field: 'velocityX', unit: 'm/s', line: { kind: 'column', atM: 0.5 }, positionsM: Float64Array.of(1), values: { noSlip: Float64Array.of(0) }, scale: { kind: 'fixed', value: 2, what: 'U' } },
+          {
+            key: 'profile.velocityX',
+            field: 'velocityX',
+            unit: 'm/s',
+            line: { kind: 'rows' },
+            positionsM: Float64Array.of(1, 2),
+            values: { noSlip: Float64Array.of(-1, 1) },
+            scale: { kind: 'fixed', value: 2, what: 'U' },
+          },
+          {
+            key: 'centerline.x.velocityX',
+            field: 'velocityX',
+            unit: 'm/s',
+            line: { kind: 'column', atM: 0.5 },
+            positionsM: Float64Array.of(1),
+            values: { noSlip: Float64Array.of(0) },
+            scale: { kind: 'fixed', value: 2, what: 'U' },
+          },
         ],
       },
       continuum: { noSlip: { 'walls.top.shearStress': -1.5 } },
       units: {},
-      verdict: { 'walls.top.shearStress': { quantity: 'walls.top.shearStress', kind: 'integral', unit: 'Pa', category: 'adequate', text: 'no-slip adequate' } },
+      verdict: {
+        'walls.top.shearStress': {
+          quantity: 'walls.top.shearStress',
+          kind: 'integral',
+          unit: 'Pa',
+          category: 'adequate',
+          text: 'no-slip adequate',
+        },
+      },
       profiles: {},
     } as unknown as ContinuumComparisonResult;
     const v = comparisonView(c, { noSlip: 'no-slip' })!;
@@ -49,8 +77,21 @@ describe('comparisonView()', () => {
       { model: 'no-slip', quantity: 'velocityX', values: [-1, 1], y: [1, 2] },
       { model: 'no-slip', quantity: 'velocityX', values: [0], y: [1], line: { kind: 'column', atM: 0.5 } },
     ]);
-    expect(v.verdicts).toEqual([{ quantity: 'walls.top.shearStress', unit: 'Pa', category: 'adequate', text: 'no-slip adequate', values: [{ label: 'no-slip', value: -1.5 }] }]);
-    expect(comparisonView({ recognised: false, reason: 'not a known problem' }, {})).toEqual({ recognised: false, description: 'not a known problem', curves: [], verdicts: [] });
+    expect(v.verdicts).toEqual([
+      {
+        quantity: 'walls.top.shearStress',
+        unit: 'Pa',
+        category: 'adequate',
+        text: 'no-slip adequate',
+        values: [{ label: 'no-slip', value: -1.5 }],
+      },
+    ]);
+    expect(comparisonView({ recognised: false, reason: 'not a known problem' }, {})).toEqual({
+      recognised: false,
+      description: 'not a known problem',
+      curves: [],
+      verdicts: [],
+    });
   });
 });
 

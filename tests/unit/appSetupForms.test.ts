@@ -7,7 +7,14 @@ import * as setup from '../../app/engine/setupApi';
 import { createAppStore } from '../../app/store/store';
 import { formOf } from '../../app/store/caseSlice';
 import { convertEntry, type CustomGasEdit, type GasEdit } from '../../app/setup/formModel';
-import { addBlockRow, blockTableFrom, convertBlockTable, removeBlockRow, snapToGrid, updateBlockRow } from '../../app/setup/blockEdits';
+import {
+  addBlockRow,
+  blockTableFrom,
+  convertBlockTable,
+  removeBlockRow,
+  snapToGrid,
+  updateBlockRow,
+} from '../../app/setup/blockEdits';
 import type { SetupApi } from '../../app/engine/loadEngine';
 import type { CaseInput } from '../../engine/case/schema';
 
@@ -89,14 +96,25 @@ describe('gas panel', () => {
     store.getState().setGas(argonLike);
     const c = caseOf(store);
     expect(c.gas.species).toBeUndefined();
-    expect(c.gas.custom).toMatchObject({ name: 'myArgon', referenceDiameterM: 4.17e-10, referenceTemperatureK: 273, viscosityIndex: 0.81, rotationalDof: 0 });
+    expect(c.gas.custom).toMatchObject({
+      name: 'myArgon',
+      referenceDiameterM: 4.17e-10,
+      referenceTemperatureK: 273,
+      viscosityIndex: 0.81,
+      rotationalDof: 0,
+    });
     expect(c.gas.custom!.massKg).toBeCloseTo(66.3e-27, 35);
     expect(c.name).toMatch(/myArgon/);
     // The same molecules as the table's argon: the same pressures (the rescaling factor is 1).
     expect(c.initial.pressurePa).toBeCloseTo(tableCase.initial.pressurePa, 6);
     // Smaller molecules: at fixed Kn, p ∝ μ/sqrt(m) ∝ 1/d² for VHS (the mass cancels), and the plan's Knudsen number
     // is still the preset's.
-    store.getState().setGas({ ...argonLike, custom: { ...argonLike.custom, diameter: { text: '0.3', unit: 'nm' }, mass: { text: '4.0026', unit: 'g/mol' } } });
+    store
+      .getState()
+      .setGas({
+        ...argonLike,
+        custom: { ...argonLike.custom, diameter: { text: '0.3', unit: 'nm' }, mass: { text: '4.0026', unit: 'g/mol' } },
+      });
     const light = caseOf(store);
     expect(light.initial.pressurePa / tableCase.initial.pressurePa).toBeCloseTo((0.417 / 0.3) ** 2, 10);
     const left = light.boundaries.left as { pressurePa: number };
@@ -107,7 +125,12 @@ describe('gas panel', () => {
 
   it('invalid custom fields are marked at their gas fields with what is allowed', () => {
     const store = newStore('couette');
-    store.getState().setGas({ ...argonLike, custom: { ...argonLike.custom, viscosityIndex: '1.4', diameter: { text: 'wide', unit: 'nm' }, name: '' } });
+    store
+      .getState()
+      .setGas({
+        ...argonLike,
+        custom: { ...argonLike.custom, viscosityIndex: '1.4', diameter: { text: 'wide', unit: 'nm' }, name: '' },
+      });
     const errors = store.getState().derived!.fieldErrors;
     expect(errors['gas:viscosityIndex']).toMatch(/between 0.5 .* and 1/);
     expect(errors['gas:referenceDiameterM']).toMatch(/"wide" is not a number/);
@@ -136,17 +159,37 @@ describe('block table', () => {
     store.getState().setBlocks(table);
     expectSameBlocks(caseOf(store).blocks!, built.blocks!);
     const added = addBlockRow(table, { xMinM: 1e-6, xMaxM: 1.5e-6, yMinM: 1.2e-6, yMaxM: 1.8e-6 }, 300, api);
-    expect(added.rows[2]).toMatchObject({ name: 'block1', xMin: '1', xMax: '1.5', yMin: '1.2', yMax: '1.8', temperature: '300', model: 'diffuse' });
+    expect(added.rows[2]).toMatchObject({
+      name: 'block1',
+      xMin: '1',
+      xMax: '1.5',
+      yMin: '1.2',
+      yMax: '1.8',
+      temperature: '300',
+      model: 'diffuse',
+    });
     store.getState().setBlocks(updateBlockRow(added, 2, { xMax: '1.75' }));
     const block = caseOf(store).blocks![2];
-    expect(block).toMatchObject({ name: 'block1', xMinM: 1e-6, xMaxM: 1.75e-6, yMinM: 1.2e-6, yMaxM: 1.8e-6, wall: { type: 'wall', model: 'diffuse', temperatureK: 300 } });
+    expect(block).toMatchObject({
+      name: 'block1',
+      xMinM: 1e-6,
+      xMaxM: 1.75e-6,
+      yMinM: 1.2e-6,
+      yMaxM: 1.8e-6,
+      wall: { type: 'wall', model: 'diffuse', temperatureK: 300 },
+    });
     store.getState().setBlocks(removeBlockRow(added, 0));
     expect(caseOf(store).blocks!.map((b) => b.name)).toEqual(['upperWall', 'block1']);
   });
 
   it('a block outside the domain gets its message at its row, in the table’s unit; a non-number at its field', () => {
     const store = newStore('channel');
-    const table = addBlockRow(blockTableFrom(caseOf(store), api), { xMinM: 1e-6, xMaxM: 2e-6, yMinM: 0, yMaxM: 1e-6 }, 300, api);
+    const table = addBlockRow(
+      blockTableFrom(caseOf(store), api),
+      { xMinM: 1e-6, xMaxM: 2e-6, yMinM: 0, yMaxM: 1e-6 },
+      300,
+      api,
+    );
     store.getState().setBlocks(updateBlockRow(table, 2, { xMax: '500' }));
     const errors = store.getState().derived!.fieldErrors;
     expect(errors['block:2:xMaxM']).toMatch(/outside the domain/);
@@ -192,7 +235,16 @@ describe('saved set-ups and JSON mode', () => {
     const store = newStore('channel');
     store.getState().setGas(argonLike);
     store.getState().setWall('top', { temperature: { text: '30', unit: '°C' } });
-    store.getState().setBlocks(addBlockRow(blockTableFrom(caseOf(store), api), { xMinM: 0.5e-6, xMaxM: 1e-6, yMinM: 2e-6, yMaxM: 2.5e-6 }, 300, api));
+    store
+      .getState()
+      .setBlocks(
+        addBlockRow(
+          blockTableFrom(caseOf(store), api),
+          { xMinM: 0.5e-6, xMaxM: 1e-6, yMinM: 2e-6, yMaxM: 2.5e-6 },
+          300,
+          api,
+        ),
+      );
     const saved = structuredClone(formOf(store.getState()));
     const text = store.getState().caseText;
     const other = newStore('couette');

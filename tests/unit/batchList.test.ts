@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { createBatchStore, addToBatches, totalOf, batchView, batchSteps, storedSteps } from '../../engine/stats/doublingBatches';
+import {
+  createBatchStore,
+  addToBatches,
+  totalOf,
+  batchView,
+  batchSteps,
+  storedSteps,
+} from '../../engine/stats/doublingBatches';
 import { batchListOf, coarsenBatchList, mergeBatchLists } from '../../engine/stats/batchList';
 
 const UNIT_STEPS = 10;

@@ -12,12 +12,28 @@ import type { CaseInput } from '../../engine/case/schema';
 const T = 300;
 const wall = { type: 'wall', model: 'maxwell', accommodation: 0.7, temperatureK: T } as const;
 
-interface BlockDraw { x0: number; w: number; y0: number; h: number }
+interface BlockDraw {
+  x0: number;
+  w: number;
+  y0: number;
+  h: number;
+}
 
-function boxWithBlocks(blocks: BlockDraw[], axisymmetric: boolean, xSides: 'wall' | 'periodic' | 'reservoir', crossings: number, seed: number): CaseInput {
+function boxWithBlocks(
+  blocks: BlockDraw[],
+  axisymmetric: boolean,
+  xSides: 'wall' | 'periodic' | 'reservoir',
+  crossings: number,
+  seed: number,
+): CaseInput {
   const lx = 1e-3;
   const ly = 0.6e-3;
-  const side = xSides === 'wall' ? wall : xSides === 'periodic' ? ({ type: 'periodic' } as const) : ({ type: 'reservoir', pressurePa: 2, temperatureK: T } as const);
+  const side =
+    xSides === 'wall'
+      ? wall
+      : xSides === 'periodic'
+        ? ({ type: 'periodic' } as const)
+        : ({ type: 'reservoir', pressurePa: 2, temperatureK: T } as const);
   const v0 = Math.sqrt((2 * 1.380649e-23 * T) / 6.63e-26);
   return {
     schemaVersion: 1,
@@ -78,13 +94,22 @@ describe('blocks', () => {
       ),
       // Fixed seed (reproducible); it once found a ring face met from below by a molecule that started above it.
       // endOnFailure: report the first failure at once instead of shrinking for minutes.
-      { numRuns: Number(process.env.TENUIS_PROPERTY_RUNS ?? 60), seed: Number(process.env.TENUIS_PROPERTY_SEED ?? 623952645), endOnFailure: true },
+      {
+        numRuns: Number(process.env.TENUIS_PROPERTY_RUNS ?? 60),
+        seed: Number(process.env.TENUIS_PROPERTY_SEED ?? 623952645),
+        endOnFailure: true,
+      },
     );
   });
 
   it('a thin plate is never jumped, however fast the molecules (long run, many blocks)', () => {
     // Plates far thinner than a cell, molecules flying up to ~5 cells per step: 400 steps.
-    const plates: BlockDraw[] = Array.from({ length: 8 }, (_, k) => ({ x0: 0.1 + 0.1 * k, w: 0.002, y0: k % 2 ? 0.2 : 0, h: 0.8 }));
+    const plates: BlockDraw[] = Array.from({ length: 8 }, (_, k) => ({
+      x0: 0.1 + 0.1 * k,
+      w: 0.002,
+      y0: k % 2 ? 0.2 : 0,
+      h: 0.8,
+    }));
     const sim = createSimulation(planOrThrow(boxWithBlocks(plates, false, 'wall', 5, 3)));
     const st = sim.state;
     const plateOf = (x: number) => plates.findIndex((p) => x > p.x0 * st.lengthX && x < (p.x0 + p.w) * st.lengthX);
@@ -92,7 +117,10 @@ describe('blocks', () => {
       advance(sim, 1);
       for (let i = 0; i < st.count; i++) {
         const p = plateOf(st.x[i]);
-        if (p >= 0) expect(st.y[i] <= plates[p].y0 * st.lengthY || st.y[i] >= (plates[p].y0 + plates[p].h) * st.lengthY).toBe(true);
+        if (p >= 0)
+          expect(st.y[i] <= plates[p].y0 * st.lengthY || st.y[i] >= (plates[p].y0 + plates[p].h) * st.lengthY).toBe(
+            true,
+          );
       }
     }
     expect(st.leaks).toBe(0);

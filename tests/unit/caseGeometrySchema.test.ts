@@ -11,7 +11,8 @@ const errorsOf = (c: unknown) => {
 
 describe('case schema: blocks, sections, open sides, axisymmetric rules, wall names', () => {
   it('accepts the presets as built', () => {
-    for (const name of ['channel', 'tube', 'slit', 'orifice', 'poiseuille', 'cavity']) expect(errorsOf(buildPreset(name, {})), name).toEqual([]);
+    for (const name of ['channel', 'tube', 'slit', 'orifice', 'poiseuille', 'cavity'])
+      expect(errorsOf(buildPreset(name, {})), name).toEqual([]);
   });
   it('refuses a block outside the domain or turned inside out, naming the block and the field', () => {
     const c = base();
@@ -38,12 +39,17 @@ describe('case schema: blocks, sections, open sides, axisymmetric rules, wall na
     expect(e).toMatch(/boundaries\.bottom\.type: a pressureOutlet ends a duct along x/);
     const tube = buildPreset('tube', {});
     tube.boundaries.bottom = { type: 'symmetry' };
-    expect(errorsOf(tube).join('\n')).toMatch(/boundaries\.bottom\.type: in an axisymmetric domain the bottom side .* is the axis/);
+    expect(errorsOf(tube).join('\n')).toMatch(
+      /boundaries\.bottom\.type: in an axisymmetric domain the bottom side .* is the axis/,
+    );
   });
   it('a wall may carry its own name (the cavity lid), unique among the walls', () => {
     const cavity = buildPreset('cavity', {});
     expect(cavity.boundaries.top).toMatchObject({ type: 'wall', name: 'lid' });
-    const twice = { ...cavity, boundaries: { ...cavity.boundaries, bottom: { ...cavity.boundaries.bottom, name: 'lid' } } };
+    const twice = {
+      ...cavity,
+      boundaries: { ...cavity.boundaries, bottom: { ...cavity.boundaries.bottom, name: 'lid' } },
+    };
     expect(errorsOf(twice).join('\n')).toMatch(/boundaries\.(top|bottom)\.name: wall name "lid" is already used/);
   });
   it('a negative reservoir pressure is refused; 0 is a vacuum', () => {
@@ -52,6 +58,8 @@ describe('case schema: blocks, sections, open sides, axisymmetric rules, wall na
     right.pressurePa = 0;
     expect(errorsOf(c)).toEqual([]);
     right.pressurePa = -1;
-    expect(errorsOf(c).join('\n')).toMatch(/boundaries\.right\.pressurePa: reservoir pressure must be 0 \(vacuum\) or more/);
+    expect(errorsOf(c).join('\n')).toMatch(
+      /boundaries\.right\.pressurePa: reservoir pressure must be 0 \(vacuum\) or more/,
+    );
   });
 });

@@ -16,7 +16,8 @@ function models(name: string, overrides: Record<string, string> = {}, options = 
   return m;
 }
 
-const value = (m: CaseModels, key: string, model: string) => (m.quantities.find((q) => q.key === key)?.values as Record<string, number>)[model];
+const value = (m: CaseModels, key: string, model: string) =>
+  (m.quantities.find((q) => q.key === key)?.values as Record<string, number>)[model];
 const profile = (m: CaseModels, key: string) => m.profiles.find((p) => p.key === key)!;
 
 describe('caseModelsOf()', () => {
@@ -30,11 +31,20 @@ describe('caseModelsOf()', () => {
     expect(m.meanFreePath.kind).toBe('viscosity');
     expect(value(m, 'walls.bottom.shearStress', 'noSlip')).toBeCloseTo((mu * 100) / h, 10);
     // σ_P = 1.0162 ℓ = 1.0162·(2/√π) λ = 1.1466 λ (reference notes §6).
-    expect(value(m, 'walls.bottom.shearStress', 'firstOrder') / ((mu * 100) / (h + 2 * 1.0162 * (2 / Math.sqrt(Math.PI)) * lambda))).toBeCloseTo(1, 12);
+    expect(
+      value(m, 'walls.bottom.shearStress', 'firstOrder') /
+        ((mu * 100) / (h + 2 * 1.0162 * (2 / Math.sqrt(Math.PI)) * lambda)),
+    ).toBeCloseTo(1, 12);
     expect(value(m, 'walls.top.shearStress', 'firstOrder')).toBe(-value(m, 'walls.bottom.shearStress', 'firstOrder'));
-    expect((value(m, 'walls.bottom.shearStress', 'freeMolecular') * v0) / (p * 100)).toBeCloseTo(1 / Math.sqrt(Math.PI), 12);
+    expect((value(m, 'walls.bottom.shearStress', 'freeMolecular') * v0) / (p * 100)).toBeCloseTo(
+      1 / Math.sqrt(Math.PI),
+      12,
+    );
     for (const model of ['noSlip', 'firstOrder', 'secondOrder', 'freeMolecular']) {
-      expect(value(m, 'walls.top.heatFlux', model)).toBeCloseTo((value(m, 'walls.bottom.shearStress', model) * 100) / 2, 9);
+      expect(value(m, 'walls.top.heatFlux', model)).toBeCloseTo(
+        (value(m, 'walls.bottom.shearStress', model) * 100) / 2,
+        9,
+      );
     }
     const u = profile(m, 'profile.velocityX');
     expect(u.positionsM).toHaveLength(plan.grid.cellsY);
@@ -42,7 +52,10 @@ describe('caseModelsOf()', () => {
     // Antisymmetric about the middle, slope τ/μ.
     const n = u.positionsM.length;
     expect(u.values.firstOrder![0] + u.values.firstOrder![n - 1]).toBeCloseTo(0, 9);
-    expect((u.values.firstOrder![1] - u.values.firstOrder![0]) / plan.grid.cellSizeYM).toBeCloseTo(value(m, 'walls.bottom.shearStress', 'firstOrder') / mu, 6);
+    expect((u.values.firstOrder![1] - u.values.firstOrder![0]) / plan.grid.cellSizeYM).toBeCloseTo(
+      value(m, 'walls.bottom.shearStress', 'firstOrder') / mu,
+      6,
+    );
   });
 
   it('Couette with MAXWELL_SLIP: slip length λ; with a Maxwell wall of accommodation 0.8 the factor (2 − σ)/σ', () => {
@@ -54,10 +67,14 @@ describe('caseModelsOf()', () => {
     const u = 100;
     expect(value(m, 'walls.bottom.shearStress', 'firstOrder')).toBeCloseTo((mu * u) / (h + 2 * lambda), 10);
     const c = structuredClone(plan.caseData);
-    for (const side of ['bottom', 'top'] as const) Object.assign(c.boundaries[side], { model: 'maxwell', accommodation: 0.8 });
+    for (const side of ['bottom', 'top'] as const)
+      Object.assign(c.boundaries[side], { model: 'maxwell', accommodation: 0.8 });
     const maxwell = caseModelsOf(planOrThrow(c), { firstOrder: MAXWELL_SLIP });
     if (!maxwell.recognised) throw new Error(maxwell.reason);
-    expect(value(maxwell, 'walls.bottom.shearStress', 'firstOrder')).toBeCloseTo((mu * u) / (h + 2 * (1.2 / 0.8) * lambda), 10);
+    expect(value(maxwell, 'walls.bottom.shearStress', 'firstOrder')).toBeCloseTo(
+      (mu * u) / (h + 2 * (1.2 / 0.8) * lambda),
+      10,
+    );
   });
 
   it('Couette temperature: κT″ = −μ(τ/μ)² across the gap, the Smoluchowski jump only with slip', () => {
@@ -71,7 +88,7 @@ describe('caseModelsOf()', () => {
       const v = t.values[model]!;
       const second = (v[2] - 2 * v[1] + v[0]) / (dy * dy);
       const b = value(m, 'walls.bottom.shearStress', model) / mu;
-      expect(kappa * second / (-mu * b * b)).toBeCloseTo(1, 6);
+      expect((kappa * second) / (-mu * b * b)).toBeCloseTo(1, 6);
     }
     // No slip: the gas at the wall (extrapolated by the parabola) has the wall temperature.
     const v = t.values.noSlip!;
@@ -92,9 +109,15 @@ describe('caseModelsOf()', () => {
     expect(value(m, 'walls.bottom.heatFlux', 'noSlip')).toBeCloseTo((kappa * 20) / h, 9);
     expect(value(m, 'walls.top.heatFlux', 'noSlip')).toBe(-value(m, 'walls.bottom.heatFlux', 'noSlip'));
     // Smoluchowski j = (2γ/(γ+1))λ/Pr = (5/4)(3/2)λ for a monatomic gas (reference notes §6).
-    expect(value(m, 'walls.bottom.heatFlux', 'firstOrder')).toBeCloseTo((kappa * 20) / (h + 2 * 1.875 * plan.reference.meanFreePathM), 9);
+    expect(value(m, 'walls.bottom.heatFlux', 'firstOrder')).toBeCloseTo(
+      (kappa * 20) / (h + 2 * 1.875 * plan.reference.meanFreePathM),
+      9,
+    );
     const { pressurePa: p, mostProbableSpeedMPerS: v0, temperatureK: t0 } = plan.reference;
-    expect((value(m, 'walls.bottom.heatFlux', 'freeMolecular') * Math.sqrt(Math.PI) * t0) / (p * v0 * 20)).toBeCloseTo(1, 9);
+    expect((value(m, 'walls.bottom.heatFlux', 'freeMolecular') * Math.sqrt(Math.PI) * t0) / (p * v0 * 20)).toBeCloseTo(
+      1,
+      9,
+    );
     expect(m.models.secondOrder).toBeUndefined();
   });
 
@@ -110,7 +133,10 @@ describe('caseModelsOf()', () => {
     const a = plan.bodyAccelerationXMPerS2;
     const rho = plan.reference.massDensityKgPerM3;
     expect(value(m, 'walls.top.shearStress', 'secondOrder')).toBeCloseTo((rho * a * plan.grid.lengthYM) / 2, 6);
-    expect(value(m, 'walls.bottom.heatFlux', 'firstOrder')).toBeCloseTo((a * value(m, 'flow.massFlowRate', 'firstOrder')) / 2, 6);
+    expect(value(m, 'walls.bottom.heatFlux', 'firstOrder')).toBeCloseTo(
+      (a * value(m, 'flow.massFlowRate', 'firstOrder')) / 2,
+      6,
+    );
     // The temperature profile peaks in the middle and does not depend on the slip model beyond the jump.
     const t = profile(m, 'profile.temperature').values.firstOrder!;
     const mid = t.length / 2;
@@ -128,7 +154,10 @@ describe('caseModelsOf()', () => {
     expect(m.problem).toBe('forceDrivenTube');
     expect(value(m, 'flow.reducedFlowRate', 'noSlip')).toBeCloseTo(plan.reference.rarefaction / 4, 10);
     expect(value(m, 'flow.reducedFlowRate', 'freeMolecular')).toBeCloseTo(8 / (3 * Math.sqrt(Math.PI)), 12);
-    expect(value(m, 'walls.top.shearStress', 'noSlip')).toBeCloseTo((plan.reference.massDensityKgPerM3 * plan.bodyAccelerationXMPerS2 * plan.grid.lengthYM) / 2, 6);
+    expect(value(m, 'walls.top.shearStress', 'noSlip')).toBeCloseTo(
+      (plan.reference.massDensityKgPerM3 * plan.bodyAccelerationXMPerS2 * plan.grid.lengthYM) / 2,
+      6,
+    );
   });
 
   it('long channel between vessels: no-slip ṁ = H³p_o²(Π² − 1)/(24μRTL) per metre (Arkilic et al. 1997 with Kn = 0); G_P scaled as the DSMC one', () => {
@@ -142,10 +171,14 @@ describe('caseModelsOf()', () => {
     const mu = plan.reference.viscosityPaS;
     const gasConstant = K_B / plan.gas.model.massKg;
     const ratio = left.pressurePa / right.pressurePa;
-    const expected = (r.sizeM ** 3 * right.pressurePa ** 2 * (ratio * ratio - 1)) / (24 * mu * gasConstant * t * r.lengthM!);
+    const expected =
+      (r.sizeM ** 3 * right.pressurePa ** 2 * (ratio * ratio - 1)) / (24 * mu * gasConstant * t * r.lengthM!);
     expect(value(m, 'flow.massFlowRate', 'noSlip') / expected).toBeCloseTo(1, 10);
     const v0 = Math.sqrt((2 * K_B * t) / plan.gas.model.massKg);
-    expect(value(m, 'flow.reducedFlowRate', 'noSlip')).toBeCloseTo((expected * v0 * r.lengthM!) / (r.sizeM ** 2 * (left.pressurePa - right.pressurePa)), 10);
+    expect(value(m, 'flow.reducedFlowRate', 'noSlip')).toBeCloseTo(
+      (expected * v0 * r.lengthM!) / (r.sizeM ** 2 * (left.pressurePa - right.pressurePa)),
+      10,
+    );
     const order = ['noSlip', 'firstOrder', 'secondOrder'].map((k) => value(m, 'flow.massFlowRate', k));
     expect(order[0]).toBeLessThan(order[1]);
     expect(order[1]).toBeLessThan(order[2]);

@@ -10,7 +10,15 @@ import { summarize } from '../../engine/results/summarize';
 import { encodeCheckpoint, decodeCheckpoint } from '../../engine/io/checkpoint';
 
 function nitrogenCouette(transient: 'fixed' | 'auto' = 'fixed') {
-  const settings: Record<string, string> = { gas: 'N2', model: 'VSS', knudsen: '0.3', cellsY: '12', particlesPerCell: '25', sampleSteps: '1200', seed: '21' };
+  const settings: Record<string, string> = {
+    gas: 'N2',
+    model: 'VSS',
+    knudsen: '0.3',
+    cellsY: '12',
+    particlesPerCell: '25',
+    sampleSteps: '1200',
+    seed: '21',
+  };
   if (transient === 'fixed') settings.transientSteps = '300';
   const input = buildPreset('couette', settings);
   const b = input.boundaries as Record<string, Record<string, unknown>>;
@@ -24,7 +32,9 @@ describe('checkpoints', () => {
     const total = plan.transientSteps + plan.sampleSteps;
     const straight = createSimulation(plan, { stream: 3 });
     advance(straight, total);
-    const expected = JSON.stringify(summarize(straight), (_, v) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v));
+    const expected = JSON.stringify(summarize(straight), (_, v) =>
+      ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v,
+    );
     for (const stopAt of [137, 777]) {
       const first = createSimulation(plan, { stream: 3 });
       advance(first, stopAt);
@@ -52,7 +62,8 @@ describe('checkpoints', () => {
     const { sim } = decodeCheckpoint(encodeCheckpoint(first, 1));
     runToCompletion(sim);
     expect(sim.transientEndStep).toBe(straight.transientEndStep);
-    const text = (x: typeof sim) => JSON.stringify(summarize(x), (_, v) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v));
+    const text = (x: typeof sim) =>
+      JSON.stringify(summarize(x), (_, v) => (ArrayBuffer.isView(v) ? Array.from(v as Float64Array) : v));
     expect(text(sim)).toBe(text(straight));
   });
 

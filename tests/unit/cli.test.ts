@@ -18,7 +18,16 @@ function tenuis(...args: string[]): { code: number | null; stdout: string; stder
 }
 
 /** A fast Couette case: 10 cells × 20 particles, 100 transient + 500 sampled steps. */
-const TINY = ['--set', 'cellsY=10', '--set', 'particlesPerCell=20', '--set', 'transientSteps=100', '--set', 'sampleSteps=500'];
+const TINY = [
+  '--set',
+  'cellsY=10',
+  '--set',
+  'particlesPerCell=20',
+  '--set',
+  'transientSteps=100',
+  '--set',
+  'sampleSteps=500',
+];
 const RESULT_FILES = ['case.json', 'fields.csv', 'profiles.csv', 'summary.json', 'surfaces.csv'];
 
 let work: string;
@@ -48,7 +57,12 @@ describe('tenuis preset', () => {
     const c = JSON.parse(r.stdout);
     expect(c.seed).toBe(1);
     expect(c.numerics.maxParticles).toBe(20_000_000);
-    expect(c.boundaries.bottom).toMatchObject({ type: 'wall', model: 'diffuse', temperatureK: 273, velocityMPerS: [-50, 0, 0] });
+    expect(c.boundaries.bottom).toMatchObject({
+      type: 'wall',
+      model: 'diffuse',
+      temperatureK: 273,
+      velocityMPerS: [-50, 0, 0],
+    });
     expect(c.boundaries.top.velocityMPerS).toEqual([50, 0, 0]);
   });
 
@@ -121,11 +135,41 @@ describe('tenuis schema, help and usage', () => {
 describe('tenuis check and run refuse bad input', () => {
   type Mutation = (c: Record<string, any>) => void;
   const invalid: [string, Mutation, RegExp][] = [
-    ['negative gap', (c) => { c.domain.lengthYM = -0.001; }, /domain\.lengthYM/],
-    ['zero pressure', (c) => { c.initial.pressurePa = 0; }, /initial\.pressurePa/],
-    ['unknown gas', (c) => { c.gas.species = 'unobtainium'; }, /gas\.species/],
-    ['accommodation 1.5 on a Maxwell wall', (c) => { c.boundaries.top = { type: 'wall', model: 'maxwell', temperatureK: 273, accommodation: 1.5 }; }, /boundaries\.top\.accommodation/],
-    ['more particles than maxParticles', (c) => { c.numerics.maxParticles = 100; }, /numerics\.particlesPerCell.*maxParticles/],
+    [
+      'negative gap',
+      (c) => {
+        c.domain.lengthYM = -0.001;
+      },
+      /domain\.lengthYM/,
+    ],
+    [
+      'zero pressure',
+      (c) => {
+        c.initial.pressurePa = 0;
+      },
+      /initial\.pressurePa/,
+    ],
+    [
+      'unknown gas',
+      (c) => {
+        c.gas.species = 'unobtainium';
+      },
+      /gas\.species/,
+    ],
+    [
+      'accommodation 1.5 on a Maxwell wall',
+      (c) => {
+        c.boundaries.top = { type: 'wall', model: 'maxwell', temperatureK: 273, accommodation: 1.5 };
+      },
+      /boundaries\.top\.accommodation/,
+    ],
+    [
+      'more particles than maxParticles',
+      (c) => {
+        c.numerics.maxParticles = 100;
+      },
+      /numerics\.particlesPerCell.*maxParticles/,
+    ],
   ];
 
   it.each(invalid)('%s: check exits non-zero naming the field, run creates no output folder', (name, mutate, field) => {
@@ -215,7 +259,12 @@ describe('tenuis run', () => {
     let stderr = '';
     const exit = new Promise<number | null>((resolve) => child.on('close', (code) => resolve(code)));
     // Off a terminal the progress line is printed at once: the run is under way when it appears.
-    await new Promise<void>((resolve) => child.stderr.on('data', (d) => { stderr += d; if (/step /.test(stderr)) resolve(); }));
+    await new Promise<void>((resolve) =>
+      child.stderr.on('data', (d) => {
+        stderr += d;
+        if (/step /.test(stderr)) resolve();
+      }),
+    );
     child.kill('SIGINT');
     expect(await exit).toBe(130);
     expect(stderr).toMatch(/interrupted at step \d+: writing the \d+ steps sampled so far/);

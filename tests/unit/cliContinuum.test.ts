@@ -66,7 +66,11 @@ describe('tenuis continuum cavity', () => {
     expect(summary.slip).toMatchObject({ model: 'none', slipLength: 0 });
     expect(Math.abs(summary.residual - direct.residual)).toBeLessThan(SAME);
     expect(summary.residual).toBeLessThanOrEqual(1e-10);
-    for (const [key, where] of [['uMin', 'y'], ['vMax', 'x'], ['vMin', 'x']] as const) {
+    for (const [key, where] of [
+      ['uMin', 'y'],
+      ['vMax', 'x'],
+      ['vMin', 'x'],
+    ] as const) {
       const expected = c[key] as unknown as Record<string, number>;
       expect(summary.centerline[key].value).toBeCloseTo(expected.value, 12);
       expect(summary.centerline[key][where]).toBeCloseTo(expected[where], 12);
@@ -75,7 +79,23 @@ describe('tenuis continuum cavity', () => {
 
   it('--slip first --knudsen 0.05 --accommodation 0.8 records the slip and matches the solver', () => {
     const out = join(work, 'slip');
-    const r = tenuis('continuum', 'cavity', '--reynolds', '100', '--grid', '17', '--slip', 'first', '--knudsen', '0.05', '--accommodation', '0.8', '--out', out, '--quiet');
+    const r = tenuis(
+      'continuum',
+      'cavity',
+      '--reynolds',
+      '100',
+      '--grid',
+      '17',
+      '--slip',
+      'first',
+      '--knudsen',
+      '0.05',
+      '--accommodation',
+      '0.8',
+      '--out',
+      out,
+      '--quiet',
+    );
     expect(r.code, r.stderr).toBe(0);
     expect(r.stderr).toBe('');
     const direct = solveCavity({ reynolds: 100, grid: 17, slip: 'first', knudsen: 0.05, accommodation: 0.8 });
@@ -93,7 +113,10 @@ describe('tenuis continuum cavity', () => {
     [['--grid', '33'], /needs --reynolds/],
     [['--reynolds', '100', '--grid', '5'], /--grid 5: .*at least 9/],
     [['--reynolds', '100', '--slip', 'first', '--knudsen', '-0.1'], /--knudsen -0\.1: .*at least 0/],
-    [['--reynolds', '100', '--slip', 'first', '--knudsen', '0.1', '--accommodation', '1.5'], /--accommodation 1\.5: .*above 0 and at most 1/],
+    [
+      ['--reynolds', '100', '--slip', 'first', '--knudsen', '0.1', '--accommodation', '1.5'],
+      /--accommodation 1\.5: .*above 0 and at most 1/,
+    ],
     [['--reynolds', '100', '--slip', 'second'], /--slip second: .*none, first/],
     [['--reynolds', '100', '--slip', 'first'], /--knudsen: required with --slip first/],
   ])('bad input %j names the option and what is allowed, exits 2 and writes nothing', (args, message) => {
@@ -115,7 +138,10 @@ describe('tenuis continuum cavity', () => {
   });
 
   it('`help continuum` and `continuum --help` print the usage; an unknown problem exits 2', () => {
-    for (const args of [['help', 'continuum'], ['continuum', '--help']]) {
+    for (const args of [
+      ['help', 'continuum'],
+      ['continuum', '--help'],
+    ]) {
       const r = tenuis(...args);
       expect(r.code, r.stderr).toBe(0);
       expect(r.stdout).toMatch(/tenuis continuum cavity --reynolds R/);

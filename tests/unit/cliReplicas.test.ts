@@ -12,7 +12,16 @@ const tenuis = (...args: string[]) => {
   const r = spawnSync(process.execPath, [cli, ...args], { encoding: 'utf8', timeout: 120_000 });
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };
 };
-const SMALL = ['--set', 'cellsY=10', '--set', 'particlesPerCell=30', '--set', 'transientSteps=200', '--set', 'sampleSteps=2000'];
+const SMALL = [
+  '--set',
+  'cellsY=10',
+  '--set',
+  'particlesPerCell=30',
+  '--set',
+  'transientSteps=200',
+  '--set',
+  'sampleSteps=2000',
+];
 
 let work: string;
 let casePath: string;
@@ -28,7 +37,17 @@ afterAll(() => rmSync(work, { recursive: true, force: true }));
 describe('tenuis run --replicas and tenuis merge', () => {
   it('runs two replicas on worker threads, merges them and lists each in replicas.json', () => {
     const out = join(work, 'two');
-    const r = tenuis('run', casePath, '--out', out, '--replicas', '2', '--save-samples', join(work, 'two.samples'), '--quiet');
+    const r = tenuis(
+      'run',
+      casePath,
+      '--out',
+      out,
+      '--replicas',
+      '2',
+      '--save-samples',
+      join(work, 'two.samples'),
+      '--quiet',
+    );
     expect(r.code, r.stderr).toBe(0);
     const summary = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
     expect(summary.numerics.replicas).toBe(2);
@@ -39,10 +58,27 @@ describe('tenuis run --replicas and tenuis merge', () => {
 
   it('merges sample files from separate runs (different seeds) into one result; the same file twice is refused', () => {
     for (const seed of ['1', '2']) {
-      const r = tenuis('run', casePath, '--out', join(work, `seed${seed}`), '--seed', seed, '--save-samples', join(work, `seed${seed}.samples`), '--quiet');
+      const r = tenuis(
+        'run',
+        casePath,
+        '--out',
+        join(work, `seed${seed}`),
+        '--seed',
+        seed,
+        '--save-samples',
+        join(work, `seed${seed}.samples`),
+        '--quiet',
+      );
       expect(r.code, r.stderr).toBe(0);
     }
-    const merged = tenuis('merge', join(work, 'seed1.samples'), join(work, 'seed2.samples'), '--out', join(work, 'merged'), '--quiet');
+    const merged = tenuis(
+      'merge',
+      join(work, 'seed1.samples'),
+      join(work, 'seed2.samples'),
+      '--out',
+      join(work, 'merged'),
+      '--quiet',
+    );
     expect(merged.code, merged.stderr).toBe(0);
     const s = JSON.parse(readFileSync(join(work, 'merged', 'summary.json'), 'utf8'));
     expect(s.numerics.replicas).toBe(2);
@@ -56,7 +92,16 @@ describe('tenuis run --replicas and tenuis merge', () => {
 
   it('--target stops sampling once the quantity is precise enough, and says so', () => {
     const out = join(work, 'target');
-    const r = tenuis('run', casePath, '--out', out, '--target', 'walls.bottom.normalStress=0.01', '--max-steps', '200000');
+    const r = tenuis(
+      'run',
+      casePath,
+      '--out',
+      out,
+      '--target',
+      'walls.bottom.normalStress=0.01',
+      '--max-steps',
+      '200000',
+    );
     expect(r.code, r.stderr).toBe(0);
     expect(r.stderr).toMatch(/reached its target/);
     const s = JSON.parse(readFileSync(join(out, 'summary.json'), 'utf8'));
@@ -70,7 +115,17 @@ describe('tenuis run --replicas and tenuis merge', () => {
 
   it('--checkpoint then --resume reproduces the uninterrupted run byte for byte', () => {
     const ckpt = join(work, 'run.checkpoint');
-    const a = tenuis('run', casePath, '--out', join(work, 'straight'), '--checkpoint', ckpt, '--checkpoint-every', '700', '--quiet');
+    const a = tenuis(
+      'run',
+      casePath,
+      '--out',
+      join(work, 'straight'),
+      '--checkpoint',
+      ckpt,
+      '--checkpoint-every',
+      '700',
+      '--quiet',
+    );
     expect(a.code, a.stderr).toBe(0);
     expect(existsSync(ckpt)).toBe(true);
     const b = tenuis('run', '--resume', ckpt, '--out', join(work, 'resumed'), '--quiet');

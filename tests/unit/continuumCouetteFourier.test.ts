@@ -24,7 +24,12 @@ function couette(delta: number, slip: CouetteInput['slip'], accommodation = 1) {
 
 function fourier(delta: number, jump: FourierInput['jump'], thermalAccommodation = 1) {
   return fourierFlow({
-    gas, gapM: delta * ell, bottomWallTemperatureK: 310, topWallTemperatureK: 290, jump, thermalAccommodation,
+    gas,
+    gapM: delta * ell,
+    bottomWallTemperatureK: 310,
+    topWallTemperatureK: 290,
+    jump,
+    thermalAccommodation,
   });
 }
 
@@ -49,7 +54,12 @@ describe('couetteFlow()', () => {
     const h = 20 * lambda;
     const sigma = 0.85;
     const s = couetteFlow({
-      gas, gapM: h, bottomWallSpeedMPerS: 0, topWallSpeedMPerS: 10, slip: { kind: 'firstOrder' }, accommodation: sigma,
+      gas,
+      gapM: h,
+      bottomWallSpeedMPerS: 0,
+      topWallSpeedMPerS: 10,
+      slip: { kind: 'firstOrder' },
+      accommodation: sigma,
     });
     const zeta = ((2 - sigma) / sigma) * lambda;
     expect(relativeError(s.shearStressPa, (gas.viscosityPaS * 10) / (h + 2 * zeta))).toBeLessThan(1e-13);
@@ -70,7 +80,9 @@ describe('couetteFlow()', () => {
 
   it('second order reduces to first order with the set’s C1 (u″ = 0): Cercignani gives τ = μU/(H + 2·1.1466λ)', () => {
     const s = couette(2, { kind: 'secondOrder', coefficients: CERCIGNANI_SECOND_ORDER });
-    expect(relativeError(s.shearStressPa, (gas.viscosityPaS * 10) / (2 * ell + 2 * 1.1466 * lambda))).toBeLessThan(1e-13);
+    expect(relativeError(s.shearStressPa, (gas.viscosityPaS * 10) / (2 * ell + 2 * 1.1466 * lambda))).toBeLessThan(
+      1e-13,
+    );
   });
 
   it('free-molecular Π = 1/√π = 0.56419 for diffuse walls and σ/((2 − σ)√π) for σ = 0.5 (reference notes §2)', () => {
@@ -85,7 +97,8 @@ describe('couetteFlow()', () => {
 
   it('slip tends to no slip as Kn → 0: τ_slip/τ_noslip = 1 − 2ζ/H to 1e-11 at Kn = 1e-6', () => {
     const delta = Math.sqrt(Math.PI) / (2 * 1e-6);
-    const ratio = couette(delta, { kind: 'firstOrder' }).shearStressPa / couette(delta, { kind: 'noSlip' }).shearStressPa;
+    const ratio =
+      couette(delta, { kind: 'firstOrder' }).shearStressPa / couette(delta, { kind: 'noSlip' }).shearStressPa;
     expect(Math.abs(ratio - 1)).toBeLessThan(2.1e-6);
     expect(Math.abs(ratio - (1 - 2e-6))).toBeLessThan(1e-11);
   });
@@ -103,19 +116,32 @@ describe('couetteFlow()', () => {
   });
 
   it('refuses a non-positive gap and an accommodation outside (0, 1]', () => {
-    expect(() => couetteFlow({ gas, gapM: 0, bottomWallSpeedMPerS: 0, topWallSpeedMPerS: 1, slip: { kind: 'noSlip' } }))
-      .toThrow(/Couette gap \(m\) = 0/);
+    expect(() =>
+      couetteFlow({ gas, gapM: 0, bottomWallSpeedMPerS: 0, topWallSpeedMPerS: 1, slip: { kind: 'noSlip' } }),
+    ).toThrow(/Couette gap \(m\) = 0/);
     expect(() => couette(1, { kind: 'firstOrder' }, 1.2)).toThrow(/velocity accommodation = 1.2/);
-    expect(() => couetteFlow({
-      gas: { ...gas, viscosityPaS: 0 }, gapM: 1, bottomWallSpeedMPerS: 0, topWallSpeedMPerS: 1, slip: { kind: 'noSlip' },
-    })).toThrow(/gas viscosity \(Pa·s\) = 0/);
+    expect(() =>
+      couetteFlow({
+        gas: { ...gas, viscosityPaS: 0 },
+        gapM: 1,
+        bottomWallSpeedMPerS: 0,
+        topWallSpeedMPerS: 1,
+        slip: { kind: 'noSlip' },
+      }),
+    ).toThrow(/gas viscosity \(Pa·s\) = 0/);
   });
 });
 
 describe('fourierFlow()', () => {
   it('no jump: q = κΔT/H with κ = (15/4)(k/m)μ (Fourier’s law; Chapman–Enskog, from memory)', () => {
     const h = 1e-2;
-    const s = fourierFlow({ gas, gapM: h, bottomWallTemperatureK: 310, topWallTemperatureK: 290, jump: { kind: 'noJump' } });
+    const s = fourierFlow({
+      gas,
+      gapM: h,
+      bottomWallTemperatureK: 310,
+      topWallTemperatureK: 290,
+      jump: { kind: 'noJump' },
+    });
     const kappa = (15 / 4) * (1.380649e-23 / gas.massKg) * gas.viscosityPaS;
     expect(relativeError(s.heatFluxWPerM2, (kappa * 20) / h)).toBeLessThan(1e-13);
     expect(s.temperatureK(0)).toBe(310);
@@ -125,8 +151,9 @@ describe('fourierFlow()', () => {
     const jump = { kind: 'firstOrder', coefficient: KINETIC_S_MODEL_JUMP } as const;
     expect(relativeError(fourier(10, jump).reducedHeatFlux, 0.239)).toBeLessThan(1e-3);
     expect(relativeError(fourier(100, jump).reducedHeatFlux, 0.03198)).toBeLessThan(1e-3);
-    expect(relativeError(fourier(10, jump).reducedHeatFlux, (15 * Math.sqrt(Math.PI)) / 8 / (10 + 2 * 1.954)))
-      .toBeLessThan(1e-12);
+    expect(
+      relativeError(fourier(10, jump).reducedHeatFlux, (15 * Math.sqrt(Math.PI)) / 8 / (10 + 2 * 1.954)),
+    ).toBeLessThan(1e-12);
   });
 
   it('Smoluchowski jump: q = κΔT/(H + 2j), j = ((2 − σ_T)/σ_T)(15/8)λ for a monatomic gas (Smoluchowski 1898; from memory)', () => {
@@ -143,7 +170,9 @@ describe('fourierFlow()', () => {
     const fm = fourier(0.01, { kind: 'freeMolecular' });
     expect(fm.reducedHeatFlux).toBe(1);
     expect(relativeError(fm.reducedHeatFlux, 0.99397)).toBeLessThan(0.01);
-    expect(relativeError(fm.heatFluxWPerM2, (gas.pressurePa * v0 * 20) / (Math.sqrt(Math.PI) * 300))).toBeLessThan(1e-13);
+    expect(relativeError(fm.heatFluxWPerM2, (gas.pressurePa * v0 * 20) / (Math.sqrt(Math.PI) * 300))).toBeLessThan(
+      1e-13,
+    );
   });
 
   it('jump tends to no jump as δ → ∞ and sampleProfile() reproduces the wall values', () => {

@@ -14,8 +14,16 @@ import * as unifiedFlowModel from '../../engine/continuum/unifiedFlowModel';
 describe('engine/continuum/index.ts', () => {
   it('re-exports every value each continuum module exports', () => {
     const modules = {
-      meanFreePath, thermalConductivity, gasState, slipCoefficients, profileSampling, couette, fourier, poiseuille,
-      pressureDrivenDuct, unifiedFlowModel,
+      meanFreePath,
+      thermalConductivity,
+      gasState,
+      slipCoefficients,
+      profileSampling,
+      couette,
+      fourier,
+      poiseuille,
+      pressureDrivenDuct,
+      unifiedFlowModel,
     };
     const missing: string[] = [];
     for (const [name, mod] of Object.entries(modules)) {

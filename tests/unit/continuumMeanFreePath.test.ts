@@ -68,7 +68,11 @@ describe('mean free path definitions', () => {
 
   it('convertMeanFreePath() round-trips through every definition', () => {
     const lambda = viscosityMeanFreePath(muAr, p, T, argon.massKg);
-    const viaHs = convertMeanFreePath(convertMeanFreePath(lambda, 'viscosity', 'hardSphere'), 'hardSphere', 'equivalent');
+    const viaHs = convertMeanFreePath(
+      convertMeanFreePath(lambda, 'viscosity', 'hardSphere'),
+      'hardSphere',
+      'equivalent',
+    );
     expect(viaHs).toBeCloseTo(equivalentFromViscosityPath(lambda), 18);
     expect(pathPerViscosityPath('equivalent')).toBeCloseTo(2 / Math.sqrt(Math.PI), 15);
   });

@@ -61,8 +61,12 @@ describe('force-driven Poiseuille flow, closed forms', () => {
   it('the channel slip limit meets the linearized BGK table at δ = 100 (17.69330) within 0.1 % (reference notes §2, computed)', () => {
     expect(relativeError(channel(100, kinetic).reducedFlowRate, 17.6933)).toBeLessThan(1e-3);
     // Cercignani's second-order set (C1 = 1.1466 λ is σ_P) also stays within 0.1 % there.
-    expect(relativeError(channel(100, { kind: 'secondOrder', coefficients: CERCIGNANI_SECOND_ORDER }).reducedFlowRate, 17.6933))
-      .toBeLessThan(1e-3);
+    expect(
+      relativeError(
+        channel(100, { kind: 'secondOrder', coefficients: CERCIGNANI_SECOND_ORDER }).reducedFlowRate,
+        17.6933,
+      ),
+    ).toBeLessThan(1e-3);
   });
 
   it('free-molecular tube: G_P = 8/(3√π) = 1.50451 (Knudsen; reference notes §3); the BGK value at δ = 0.01 (1.4768, published) is within 2 %', () => {
@@ -71,18 +75,23 @@ describe('force-driven Poiseuille flow, closed forms', () => {
     expect(relativeError(fm.reducedFlowRate, 1.4768)).toBeLessThan(0.02);
     expect(fm.velocityMPerS).toBeNull();
     const r = 0.01 * ell;
-    const v0 = ell * gas.pressurePa / gas.viscosityPaS;
+    const v0 = (ell * gas.pressurePa) / gas.viscosityPaS;
     expect(relativeError(fm.massFlowRateKgPerS, ((Math.PI * r ** 3) / v0) * rho * a * 1.50451)).toBeLessThan(1e-5);
     // Smoluchowski's (2 − σ)/σ for Maxwell walls (from memory): 3 times the diffuse value at σ = 0.5.
-    expect(tubeReducedFlowRate(1, { kind: 'freeMolecular' }, 0.5)).toBeCloseTo(3 * 8 / (3 * Math.sqrt(Math.PI)), 14);
+    expect(tubeReducedFlowRate(1, { kind: 'freeMolecular' }, 0.5)).toBeCloseTo((3 * 8) / (3 * Math.sqrt(Math.PI)), 14);
   });
 
   it('free-molecular tube with Maxwell walls: (2 − σ)/σ matches the BGK ratio G_P(σ)/G_P(1) at δ = 0.01 within 3 %', () => {
     // Karniadakis, Beskok & Aluru 2005, Table 15.5 (BGK, Porodnov et al. 1978–79; published, read in a stored copy of
     // the book's page): δ = 0.01, G_P = 1.4768 (σ = 1), 2.187 (σ = 0.8), 3.374 (σ = 0.6). At δ = 0.01 the diffuse value
     // is itself 1.8 % below the free-molecular limit, so the ratio is compared.
-    for (const [sigma, gp] of [[0.8, 2.187], [0.6, 3.374]] as const) {
-      const model = tubeReducedFlowRate(0.01, { kind: 'freeMolecular' }, sigma) / tubeReducedFlowRate(0.01, { kind: 'freeMolecular' });
+    for (const [sigma, gp] of [
+      [0.8, 2.187],
+      [0.6, 3.374],
+    ] as const) {
+      const model =
+        tubeReducedFlowRate(0.01, { kind: 'freeMolecular' }, sigma) /
+        tubeReducedFlowRate(0.01, { kind: 'freeMolecular' });
       expect(relativeError(model, gp / 1.4768)).toBeLessThan(0.03);
     }
   });
@@ -92,18 +101,26 @@ describe('force-driven Poiseuille flow, closed forms', () => {
       const model = { kind: 'secondOrder', coefficients: set } as const;
       const a2 = slipLengthCoefficients(model, 1).second;
       const firstOnly = { ...model, coefficients: { ...set, c2: 0 } };
-      expect(channelReducedFlowRate(3, model) - channelReducedFlowRate(3, firstOnly)).toBeCloseTo((Math.PI / 2) * a2 / 3, 13);
-      expect(tubeReducedFlowRate(3, model) - tubeReducedFlowRate(3, firstOnly)).toBeCloseTo((Math.PI / 4) * a2 / 3, 13);
+      expect(channelReducedFlowRate(3, model) - channelReducedFlowRate(3, firstOnly)).toBeCloseTo(
+        ((Math.PI / 2) * a2) / 3,
+        13,
+      );
+      expect(tubeReducedFlowRate(3, model) - tubeReducedFlowRate(3, firstOnly)).toBeCloseTo(
+        ((Math.PI / 4) * a2) / 3,
+        13,
+      );
     }
     // Deissler in λ: a2 = 9/8; Hadjiconstantinou in λ_HS: a2 = 0.61/0.99749².
     expect(slipLengthCoefficients({ kind: 'secondOrder', coefficients: DEISSLER_SECOND_ORDER }, 1).second).toBe(9 / 8);
-    expect(slipLengthCoefficients({ kind: 'secondOrder', coefficients: HADJICONSTANTINOU_SECOND_ORDER }, 1).second)
-      .toBeCloseTo(0.61 / 0.99749 ** 2, 4);
+    expect(
+      slipLengthCoefficients({ kind: 'secondOrder', coefficients: HADJICONSTANTINOU_SECOND_ORDER }, 1).second,
+    ).toBeCloseTo(0.61 / 0.99749 ** 2, 4);
   });
 
   it('slip tends to no slip as Kn → 0 (Kn = 1e-6: G_slip/G_noslip − 1 = 6a1·Kn, channel)', () => {
     const delta = Math.sqrt(Math.PI) / (2 * 1e-6);
-    const ratio = channel(delta, { kind: 'firstOrder' }).reducedFlowRate / channel(delta, { kind: 'noSlip' }).reducedFlowRate;
+    const ratio =
+      channel(delta, { kind: 'firstOrder' }).reducedFlowRate / channel(delta, { kind: 'noSlip' }).reducedFlowRate;
     expect(ratio - 1).toBeCloseTo(6e-6, 12);
   });
 });
@@ -126,7 +143,8 @@ describe('force-driven Poiseuille flow, profiles checked against the equations t
       // Both walls together hold back ρaH per unit area of the channel's cross-section.
       expect(relativeError(2 * gas.viscosityPaS * derivative(u, 0, 1e-4 * h), rho * a * h)).toBeLessThan(1e-7);
       const { first, second: a2 } = slipLengthCoefficients(model, 0.8);
-      const expectedSlip = first * lambda * derivative(u, 0, 1e-4 * h) - a2 * lambda * lambda * second(u, h / 2, 1e-2 * h);
+      const expectedSlip =
+        first * lambda * derivative(u, 0, 1e-4 * h) - a2 * lambda * lambda * second(u, h / 2, 1e-2 * h);
       expect(Math.abs(u(0) - expectedSlip)).toBeLessThan(1e-7 * u(h / 2));
     }
   });
@@ -136,9 +154,12 @@ describe('force-driven Poiseuille flow, profiles checked against the equations t
       const r = 3 * ell;
       const s = tube(3, model, 0.9);
       const u = s.velocityMPerS!;
-      expect(relativeError(2 * Math.PI * rho * simpson((x) => u(x) * x, 0, r), s.massFlowRateKgPerS)).toBeLessThan(1e-12);
-      expect(relativeError(-2 * Math.PI * r * gas.viscosityPaS * derivative(u, r, 1e-4 * r), rho * a * Math.PI * r * r))
-        .toBeLessThan(1e-7);
+      expect(relativeError(2 * Math.PI * rho * simpson((x) => u(x) * x, 0, r), s.massFlowRateKgPerS)).toBeLessThan(
+        1e-12,
+      );
+      expect(
+        relativeError(-2 * Math.PI * r * gas.viscosityPaS * derivative(u, r, 1e-4 * r), rho * a * Math.PI * r * r),
+      ).toBeLessThan(1e-7);
       const { first, second: a2 } = slipLengthCoefficients(model, 0.9);
       const expectedSlip = first * lambda * -derivative(u, r, 1e-4 * r) - a2 * lambda * lambda * second(u, r, 1e-2 * r);
       expect(Math.abs(u(r) - expectedSlip)).toBeLessThan(1e-7 * u(0));
@@ -147,15 +168,21 @@ describe('force-driven Poiseuille flow, profiles checked against the equations t
 
   it('the dimensional solution and the closed form G_P(δ) agree (two routes to the same number)', () => {
     for (const model of models) {
-      expect(relativeError(channel(0.7, model, 0.6).reducedFlowRate, channelReducedFlowRate(0.7, model, 0.6))).toBeLessThan(1e-12);
-      expect(relativeError(tube(0.7, model, 0.6).reducedFlowRate, tubeReducedFlowRate(0.7, model, 0.6))).toBeLessThan(1e-12);
+      expect(
+        relativeError(channel(0.7, model, 0.6).reducedFlowRate, channelReducedFlowRate(0.7, model, 0.6)),
+      ).toBeLessThan(1e-12);
+      expect(relativeError(tube(0.7, model, 0.6).reducedFlowRate, tubeReducedFlowRate(0.7, model, 0.6))).toBeLessThan(
+        1e-12,
+      );
     }
   });
 
   it('refuses a non-positive gap or radius and a non-finite acceleration', () => {
-    expect(() => forceDrivenChannelFlow({ gas, gapM: -1, accelerationMPerS2: 1, slip: { kind: 'noSlip' } }))
-      .toThrow(/channel gap \(m\) = -1/);
-    expect(() => forceDrivenTubeFlow({ gas, radiusM: 1, accelerationMPerS2: Number.NaN, slip: { kind: 'noSlip' } }))
-      .toThrow(/body acceleration \(m\/s²\) = NaN/);
+    expect(() => forceDrivenChannelFlow({ gas, gapM: -1, accelerationMPerS2: 1, slip: { kind: 'noSlip' } })).toThrow(
+      /channel gap \(m\) = -1/,
+    );
+    expect(() =>
+      forceDrivenTubeFlow({ gas, radiusM: 1, accelerationMPerS2: Number.NaN, slip: { kind: 'noSlip' } }),
+    ).toThrow(/body acceleration \(m\/s²\) = NaN/);
   });
 });

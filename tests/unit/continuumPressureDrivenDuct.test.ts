@@ -26,13 +26,20 @@ function arkilicFormula(pin: number, pout: number, sigma: number, knOut: number)
   const { heightM: h, widthM: w, lengthM: l } = arkilicChannel;
   const rGas = K_B / helium.massKg;
   const ratio = pin / pout;
-  return ((h ** 3 * w * pout ** 2) / (24 * heliumGas.viscosityPaS * rGas * T * l)) *
-    (ratio ** 2 - 1 + 12 * ((2 - sigma) / sigma) * knOut * (ratio - 1));
+  return (
+    ((h ** 3 * w * pout ** 2) / (24 * heliumGas.viscosityPaS * rGas * T * l)) *
+    (ratio ** 2 - 1 + 12 * ((2 - sigma) / sigma) * knOut * (ratio - 1))
+  );
 }
 
 function arkilic(pinAtm: number, slip: ContinuumSlipModel, accommodation = 1) {
   return pressureDrivenDuctFlow({
-    gas: heliumGas, geometry: arkilicChannel, inletPressurePa: pinAtm * ATM, outletPressurePa: ATM, slip, accommodation,
+    gas: heliumGas,
+    geometry: arkilicChannel,
+    inletPressurePa: pinAtm * ATM,
+    outletPressurePa: ATM,
+    slip,
+    accommodation,
   });
 }
 
@@ -54,7 +61,11 @@ function localFlowRate(input: PressureDrivenDuctInput, p: (x: number) => number,
 
 describe('pressureDrivenDuctFlow(), Arkilic channel', () => {
   it('first-order Maxwell slip reproduces the Arkilic, Schmidt & Breuer 1997 formula (reference notes §7, from memory)', () => {
-    for (const [pin, sigma] of [[1.6, 1], [2.5, 1], [4.2, 0.8]] as const) {
+    for (const [pin, sigma] of [
+      [1.6, 1],
+      [2.5, 1],
+      [4.2, 0.8],
+    ] as const) {
       const s = arkilic(pin, { kind: 'firstOrder' }, sigma);
       const knOut = viscosityMeanFreePathM(heliumGas.viscosityPaS, ATM, T, helium.massKg) / arkilicChannel.heightM;
       expect(relativeError(s.outletKnudsen, knOut)).toBeLessThan(1e-13);
@@ -63,8 +74,9 @@ describe('pressureDrivenDuctFlow(), Arkilic channel', () => {
   });
 
   it('no slip is the Arkilic formula at Kn_o = 0 (compressible Poiseuille law)', () => {
-    expect(relativeError(arkilic(2.5, { kind: 'noSlip' }).massFlowRateKgPerS, arkilicFormula(2.5 * ATM, ATM, 1, 0)))
-      .toBeLessThan(1e-13);
+    expect(
+      relativeError(arkilic(2.5, { kind: 'noSlip' }).massFlowRateKgPerS, arkilicFormula(2.5 * ATM, ATM, 1, 0)),
+    ).toBeLessThan(1e-13);
   });
 
   it('slip raises the flow of the helium channel by 12 Kn_o/(Π + 1) over no slip (the Arkilic formula’s ratio)', () => {
@@ -108,7 +120,11 @@ describe('pressureDrivenDuctFlow(), every model and both geometries', () => {
     ] as const) {
       for (const [slip, a1, a2] of models) {
         const input = {
-          gas, geometry, inletPressurePa: 400, outletPressurePa: 100, slip,
+          gas,
+          geometry,
+          inletPressurePa: 400,
+          outletPressurePa: 100,
+          slip,
           accommodation: slip.kind === 'firstOrder' ? 2 / 2.25 : 1,
         };
         const s = pressureDrivenDuctFlow(input);
@@ -127,25 +143,43 @@ describe('pressureDrivenDuctFlow(), every model and both geometries', () => {
     const dp = 0.002;
     const ell = equivalentPathOf({ ...argon, pressurePa: pMean });
     const v0 = mostProbableSpeedOf(argon);
-    for (const slip of [{ kind: 'firstOrder', coefficient: KINETIC_BGK_SLIP }, { kind: 'secondOrder', coefficients: CERCIGNANI_SECOND_ORDER }] as const) {
+    for (const slip of [
+      { kind: 'firstOrder', coefficient: KINETIC_BGK_SLIP },
+      { kind: 'secondOrder', coefficients: CERCIGNANI_SECOND_ORDER },
+    ] as const) {
       const h = 5 * ell;
       const ch = pressureDrivenDuctFlow({
-        gas, geometry: { kind: 'channel', heightM: h, widthM: 1, lengthM: 1 },
-        inletPressurePa: pMean + dp / 2, outletPressurePa: pMean - dp / 2, slip,
+        gas,
+        geometry: { kind: 'channel', heightM: h, widthM: 1, lengthM: 1 },
+        inletPressurePa: pMean + dp / 2,
+        outletPressurePa: pMean - dp / 2,
+        slip,
       });
-      expect(relativeError(ch.massFlowRateKgPerS, ((h * h) / v0) * dp * channelReducedFlowRate(5, slip))).toBeLessThan(1e-7);
+      expect(relativeError(ch.massFlowRateKgPerS, ((h * h) / v0) * dp * channelReducedFlowRate(5, slip))).toBeLessThan(
+        1e-7,
+      );
       const tb = pressureDrivenDuctFlow({
-        gas, geometry: { kind: 'tube', radiusM: h, lengthM: 1 },
-        inletPressurePa: pMean + dp / 2, outletPressurePa: pMean - dp / 2, slip,
+        gas,
+        geometry: { kind: 'tube', radiusM: h, lengthM: 1 },
+        inletPressurePa: pMean + dp / 2,
+        outletPressurePa: pMean - dp / 2,
+        slip,
       });
-      expect(relativeError(tb.massFlowRateKgPerS, ((Math.PI * h ** 3) / v0) * dp * tubeReducedFlowRate(5, slip))).toBeLessThan(1e-7);
+      expect(
+        relativeError(tb.massFlowRateKgPerS, ((Math.PI * h ** 3) / v0) * dp * tubeReducedFlowRate(5, slip)),
+      ).toBeLessThan(1e-7);
     }
   });
 
   it('slip tends to no slip as Kn_o → 0: outlet at 100 atm in the 1.33 µm helium channel (Kn_o ≈ 0.0015) changes ṁ by < 1 %', () => {
-    const run = (slip: ContinuumSlipModel) => pressureDrivenDuctFlow({
-      gas: heliumGas, geometry: arkilicChannel, inletPressurePa: 200 * ATM, outletPressurePa: 100 * ATM, slip,
-    });
+    const run = (slip: ContinuumSlipModel) =>
+      pressureDrivenDuctFlow({
+        gas: heliumGas,
+        geometry: arkilicChannel,
+        inletPressurePa: 200 * ATM,
+        outletPressurePa: 100 * ATM,
+        slip,
+      });
     const s = run({ kind: 'firstOrder' });
     expect(s.outletKnudsen).toBeLessThan(2e-3);
     const gain = s.massFlowRateKgPerS / run({ kind: 'noSlip' }).massFlowRateKgPerS - 1;
@@ -163,7 +197,10 @@ describe('pressureDrivenDuctFlow(), every model and both geometries', () => {
 
   it('reverse flow: p_in < p_out gives a negative ṁ and a monotone profile', () => {
     const s = pressureDrivenDuctFlow({
-      gas: heliumGas, geometry: { kind: 'tube', radiusM: 1e-6, lengthM: 1e-3 }, inletPressurePa: ATM, outletPressurePa: 2 * ATM,
+      gas: heliumGas,
+      geometry: { kind: 'tube', radiusM: 1e-6, lengthM: 1e-3 },
+      inletPressurePa: ATM,
+      outletPressurePa: 2 * ATM,
       slip: { kind: 'secondOrder', coefficients: CERCIGNANI_SECOND_ORDER },
     });
     expect(s.massFlowRateKgPerS).toBeLessThan(0);
@@ -172,9 +209,14 @@ describe('pressureDrivenDuctFlow(), every model and both geometries', () => {
 
   it('refuses non-positive pressures and sizes, naming the field', () => {
     expect(() => arkilic(0, { kind: 'noSlip' })).toThrow(/inlet pressure \(Pa\) = 0/);
-    expect(() => pressureDrivenDuctFlow({
-      gas: heliumGas, geometry: { kind: 'tube', radiusM: 0, lengthM: 1 }, inletPressurePa: 2, outletPressurePa: 1,
-      slip: { kind: 'noSlip' },
-    })).toThrow(/tube radius \(m\) = 0/);
+    expect(() =>
+      pressureDrivenDuctFlow({
+        gas: heliumGas,
+        geometry: { kind: 'tube', radiusM: 0, lengthM: 1 },
+        inletPressurePa: 2,
+        outletPressurePa: 1,
+        slip: { kind: 'noSlip' },
+      }),
+    ).toThrow(/tube radius \(m\) = 0/);
   });
 });

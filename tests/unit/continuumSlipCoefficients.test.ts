@@ -30,7 +30,13 @@ import {
 
 describe('slip coefficient data', () => {
   it('every coefficient names its source, its flag and the mean free path it is quoted in', () => {
-    for (const c of [MAXWELL_SLIP, KINETIC_BGK_SLIP, SMOLUCHOWSKI_JUMP, KINETIC_S_MODEL_JUMP, ...SECOND_ORDER_SLIP_SETS]) {
+    for (const c of [
+      MAXWELL_SLIP,
+      KINETIC_BGK_SLIP,
+      SMOLUCHOWSKI_JUMP,
+      KINETIC_S_MODEL_JUMP,
+      ...SECOND_ORDER_SLIP_SETS,
+    ]) {
       expect(c.source.length).toBeGreaterThan(10);
       expect(['published', 'computed', 'from memory', 'common practice']).toContain(c.flag);
       expect(['viscosity', 'equivalent', 'hardSphere']).toContain(c.meanFreePath);
@@ -62,7 +68,9 @@ describe('slip coefficient data', () => {
     expect(d.second).toBeCloseTo(9 / 8, 14);
     const h = slipLengthCoefficients({ kind: 'secondOrder', coefficients: HADJICONSTANTINOU_SECOND_ORDER }, 1);
     expect(h.second).toBeCloseTo(0.61 * pathPerViscosityPath('hardSphere') ** 2, 14);
-    expect(() => slipLengthCoefficients({ kind: 'noSlip' }, 0)).toThrow(/velocity accommodation = 0: must be in \(0, 1\]/);
+    expect(() => slipLengthCoefficients({ kind: 'noSlip' }, 0)).toThrow(
+      /velocity accommodation = 0: must be in \(0, 1\]/,
+    );
   });
 });
 
@@ -77,7 +85,10 @@ describe('conductivity, Prandtl number and gas state', () => {
 
   it("Eucken's Pr = 4γ/(9γ − 5): 14/19 for diatomics, 16/21 for ζ = 3 (Eucken 1913; from memory)", () => {
     const m = SPECIES.N2.massKg;
-    for (const [zeta, gamma] of [[2, 7 / 5], [3, 4 / 3]] as const) {
+    for (const [zeta, gamma] of [
+      [2, 7 / 5],
+      [3, 4 / 3],
+    ] as const) {
       const pr = prandtlNumber(1.7e-5, euckenConductivityWPerMK(1.7e-5, m, zeta), m, zeta);
       expect(pr).toBeCloseTo((4 * gamma) / (9 * gamma - 5), 14);
     }

@@ -26,9 +26,10 @@ describe('Beskok & Karniadakis 1999 unified flow model', () => {
 
   it('as Kn → 0 it is first-order Maxwell slip (poiseuille.ts) up to a term of order Kn^1.4', () => {
     for (const geometry of ['channel', 'tube'] as const) {
-      const firstOrder = (kn: number) => geometry === 'channel'
-        ? channelReducedFlowRate(deltaOfKn(kn), { kind: 'firstOrder' }) / (deltaOfKn(kn) / 6)
-        : tubeReducedFlowRate(deltaOfKn(kn), { kind: 'firstOrder' }) / (deltaOfKn(kn) / 4);
+      const firstOrder = (kn: number) =>
+        geometry === 'channel'
+          ? channelReducedFlowRate(deltaOfKn(kn), { kind: 'firstOrder' }) / (deltaOfKn(kn) / 6)
+          : tubeReducedFlowRate(deltaOfKn(kn), { kind: 'firstOrder' }) / (deltaOfKn(kn) / 4);
       const gap = (kn: number) => unifiedFlowRateRatio(geometry, kn) - firstOrder(kn);
       expect(Math.abs(gap(1e-4))).toBeLessThan(1e-5);
       // αKn ∝ Kn^1.4 dominates the −cKn² of 1/(1 + Kn): a decade in Kn is a factor 10^1.4 = 25.1 (within 3 %).
@@ -37,12 +38,21 @@ describe('Beskok & Karniadakis 1999 unified flow model', () => {
   });
 
   it('tube: Knudsen’s free-molecular G_P = 8/(3√π) = 1.50451 as Kn → ∞ (reference notes §3), within 2e-4 at Kn = 1e8', () => {
-    expect(relativeError(unifiedReducedFlowRate('tube', deltaOfKn(1e8)), 8 / (3 * Math.sqrt(Math.PI)))).toBeLessThan(2e-4);
+    expect(relativeError(unifiedReducedFlowRate('tube', deltaOfKn(1e8)), 8 / (3 * Math.sqrt(Math.PI)))).toBeLessThan(
+      2e-4,
+    );
   });
 
   it('tube: within 1 % of the linearized BGK flow rate from δ = 0.01 to 10 (reference notes §3: published and computed)', () => {
     // Karniadakis, Beskok & Aluru 2005 Table 15.5 after Cercignani & Sernagiotto 1966 (published), and δ = 1, 10 computed.
-    const bgk: [number, number][] = [[0.01, 1.4768], [0.02, 1.4608], [0.04, 1.4391], [0.08, 1.4131], [1, 1.45829], [10, 3.56416]];
+    const bgk: [number, number][] = [
+      [0.01, 1.4768],
+      [0.02, 1.4608],
+      [0.04, 1.4391],
+      [0.08, 1.4131],
+      [1, 1.45829],
+      [10, 3.56416],
+    ];
     for (const [delta, gp] of bgk) {
       expect(relativeError(unifiedReducedFlowRate('tube', delta), gp)).toBeLessThan(0.01);
     }
@@ -70,13 +80,22 @@ describe('Beskok & Karniadakis 1999 unified flow model', () => {
     expect(tube.kind).toBe('tube');
     expect(tube.rarefactionParameter).toBeCloseTo(2, 12);
     if (tube.kind !== 'tube') throw new Error('unreachable');
-    expect(relativeError(tube.massFlowRateKgPerS, ((Math.PI * r ** 3) / mostProbableSpeedOf(gas)) * 1e3 * unifiedReducedFlowRate('tube', 2)))
-      .toBeLessThan(1e-12);
+    expect(
+      relativeError(
+        tube.massFlowRateKgPerS,
+        ((Math.PI * r ** 3) / mostProbableSpeedOf(gas)) * 1e3 * unifiedReducedFlowRate('tube', 2),
+      ),
+    ).toBeLessThan(1e-12);
     const channel = unifiedFlow({ gas, geometry: { kind: 'channel', heightM: r }, pressureGradientPaPerM: 1e3 });
     if (channel.kind !== 'channel') throw new Error('unreachable');
-    expect(relativeError(channel.massFlowRateKgPerSM, ((r * r) / mostProbableSpeedOf(gas)) * 1e3 * unifiedReducedFlowRate('channel', 2)))
-      .toBeLessThan(1e-12);
-    expect(() => unifiedFlow({ gas, geometry: { kind: 'tube', radiusM: -1 }, pressureGradientPaPerM: 1 }))
-      .toThrow(/tube radius \(m\) = -1/);
+    expect(
+      relativeError(
+        channel.massFlowRateKgPerSM,
+        ((r * r) / mostProbableSpeedOf(gas)) * 1e3 * unifiedReducedFlowRate('channel', 2),
+      ),
+    ).toBeLessThan(1e-12);
+    expect(() => unifiedFlow({ gas, geometry: { kind: 'tube', radiusM: -1 }, pressureGradientPaPerM: 1 })).toThrow(
+      /tube radius \(m\) = -1/,
+    );
   });
 });

@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { createBatchStore, addToBatches, totalOf, batchView, batchSteps, storedSteps, FIELD_BATCH_CAPACITY } from '../../engine/stats/doublingBatches';
+import {
+  createBatchStore,
+  addToBatches,
+  totalOf,
+  batchView,
+  batchSteps,
+  storedSteps,
+  FIELD_BATCH_CAPACITY,
+} from '../../engine/stats/doublingBatches';
 
 describe('doubling batch store', () => {
   it('keeps between capacity/2 and capacity batches, each exactly batchSteps() long, and loses no sample', () => {

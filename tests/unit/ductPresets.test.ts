@@ -42,7 +42,10 @@ describe('duct presets', () => {
   });
 
   it('slit and orifice: a plate with the opening, sections upstream/opening/downstream', () => {
-    for (const [name, size] of [['slit', 'gap'], ['orifice', 'radius']] as const) {
+    for (const [name, size] of [
+      ['slit', 'gap'],
+      ['orifice', 'radius'],
+    ] as const) {
       const p = planOrThrow(buildPreset(name, { knudsen: '1', [size]: '1mm' }));
       expect(p.caseData.flowSections.map((s) => s.name)).toEqual(['upstream', 'opening', 'downstream']);
       expect(p.caseData.flowReport?.duct).toBe(name);

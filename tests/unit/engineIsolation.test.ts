@@ -28,8 +28,7 @@ function stripComments(source: string): string {
 const forbiddenModules = /^(node:.*|fs|fs\/promises|path|worker_threads|child_process|os|url|module|process|buffer)$/;
 
 // import ... from 'x' | export ... from 'x' | import 'x' | import('x') | require('x')
-const moduleSpecifier =
-  /(?:\bfrom\s*|\bimport\s*\(\s*|\bimport\s+|\brequire\s*\(\s*)(['"`])([^'"`]+)\1/g;
+const moduleSpecifier = /(?:\bfrom\s*|\bimport\s*\(\s*|\bimport\s+|\brequire\s*\(\s*)(['"`])([^'"`]+)\1/g;
 
 const forbiddenGlobals: [RegExp, string][] = [
   [/\bwindow\s*[.[]/, 'window'],

@@ -66,8 +66,12 @@ describe('parseQuantity()', () => {
   });
 
   it('parseQuantity() rejects a unit of the wrong kind with a message naming the accepted units', () => {
-    expect(() => parseQuantity('2 bar', 'length')).toThrow(/unknown length unit "bar".*bar is a pressure unit.*accepted: m, cm, mm, µm/);
-    expect(() => parseQuantity('2 furlongs', 'length')).toThrow(/accepted: m, cm, mm, µm \(or μm, um, micron\), nm; a plain number means m/);
+    expect(() => parseQuantity('2 bar', 'length')).toThrow(
+      /unknown length unit "bar".*bar is a pressure unit.*accepted: m, cm, mm, µm/,
+    );
+    expect(() => parseQuantity('2 furlongs', 'length')).toThrow(
+      /accepted: m, cm, mm, µm \(or μm, um, micron\), nm; a plain number means m/,
+    );
     expect(() => parseQuantity('5 K', 'pressure')).toThrow(/Pa, kPa, mbar, bar, Torr, mTorr, atm, psi/);
     expect(() => parseQuantity('hot', 'temperature')).toThrow(/not a number.*K, °C/);
     expect(() => parseQuantity('', 'speed')).toThrow(/m\/s/);
@@ -131,11 +135,15 @@ describe('round trips (property-based)', () => {
 
   it('parseQuantity(formatQuantity(x, u, 17), kind) returns x for every unit', () => {
     fc.assert(
-      fc.property(fc.double({ min: -1e12, max: 1e12, noNaN: true }), fc.constantFrom(...allUnits), (xSI, { kind, unit }) => {
-        const text = formatQuantity(xSI, unit, 17, context);
-        const back = parseQuantity(text, kind, context);
-        return Math.abs(back - xSI) <= tolerance(xSI);
-      }),
+      fc.property(
+        fc.double({ min: -1e12, max: 1e12, noNaN: true }),
+        fc.constantFrom(...allUnits),
+        (xSI, { kind, unit }) => {
+          const text = formatQuantity(xSI, unit, 17, context);
+          const back = parseQuantity(text, kind, context);
+          return Math.abs(back - xSI) <= tolerance(xSI);
+        },
+      ),
     );
   });
 });

@@ -69,7 +69,9 @@ describe('independentSamplesForRelativeError()', () => {
     expect(independentSamplesForRelativeError('density', { particlesPerCell: 100 }, 0.01)).toBe(100);
     expect(independentSamplesForRelativeError('temperature', { particlesPerCell: 100 }, 1 / 150)).toBe(150);
     // M = 1/(E² Ac² γ N) = 1/(10^-4 × 10^-2 × 5/3 × 60) = 10^4.
-    expect(independentSamplesForRelativeError('velocity', { particlesPerCell: 60, acousticNumber: 0.1, gamma: 5 / 3 }, 0.01)).toBe(1e4);
+    expect(
+      independentSamplesForRelativeError('velocity', { particlesPerCell: 60, acousticNumber: 0.1, gamma: 5 / 3 }, 0.01),
+    ).toBe(1e4);
   });
 
   it('rounds up, to at least one sample, and the rounded count meets the target', () => {
@@ -83,7 +85,8 @@ describe('independentSamplesForRelativeError()', () => {
   });
 
   it('samples needed grow like Ac⁻² (Hadjiconstantinou & Garcia 2002, published per the reference notes §8)', () => {
-    const at = (ac: number) => independentSamplesForRelativeError('velocity', { particlesPerCell: 50, acousticNumber: ac, gamma: 5 / 3 }, 0.01);
+    const at = (ac: number) =>
+      independentSamplesForRelativeError('velocity', { particlesPerCell: 50, acousticNumber: ac, gamma: 5 / 3 }, 0.01);
     expect(at(0.01) / at(0.1)).toBeCloseTo(100, 1);
   });
 });
@@ -103,10 +106,19 @@ describe('expectedRunPlan()', () => {
   const plan = boxPlan({ species: 'Ar', model: 'HS', cellsPerSide: 20, particlesPerCell: 40 });
 
   it('takes samples one mean collision time apart and prices steps at the plan’s particle count', () => {
-    const r = expectedRunPlan(plan, { targetRelativeError: 0.01, quantity: 'velocity', flowSpeedMPerS: 30, particleStepsPerSecond: 2e7 });
+    const r = expectedRunPlan(plan, {
+      targetRelativeError: 0.01,
+      quantity: 'velocity',
+      flowSpeedMPerS: 30,
+      particleStepsPerSecond: 2e7,
+    });
     const between = Math.ceil(plan.reference.meanCollisionTimeS / plan.timeStepS);
     const ac = 30 / speedOfSoundMPerS(plan.gas.model.massKg, plan.reference.temperatureK, 0);
-    const m = independentSamplesForRelativeError('velocity', { particlesPerCell: 40, acousticNumber: ac, gamma: 5 / 3 }, 0.01);
+    const m = independentSamplesForRelativeError(
+      'velocity',
+      { particlesPerCell: 40, acousticNumber: ac, gamma: 5 / 3 },
+      0.01,
+    );
     expect(r).toEqual({
       independentSamplesNeeded: m,
       stepsBetweenIndependentSamples: between,
@@ -121,11 +133,22 @@ describe('expectedRunPlan()', () => {
   });
 
   it('density and temperature need no flow speed; velocity does', () => {
-    expect(expectedRunPlan(plan, { targetRelativeError: 0.01, quantity: 'density', particleStepsPerSecond: 1e7 }).independentSamplesNeeded).toBe(250);
-    expect(() => expectedRunPlan(plan, { targetRelativeError: 0.01, quantity: 'velocity', particleStepsPerSecond: 1e7 })).toThrow(/flowSpeedMPerS/);
-    expect(() => expectedRunPlan(plan, { targetRelativeError: 0.01, quantity: 'pressure' as NoiseQuantity, particleStepsPerSecond: 1e7 })).toThrow(
-      /quantity = pressure: must be one of velocity, density, temperature/,
-    );
-    expect(() => expectedRunPlan(plan, { targetRelativeError: 0, quantity: 'density', particleStepsPerSecond: 1e7 })).toThrow(/target relative error = 0/);
+    expect(
+      expectedRunPlan(plan, { targetRelativeError: 0.01, quantity: 'density', particleStepsPerSecond: 1e7 })
+        .independentSamplesNeeded,
+    ).toBe(250);
+    expect(() =>
+      expectedRunPlan(plan, { targetRelativeError: 0.01, quantity: 'velocity', particleStepsPerSecond: 1e7 }),
+    ).toThrow(/flowSpeedMPerS/);
+    expect(() =>
+      expectedRunPlan(plan, {
+        targetRelativeError: 0.01,
+        quantity: 'pressure' as NoiseQuantity,
+        particleStepsPerSecond: 1e7,
+      }),
+    ).toThrow(/quantity = pressure: must be one of velocity, density, temperature/);
+    expect(() =>
+      expectedRunPlan(plan, { targetRelativeError: 0, quantity: 'density', particleStepsPerSecond: 1e7 }),
+    ).toThrow(/target relative error = 0/);
   });
 });

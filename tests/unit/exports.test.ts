@@ -30,25 +30,64 @@ function parseCsv(text: string): string[][] {
   while (i < text.length) {
     const ch = text[i];
     if (quoted) {
-      if (ch === '"' && text[i + 1] === '"') { field += '"'; i += 2; continue; }
-      if (ch === '"') { quoted = false; i++; continue; }
-      field += ch; i++; continue;
+      if (ch === '"' && text[i + 1] === '"') {
+        field += '"';
+        i += 2;
+        continue;
+      }
+      if (ch === '"') {
+        quoted = false;
+        i++;
+        continue;
+      }
+      field += ch;
+      i++;
+      continue;
     }
-    if (ch === '"' && field === '') { quoted = true; i++; continue; }
+    if (ch === '"' && field === '') {
+      quoted = true;
+      i++;
+      continue;
+    }
     if (ch === '"') throw new Error(`stray quote at offset ${i}`);
-    if (ch === ',') { row.push(field); field = ''; i++; continue; }
-    if (ch === '\r' && text[i + 1] === '\n') { i++; continue; }
-    if (ch === '\n') { row.push(field); rows.push(row); row = []; field = ''; i++; continue; }
-    field += ch; i++;
+    if (ch === ',') {
+      row.push(field);
+      field = '';
+      i++;
+      continue;
+    }
+    if (ch === '\r' && text[i + 1] === '\n') {
+      i++;
+      continue;
+    }
+    if (ch === '\n') {
+      row.push(field);
+      rows.push(row);
+      row = [];
+      field = '';
+      i++;
+      continue;
+    }
+    field += ch;
+    i++;
   }
   if (quoted) throw new Error('unterminated quoted field');
-  if (field !== '' || row.length) { row.push(field); rows.push(row); }
+  if (field !== '' || row.length) {
+    row.push(field);
+    rows.push(row);
+  }
   return rows;
 }
 
 /** A real (tiny) Couette run, so every export sees the shapes summarize() really produces. */
 function tinyResult(sampleSteps: number): SimulationResult {
-  const input = buildPreset('couette', { cellsY: '6', particlesPerCell: '10', transientSteps: '20', sampleSteps: String(sampleSteps), knudsen: '0.5' });
+  const input = buildPreset('couette', {
+    cellsY: '6',
+    particlesPerCell: '10',
+    transientSteps: '20',
+    sampleSteps: String(sampleSteps),
+    knudsen: '0.5',
+  });
   return summarize(runToEnd(input));
 }
 
@@ -76,7 +115,11 @@ describe('CSV fields', () => {
 
   it('csvDocument() output parses back to the same cells, with LF line ends', () => {
     const header = ['name', 'value [Pa]'];
-    const rows: (string | number)[][] = [['a "quoted", text', 1.25], ['=1+1', -3], ['two\nlines', NaN]];
+    const rows: (string | number)[][] = [
+      ['a "quoted", text', 1.25],
+      ['=1+1', -3],
+      ['two\nlines', NaN],
+    ];
     const text = csvDocument(header, rows);
     expect(text.includes('\r')).toBe(false);
     expect(text.endsWith('\n')).toBe(true);
@@ -135,9 +178,16 @@ describe('result exports', () => {
   it('surfacesCsv() has one row per wall bin, named by wall, with the four wall quantities', () => {
     const rows = parseCsv(surfacesCsv(result));
     expect(rows[0]).toEqual([
-      'wall', 'position [m]',
-      'shearStress [Pa]', 'shearStress ci95 [Pa]', 'normalStress [Pa]', 'normalStress ci95 [Pa]',
-      'heatFlux [W/m^2]', 'heatFlux ci95 [W/m^2]', 'numberFlux [1/(m^2 s)]', 'numberFlux ci95 [1/(m^2 s)]',
+      'wall',
+      'position [m]',
+      'shearStress [Pa]',
+      'shearStress ci95 [Pa]',
+      'normalStress [Pa]',
+      'normalStress ci95 [Pa]',
+      'heatFlux [W/m^2]',
+      'heatFlux ci95 [W/m^2]',
+      'numberFlux [1/(m^2 s)]',
+      'numberFlux ci95 [1/(m^2 s)]',
     ]);
     const bins = (result.wallBins.bottom?.table.rows ?? 0) + (result.wallBins.top?.table.rows ?? 0);
     expect(rows).toHaveLength(1 + bins);
@@ -153,12 +203,32 @@ describe('result exports', () => {
     for (const key of Object.keys(result.numerics)) expect(s.numerics).toHaveProperty(key);
     for (const wall of ['bottom', 'top'] as const) {
       for (const q of WALL_QUANTITIES) {
-        expect(Object.keys(s.walls[wall]![q]).sort()).toEqual(['ci95', 'correlationTimeSteps', 'effectiveSamples', 'mean', 'plateauFound']);
+        expect(Object.keys(s.walls[wall]![q]).sort()).toEqual([
+          'ci95',
+          'correlationTimeSteps',
+          'effectiveSamples',
+          'mean',
+          'plateauFound',
+        ]);
         expect(s.walls[wall]![q].mean).toBe(result.walls[wall]![q].mean);
       }
     }
-    expect(s.units).toMatchObject({ pressure: 'Pa', temperature: 'K', meanFreePath: 'm', viscosity: 'Pa s', shearStress: 'Pa', heatFlux: 'W/m^2', timeStep: 's', wallSeconds: 's' });
-    for (const name of [...Object.keys(s.reference), ...Object.keys(s.numerics), ...WALL_QUANTITIES, ...Object.keys(s.performance)]) {
+    expect(s.units).toMatchObject({
+      pressure: 'Pa',
+      temperature: 'K',
+      meanFreePath: 'm',
+      viscosity: 'Pa s',
+      shearStress: 'Pa',
+      heatFlux: 'W/m^2',
+      timeStep: 's',
+      wallSeconds: 's',
+    });
+    for (const name of [
+      ...Object.keys(s.reference),
+      ...Object.keys(s.numerics),
+      ...WALL_QUANTITIES,
+      ...Object.keys(s.performance),
+    ]) {
       expect(s.units, name).toHaveProperty(name);
     }
     expect(s.performance).toEqual(performance);
@@ -167,7 +237,10 @@ describe('result exports', () => {
 
   it('summaryJsonText() writes NaN as null, never as "NaN"', () => {
     expect(Number.isNaN(single.walls.top!.shearStress.ci95)).toBe(true);
-    const text = summaryJsonText(single, { performance: { ...performance, particleStepsPerSecond: NaN }, caseName: 'one step' });
+    const text = summaryJsonText(single, {
+      performance: { ...performance, particleStepsPerSecond: NaN },
+      caseName: 'one step',
+    });
     expect(text).not.toMatch(/NaN|Infinity/);
     const back = JSON.parse(text);
     expect(back.walls.top.shearStress.ci95).toBeNull();
@@ -182,7 +255,12 @@ describe('result exports', () => {
   });
 
   it('resultFiles() names the four files', () => {
-    expect(Object.keys(resultFiles(result, { performance, caseName: 'x' }))).toEqual(['summary.json', 'profiles.csv', 'fields.csv', 'surfaces.csv']);
+    expect(Object.keys(resultFiles(result, { performance, caseName: 'x' }))).toEqual([
+      'summary.json',
+      'profiles.csv',
+      'fields.csv',
+      'surfaces.csv',
+    ]);
   });
 });
 
@@ -191,7 +269,15 @@ describe('result exports with a continuum comparison', () => {
   let result: SimulationResult;
   let comparison: ContinuumComparison;
   beforeAll(() => {
-    const sim = runToEnd(buildPreset('couette', { cellsY: '6', particlesPerCell: '10', transientSteps: '20', sampleSteps: '400', knudsen: '0.5' }));
+    const sim = runToEnd(
+      buildPreset('couette', {
+        cellsY: '6',
+        particlesPerCell: '10',
+        transientSteps: '20',
+        sampleSteps: '400',
+        knudsen: '0.5',
+      }),
+    );
     plan = sim.plan;
     result = summarize(sim);
     const c = continuumComparisonOf(plan, result);
@@ -203,9 +289,18 @@ describe('result exports with a continuum comparison', () => {
     const rows = parseCsv(profilesCsv(result, comparison));
     const header = rows[0];
     const at = header.indexOf('velocityX ci95 [m/s]');
-    expect(header.slice(at + 1, at + 5)).toEqual(['velocityX noSlip [m/s]', 'velocityX firstOrder [m/s]', 'velocityX secondOrder [m/s]', 'velocityX freeMolecular [m/s]']);
+    expect(header.slice(at + 1, at + 5)).toEqual([
+      'velocityX noSlip [m/s]',
+      'velocityX firstOrder [m/s]',
+      'velocityX secondOrder [m/s]',
+      'velocityX freeMolecular [m/s]',
+    ]);
     const t = header.indexOf('temperature ci95 [K]');
-    expect(header.slice(t + 1, t + 4)).toEqual(['temperature noSlip [K]', 'temperature firstOrder [K]', 'temperature secondOrder [K]']);
+    expect(header.slice(t + 1, t + 4)).toEqual([
+      'temperature noSlip [K]',
+      'temperature firstOrder [K]',
+      'temperature secondOrder [K]',
+    ]);
     expect(header).toHaveLength(1 + 2 * CELL_FIELDS.length + 7);
     for (const h of header) expect(h).toMatch(/ \[[^\]]+\]$/);
     for (let r = 0; r < result.profile.rows; r++) {
@@ -216,8 +311,17 @@ describe('result exports with a continuum comparison', () => {
 
   it('summaryJson() with a comparison carries continuum, verdict and continuumModels, and units for every compared quantity', () => {
     const s = summaryJson(result, { performance, caseName: 'tiny', comparison });
-    expect(s.continuum!.noSlip['walls.bottom.shearStress']).toBe(comparison.continuum.noSlip!['walls.bottom.shearStress']);
-    expect(Object.keys(s.verdict!)).toEqual(expect.arrayContaining(['walls.bottom.shearStress', 'walls.top.heatFlux', 'profile.velocityX', 'profile.temperature']));
+    expect(s.continuum!.noSlip['walls.bottom.shearStress']).toBe(
+      comparison.continuum.noSlip!['walls.bottom.shearStress'],
+    );
+    expect(Object.keys(s.verdict!)).toEqual(
+      expect.arrayContaining([
+        'walls.bottom.shearStress',
+        'walls.top.heatFlux',
+        'profile.velocityX',
+        'profile.temperature',
+      ]),
+    );
     for (const v of Object.values(s.verdict!)) {
       expect(typeof v.text).toBe('string');
       expect(Object.keys(v)).toEqual(expect.arrayContaining(['bestModel', 'deviation', 'text']));
@@ -231,7 +335,9 @@ describe('result exports with a continuum comparison', () => {
 
   it('resultFiles(result, { plan }) writes the comparison; without one the files are as before', () => {
     const withPlan = resultFiles(result, { performance, caseName: 'x', plan });
-    expect(JSON.parse(withPlan['summary.json']).verdict['walls.top.shearStress'].text).toBe(comparison.verdict['walls.top.shearStress'].text);
+    expect(JSON.parse(withPlan['summary.json']).verdict['walls.top.shearStress'].text).toBe(
+      comparison.verdict['walls.top.shearStress'].text,
+    );
     expect(withPlan['profiles.csv']).toContain('velocityX noSlip [m/s]');
     const plain = resultFiles(result, { performance, caseName: 'x' });
     expect(plain['summary.json']).not.toContain('"verdict"');

@@ -15,13 +15,26 @@ const estimate = (mean: number, ci95: number): IntegralEstimate =>
   ({ mean, ci95, effectiveSamples: 100, correlationTimeSteps: 10, plateauFound: true }) as IntegralEstimate;
 
 describe('flowResultOf()', () => {
-  const plan = planOrThrow(buildPreset('tube', { gas: 'N2', radius: '2mm', knudsen: '0.5', pressureRatio: '3', lengthToRadius: '10', temperature: '300K' }));
+  const plan = planOrThrow(
+    buildPreset('tube', {
+      gas: 'N2',
+      radius: '2mm',
+      knudsen: '0.5',
+      pressureRatio: '3',
+      lengthToRadius: '10',
+      temperature: '300K',
+    }),
+  );
   const c = plan.caseData;
   const up = c.boundaries.left.type === 'reservoir' ? c.boundaries.left.pressurePa : NaN;
   const down = c.boundaries.right.type === 'reservoir' ? c.boundaries.right.pressurePa : NaN;
   const m = plan.gas.model.massKg;
   const mdot = 3e-9;
-  const flow = flowResultOf(plan, { inlet: estimate(mdot, 1e-10), middle: estimate(mdot * 1.01, 1e-10), outlet: estimate(mdot, 1e-10) })!;
+  const flow = flowResultOf(plan, {
+    inlet: estimate(mdot, 1e-10),
+    middle: estimate(mdot * 1.01, 1e-10),
+    outlet: estimate(mdot, 1e-10),
+  })!;
   const v = flow.values;
 
   it('uses the first section and the vessel pressures, with the ratio asked for', () => {
@@ -40,10 +53,14 @@ describe('flowResultOf()', () => {
     const v0 = Math.sqrt((2 * K_B * 300) / m);
     expect(v.reducedFlowRate!.mean).toBeCloseTo((mdot * v0 * 20e-3) / (Math.PI * 2e-3 ** 3 * (up - down)), 12);
   });
-  it('flow.csv: SI rows, then mbar L/s and L/s equal to the units module\'s conversion, and every section', () => {
+  it("flow.csv: SI rows, then mbar L/s and L/s equal to the units module's conversion, and every section", () => {
     const lines = flowCsv(flow, false).trimEnd().split('\n');
     expect(lines[0]).toBe('quantity,unit,mean,ci95');
-    const row = (q: string, unit: string) => lines.find((l) => l.startsWith(`${q},${unit},`))!.split(',').map((x, k) => (k > 1 ? Number(x) : x));
+    const row = (q: string, unit: string) =>
+      lines
+        .find((l) => l.startsWith(`${q},${unit},`))!
+        .split(',')
+        .map((x, k) => (k > 1 ? Number(x) : x));
     expect(row('throughput', 'mbar L/s')[2]).toBeCloseTo(convertFromSI(v.throughput!.mean, 'mbar·L/s'), 15);
     expect(row('conductance', 'L/s')[2]).toBeCloseTo(convertFromSI(v.conductance!.mean, 'L/s'), 12);
     expect(row('sections.middle.massFlowRate', 'kg/s')[2]).toBeCloseTo(mdot * 1.01, 20);

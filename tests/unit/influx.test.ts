@@ -17,7 +17,8 @@ import { createRng } from '../../engine/particles/rng';
 const erfc1 = (s: number) => 1 + jStat.erf(s);
 const I1 = (s: number) => 0.5 * Math.exp(-s * s) + (Math.sqrt(Math.PI) / 2) * s * erfc1(s);
 const I2 = (s: number) => (s / 2) * Math.exp(-s * s) + (Math.sqrt(Math.PI) / 4) * (1 + 2 * s * s) * erfc1(s);
-const I3 = (s: number) => ((1 + s * s) / 2) * Math.exp(-s * s) + (Math.sqrt(Math.PI) / 4) * (3 * s + 2 * s ** 3) * erfc1(s);
+const I3 = (s: number) =>
+  ((1 + s * s) / 2) * Math.exp(-s * s) + (Math.sqrt(Math.PI) / 4) * (3 * s + 2 * s ** 3) * erfc1(s);
 
 describe('fluxNormalSpeed()', () => {
   for (const s of [-1.5, -0.3, 0, 0.4, 2]) {
@@ -53,7 +54,8 @@ describe('maxwellianInfluxPerM2S()', () => {
     const vmp = 350;
     const meanSpeed = (2 / Math.sqrt(Math.PI)) * vmp;
     expect(maxwellianInfluxPerM2S(n, vmp, 0)).toBeCloseTo((n * meanSpeed) / 4, -10);
-    for (const s of [-2, -0.5, 0.7, 3]) expect(maxwellianInfluxPerM2S(n, vmp, s) / ((n * vmp * I1(s)) / Math.sqrt(Math.PI))).toBeCloseTo(1, 12);
+    for (const s of [-2, -0.5, 0.7, 3])
+      expect(maxwellianInfluxPerM2S(n, vmp, s) / ((n * vmp * I1(s)) / Math.sqrt(Math.PI))).toBeCloseTo(1, 12);
     // A strong outflow lets almost nothing in; a strong inflow carries n u.
     expect(maxwellianInfluxPerM2S(n, vmp, 6) / (n * 6 * vmp)).toBeCloseTo(1, 3);
   });

@@ -25,7 +25,7 @@ describe('mergeSampleSets', () => {
     expect(differingLeaves(summarizeSamples(mergeSampleSets([full[0]])), summarizeSamples(full[0]))).toEqual([]);
   });
 
-  it('adds counters and batches, and keeps each replica\'s series', () => {
+  it("adds counters and batches, and keeps each replica's series", () => {
     const [a, b] = full;
     const m = mergeSampleSets([a, b]);
     expect(m.replicas).toBe(2);
@@ -49,7 +49,9 @@ describe('mergeSampleSets', () => {
     const a = full[0];
     const b = couetteReplica(31, 1237);
     const c = couetteReplica(32, 2500 + 3);
-    expect(new Set([a.cellStore.batchLength, b.cellStore.batchLength, c.cellStore.batchLength]).size).toBeGreaterThan(1);
+    expect(new Set([a.cellStore.batchLength, b.cellStore.batchLength, c.cellStore.batchLength]).size).toBeGreaterThan(
+      1,
+    );
     const reference = summarizeSamples(mergeSampleSets([a, b, c]));
     const variants = [
       mergeSampleSets([mergeSampleSets([a, b]), c]),
@@ -67,7 +69,10 @@ describe('mergeSampleSets', () => {
     // Expected ratio with B complete batches per replica: (1/√2)·t_{0.975,2B−1}/t_{0.975,B−1} (≈ 0.69 for B = 25;
     // computed). Its spread comes from the scatter of the batch variances: 0.68–0.71 over four seed pairs when this
     // test was written, so the band 0.55–0.85 is loose. The wall shear stress (blocking, Welch–Satterthwaite) likewise.
-    for (const [a, b] of [[full[0], full[1]], [full[2], full[3]]]) {
+    for (const [a, b] of [
+      [full[0], full[1]],
+      [full[2], full[3]],
+    ]) {
       const m = mergeSampleSets([a, b]);
       const single = (gapShear(a).ci95 + gapShear(b).ci95) / 2;
       const batches = a.cellStore.batches;
@@ -89,7 +94,9 @@ describe('mergeSampleSets', () => {
     const alone = summarizeSamples(full[0]);
     const r = summarizeSamples(mergeSampleSets([full[0], short]));
     expect(r.walls.top!.shearStress).toEqual(alone.walls.top!.shearStress);
-    expect(r.warnings).toContain('1 of 2 replicas sampled fewer than 2 base batches and are left out of the wall quantities (their cell samples are kept)');
+    expect(r.warnings).toContain(
+      '1 of 2 replicas sampled fewer than 2 base batches and are left out of the wall quantities (their cell samples are kept)',
+    );
     expect(r.numerics.sampleSteps).toBe(alone.numerics.sampleSteps + 15);
     const three = summarizeSamples(mergeSampleSets([full[0], full[1], short])).walls.top!.shearStress;
     expect(Number.isFinite(three.ci95)).toBe(true);
@@ -98,11 +105,15 @@ describe('mergeSampleSets', () => {
   it('refuses sets of different cases, naming the field that differs', () => {
     const plan = planOrThrow(buildPreset('couette', { ...SMALL_COUETTE, wallSpeed: '150', seed: '2' }));
     const other: SampleSet = { ...full[1], plan };
-    expect(() => mergeSampleSets([full[0], other])).toThrow(/different cases.*\n.*boundaries\.bottom\.velocityMPerS\[0\]: -50 vs -75/);
+    expect(() => mergeSampleSets([full[0], other])).toThrow(
+      /different cases.*\n.*boundaries\.bottom\.velocityMPerS\[0\]: -50 vs -75/,
+    );
   });
 
   it('refuses the same replica twice (its error bars would shrink without cause)', () => {
-    expect(() => mergeSampleSets([full[0], full[1], full[0]])).toThrow(/set 1 \(replica 1\) and set 3 \(replica 1\) hold the same samples/);
+    expect(() => mergeSampleSets([full[0], full[1], full[0]])).toThrow(
+      /set 1 \(replica 1\) and set 3 \(replica 1\) hold the same samples/,
+    );
     expect(() => mergeSampleSets([mergeSampleSets([full[0], full[1]]), full[1]])).toThrow(/same samples/);
   });
 

@@ -133,14 +133,20 @@ describe('viscosityPaS()', () => {
 describe('speeds, mean free path and rarefaction', () => {
   it('mean speed is 2/sqrt(π) times the most probable speed (Maxwell distribution)', () => {
     const m = SPECIES.Ar.massKg;
-    expect(relativeError(meanSpeedMPerS(m, 300), (2 / Math.sqrt(Math.PI)) * mostProbableSpeedMPerS(m, 300))).toBeLessThan(1e-14);
+    expect(
+      relativeError(meanSpeedMPerS(m, 300), (2 / Math.sqrt(Math.PI)) * mostProbableSpeedMPerS(m, 300)),
+    ).toBeLessThan(1e-14);
     // Argon at 273 K: v0 = sqrt(2kT/m) = 337.195 m/s (computed: sqrt(2 × 1.380649e-23 × 273 / 6.63e-26)).
     expect(mostProbableSpeedMPerS(m, 273)).toBeCloseTo(337.195, 2);
   });
 
   it('Kn = λ/H equals sqrt(π)/(2δ) (reference notes, notation of Sharipov & Seleznev 1998)', () => {
     const model = modelFromSpecies('Ar', 'VHS');
-    for (const [pressurePa, temperatureK, gapM] of [[100, 300, 1e-3], [1, 500, 0.1], [1e5, 273, 1e-6]]) {
+    for (const [pressurePa, temperatureK, gapM] of [
+      [100, 300, 1e-3],
+      [1, 500, 0.1],
+      [1e5, 273, 1e-6],
+    ]) {
       const mu = viscosityPaS(model, temperatureK);
       const lambda = viscosityMeanFreePathM(mu, pressurePa, temperatureK, model.massKg);
       const delta = rarefactionParameter(pressurePa, gapM, mu, mostProbableSpeedMPerS(model.massKg, temperatureK));
@@ -154,7 +160,9 @@ describe('collision cross-section and rate', () => {
   it('σ_T·c_r = sigmaCrCoefficient·c_r^(2−2ω), and HS σ_T = πd² at every speed', () => {
     const vhs = modelFromSpecies('CO2', 'VHS');
     for (const c of [10, 300, 2000]) {
-      expect(relativeError(collisionCrossSectionM2(vhs, c) * c, sigmaCrCoefficient(vhs) * c ** (2 - 2 * 0.93))).toBeLessThan(1e-12);
+      expect(
+        relativeError(collisionCrossSectionM2(vhs, c) * c, sigmaCrCoefficient(vhs) * c ** (2 - 2 * 0.93)),
+      ).toBeLessThan(1e-12);
     }
     const hs = modelFromSpecies('Ar', 'HS');
     const d = hs.referenceDiameterM;
@@ -188,7 +196,7 @@ describe('collision cross-section and rate', () => {
     let sum = 0; // integrand(0) = 0 for every ω ≤ 1
     for (let i = 1; i < intervals; i++) sum += (i % 2 === 1 ? 4 : 2) * integrand(i * h);
     sum += integrand(upper);
-    return n * (sum * h) / 3;
+    return (n * (sum * h)) / 3;
   }
 
   it('closed-form rate equals n⟨σ_T c_r⟩ by quadrature to 1e-6 (HS Ar, VHS Ar ω 0.81, VHS CO2 ω 0.93, VSS N2)', () => {

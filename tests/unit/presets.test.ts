@@ -61,7 +61,13 @@ describe('presets', () => {
   });
 
   it('buildPreset() numerics overrides reach the case', () => {
-    const { c } = planned({ cellsY: '12', particlesPerCell: '50', sampleSteps: '1000', transientSteps: '7', seed: '99' });
+    const { c } = planned({
+      cellsY: '12',
+      particlesPerCell: '50',
+      sampleSteps: '1000',
+      transientSteps: '7',
+      seed: '99',
+    });
     expect(c.numerics).toMatchObject({ cellsY: 12, particlesPerCell: 50 });
     expect(c.sampling).toMatchObject({ sampleSteps: 1000, transientSteps: 7 });
     expect(c.seed).toBe(99);

@@ -17,7 +17,7 @@ function ar1(rng: Uint32Array, n: number, phi: number, mean: number, sd: number)
 }
 
 describe('replicaBlockingAnalysis', () => {
-  it('of one replica is that replica\'s blocking analysis', () => {
+  it("of one replica is that replica's blocking analysis", () => {
     const x = ar1(createRng(1), 1000, 0.5, 3, 2);
     const one = replicaBlockingAnalysis([x]);
     const b = blockingAnalysis(x);
@@ -52,7 +52,11 @@ describe('replicaBlockingAnalysis', () => {
     const trials = 1500;
     let covered = 0;
     for (let t = 0; t < trials; t++) {
-      const r = replicaBlockingAnalysis([ar1(rng, 256, 0.6, 5, 1), ar1(rng, 512, 0.6, 5, 2), ar1(rng, 1024, 0.6, 5, 0.5)]);
+      const r = replicaBlockingAnalysis([
+        ar1(rng, 256, 0.6, 5, 1),
+        ar1(rng, 512, 0.6, 5, 2),
+        ar1(rng, 1024, 0.6, 5, 0.5),
+      ]);
       if (Math.abs(r.mean - 5) <= r.ci95) covered++;
     }
     const coverage = covered / trials;
@@ -61,7 +65,9 @@ describe('replicaBlockingAnalysis', () => {
   });
 
   it('refuses replicas with fewer than 2 values', () => {
-    expect(() => replicaBlockingAnalysis([Float64Array.of(1, 2), Float64Array.of(3)])).toThrow(/replica 1 has 1 values/);
+    expect(() => replicaBlockingAnalysis([Float64Array.of(1, 2), Float64Array.of(3)])).toThrow(
+      /replica 1 has 1 values/,
+    );
     expect(() => replicaBlockingAnalysis([])).toThrow(/no series/);
   });
 });

@@ -18,7 +18,16 @@ import { decodeSampleSet } from '../../engine/io/sampleFile';
 
 const workerUrl = pathToFileURL(join(__dirname, '..', '..', 'dist-cli', 'replica.node.mjs'));
 const smallCouette = (sampleSteps: number) => {
-  const parsed = parseCase(buildPreset('couette', { knudsen: '0.5', cellsY: '10', particlesPerCell: '30', transientSteps: '200', sampleSteps: String(sampleSteps), seed: '9' }));
+  const parsed = parseCase(
+    buildPreset('couette', {
+      knudsen: '0.5',
+      cellsY: '10',
+      particlesPerCell: '30',
+      transientSteps: '200',
+      sampleSteps: String(sampleSteps),
+      seed: '9',
+    }),
+  );
   if (!parsed.ok) throw new Error(parsed.errors.join('\n'));
   return parsed.value;
 };
@@ -73,11 +82,18 @@ describe('replica pool on worker threads', () => {
     expect(r1.samples?.counters.sampledSteps ?? 0).toBeGreaterThan(0);
     // Both replicas' samples are in the merged result: nothing sampled was dropped silently.
     expect(outcome.merged!.replicas).toBe(2);
-    expect(outcome.merged!.counters.sampledSteps).toBe(r0.samples!.counters.sampledSteps + r1.samples!.counters.sampledSteps);
+    expect(outcome.merged!.counters.sampledSteps).toBe(
+      r0.samples!.counters.sampledSteps + r1.samples!.counters.sampledSteps,
+    );
   });
-  it('asked not to decode, the pool hands back each replica\'s sample file untouched and merges nothing', async () => {
+  it("asked not to decode, the pool hands back each replica's sample file untouched and merges nothing", async () => {
     const caseData = smallCouette(1000);
-    const pool = runReplicaPool({ caseInput: caseData, replicas: 2, createReplica: nodeReplicaFactory(workerUrl), decodeOnThisThread: false });
+    const pool = runReplicaPool({
+      caseInput: caseData,
+      replicas: 2,
+      createReplica: nodeReplicaFactory(workerUrl),
+      decodeOnThisThread: false,
+    });
     const outcome = await pool.done;
     expect(outcome.merged).toBeNull();
     expect(outcome.replicas.map((r) => r.samples)).toEqual([null, null]);
@@ -86,6 +102,8 @@ describe('replica pool on worker threads', () => {
     expect(sets.map((x) => x.counters.sampledSteps)).toEqual([1000, 1000]);
     const direct = runReplicaPool({ caseInput: caseData, replicas: 2, createReplica: nodeReplicaFactory(workerUrl) });
     const decodedHere = await direct.done;
-    expect(summarizeSamples(mergeSampleSets(sets)).walls.top!.shearStress).toEqual(summarizeSamples(decodedHere.merged!).walls.top!.shearStress);
+    expect(summarizeSamples(mergeSampleSets(sets)).walls.top!.shearStress).toEqual(
+      summarizeSamples(decodedHere.merged!).walls.top!.shearStress,
+    );
   });
 });

@@ -7,7 +7,15 @@ import { describe, expect, it } from 'vitest';
 import type { FieldTable } from '../../engine/results/summarize';
 import { cutProfileCsv } from '../../engine/results/cutProfileCsv';
 import { buildPreset } from '../../engine/case/presets';
-import { cutColumn, extractCut, nearestCentre, cellCentres, GAP_EMPTY, GAP_SOLID, type CutSource } from '../../app/results/profileCut';
+import {
+  cutColumn,
+  extractCut,
+  nearestCentre,
+  cellCentres,
+  GAP_EMPTY,
+  GAP_SOLID,
+  type CutSource,
+} from '../../app/results/profileCut';
 import { machOf, speedOf, withDerivedFields } from '../../app/results/derivedFields';
 import { geometryOverlay } from '../../app/results/geometryOverlay';
 import { resultGeometryOf } from '../../app/engine/runApi';
@@ -16,7 +24,15 @@ const NAMES = ['numberDensity', 'velocityX', 'velocityY', 'velocityZ', 'temperat
 const UNITS = ['1/m^3', 'm/s', 'm/s', 'm/s', 'K'];
 
 function table(rows: number[][], ci: number[][]): FieldTable {
-  return { names: NAMES, units: UNITS, rows: rows.length, mean: Float64Array.from(rows.flat()), ci95: Float64Array.from(ci.flat()), batches: 16, batchLengthSteps: 100 };
+  return {
+    names: NAMES,
+    units: UNITS,
+    rows: rows.length,
+    mean: Float64Array.from(rows.flat()),
+    ci95: Float64Array.from(ci.flat()),
+    batches: 16,
+    batchLengthSteps: 100,
+  };
 }
 
 /**
@@ -35,7 +51,16 @@ function source(): CutSource {
       ci.push([1e18, c / 10 + 0.01, 0.1, 0.1, 2]);
     }
   }
-  const profile = table([[1e20, 10, 1, 0, 301], [2e20, 40, 1, 0, 304]], [[1e18, 0.5, 0.1, 0.1, 1], [1e18, 0.7, 0.1, 0.1, 1]]);
+  const profile = table(
+    [
+      [1e20, 10, 1, 0, 301],
+      [2e20, 40, 1, 0, 304],
+    ],
+    [
+      [1e18, 0.5, 0.1, 0.1, 1],
+      [1e18, 0.7, 0.1, 0.1, 1],
+    ],
+  );
   return {
     numerics: { cellsX: 3, cellsY: 2 },
     cellX: Float64Array.from([0.5, 1.5, 2.5, 0.5, 1.5, 2.5].map((v) => v * 1e-6)),
@@ -133,7 +158,10 @@ describe('derived fields', () => {
 describe('cut CSV', () => {
   it('position and fixed coordinate in metres, each quantity with its ci95 and predictions, units in every header, gaps empty', () => {
     const cut = extractCut(source(), { kind: 'vertical', index: 1 }, SOLID);
-    const csv = cutProfileCsv(cut, [{ quantity: 'velocityX', model: 'first-order slip', values: [11, 41] }, { quantity: 'velocityX', model: 'bad', values: [1] }]);
+    const csv = cutProfileCsv(cut, [
+      { quantity: 'velocityX', model: 'first-order slip', values: [11, 41] },
+      { quantity: 'velocityX', model: 'bad', values: [1] },
+    ]);
     const lines = csv.split('\n');
     expect(lines.at(-1)).toBe('');
     const header = lines[0].split(',');
@@ -158,7 +186,9 @@ describe('cut CSV', () => {
 
   it('the row average has no fixed coordinate; formula-like and comma-holding header text is escaped (RFC 4180, OWASP)', () => {
     const avg = extractCut(source(), { kind: 'average', index: 0 });
-    const csv = cutProfileCsv({ ...avg, names: ['=cmd', ...avg.names.slice(1)] }, [{ quantity: 'velocityX', model: 'slip, 2nd "order"', values: [1, 2] }]);
+    const csv = cutProfileCsv({ ...avg, names: ['=cmd', ...avg.names.slice(1)] }, [
+      { quantity: 'velocityX', model: 'slip, 2nd "order"', values: [1, 2] },
+    ]);
     const header = csv.split('\n')[0];
     expect(header.startsWith("y [m],'=cmd [1/m^3],'=cmd ci95 [1/m^3],velocityX [m/s]")).toBe(true);
     expect(header).toContain('"velocityX slip, 2nd ""order"" [m/s]"');
@@ -186,19 +216,30 @@ describe('geometry of a result', () => {
     for (let c = 0; c < g!.solidCells.length; c++) {
       const x0 = (c % cellsX) * dx;
       const y0 = Math.floor(c / cellsX) * dy;
-      const covered = g!.blocks.some((b) => x0 >= b.x0 - eps && x0 + dx <= b.x1 + eps && y0 >= b.y0 - eps && y0 + dy <= b.y1 + eps);
+      const covered = g!.blocks.some(
+        (b) => x0 >= b.x0 - eps && x0 + dx <= b.x1 + eps && y0 >= b.y0 - eps && y0 + dy <= b.y1 + eps,
+      );
       expect(g!.solidCells[c], `cell ${c}`).toBe(covered ? 1 : 0);
     }
     const overlay = geometryOverlay(g, 1e-6);
     expect(overlay.blockCount).toBe(2);
     expect(overlay.shapes.filter((s) => s.type === 'rect')).toHaveLength(2);
     const lower = g!.blocks[0];
-    expect(overlay.shapes[0]).toMatchObject({ type: 'rect', x0: lower.x0 / 1e-6, x1: lower.x1 / 1e-6, y0: lower.y0 / 1e-6, y1: lower.y1 / 1e-6 });
+    expect(overlay.shapes[0]).toMatchObject({
+      type: 'rect',
+      x0: lower.x0 / 1e-6,
+      x1: lower.x1 / 1e-6,
+      y0: lower.y0 / 1e-6,
+      y1: lower.y1 / 1e-6,
+    });
   });
 
   it('the Couette gap: bottom and top walls as thick lines labelled by name, nitrogen γ = 7/5', () => {
     const g = resultGeometryOf(buildPreset('couette', { gas: 'N2', knudsen: '1' }))!;
-    expect(g.walls.map((w) => [w.side, w.normalIsX])).toEqual([['bottom', false], ['top', false]]);
+    expect(g.walls.map((w) => [w.side, w.normalIsX])).toEqual([
+      ['bottom', false],
+      ['top', false],
+    ]);
     expect(g.gas.heatCapacityRatio).toBeCloseTo(1.4, 12);
     const overlay = geometryOverlay(g, 1e-6);
     expect(overlay.wallCount).toBe(2);

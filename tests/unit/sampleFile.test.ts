@@ -14,7 +14,8 @@ beforeAll(() => {
   merged = mergeSampleSets([single, partial, couetteReplica(43)]);
 });
 
-const headerText = (buffer: ArrayBuffer) => new TextDecoder().decode(new Uint8Array(buffer, 16, new DataView(buffer).getUint32(12, true)));
+const headerText = (buffer: ArrayBuffer) =>
+  new TextDecoder().decode(new Uint8Array(buffer, 16, new DataView(buffer).getUint32(12, true)));
 
 describe('sample files', () => {
   it('encode → decode gives identical summarizeSamples output (one replica, part-filled batches, merged replicas)', () => {
@@ -37,7 +38,8 @@ describe('sample files', () => {
     const side = header.arrays.find((a: { name: string }) => a.name === 'sideTable');
     expect(side.dtype).toBe('float64le');
     const view = new DataView(buffer);
-    for (let i = 0; i < side.length; i++) expect(view.getFloat64(dataStart + side.offset + 8 * i, true)).toBe(single.geometry.sideTable[i]);
+    for (let i = 0; i < side.length; i++)
+      expect(view.getFloat64(dataStart + side.offset + 8 * i, true)).toBe(single.geometry.sideTable[i]);
     const last = header.arrays[header.arrays.length - 1];
     expect(buffer.byteLength).toBe(dataStart + last.offset + 8 * last.length);
   });
@@ -53,7 +55,9 @@ describe('sample files', () => {
     const sevenBit = buffer.slice(0);
     new Uint8Array(sevenBit)[0] = 0x09;
     expect(() => decodeSampleSet(sevenBit)).toThrow(/7-bit transfer/);
-    expect(() => decodeSampleSet(new TextEncoder().encode('{"format":"tenuis-samples"}').buffer)).toThrow(/not a sample file/);
+    expect(() => decodeSampleSet(new TextEncoder().encode('{"format":"tenuis-samples"}').buffer)).toThrow(
+      /not a sample file/,
+    );
   });
 
   it('decode rejects a truncated buffer wherever it was cut', () => {
@@ -67,7 +71,9 @@ describe('sample files', () => {
   it('decode rejects a future version, and an unknown one', () => {
     const future = encodeSampleSet(single);
     new DataView(future).setUint32(8, SAMPLE_FILE_VERSION + 1, true);
-    expect(() => decodeSampleSet(future)).toThrow(/format version 2 is newer than this version of Tenuis reads \(1\); update Tenuis/);
+    expect(() => decodeSampleSet(future)).toThrow(
+      /format version 2 is newer than this version of Tenuis reads \(1\); update Tenuis/,
+    );
     const zero = encodeSampleSet(single);
     new DataView(zero).setUint32(8, 0, true);
     expect(() => decodeSampleSet(zero)).toThrow(/unknown format version 0/);
@@ -76,7 +82,9 @@ describe('sample files', () => {
   it('decode rejects a case that fails parseCase, naming the field', () => {
     const c = single.plan.caseData;
     const bad = { ...single, plan: { ...single.plan, caseData: { ...c, initial: { ...c.initial, pressurePa: -1 } } } };
-    expect(() => decodeSampleSet(encodeSampleSet(bad))).toThrow(/sample file: its case is not valid:\n\s+initial\.pressurePa: initial pressure \(Pa\) must be greater than zero/);
+    expect(() => decodeSampleSet(encodeSampleSet(bad))).toThrow(
+      /sample file: its case is not valid:\n\s+initial\.pressurePa: initial pressure \(Pa\) must be greater than zero/,
+    );
   });
 
   it('decode rejects a damaged header or array with messages', () => {

@@ -65,7 +65,10 @@ describe('createSteadyStateDetector()', () => {
   it('linear drift of 10σ per window plus AR(1) noise: never steady in 6000 samples', () => {
     // 0.025 per sample × 400 = 10σ per window, about 8 times the bound (computed as above): a clear trend throughout.
     for (const seed of SEEDS.slice(0, 5)) {
-      expect(runUntilSteady(OPTIONS, (t) => 0.025 * t, ar1(seed + 2000, 6000, PHI)), `seed ${seed}`).toBe(-1);
+      expect(
+        runUntilSteady(OPTIONS, (t) => 0.025 * t, ar1(seed + 2000, 6000, PHI)),
+        `seed ${seed}`,
+      ).toBe(-1);
     }
   });
 
@@ -126,15 +129,27 @@ describe('createSteadyStateDetector()', () => {
   it('reports progress before the first window is full', () => {
     const detector = createSteadyStateDetector(OPTIONS);
     for (let t = 0; t < 150; t++) detector.push({ energy: t });
-    expect(detector.state()).toMatchObject({ steady: false, atSample: null, reason: 'collecting: 150 of 400 samples for the first window' });
+    expect(detector.state()).toMatchObject({
+      steady: false,
+      atSample: null,
+      reason: 'collecting: 150 of 400 samples for the first window',
+    });
   });
 
   it('refuses bad options and bad samples with messages naming them', () => {
-    expect(() => createSteadyStateDetector({ windowSamples: 405 })).toThrow(/windowSamples = 405 must be a multiple of batches \(10\)/);
-    expect(() => createSteadyStateDetector({ windowSamples: 400, batches: 3 })).toThrow(/batches = 3: must be an integer ≥ 4/);
-    expect(() => createSteadyStateDetector({ windowSamples: 10 })).toThrow(/windowSamples = 10: must be an integer ≥ 20/);
+    expect(() => createSteadyStateDetector({ windowSamples: 405 })).toThrow(
+      /windowSamples = 405 must be a multiple of batches \(10\)/,
+    );
+    expect(() => createSteadyStateDetector({ windowSamples: 400, batches: 3 })).toThrow(
+      /batches = 3: must be an integer ≥ 4/,
+    );
+    expect(() => createSteadyStateDetector({ windowSamples: 10 })).toThrow(
+      /windowSamples = 10: must be an integer ≥ 20/,
+    );
     expect(() => createSteadyStateDetector({ windowSamples: 400, confidence: 1 })).toThrow(/confidence = 1/);
-    expect(() => createSteadyStateDetector({ windowSamples: 400, maxSamples: 500 })).toThrow(/maxSamples .* = 500: must be an integer ≥ 600/);
+    expect(() => createSteadyStateDetector({ windowSamples: 400, maxSamples: 500 })).toThrow(
+      /maxSamples .* = 500: must be an integer ≥ 600/,
+    );
     const detector = createSteadyStateDetector(OPTIONS);
     expect(() => detector.push({})).toThrow(/first sample has no series/);
     detector.push({ energy: 1, count: 10 });

@@ -3,11 +3,17 @@ import { estimateRemaining, evaluateStop, parseTarget, relativeHalfWidthOf } fro
 
 describe('parseTarget()', () => {
   it("parseTarget('walls.top.shearStress=0.01') is that path with a relative half-width of 0.01", () => {
-    expect(parseTarget('walls.top.shearStress=0.01')).toEqual({ path: 'walls.top.shearStress', relativeHalfWidth: 0.01 });
+    expect(parseTarget('walls.top.shearStress=0.01')).toEqual({
+      path: 'walls.top.shearStress',
+      relativeHalfWidth: 0.01,
+    });
   });
 
   it('accepts a percentage and spaces around the parts', () => {
-    expect(parseTarget(' walls.top.heatFlux = 2.5% ')).toEqual({ path: 'walls.top.heatFlux', relativeHalfWidth: 0.025 });
+    expect(parseTarget(' walls.top.heatFlux = 2.5% ')).toEqual({
+      path: 'walls.top.heatFlux',
+      relativeHalfWidth: 0.025,
+    });
     expect(parseTarget('massFlow=1')).toEqual({ path: 'massFlow', relativeHalfWidth: 1 });
   });
 
@@ -38,13 +44,26 @@ describe('evaluateStop()', () => {
   const target = { path: 'walls.top.shearStress', relativeHalfWidth: 0.01 };
 
   it('stops when ci95/|mean| reaches the target, also for a negative mean', () => {
-    const d = evaluateStop({ stepsDone: 500, maxSteps: 1e6, elapsedSeconds: 3, target, estimate: { mean: -2, ci95: 0.02 } });
+    const d = evaluateStop({
+      stepsDone: 500,
+      maxSteps: 1e6,
+      elapsedSeconds: 3,
+      target,
+      estimate: { mean: -2, ci95: 0.02 },
+    });
     expect(d).toMatchObject({ stop: true, rule: 'target' });
     expect(d.reason).toBe('walls.top.shearStress reached its target: ±1.00 % ≤ ±1.00 % (95 %)');
   });
 
   it('continues while the target is not met and no budget is spent, saying where it stands', () => {
-    const d = evaluateStop({ stepsDone: 500, maxSteps: 1000, elapsedSeconds: 3, maxSeconds: 60, target, estimate: { mean: 2, ci95: 0.1 } });
+    const d = evaluateStop({
+      stepsDone: 500,
+      maxSteps: 1000,
+      elapsedSeconds: 3,
+      maxSeconds: 60,
+      target,
+      estimate: { mean: 2, ci95: 0.1 },
+    });
     expect(d).toEqual({
       stop: false,
       rule: null,
@@ -53,29 +72,52 @@ describe('evaluateStop()', () => {
   });
 
   it('stops at the step budget, then the time budget, with the target progress in the reason', () => {
-    const steps = evaluateStop({ stepsDone: 1000, maxSteps: 1000, elapsedSeconds: 99, maxSeconds: 60, target, estimate: { mean: 2, ci95: 0.1 } });
+    const steps = evaluateStop({
+      stepsDone: 1000,
+      maxSteps: 1000,
+      elapsedSeconds: 99,
+      maxSeconds: 60,
+      target,
+      estimate: { mean: 2, ci95: 0.1 },
+    });
     expect(steps).toMatchObject({ stop: true, rule: 'maxSteps' });
-    expect(steps.reason).toBe('step budget spent: 1000 of 1000 steps; walls.top.shearStress at ±5.00 %, target ±1.00 %');
+    expect(steps.reason).toBe(
+      'step budget spent: 1000 of 1000 steps; walls.top.shearStress at ±5.00 %, target ±1.00 %',
+    );
     const time = evaluateStop({ stepsDone: 10, maxSteps: 1000, elapsedSeconds: 60, maxSeconds: 60 });
     expect(time).toEqual({ stop: true, rule: 'maxSeconds', reason: 'time budget spent: 60.0 of 60 s' });
   });
 
   it('a target met at the same time as a budget is reported as the target', () => {
-    const d = evaluateStop({ stepsDone: 1000, maxSteps: 1000, elapsedSeconds: 0, target, estimate: { mean: 1, ci95: 0.001 } });
+    const d = evaluateStop({
+      stepsDone: 1000,
+      maxSteps: 1000,
+      elapsedSeconds: 0,
+      target,
+      estimate: { mean: 1, ci95: 0.001 },
+    });
     expect(d.rule).toBe('target');
   });
 
   it('never meets a target without an estimate, with a zero mean or with a non-finite interval', () => {
-    expect(evaluateStop({ stepsDone: 1, elapsedSeconds: 0, target }).reason).toBe('continuing: walls.top.shearStress has no estimate yet');
+    expect(evaluateStop({ stepsDone: 1, elapsedSeconds: 0, target }).reason).toBe(
+      'continuing: walls.top.shearStress has no estimate yet',
+    );
     const zero = evaluateStop({ stepsDone: 1, elapsedSeconds: 0, target, estimate: { mean: 0, ci95: 0 } });
     expect(zero.stop).toBe(false);
     expect(zero.reason).toContain('no finite relative half-width yet');
-    expect(evaluateStop({ stepsDone: 1, elapsedSeconds: 0, target, estimate: { mean: 1, ci95: Number.NaN } }).stop).toBe(false);
+    expect(
+      evaluateStop({ stepsDone: 1, elapsedSeconds: 0, target, estimate: { mean: 1, ci95: Number.NaN } }).stop,
+    ).toBe(false);
     expect(relativeHalfWidthOf({ mean: 0, ci95: 1 })).toBe(Infinity);
   });
 
   it('without any rule it continues and says so', () => {
-    expect(evaluateStop({ stepsDone: 1e9, elapsedSeconds: 1e9 })).toEqual({ stop: false, rule: null, reason: 'continuing: no stopping rule set' });
+    expect(evaluateStop({ stepsDone: 1e9, elapsedSeconds: 1e9 })).toEqual({
+      stop: false,
+      rule: null,
+      reason: 'continuing: no stopping rule set',
+    });
   });
 });
 
@@ -100,7 +142,12 @@ describe('estimateRemaining()', () => {
   });
 
   it('needs nothing more once the target is met', () => {
-    expect(estimateRemaining(0.005, 0.01, 1000, 50)).toEqual({ totalSamples: 1000, additionalSamples: 0, additionalFraction: 0, additionalSeconds: 0 });
+    expect(estimateRemaining(0.005, 0.01, 1000, 50)).toEqual({
+      totalSamples: 1000,
+      additionalSamples: 0,
+      additionalFraction: 0,
+      additionalSeconds: 0,
+    });
   });
 
   it('refuses non-positive or non-finite inputs, naming them', () => {

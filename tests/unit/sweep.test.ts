@@ -3,7 +3,15 @@ import { describe, expect, it } from 'vitest';
 import { parseCase, type Case, type CaseInput } from '../../engine/case/schema';
 import { plan, type Plan } from '../../engine/case/plan';
 import { buildPreset } from '../../engine/case/presets';
-import { caseAtSweepPoint, caseValueOf, scalePressures, sweepCsv, sweepJson, sweepValues, type SweepRow } from '../../engine/case/sweep';
+import {
+  caseAtSweepPoint,
+  caseValueOf,
+  scalePressures,
+  sweepCsv,
+  sweepJson,
+  sweepValues,
+  type SweepRow,
+} from '../../engine/case/sweep';
 import type { SummaryJson } from '../../engine/results/exports';
 
 function parsed(input: unknown): Case {
@@ -35,7 +43,13 @@ function vesselCase(geometry: 'planar' | 'axisymmetric'): Case {
       top: wall,
     },
     flowSections: [{ name: 'middle', xM: 1.5e-6 }],
-    flowReport: { duct: geometry === 'axisymmetric' ? 'tube' : 'channel', sizeM: 1e-6, lengthM: 3e-6, upstreamPressurePa: 19_000, downstreamPressurePa: 11_000 },
+    flowReport: {
+      duct: geometry === 'axisymmetric' ? 'tube' : 'channel',
+      sizeM: 1e-6,
+      lengthM: 3e-6,
+      upstreamPressurePa: 19_000,
+      downstreamPressurePa: 11_000,
+    },
     numerics: { cellsX: 9, cellsY: 3, particlesPerCell: 20 },
   };
   return parsed(input);
@@ -66,7 +80,11 @@ describe('scalePressures()', () => {
     const c = vesselCase('planar');
     const before = pressuresOf(c);
     expect([...before.keys()].sort()).toEqual([
-      'boundaries.left.pressurePa', 'boundaries.right.pressurePa', 'flowReport.downstreamPressurePa', 'flowReport.upstreamPressurePa', 'initial.pressurePa',
+      'boundaries.left.pressurePa',
+      'boundaries.right.pressurePa',
+      'flowReport.downstreamPressurePa',
+      'flowReport.upstreamPressurePa',
+      'initial.pressurePa',
     ]);
     const scaled = scalePressures(c, 0.37);
     for (const [path, p] of pressuresOf(scaled)) expect(p, path).toBeCloseTo(0.37 * before.get(path)!, 9);
@@ -76,7 +94,11 @@ describe('scalePressures()', () => {
 
   it('leaves a vacuum reservoir at 0 and flowReport pressures unset when they are unset', () => {
     const c = vesselCase('planar');
-    const open = parsed({ ...c, boundaries: { ...c.boundaries, right: { type: 'reservoir', pressurePa: 0, temperatureK: 300 } }, flowReport: { duct: 'slit', sizeM: 1e-6 } });
+    const open = parsed({
+      ...c,
+      boundaries: { ...c.boundaries, right: { type: 'reservoir', pressurePa: 0, temperatureK: 300 } },
+      flowReport: { duct: 'slit', sizeM: 1e-6 },
+    });
     const scaled = scalePressures(open, 4);
     expect(scaled.boundaries.right).toMatchObject({ type: 'reservoir', pressurePa: 0 });
     expect(scaled.flowReport).toEqual({ duct: 'slit', sizeM: 1e-6 });
@@ -158,37 +180,73 @@ describe('sweepValues()', () => {
 describe('sweepCsv()', () => {
   /** A summary holding just what the table reads. */
   const summary = (kn: number, extra: Partial<SummaryJson>): SummaryJson =>
-    ({ reference: { knudsen: kn, rarefaction: Math.sqrt(Math.PI) / (2 * kn), pressure: 10 / kn }, walls: {}, ...extra }) as unknown as SummaryJson;
+    ({
+      reference: { knudsen: kn, rarefaction: Math.sqrt(Math.PI) / (2 * kn), pressure: 10 / kn },
+      walls: {},
+      ...extra,
+    }) as unknown as SummaryJson;
 
   it('flow cases: swept value, reference state and every flow quantity with its half-width, units per metre when planar', () => {
-    const flow = { massFlowRate: { mean: 2e-9, ci95: 1e-10 }, throughput: { mean: 3, ci95: null }, conductance: undefined };
+    const flow = {
+      massFlowRate: { mean: 2e-9, ci95: 1e-10 },
+      throughput: { mean: 3, ci95: null },
+      conductance: undefined,
+    };
     const rows: SweepRow[] = [
       { point: 1, value: 0.1, status: 'complete', summary: summary(0.1, { flow: flow as never }) },
       { point: 2, value: 1, status: 'interrupted', summary: null },
     ];
-    const [header, first, second] = sweepCsv(rows, { parameter: 'knudsen', planar: true, hasFlow: true }).trimEnd().split('\n');
+    const [header, first, second] = sweepCsv(rows, { parameter: 'knudsen', planar: true, hasFlow: true })
+      .trimEnd()
+      .split('\n');
     expect(header.split(',').slice(0, 8)).toEqual([
-      'point [1]', 'knudsen [1]', 'status', 'reference knudsen [1]', 'reference rarefaction [1]', 'reference pressure [Pa]',
-      'massFlowRate [kg/(s m)]', 'massFlowRate ci95 [kg/(s m)]',
+      'point [1]',
+      'knudsen [1]',
+      'status',
+      'reference knudsen [1]',
+      'reference rarefaction [1]',
+      'reference pressure [Pa]',
+      'massFlowRate [kg/(s m)]',
+      'massFlowRate ci95 [kg/(s m)]',
     ]);
     expect(header).toContain('reducedFlowRate ci95 [1]');
     expect(header.split(',')).toHaveLength(6 + 2 * 6);
     const cells = first.split(',');
-    expect(cells.slice(0, 8)).toEqual(['1', '0.1', 'complete', '0.1', String(Math.sqrt(Math.PI) / 0.2), '100', '2e-9', '1e-10']);
+    expect(cells.slice(0, 8)).toEqual([
+      '1',
+      '0.1',
+      'complete',
+      '0.1',
+      String(Math.sqrt(Math.PI) / 0.2),
+      '100',
+      '2e-9',
+      '1e-10',
+    ]);
     expect(cells.slice(8, 12)).toEqual(['3', '', '', '']); // throughput without a half-width; molarFlow not there
     expect(second).toBe(`2,1,interrupted${','.repeat(3 + 12)}`);
     const axi = sweepCsv(rows, { parameter: 'pressure', planar: false, hasFlow: true }).split('\n')[0];
-    expect(axi).toMatch(/^point \[1\],pressure \[Pa\],status,.*massFlowRate \[kg\/s\].*throughput \[Pa m\^3\/s\].*molarFlow \[sccm\]/);
+    expect(axi).toMatch(
+      /^point \[1\],pressure \[Pa\],status,.*massFlowRate \[kg\/s\].*throughput \[Pa m\^3\/s\].*molarFlow \[sccm\]/,
+    );
   });
 
-  it('cases without flow sections: every wall\'s shear stress and heat flux with half-widths', () => {
+  it("cases without flow sections: every wall's shear stress and heat flux with half-widths", () => {
     const e = (mean: number) => ({ mean, ci95: mean / 10 });
     const walls = { bottom: { shearStress: e(-2), heatFlux: e(5) }, top: { shearStress: e(2), heatFlux: e(-5) } };
-    const csv = sweepCsv([{ point: 1, value: 0.5, status: 'complete', summary: summary(0.5, { walls: walls as never }) }], { parameter: 'knudsen', planar: true, hasFlow: false });
+    const csv = sweepCsv(
+      [{ point: 1, value: 0.5, status: 'complete', summary: summary(0.5, { walls: walls as never }) }],
+      { parameter: 'knudsen', planar: true, hasFlow: false },
+    );
     const [header, row] = csv.trimEnd().split('\n');
     expect(header.split(',').slice(6)).toEqual([
-      'bottom shearStress [Pa]', 'bottom shearStress ci95 [Pa]', 'bottom heatFlux [W/m^2]', 'bottom heatFlux ci95 [W/m^2]',
-      'top shearStress [Pa]', 'top shearStress ci95 [Pa]', 'top heatFlux [W/m^2]', 'top heatFlux ci95 [W/m^2]',
+      'bottom shearStress [Pa]',
+      'bottom shearStress ci95 [Pa]',
+      'bottom heatFlux [W/m^2]',
+      'bottom heatFlux ci95 [W/m^2]',
+      'top shearStress [Pa]',
+      'top shearStress ci95 [Pa]',
+      'top heatFlux [W/m^2]',
+      'top heatFlux ci95 [W/m^2]',
     ]);
     expect(row.split(',').slice(6)).toEqual(['-2', '-0.2', '5', '0.5', '2', '0.2', '-5', '-0.5']);
   });
@@ -198,8 +256,22 @@ describe('sweepCsv()', () => {
       { point: 1, value: 0.1, status: 'complete', summary: summary(0.1, {}) },
       { point: 2, value: 1, status: 'interrupted', summary: null },
     ];
-    const j = sweepJson(rows, { caseName: 'c', parameter: 'knudsen', from: 0.1, to: 10, points: 3, spacing: 'log', interrupted: true });
-    expect(j).toMatchObject({ format: 'tenuis-sweep', parameter: 'knudsen', unit: '1', pointsRequested: 3, interrupted: true });
+    const j = sweepJson(rows, {
+      caseName: 'c',
+      parameter: 'knudsen',
+      from: 0.1,
+      to: 10,
+      points: 3,
+      spacing: 'log',
+      interrupted: true,
+    });
+    expect(j).toMatchObject({
+      format: 'tenuis-sweep',
+      parameter: 'knudsen',
+      unit: '1',
+      pointsRequested: 3,
+      interrupted: true,
+    });
     expect(j.points.map((p) => p.folder)).toEqual(['points/001', null]);
   });
 });

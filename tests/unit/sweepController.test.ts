@@ -21,29 +21,54 @@ function fakePool(onStart: (run: FakeRun) => void = () => undefined) {
       let resolve!: (e: RunEnd) => void;
       const done = new Promise<RunEnd>((r) => (resolve = r));
       const run: FakeRun = {
-        request, callbacks, cancelled: false,
+        request,
+        callbacks,
+        cancelled: false,
         finish(end) {
           if (typeof end === 'object') return resolve({ ok: false, message: end.fail });
           const name = (request.caseInput as { name: string }).name;
-          const finished = { result: { name } as never, comparison: { recognised: false, reason: 'fake' }, performance: { wallSeconds: 1, particleSteps: 1, particleStepsPerSecond: 1 }, cancelled: end === 'cancelled' } as unknown as FinishedRun;
+          const finished = {
+            result: { name } as never,
+            comparison: { recognised: false, reason: 'fake' },
+            performance: { wallSeconds: 1, particleSteps: 1, particleStepsPerSecond: 1 },
+            cancelled: end === 'cancelled',
+          } as unknown as FinishedRun;
           resolve({ ok: true, run: finished });
         },
       };
       runs.push(run);
       onStart(run);
-      return { done, pause() {}, resume() {}, cancel() { run.cancelled = true; } };
+      return {
+        done,
+        pause() {},
+        resume() {},
+        cancel() {
+          run.cancelled = true;
+        },
+      };
     },
     // The row as the engine makes it, with the result's case name standing in for the summary.
     rowOf(point, value, run): SweepRow {
       rowRuns.push(run);
-      if (run.kind !== 'sampled') return { point, value, status: run.kind === 'failed' ? 'failed' : 'interrupted', summary: null };
-      return { point, value, status: run.interrupted ? 'interrupted' : 'complete', summary: { caseName: (run.result as unknown as { name: string }).name } as never };
+      if (run.kind !== 'sampled')
+        return { point, value, status: run.kind === 'failed' ? 'failed' : 'interrupted', summary: null };
+      return {
+        point,
+        value,
+        status: run.interrupted ? 'interrupted' : 'complete',
+        summary: { caseName: (run.result as unknown as { name: string }).name } as never,
+      };
     },
   };
   return { runs, rowRuns, deps };
 }
 
-const points: SweepPointInput[] = [1, 2, 3].map((k) => ({ point: k, value: 0.1 * 10 ** (k - 1), caseInput: { name: `case ${k}` }, caseName: `case ${k}` }));
+const points: SweepPointInput[] = [1, 2, 3].map((k) => ({
+  point: k,
+  value: 0.1 * 10 ** (k - 1),
+  caseInput: { name: `case ${k}` },
+  caseName: `case ${k}`,
+}));
 const tick = () => new Promise((r) => setTimeout(r, 0));
 
 function recorder() {
@@ -65,16 +90,33 @@ function recorder() {
 }
 
 describe('runSweepPoints()', () => {
-  it('runs the points one after the other, each with its own case and the sweep\'s replicas, and makes each row with rowOf', async () => {
+  it("runs the points one after the other, each with its own case and the sweep's replicas, and makes each row with rowOf", async () => {
     const pool = fakePool((run) => setTimeout(() => run.finish('ok'), 0));
     const rec = recorder();
     const h = runSweepPoints(points, { replicas: 3, liveEveryMs: 5000 }, pool.deps, rec.listener);
     const end = await h.done;
-    expect(pool.runs.map((r) => [(r.request.caseInput as { name: string }).name, r.request.replicas])).toEqual([['case 1', 3], ['case 2', 3], ['case 3', 3]]);
-    expect(rec.events).toEqual(['start 1/3', 'row 1 complete', 'start 2/3', 'row 2 complete', 'start 3/3', 'row 3 complete']);
+    expect(pool.runs.map((r) => [(r.request.caseInput as { name: string }).name, r.request.replicas])).toEqual([
+      ['case 1', 3],
+      ['case 2', 3],
+      ['case 3', 3],
+    ]);
+    expect(rec.events).toEqual([
+      'start 1/3',
+      'row 1 complete',
+      'start 2/3',
+      'row 2 complete',
+      'start 3/3',
+      'row 3 complete',
+    ]);
     expect(end.stopped).toBe(false);
-    expect(end.rows.map((r) => [r.point, r.value, r.summary?.caseName])).toEqual([[1, 0.1, 'case 1'], [2, 1, 'case 2'], [3, 10, 'case 3']]);
-    expect(pool.rowRuns.every((r) => r.kind === 'sampled' && !r.interrupted && r.caseName.startsWith('case '))).toBe(true);
+    expect(end.rows.map((r) => [r.point, r.value, r.summary?.caseName])).toEqual([
+      [1, 0.1, 'case 1'],
+      [2, 1, 'case 2'],
+      [3, 10, 'case 3'],
+    ]);
+    expect(pool.rowRuns.every((r) => r.kind === 'sampled' && !r.interrupted && r.caseName.startsWith('case '))).toBe(
+      true,
+    );
   });
 
   it('starts a point only when the one before has ended', async () => {
@@ -130,7 +172,10 @@ describe('runSweepPoints()', () => {
     const end = await h.done;
     expect(end.stopped).toBe(true);
     expect(pool.runs).toHaveLength(2);
-    expect(end.rows.map((r) => [r.point, r.status, r.summary?.caseName])).toEqual([[1, 'complete', 'case 1'], [2, 'interrupted', 'case 2']]);
+    expect(end.rows.map((r) => [r.point, r.status, r.summary?.caseName])).toEqual([
+      [1, 'complete', 'case 1'],
+      [2, 'interrupted', 'case 2'],
+    ]);
     expect(rec.events).toEqual(['start 1/3', 'row 1 complete', 'start 2/3', 'progress', 'row 2 interrupted']);
   });
 

@@ -17,7 +17,17 @@ function parsed(input: unknown): Case {
 }
 
 /** A tiny Couette case: 10 rows of 20 particles, 100 + 200 steps, seed 3. */
-const couette = () => parsed(buildPreset('couette', { knudsen: '1', cellsY: '10', particlesPerCell: '20', transientSteps: '100', sampleSteps: '200', seed: '3' }));
+const couette = () =>
+  parsed(
+    buildPreset('couette', {
+      knudsen: '1',
+      cellsY: '10',
+      particlesPerCell: '20',
+      transientSteps: '100',
+      sampleSteps: '200',
+      seed: '3',
+    }),
+  );
 const performance = { wallSeconds: 0.5, particleSteps: 6e4, particleStepsPerSecond: 1.2e5 };
 
 describe('planSweepPoints()', () => {
@@ -28,7 +38,7 @@ describe('planSweepPoints()', () => {
     r.points.forEach((p, k) => expect(p.plan.reference.knudsen / [0.5, 1, 2][k] - 1).toBeCloseTo(0, 12));
   });
 
-  it('names the first point that cannot be planned, with the planner\'s errors', () => {
+  it("names the first point that cannot be planned, with the planner's errors", () => {
     const c = couette();
     const open = { ...c, numerics: { ...c.numerics, cellsY: undefined, maxParticles: 1000 } };
     const r = planSweepPoints(open, 'knudsen', [1, 0.01, 0.001]);
@@ -48,33 +58,57 @@ describe('sweepRowOf()', () => {
     runToCompletion(sim);
     const result = summarize(sim);
     const comparison = continuumComparisonOf(p.plan, result);
-    const row = sweepRowOf(1, 2, { kind: 'sampled', result, comparison, performance, caseName: p.caseData.name, interrupted: false });
-    const written = JSON.parse(resultFiles(result, { performance, caseName: p.caseData.name, plan: p.plan })['summary.json']) as SummaryJson;
+    const row = sweepRowOf(1, 2, {
+      kind: 'sampled',
+      result,
+      comparison,
+      performance,
+      caseName: p.caseData.name,
+      interrupted: false,
+    });
+    const written = JSON.parse(
+      resultFiles(result, { performance, caseName: p.caseData.name, plan: p.plan })['summary.json'],
+    ) as SummaryJson;
     expect(row).toEqual({ point: 1, value: 2, status: 'complete', summary: written });
     expect(Object.keys(written.continuum ?? {})).toContain('firstOrder');
 
-    const [header, line] = sweepCsv([row], { parameter: 'knudsen', planar: true, hasFlow: false }).trimEnd().split('\n').map((l) => l.split(','));
+    const [header, line] = sweepCsv([row], { parameter: 'knudsen', planar: true, hasFlow: false })
+      .trimEnd()
+      .split('\n')
+      .map((l) => l.split(','));
     const at = (h: string) => line[header.indexOf(h)];
     expect(at('top shearStress [Pa]')).toBe(String(written.walls.top!.shearStress.mean));
     expect(at('top shearStress ci95 [Pa]')).toBe(String(written.walls.top!.shearStress.ci95));
     expect(at('top shearStress firstOrder [Pa]')).toBe(String(written.continuum!.firstOrder['walls.top.shearStress']));
     expect(Number(at('top shearStress [Pa]'))).not.toBe(0);
 
-    const stopped = sweepRowOf(1, 2, { kind: 'sampled', result, comparison, performance, caseName: p.caseData.name, interrupted: true });
+    const stopped = sweepRowOf(1, 2, {
+      kind: 'sampled',
+      result,
+      comparison,
+      performance,
+      caseName: p.caseData.name,
+      interrupted: true,
+    });
     expect(stopped.status).toBe('interrupted');
     expect(stopped.summary).toEqual(written);
   });
 
   it('a failed point and one stopped before sampling have no summary; sweep.csv leaves their numbers empty', () => {
     expect(sweepRowOf(2, 1, { kind: 'failed' })).toEqual({ point: 2, value: 1, status: 'failed', summary: null });
-    expect(sweepRowOf(3, 4, { kind: 'nothingSampled' })).toEqual({ point: 3, value: 4, status: 'interrupted', summary: null });
+    expect(sweepRowOf(3, 4, { kind: 'nothingSampled' })).toEqual({
+      point: 3,
+      value: 4,
+      status: 'interrupted',
+      summary: null,
+    });
     const csv = sweepCsv([sweepRowOf(2, 1, { kind: 'failed' })], { parameter: 'knudsen', planar: true, hasFlow: true });
     expect(csv.trimEnd().split('\n')[1]).toBe(`2,1,failed${','.repeat(3 + 12)}`);
   });
 });
 
 describe('sweepContinuumCurves()', () => {
-  it('on a fixed grid, gives at each value the predictions each point\'s own plan gives (the sweep.csv model columns)', () => {
+  it("on a fixed grid, gives at each value the predictions each point's own plan gives (the sweep.csv model columns)", () => {
     const c = couette();
     const values = sweepValues(0.1, 10, 5, 'log');
     const curves = sweepContinuumCurves(c, 'knudsen', values, { cellsX: 1, cellsY: 4 });
@@ -107,4 +141,3 @@ describe('sweepContinuumCurves()', () => {
     expect('reason' in curves && curves.reason).toMatch(/specular|slip/);
   });
 });
-

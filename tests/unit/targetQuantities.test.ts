@@ -10,14 +10,14 @@ import { targetRequestOf } from '../../app/run/targetSetting';
 import type { SimulationResult } from '../../engine/results/summarize';
 
 describe('target paths of a plan', () => {
-  it('a Couette gap offers each wall\'s quantities and no flow numbers', () => {
+  it("a Couette gap offers each wall's quantities and no flow numbers", () => {
     const paths = targetPathsOf(planOrThrow(buildPreset('couette', {})));
     expect(paths).toContain('walls.top.shearStress');
     expect(paths).toContain('walls.bottom.heatFlux');
     expect(paths.some((p) => p.startsWith('flow.'))).toBe(false);
   });
 
-  it('a channel between vessels offers the flow numbers and each section\'s mass flow rate', () => {
+  it("a channel between vessels offers the flow numbers and each section's mass flow rate", () => {
     const paths = targetPathsOf(planOrThrow(buildPreset('channel', {})));
     expect(paths).toContain('flow.massFlowRate');
     expect(paths).toContain('flow.conductance');
@@ -44,17 +44,26 @@ describe('estimateAt', () => {
   });
 });
 
-describe('the run panel\'s target setting', () => {
+describe("the run panel's target setting", () => {
   const known = ['walls.top.shearStress', 'flow.massFlowRate'];
 
   it('no quantity, or one this case does not have, means no target', () => {
-    expect(targetRequestOf({ path: '', goalPercent: 'x', stopWhenReached: true }, known)).toEqual({ ok: true, request: undefined });
-    expect(targetRequestOf({ path: 'walls.left.heatFlux', goalPercent: '2', stopWhenReached: false }, known)).toEqual({ ok: true, request: undefined });
+    expect(targetRequestOf({ path: '', goalPercent: 'x', stopWhenReached: true }, known)).toEqual({
+      ok: true,
+      request: undefined,
+    });
+    expect(targetRequestOf({ path: 'walls.left.heatFlux', goalPercent: '2', stopWhenReached: false }, known)).toEqual({
+      ok: true,
+      request: undefined,
+    });
   });
 
   it('a goal in percent becomes a relative half-width', () => {
-    expect(targetRequestOf({ path: 'flow.massFlowRate', goalPercent: ' 2.5 % ', stopWhenReached: true }, known)).toEqual({
-      ok: true, request: { path: 'flow.massFlowRate', relativeHalfWidth: 0.025, stopWhenReached: true },
+    expect(
+      targetRequestOf({ path: 'flow.massFlowRate', goalPercent: ' 2.5 % ', stopWhenReached: true }, known),
+    ).toEqual({
+      ok: true,
+      request: { path: 'flow.massFlowRate', relativeHalfWidth: 0.025, stopWhenReached: true },
     });
   });
 

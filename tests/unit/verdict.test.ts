@@ -27,10 +27,20 @@ describe('integralVerdict()', () => {
   it('names the simplest adequate model and how far off the simpler ones are', () => {
     const v = integralVerdict('q', 'Pa', dsmc, { noSlip: 111, firstOrder: 101.2, secondOrder: 100.1 });
     expect(v.bestModel).toBe('firstOrder');
-    expect(v.text).toBe('first-order slip adequate, no-slip not (no-slip off by 11 %; first-order slip 1.2 %, DSMC ±1.1 %)');
+    expect(v.text).toBe(
+      'first-order slip adequate, no-slip not (no-slip off by 11 %; first-order slip 1.2 %, DSMC ±1.1 %)',
+    );
     const w = integralVerdict('q', 'Pa', dsmc, { noSlip: 140, firstOrder: 92, secondOrder: 100.5 });
-    expect(w.text).toBe('second-order slip adequate, first-order slip and no-slip not (first-order slip off by 8.0 %; no-slip off by 40 %; second-order slip 0.5 %, DSMC ±1.1 %)');
-    const u = integralVerdict('q', '1', dsmc, { noSlip: 60, firstOrder: 85, secondOrder: 90, unified: 99, freeMolecular: 130 });
+    expect(w.text).toBe(
+      'second-order slip adequate, first-order slip and no-slip not (first-order slip off by 8.0 %; no-slip off by 40 %; second-order slip 0.5 %, DSMC ±1.1 %)',
+    );
+    const u = integralVerdict('q', '1', dsmc, {
+      noSlip: 60,
+      firstOrder: 85,
+      secondOrder: 90,
+      unified: 99,
+      freeMolecular: 130,
+    });
     expect(u.bestModel).toBe('unified');
     const f = integralVerdict('q', '1', dsmc, { noSlip: 400, firstOrder: 150, freeMolecular: 99.5 });
     expect(f.text).toMatch(/^free-molecular limit adequate, first-order slip and no-slip not/);
@@ -42,14 +52,18 @@ describe('integralVerdict()', () => {
     expect(v.category).toBe('kinetic');
     expect(v.bestModel).toBe('secondOrder');
     expect(v.deviation).toBeCloseTo(-0.11, 12);
-    expect(v.text).toBe('continuum models off by more than 10 %: kinetic effects dominate (closest: second-order slip off by 11 %; DSMC ±1.1 %)');
+    expect(v.text).toBe(
+      'continuum models off by more than 10 %: kinetic effects dominate (closest: second-order slip off by 11 %; DSMC ±1.1 %)',
+    );
   });
 
   it('says no model is within tolerance when the closest is off by more than the threshold but not by 10 %', () => {
     const v = integralVerdict('q', 'Pa', dsmc, { noSlip: 130, firstOrder: 106, secondOrder: 96.6 });
     expect(v.category).toBe('noneAdequate');
     expect(v.bestModel).toBe('secondOrder');
-    expect(v.text).toBe('no model within tolerance: closest is second-order slip off by 3.4 % (tolerance 2.0 %, DSMC ±1.1 %)');
+    expect(v.text).toBe(
+      'no model within tolerance: closest is second-order slip off by 3.4 % (tolerance 2.0 %, DSMC ±1.1 %)',
+    );
   });
 
   it('uses the DSMC half-width as the threshold when it is larger than the tolerance, and a user tolerance when given', () => {
@@ -99,9 +113,14 @@ describe('profileVerdict()', () => {
   });
 
   it('finds a model adequate that differs from DSMC by noise only, and one 10 % too steep (2.9 % RMS of the scale) not', () => {
-    const v = profileVerdict('profile.velocityX', 'm/s', mean, ci95, 100, { noSlip: truth.map((t) => t * 1.1), firstOrder: truth });
+    const v = profileVerdict('profile.velocityX', 'm/s', mean, ci95, 100, {
+      noSlip: truth.map((t) => t * 1.1),
+      firstOrder: truth,
+    });
     expect(v.bestModel).toBe('firstOrder');
-    expect(v.text).toMatch(/^first-order slip adequate, no-slip not \(no-slip off by 2\.9 % RMS, max 5\.\d %; first-order slip 0\.\d % RMS, DSMC ±1\.0 % RMS\)$/);
+    expect(v.text).toMatch(
+      /^first-order slip adequate, no-slip not \(no-slip off by 2\.9 % RMS, max 5\.\d %; first-order slip 0\.\d % RMS, DSMC ±1\.0 % RMS\)$/,
+    );
   });
 
   it('leaves out points where DSMC or any model has no value, and gives no verdict with fewer than two', () => {
@@ -116,8 +135,14 @@ describe('profileVerdict()', () => {
   });
 
   it('calls a profile kinetic when every continuum model is off by more than 10 % of its scale', () => {
-    const v = profileVerdict('profile.temperature', 'K', mean, ci95, 100, { noSlip: truth.map((t) => t + 30), firstOrder: truth.map((t) => t - 15), freeMolecular: truth.map(() => 0) });
+    const v = profileVerdict('profile.temperature', 'K', mean, ci95, 100, {
+      noSlip: truth.map((t) => t + 30),
+      firstOrder: truth.map((t) => t - 15),
+      freeMolecular: truth.map(() => 0),
+    });
     expect(v.category).toBe('kinetic');
-    expect(v.text).toMatch(/^continuum models off by more than 10 %: kinetic effects dominate \(closest: first-order slip off by 15 % RMS, max 1\d %; DSMC ±1\.0 % RMS\)$/);
+    expect(v.text).toMatch(
+      /^continuum models off by more than 10 %: kinetic effects dominate \(closest: first-order slip off by 15 % RMS, max 1\d %; DSMC ±1\.0 % RMS\)$/,
+    );
   });
 });

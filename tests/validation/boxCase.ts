@@ -23,7 +23,12 @@ export function boxCase(o: BoxOptions): Case {
     gas: { species: o.species, model: o.model, rotationalCollisionNumber: o.rotationalCollisionNumber ?? 5 },
     initial: { pressurePa: o.pressurePa ?? 20, temperatureK: o.temperatureK ?? 273 },
     domain: { lengthXM: side, lengthYM: side },
-    boundaries: { left: { type: 'periodic' }, right: { type: 'periodic' }, bottom: { type: 'periodic' }, top: { type: 'periodic' } },
+    boundaries: {
+      left: { type: 'periodic' },
+      right: { type: 'periodic' },
+      bottom: { type: 'periodic' },
+      top: { type: 'periodic' },
+    },
     numerics: { cellsX: o.cellsPerSide, cellsY: o.cellsPerSide, particlesPerCell: o.particlesPerCell },
     sampling: { transientSteps: 0, sampleSteps: 1 },
     seed: o.seed ?? 7,

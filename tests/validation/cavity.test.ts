@@ -124,7 +124,8 @@ describe('solveCavity() with first-order Maxwell slip', () => {
       const r = cavity(33, { knudsen });
       expect(r.converged).toBe(true);
       let d = 0;
-      for (let k = 0; k < r.u.length; k++) d = Math.max(d, Math.abs(r.u[k] - noSlip.u[k]), Math.abs(r.v[k] - noSlip.v[k]));
+      for (let k = 0; k < r.u.length; k++)
+        d = Math.max(d, Math.abs(r.u[k] - noSlip.u[k]), Math.abs(r.v[k] - noSlip.v[k]));
       return d;
     };
     expect(maxDifference(1e-8)).toBeLessThan(1e-5);
@@ -135,7 +136,8 @@ describe('solveCavity() with first-order Maxwell slip', () => {
   });
 
   it('slip weakens the vortex: |uMin| falls as Kn grows and as the accommodation falls, and the gas lags the lid', () => {
-    const uMin = (knudsen: number, accommodation?: number) => cavity(33, { knudsen, accommodation }).centerline.uMin.value;
+    const uMin = (knudsen: number, accommodation?: number) =>
+      cavity(33, { knudsen, accommodation }).centerline.uMin.value;
     const noSlip = cavity(33).centerline.uMin.value;
     expect(noSlip).toBeLessThan(0);
     expect(Math.abs(uMin(0.01))).toBeLessThan(Math.abs(noSlip));

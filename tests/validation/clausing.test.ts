@@ -24,14 +24,24 @@ const V_MP = Math.sqrt((2 * 1.380649e-23 * 300) / 66.3e-27);
 
 function freeMolecularDuct(kind: 'tube' | 'channel', lengthToSize: number): CaseInput {
   const common = {
-    knudsen: '1000', temperature: '300K', cellsY: '4', particlesPerCell: '60', seed: '5',
+    knudsen: '1000',
+    temperature: '300K',
+    cellsY: '4',
+    particlesPerCell: '60',
+    seed: '5',
     // Long ducts fill slowly (diffusion along the duct: time ∝ (L/R)²) and have fewer molecules coming through.
     transientSteps: String(Math.round(40 + 8 * lengthToSize ** 2)),
     sampleSteps: lengthToSize >= 10 ? '16000' : '8000',
   };
-  const c = kind === 'tube'
-    ? buildPreset('tube', { ...common, radius: '1mm', lengthToRadius: String(lengthToSize), vesselLengthToRadius: '0' })
-    : buildPreset('channel', { ...common, gap: '1mm', lengthToGap: String(lengthToSize), vesselLengthToGap: '0' });
+  const c =
+    kind === 'tube'
+      ? buildPreset('tube', {
+          ...common,
+          radius: '1mm',
+          lengthToRadius: String(lengthToSize),
+          vesselLengthToRadius: '0',
+        })
+      : buildPreset('channel', { ...common, gap: '1mm', lengthToGap: String(lengthToSize), vesselLengthToGap: '0' });
   // Downstream vacuum; the free-molecular transmission probability does not depend on the pressures.
   const right = c.boundaries.right;
   if (right.type !== 'reservoir') throw new Error('the duct presets end in reservoirs');
@@ -44,7 +54,10 @@ function freeMolecularDuct(kind: 'tube' | 'channel', lengthToSize: number): Case
 }
 
 describe('free-molecular transmission probability against Clausing factors', () => {
-  for (const [kind, table, name] of [['tube', CLAUSING_TUBE, 'round tube, L/R'], ['channel', CLAUSING_SLIT, 'planar slit, L/h']] as const) {
+  for (const [kind, table, name] of [
+    ['tube', CLAUSING_TUBE, 'round tube, L/R'],
+    ['channel', CLAUSING_SLIT, 'planar slit, L/h'],
+  ] as const) {
     for (const ratio of [1, 2, 10]) {
       it(`${name} = ${ratio}: W within 1.5 % of ${table[ratio]} and within its 95 % half-width`, () => {
         const sim = runToEnd(freeMolecularDuct(kind, ratio));

@@ -49,7 +49,9 @@ describe('Couette flow: shear stress against linearized kinetic theory', () => {
     for (const w of [bottom, { mean: -top.mean, ci95: top.ci95 }]) {
       expect(Math.abs(toPi(w.mean) - PI_BGK[0.01])).toBeLessThan(toPi(w.ci95) + MODEL_DIFFERENCE * PI_BGK[0.01]);
       // Free-molecular limit 1/√π (published): at δ = 0.01 the BGK value is 0.9 % below it.
-      expect(Math.abs(toPi(w.mean) - 1 / Math.sqrt(Math.PI))).toBeLessThan(toPi(w.ci95) + 0.01 / Math.sqrt(Math.PI) + MODEL_DIFFERENCE * PI_BGK[0.01]);
+      expect(Math.abs(toPi(w.mean) - 1 / Math.sqrt(Math.PI))).toBeLessThan(
+        toPi(w.ci95) + 0.01 / Math.sqrt(Math.PI) + MODEL_DIFFERENCE * PI_BGK[0.01],
+      );
     }
     expect(toPi(bottom.ci95) / PI_BGK[0.01]).toBeLessThan(0.02);
   });

@@ -17,12 +17,22 @@ describe('confidence intervals of cell fields', () => {
     // Remove the initial random drift so the true velocity is exactly zero; the box conserves momentum and energy,
     // so the true temperature is the kinetic temperature of the whole box.
     const n = st.count;
-    let mx = 0, my = 0, mz = 0;
-    for (let i = 0; i < n; i++) { mx += st.vx[i]; my += st.vy[i]; mz += st.vz[i]; }
-    mx /= n; my /= n; mz /= n;
+    let mx = 0,
+      my = 0,
+      mz = 0;
+    for (let i = 0; i < n; i++) {
+      mx += st.vx[i];
+      my += st.vy[i];
+      mz += st.vz[i];
+    }
+    mx /= n;
+    my /= n;
+    mz /= n;
     let c2 = 0;
     for (let i = 0; i < n; i++) {
-      st.vx[i] -= mx; st.vy[i] -= my; st.vz[i] -= mz;
+      st.vx[i] -= mx;
+      st.vy[i] -= my;
+      st.vz[i] -= mz;
       c2 += st.vx[i] ** 2 + st.vy[i] ** 2 + st.vz[i] ** 2;
     }
     const trueT = (st.massKg * c2) / (3 * n * K_B);
@@ -31,7 +41,13 @@ describe('confidence intervals of cell fields', () => {
     expect(plan.ratios.timeStepOverCollisionTime).toBeLessThan(0.25);
     advance(sim, 6000);
     const r = summarize(sim);
-    const truth: Record<string, number> = { numberDensity: trueN, velocityX: 0, velocityY: 0, velocityZ: 0, translationalTemperature: trueT };
+    const truth: Record<string, number> = {
+      numberDensity: trueN,
+      velocityX: 0,
+      velocityY: 0,
+      velocityZ: 0,
+      translationalTemperature: trueT,
+    };
     const f = r.cells.names.length;
     // 400 cells: a binomial fraction with p = 0.95 has a standard deviation of 0.011, so [0.92, 0.98] is about ±3σ
     // (the range; cells of one closed box are very nearly independent).

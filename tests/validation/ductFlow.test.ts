@@ -25,19 +25,46 @@ function expectSameFlow(sections: Readonly<Record<string, IntegralEstimate>>): v
 
 describe('pressure-driven ducts', () => {
   it('planar channel between vessels: the same mass flow through inlet, middle and outlet; no leaks', () => {
-    const sim = runToEnd(buildPreset('channel', { knudsen: '1', lengthToGap: '3', gap: '1um', particlesPerCell: '15', sampleSteps: '3000', seed: '7' }));
+    const sim = runToEnd(
+      buildPreset('channel', {
+        knudsen: '1',
+        lengthToGap: '3',
+        gap: '1um',
+        particlesPerCell: '15',
+        sampleSteps: '3000',
+        seed: '7',
+      }),
+    );
     expectSameFlow(summarize(sim).flow!.sections);
     expect(sim.state.leaks).toBe(0);
   });
 
   it('round tube between vessels (axisymmetric): the same mass flow through every section', () => {
-    const sim = runToEnd(buildPreset('tube', { knudsen: '1', lengthToRadius: '3', radius: '1mm', particlesPerCell: '20', sampleSteps: '8000', seed: '7' }));
+    const sim = runToEnd(
+      buildPreset('tube', {
+        knudsen: '1',
+        lengthToRadius: '3',
+        radius: '1mm',
+        particlesPerCell: '20',
+        sampleSteps: '8000',
+        seed: '7',
+      }),
+    );
     expectSameFlow(summarize(sim).flow!.sections);
     expect(sim.state.leaks).toBe(0);
   });
 
   it('a pressure outlet holds the pressure of the last cells at its value, where a reservoir end leaves a jump', () => {
-    const c = buildPreset('channel', { knudsen: '0.5', lengthToGap: '4', vesselLengthToGap: '0', gap: '1um', cellsY: '10', particlesPerCell: '30', sampleSteps: '4000', seed: '2' });
+    const c = buildPreset('channel', {
+      knudsen: '0.5',
+      lengthToGap: '4',
+      vesselLengthToGap: '0',
+      gap: '1um',
+      cellsY: '10',
+      particlesPerCell: '30',
+      sampleSteps: '4000',
+      seed: '2',
+    });
     const right = c.boundaries.right;
     if (right.type !== 'reservoir') throw new Error('the channel preset ends in reservoirs');
     const target = right.pressurePa;

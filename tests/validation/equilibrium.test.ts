@@ -15,7 +15,10 @@ import type { SimState } from '../../engine/kernel/state';
 import { boxPlan, type BoxOptions } from './boxCase';
 
 function totals(st: SimState) {
-  let px = 0, py = 0, pz = 0, e = 0;
+  let px = 0,
+    py = 0,
+    pz = 0,
+    e = 0;
   for (let i = 0; i < st.count; i++) {
     px += st.vx[i];
     py += st.vy[i];
@@ -136,7 +139,15 @@ describe('Larsen–Borgnakke rotational relaxation of nitrogen', () => {
     // the last factor accounts for the second partner seeing a pool already changed by the first (derived in
     // DEVELOPERS.md). Energy is conserved: 3 T_tr + ζ T_rot is constant.
     const z = 5;
-    const plan = boxPlan({ species: 'N2', model: 'VHS', cellsPerSide: 20, particlesPerCell: 100, temperatureK: 400, rotationalCollisionNumber: z, seed: 5 });
+    const plan = boxPlan({
+      species: 'N2',
+      model: 'VHS',
+      cellsPerSide: 20,
+      particlesPerCell: 100,
+      temperatureK: 400,
+      rotationalCollisionNumber: z,
+      seed: 5,
+    });
     const sim = createSimulation(plan);
     const st = sim.state;
     st.erot.fill(0);
@@ -146,9 +157,15 @@ describe('Larsen–Borgnakke rotational relaxation of nitrogen', () => {
     const a = 2.5 - omega;
     const b = zeta / 2;
     const temps = () => {
-      let e = 0, c2 = 0, ux = 0, uy = 0, uz = 0;
+      let e = 0,
+        c2 = 0,
+        ux = 0,
+        uy = 0,
+        uz = 0;
       for (let i = 0; i < st.count; i++) {
-        ux += st.vx[i]; uy += st.vy[i]; uz += st.vz[i];
+        ux += st.vx[i];
+        uy += st.vy[i];
+        uz += st.vz[i];
         c2 += st.vx[i] ** 2 + st.vy[i] ** 2 + st.vz[i] ** 2;
         e += st.erot[i];
       }

@@ -32,7 +32,9 @@ function snapshotSums(st: SimState, into: Float64Array): void {
     const ix = Math.min(st.cellsX - 1, Math.floor(st.x[i] / dx));
     const iy = Math.min(st.cellsY - 1, Math.floor(st.y[i] / dy));
     const k = (ix + st.cellsX * iy) * SUMS;
-    const vx = st.vx[i], vy = st.vy[i], vz = st.vz[i];
+    const vx = st.vx[i],
+      vy = st.vy[i],
+      vz = st.vz[i];
     into[k] += 1;
     into[k + 1] += vx;
     into[k + 2] += vy;
@@ -64,14 +66,20 @@ interface Scatter {
  * over groups (each group of each cell is an independent estimate).
  */
 function scatterOf(snapshots: Float64Array[], cells: number, M: number, massKg: number): Scatter {
-  let densityVar = 0, velocityVar = 0, temperatureVar = 0;
+  let densityVar = 0,
+    velocityVar = 0,
+    temperatureVar = 0;
   const groups = Math.floor(snapshots.length / M);
   for (let g = 0; g < groups; g++) {
     const density: number[] = [];
     const velocity: number[][] = [[], [], []];
     const temperature: number[] = [];
     for (let c = 0; c < cells; c++) {
-      let n = 0, sx = 0, sy = 0, sz = 0, s2 = 0;
+      let n = 0,
+        sx = 0,
+        sy = 0,
+        sz = 0,
+        s2 = 0;
       for (let s = g * M; s < (g + 1) * M; s++) {
         const k = c * SUMS;
         const snap = snapshots[s];
@@ -128,9 +136,14 @@ describe('expected statistical error (Hadjiconstantinou et al. 2003) against a c
     }
     // Box totals (conserved): N = particles per cell, T = the box's kinetic temperature.
     const N = st.count / cells;
-    let c2 = 0, mx = 0, my = 0, mz = 0;
+    let c2 = 0,
+      mx = 0,
+      my = 0,
+      mz = 0;
     for (let i = 0; i < st.count; i++) {
-      mx += st.vx[i]; my += st.vy[i]; mz += st.vz[i];
+      mx += st.vx[i];
+      my += st.vy[i];
+      mz += st.vz[i];
       c2 += st.vx[i] ** 2 + st.vy[i] ** 2 + st.vz[i] ** 2;
     }
     const drift2 = (mx * mx + my * my + mz * mz) / st.count ** 2;

@@ -33,7 +33,8 @@ function fourier(delta: number, numerics: Record<string, string>) {
     ...numerics,
   });
   const ref = run.result.reference;
-  const toQ = (q: number) => (q * Math.sqrt(Math.PI) * T0) / (ref.pressurePa * ref.mostProbableSpeedMPerS * (HOT - COLD));
+  const toQ = (q: number) =>
+    (q * Math.sqrt(Math.PI) * T0) / (ref.pressurePa * ref.mostProbableSpeedMPerS * (HOT - COLD));
   return { run, ref, toQ };
 }
 

@@ -25,7 +25,12 @@ const N = P / (K_B * T);
 const VMP = Math.sqrt((2 * K_B * T) / MASS);
 
 function openBox(drift: number, axisymmetric: boolean, openCylinder: boolean): CaseInput {
-  const reservoir = { type: 'reservoir' as const, pressurePa: P, temperatureK: T, velocityMPerS: [drift, 0, 0] as [number, number, number] };
+  const reservoir = {
+    type: 'reservoir' as const,
+    pressurePa: P,
+    temperatureK: T,
+    velocityMPerS: [drift, 0, 0] as [number, number, number],
+  };
   return {
     schemaVersion: 1,
     name: 'open box',
@@ -44,7 +49,12 @@ function openBox(drift: number, axisymmetric: boolean, openCylinder: boolean): C
   };
 }
 
-function expectUniform(result: ReturnType<typeof summarize>, name: string, expected: number, relativeSlack: number): void {
+function expectUniform(
+  result: ReturnType<typeof summarize>,
+  name: string,
+  expected: number,
+  relativeSlack: number,
+): void {
   let outside = 0;
   for (let r = 0; r < result.profile.rows; r++) {
     const f = field(result.profile, name, r);
@@ -54,7 +64,10 @@ function expectUniform(result: ReturnType<typeof summarize>, name: string, expec
 }
 
 function expectDomainState(sim: ReturnType<typeof runToEnd>, drift: number): void {
-  const all = averageOverCells(sim, Array.from({ length: sim.state.cells }, (_, c) => c));
+  const all = averageOverCells(
+    sim,
+    Array.from({ length: sim.state.cells }, (_, c) => c),
+  );
   const n = field(all, 'numberDensity');
   const t = field(all, 'temperature');
   const u = field(all, 'velocityX');
@@ -74,7 +87,10 @@ describe('reservoir sides and axisymmetric domains keep an equilibrium gas in eq
 
   it('closed round tube: density and temperature uniform across the radius (radial weighting)', () => {
     const wall = { type: 'wall', temperatureK: T } as const;
-    const sim = runToEnd({ ...openBox(0, true, false), boundaries: { left: wall, right: wall, bottom: { type: 'axis' }, top: wall } });
+    const sim = runToEnd({
+      ...openBox(0, true, false),
+      boundaries: { left: wall, right: wall, bottom: { type: 'axis' }, top: wall },
+    });
     const result = summarize(sim);
     expectUniform(result, 'numberDensity', N, 0.003);
     expectUniform(result, 'temperature', T, 0.003);

@@ -32,8 +32,15 @@ function reducedFlowRate(delta: number, sampleSteps: number): { mean: number; ci
   // ṁ ≈ H² ρ a G_P / v0, so the mean speed ṁ/(ρH) = H a G_P / v0; aim it at 0.1 v0 with the BGK G_P.
   const acceleration = (0.1 * V0 * V0) / (GAP * BGK_G_P[delta]);
   const c = buildPreset('poiseuille', {
-    gas: 'Ar', model: 'HS', knudsen: String(knudsenOf(delta)), gap: '1um', temperature: '300K',
-    acceleration: String(acceleration), particlesPerCell: '100', sampleSteps: String(sampleSteps), seed: '3',
+    gas: 'Ar',
+    model: 'HS',
+    knudsen: String(knudsenOf(delta)),
+    gap: '1um',
+    temperature: '300K',
+    acceleration: String(acceleration),
+    particlesPerCell: '100',
+    sampleSteps: String(sampleSteps),
+    seed: '3',
   });
   const g = summarize(runToEnd(c)).flow!.values.reducedFlowRate!;
   return { mean: g.mean, ci95: g.ci95 };
@@ -59,7 +66,8 @@ describe('force-driven Poiseuille flow: reduced flow rate G_P across the Knudsen
 
   it('has the Knudsen minimum near δ = 1 and grows as δ → 0 (each step beyond the combined half-widths)', () => {
     const [g001, g01, g1, g10] = [0.01, 0.1, 1, 10].map((d) => results.get(d)!);
-    const apart = (a: { mean: number; ci95: number }, b: { mean: number; ci95: number }) => a.mean - b.mean - Math.hypot(a.ci95, b.ci95);
+    const apart = (a: { mean: number; ci95: number }, b: { mean: number; ci95: number }) =>
+      a.mean - b.mean - Math.hypot(a.ci95, b.ci95);
     expect(apart(g01, g1)).toBeGreaterThan(0);
     expect(apart(g10, g1)).toBeGreaterThan(0);
     expect(apart(g001, g01)).toBeGreaterThan(0);

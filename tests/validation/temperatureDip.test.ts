@@ -22,7 +22,11 @@ const GAP = 1e-6;
 
 /** Solves the 3 × 3 normal equations; returns the coefficients and their variances. */
 function fitEvenQuartic(eta: number[], t: number[], sd: number[]): { c: number[]; variance: number[] } {
-  const a = [[0, 0, 0], [0, 0, 0], [0, 0, 0]];
+  const a = [
+    [0, 0, 0],
+    [0, 0, 0],
+    [0, 0, 0],
+  ];
   const b = [0, 0, 0];
   eta.forEach((e, k) => {
     const basis = [1, e * e, e ** 4];
@@ -49,8 +53,15 @@ describe('force-driven Poiseuille flow at Kn = 0.1: the central temperature dip'
     const delta = Math.sqrt(Math.PI) / (2 * KNUDSEN);
     const acceleration = (0.6 * V0 * V0) / (GAP * (delta / 6 + 1.5));
     const c = buildPreset('poiseuille', {
-      gas: 'Ar', model: 'HS', knudsen: String(KNUDSEN), gap: '1um', temperature: '300K', acceleration: String(acceleration),
-      particlesPerCell: '100', sampleSteps: '250000', seed: '9',
+      gas: 'Ar',
+      model: 'HS',
+      knudsen: String(KNUDSEN),
+      gap: '1um',
+      temperature: '300K',
+      acceleration: String(acceleration),
+      particlesPerCell: '100',
+      sampleSteps: '250000',
+      seed: '9',
     });
     const result = summarize(runToEnd(c));
     const rows = result.profile.rows;

@@ -29,7 +29,12 @@ function forceDrivenTube(delta: number): CaseInput {
     gas: { species: 'Ar', model: 'HS' },
     initial: { pressurePa: pressureForKnudsenPa(modelFromSpecies('Ar', 'HS'), T, knudsen, R), temperatureK: T },
     domain: { lengthXM: R / 10, lengthYM: R, geometry: 'axisymmetric', characteristicLengthM: R },
-    boundaries: { left: { type: 'periodic' }, right: { type: 'periodic' }, bottom: { type: 'axis' }, top: { type: 'wall', temperatureK: T } },
+    boundaries: {
+      left: { type: 'periodic' },
+      right: { type: 'periodic' },
+      bottom: { type: 'axis' },
+      top: { type: 'wall', temperatureK: T },
+    },
     // Mean speed R a G_P / v0 = 0.1 v0 with the BGK value.
     bodyAccelerationXMPerS2: (0.1 * V0 * V0) / (R * BGK_TUBE[delta]),
     flowSections: [{ name: 'middle', xM: R / 20 }],

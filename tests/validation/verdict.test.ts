@@ -34,7 +34,9 @@ function compare(name: string, overrides: Record<string, string>): ContinuumComp
   if (process.env.TENUIS_VERDICT_REPORT) {
     for (const v of Object.values(c.verdict)) {
       const models = v.models.map((d) => `${d.model} ${(100 * d.deviation).toFixed(2)}%`).join(', ');
-      console.log(`${name} ${JSON.stringify(overrides)} ${v.quantity}: ±${(100 * v.relativeHalfWidth).toFixed(2)}% | ${models} | ${v.text}`);
+      console.log(
+        `${name} ${JSON.stringify(overrides)} ${v.quantity}: ±${(100 * v.relativeHalfWidth).toFixed(2)}% | ${models} | ${v.text}`,
+      );
     }
   }
   return c;
@@ -48,7 +50,15 @@ describe('verdict on DSMC runs (hard-sphere argon)', () => {
     // half-width falls as 1/U (7.7 % at U = 100 m/s with these samples, too close to the 11 % to tell them apart
     // safely), while the viscous heating this adds (about 6 K at the centre) raises the hard-sphere viscosity there
     // by about 1 %.
-    const c = compare('couette', { gas: 'Ar', model: 'HS', knudsen: '0.05', gap: '1mm', temperature: '273K', wallSpeed: '200m/s', seed: '5' });
+    const c = compare('couette', {
+      gas: 'Ar',
+      model: 'HS',
+      knudsen: '0.05',
+      gap: '1mm',
+      temperature: '273K',
+      wallSpeed: '200m/s',
+      seed: '5',
+    });
     for (const key of ['walls.bottom.shearStress', 'walls.top.shearStress']) {
       const v = c.verdict[key];
       expect(v.text, key).toMatch(/^first-order slip adequate, no-slip not/);
@@ -57,7 +67,16 @@ describe('verdict on DSMC runs (hard-sphere argon)', () => {
   });
 
   it('Couette at Kn = 1: the temperature profile is kinetic; no-slip and first-order slip miss the shear stress', () => {
-    const c = compare('couette', { gas: 'Ar', model: 'HS', knudsen: '1', gap: '1mm', temperature: '273K', wallSpeed: '100m/s', sampleSteps: '200000', seed: '5' });
+    const c = compare('couette', {
+      gas: 'Ar',
+      model: 'HS',
+      knudsen: '1',
+      gap: '1mm',
+      temperature: '273K',
+      wallSpeed: '100m/s',
+      sampleSteps: '200000',
+      seed: '5',
+    });
     const t = c.verdict['profile.temperature'];
     expect(t.category).toBe('kinetic');
     expect(t.text).toMatch(/^continuum models off by more than 10 %: kinetic effects dominate/);
@@ -77,7 +96,16 @@ describe('verdict on DSMC runs (hard-sphere argon)', () => {
   it('force-driven Poiseuille at Kn = 0.1: first-order slip adequate for the flow rate, not for the temperature profile', () => {
     // Acceleration 8.4e9 m/s²: a mean speed of about 0.2 v0, four times the preset's default, so that the viscous
     // heating (∝ a²) stands out of the temperature noise; the flow rate stays linear in a to well under 1 %.
-    const c = compare('poiseuille', { gas: 'Ar', model: 'HS', knudsen: '0.1', gap: '1um', temperature: '300K', acceleration: '8.4e9', sampleSteps: '200000', seed: '5' });
+    const c = compare('poiseuille', {
+      gas: 'Ar',
+      model: 'HS',
+      knudsen: '0.1',
+      gap: '1um',
+      temperature: '300K',
+      acceleration: '8.4e9',
+      sampleSteps: '200000',
+      seed: '5',
+    });
     const flow = c.verdict['flow.reducedFlowRate'];
     expect(flow.text).toMatch(/^first-order slip adequate, no-slip not/);
     expect(c.verdict['flow.massFlowRate'].bestModel).toBe('firstOrder');

@@ -18,15 +18,31 @@ function run(input: CaseInput) {
 type WallInput = Extract<CaseInput['boundaries']['bottom'], { type: 'wall' }>;
 const MODELS: [string, Omit<WallInput, 'type' | 'temperatureK'>][] = [
   ['Maxwell, accommodation 0.4', { model: 'maxwell', accommodation: 0.4 }],
-  ['Cercignani–Lampis, α_n 0.3, σ_t 0.6', { model: 'cercignaniLampis', normalAccommodation: 0.3, tangentialAccommodation: 0.6 }],
+  [
+    'Cercignani–Lampis, α_n 0.3, σ_t 0.6',
+    { model: 'cercignaniLampis', normalAccommodation: 0.3, tangentialAccommodation: 0.6 },
+  ],
 ];
 
 describe('wall models keep a gas at the wall temperature in equilibrium', () => {
   for (const [label, wallModel] of MODELS) {
     it(`${label}: nitrogen started at 250 K between walls at 300 K ends at 300 K, rotation included`, () => {
-      const base = buildPreset('fourier', { gas: 'N2', knudsen: '0.5', hotTemperature: '300K', coldTemperature: '300K', particlesPerCell: '100', transientSteps: '20000', sampleSteps: '20000', seed: '3' });
+      const base = buildPreset('fourier', {
+        gas: 'N2',
+        knudsen: '0.5',
+        hotTemperature: '300K',
+        coldTemperature: '300K',
+        particlesPerCell: '100',
+        transientSteps: '20000',
+        sampleSteps: '20000',
+        seed: '3',
+      });
       const wall = (t: number): WallInput => ({ type: 'wall', temperatureK: t, ...wallModel });
-      const { result, gap } = run({ ...base, initial: { ...base.initial, temperatureK: 250 }, boundaries: { ...base.boundaries, bottom: wall(300), top: wall(300) } });
+      const { result, gap } = run({
+        ...base,
+        initial: { ...base.initial, temperatureK: 250 },
+        boundaries: { ...base.boundaries, bottom: wall(300), top: wall(300) },
+      });
       // Detailed balance (common practice, no source): a reciprocal scattering kernel drives the gas to the wall
       // Maxwellian and then leaves it unchanged; the tolerance adds 0.3 % for the remaining transient.
       for (const name of ['translationalTemperature', 'rotationalTemperature'] as const) {
@@ -49,7 +65,15 @@ describe('free-molecular Couette shear follows the tangential momentum accommoda
     it(`${label}`, () => {
       const sigma = wallModel.model === 'maxwell' ? wallModel.accommodation! : wallModel.tangentialAccommodation!;
       const U = 120;
-      const base = buildPreset('couette', { gas: 'Ar', model: 'HS', knudsen: String(knudsenOf(0.01)), wallSpeed: `${U}m/s`, particlesPerCell: '100', sampleSteps: '60000', seed: '4' });
+      const base = buildPreset('couette', {
+        gas: 'Ar',
+        model: 'HS',
+        knudsen: String(knudsenOf(0.01)),
+        wallSpeed: `${U}m/s`,
+        particlesPerCell: '100',
+        sampleSteps: '60000',
+        seed: '4',
+      });
       const b = base.boundaries;
       const withModel = (w: CaseInput['boundaries']['bottom']) => ({ ...(w as WallInput), ...wallModel });
       const { result } = run({ ...base, boundaries: { ...b, bottom: withModel(b.bottom), top: withModel(b.top) } });

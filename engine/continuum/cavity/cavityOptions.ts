@@ -74,7 +74,8 @@ export function cavityOptionProblems(o: CavityOptions): CavityOptionProblem[] {
       problems.push({ field: 'accommodation', allowed: 'give a number above 0 and at most 1' });
     }
   }
-  if (o.tolerance !== undefined && !isPositive(o.tolerance)) problems.push({ field: 'tolerance', allowed: 'give a number above 0' });
+  if (o.tolerance !== undefined && !isPositive(o.tolerance))
+    problems.push({ field: 'tolerance', allowed: 'give a number above 0' });
   if (o.maxIterations !== undefined && !(Number.isInteger(o.maxIterations) && o.maxIterations >= 1)) {
     problems.push({ field: 'maxIterations', allowed: 'give a whole number of at least 1' });
   }

@@ -40,7 +40,13 @@ export function createPoissonMultigrid(n: number): PoissonMultigrid {
   for (;;) {
     // Level 0 works on the caller's psi and rhs (vCycle), so it needs only a residual array.
     const own = levels.length === 0 ? 0 : m * m;
-    levels.push({ n: m, h: 1 / (m - 1), u: new Float64Array(own), f: new Float64Array(own), r: new Float64Array(m * m) });
+    levels.push({
+      n: m,
+      h: 1 / (m - 1),
+      u: new Float64Array(own),
+      f: new Float64Array(own),
+      r: new Float64Array(m * m),
+    });
     if ((m - 1) % 2 !== 0 || m <= 3) break;
     m = (m - 1) / 2 + 1;
   }
@@ -114,7 +120,12 @@ function restrict(nf: number, r: Float64Array, nc: number, fc: Float64Array): vo
     for (let I = 1; I < nc - 1; I++) {
       const k = 2 * J * nf + 2 * I;
       fc[J * nc + I] =
-        (4 * r[k] + 2 * (r[k - 1] + r[k + 1] + r[k - nf] + r[k + nf]) + r[k - nf - 1] + r[k - nf + 1] + r[k + nf - 1] + r[k + nf + 1]) /
+        (4 * r[k] +
+          2 * (r[k - 1] + r[k + 1] + r[k - nf] + r[k + nf]) +
+          r[k - nf - 1] +
+          r[k - nf + 1] +
+          r[k + nf - 1] +
+          r[k + nf + 1]) /
         16;
     }
   }

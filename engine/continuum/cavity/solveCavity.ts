@@ -43,7 +43,12 @@ export interface CavityResult {
   /** points per side */
   readonly grid: number;
   /** wall condition; slipLength = ((2 − σ)/σ)·Kn in sides (0 for no-slip) */
-  readonly slip: { readonly model: CavitySlipModel; readonly knudsen: number; readonly accommodation: number; readonly slipLength: number };
+  readonly slip: {
+    readonly model: CavitySlipModel;
+    readonly knudsen: number;
+    readonly accommodation: number;
+    readonly slipLength: number;
+  };
   /** n × n fields, index i + n·j (x = i/(n−1), y = j/(n−1)): velocity (lid speeds), ψ (lid speed × side), ω (lid speed/side) */
   readonly u: Float64Array;
   readonly v: Float64Array;
@@ -129,7 +134,14 @@ export function solveCavity(options: CavityOptions): CavityResult {
 }
 
 /** The residual defined in the header, for the current ψ and ω (fills interior u, v as a side effect). */
-function steadyResidual(n: number, re: number, psi: Float64Array, omega: Float64Array, u: Float64Array, v: Float64Array): number {
+function steadyResidual(
+  n: number,
+  re: number,
+  psi: Float64Array,
+  omega: Float64Array,
+  u: Float64Array,
+  v: Float64Array,
+): number {
   const h2 = 1 / ((n - 1) * (n - 1));
   interiorVelocities(n, psi, u, v);
   const rOmega = vorticityResidual(n, re, omega, u, v, 0, null) * re * h2 * 0.25;

@@ -61,7 +61,7 @@ export function vorticityResidual(
   out: Float64Array | null,
 ): number {
   const inv2h = 0.5 * (n - 1);
-  const nu = (n - 1) * (n - 1) / reynolds; // 1/(Re h²)
+  const nu = ((n - 1) * (n - 1)) / reynolds; // 1/(Re h²)
   let max = 0;
   for (let j = 1; j < n - 1; j++) {
     const row = j * n;
@@ -97,7 +97,7 @@ export function adiStep(
   const d = s.delta;
   const maxResidual = vorticityResidual(n, reynolds, omega, u, v, dt, d);
   const invH = n - 1;
-  const diffusion = dt * invH * invH / reynolds; // Δt/(Re h²)
+  const diffusion = (dt * invH * invH) / reynolds; // Δt/(Re h²)
   const cp = s.cp;
   const dp = s.dp;
   // x sweep: one tridiagonal system per interior row, δ = 0 at the walls.

@@ -58,7 +58,13 @@ export function setWallVorticity(n: number, psi: Float64Array, omega: Float64Arr
  * velocity. The two lid corners, where lid and side walls meet and the velocity is singular, carry the lid speed
  * (the convention of Ghia, Ghia & Shin 1982, whose tables start with u = 1 at y = 1); the bottom corners are at rest.
  */
-export function setWallVelocities(n: number, omega: Float64Array, u: Float64Array, v: Float64Array, slip: number): void {
+export function setWallVelocities(
+  n: number,
+  omega: Float64Array,
+  u: Float64Array,
+  v: Float64Array,
+  slip: number,
+): void {
   const top = (n - 1) * n;
   for (let i = 0; i < n; i++) {
     u[i] = -slip * omega[i];
