@@ -18,8 +18,8 @@ import { measureReplicaScaling } from './replicaScaling';
 import os from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { couetteBenchCase } from './couetteBenchCase';
-import { plan } from '../engine/case/plan';
-import { createSimulation, advance, type PhaseTimes, type Simulation } from '../engine/simulation';
+import { plan } from '../engine/plan/plan';
+import { createSimulation, advance, type PhaseTimes, type Simulation } from '../engine/run/simulation';
 
 const PHASES = ['move', 'index', 'collide', 'sample'] as const;
 const SETTLE_STEPS = 10;

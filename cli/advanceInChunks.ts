@@ -2,7 +2,7 @@
  * Drives a simulation through its transient and sampling steps in chunks of about `targetChunkMs` of work, yielding
  * to the event loop between chunks so that Ctrl-C (SIGINT) and progress output are handled while it runs.
  */
-import { advance, isFinished, nextChunk, type Simulation } from '../engine/simulation';
+import { advance, isFinished, nextChunk, type Simulation } from '../engine/run/simulation';
 
 export interface ChunkOptions {
   /** Wall-clock work per chunk, ms (default 250). */

@@ -1,7 +1,7 @@
 /** Reading a case file at the edge: file → JSON.parse (never eval) → parseCase → plan, with messages a user can act on. */
 import { readFileSync } from 'node:fs';
 import { parseCase, type Case } from '../engine/case/schema';
-import { plan, type Plan } from '../engine/case/plan';
+import { plan, type Plan } from '../engine/plan/plan';
 import { CliError } from './errors';
 import { jsonErrorOffset, locationOf } from './jsonErrorLocation';
 

@@ -1,5 +1,5 @@
 /** Human-readable reports: a plan (for `check` and before `run`) and the short summary after a run. */
-import type { Plan } from '../engine/case/plan';
+import type { Plan } from '../engine/plan/plan';
 import type { SimulationResult } from '../engine/results/summarize';
 import type { Performance } from '../engine/results/exports';
 import { sig, plusMinus, duration, bytes, table } from './format';

@@ -4,7 +4,7 @@
  * between chunks, and hand back everything sampled as a transferable sample file.
  */
 import { transfer } from 'comlink';
-import { planFromInput } from '../engine/case/plan';
+import { planFromInput } from '../engine/plan/plan';
 import {
   createSimulation,
   advance,
@@ -13,7 +13,7 @@ import {
   nextChunk,
   stepsRemaining,
   type Simulation,
-} from '../engine/simulation';
+} from '../engine/run/simulation';
 import { sampleSetOf } from '../engine/results/sampleSet';
 import { encodeSampleSet } from '../engine/io/sampleFile';
 import type { ReplicaApi, ReplicaOutcome, ReplicaProgress, ReplicaStartRequest } from './protocol';

@@ -10,7 +10,7 @@ import type { FinishedSummary } from './liveSummary.worker';
 import { transfer } from 'comlink';
 import { estimateAt } from '../../engine/results/targetQuantities';
 import { evaluateStop, estimateRemaining, relativeHalfWidthOf } from '../../engine/stats/stopping';
-import { planFromInput } from '../../engine/case/plan';
+import { planFromInput } from '../../engine/plan/plan';
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { Performance } from '../../engine/results/exports';
 import type { TenuisTestHooks } from '../testing/testHooks';

@@ -18,7 +18,7 @@
  */
 import { PRESETS, buildPreset, type Preset } from '../../engine/case/presets';
 import { parseCase, SIDE_NAMES, type Case, type CaseInput, type SideName } from '../../engine/case/schema';
-import { gasModelOf, planFromInput } from '../../engine/case/plan';
+import { gasModelOf, planFromInput } from '../../engine/plan/plan';
 import { scalePressures } from '../../engine/case/sweep';
 import { modelFromSpecies, viscosityPaS, type MolecularModel } from '../../engine/gas/molecularModel';
 import { SPECIES_IDS, type SpeciesId } from '../../engine/gas/species';

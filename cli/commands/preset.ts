@@ -2,7 +2,7 @@
 import { parseArgs } from 'node:util';
 import { buildPreset, presetHelp, presetNames, PRESETS } from '../../engine/case/presets';
 import { parseCase } from '../../engine/case/schema';
-import { plan } from '../../engine/case/plan';
+import { plan } from '../../engine/plan/plan';
 import { CliError, UsageError, EXIT_OK } from '../errors';
 import { PRESET_USAGE } from '../usage';
 import { prettyJson } from '../prettyJson';

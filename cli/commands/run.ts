@@ -4,14 +4,14 @@
  */
 import { parseArgs } from 'node:util';
 import { readFileSync } from 'node:fs';
-import { createSimulation, stepsRemaining, type Simulation } from '../../engine/simulation';
+import { createSimulation, stepsRemaining, type Simulation } from '../../engine/run/simulation';
 import { encodeCheckpoint, decodeCheckpoint } from '../../engine/io/checkpoint';
 import { summarizeSamples } from '../../engine/results/summarize';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
 import { encodeSampleSet } from '../../engine/io/sampleFile';
 import { runReplicas, replicaReportJson, type StoppingOptions } from '../runReplicas';
 import { parseTarget } from '../../engine/stats/stopping';
-import type { Plan } from '../../engine/case/plan';
+import type { Plan } from '../../engine/plan/plan';
 import { targetPathsOf } from '../../engine/results/targetQuantities';
 import { writeBinaryAtomically } from '../writeResults';
 import { CliError } from '../errors';

@@ -9,7 +9,7 @@
 import { parseArgs } from 'node:util';
 import { join } from 'node:path';
 import { parseCase } from '../../engine/case/schema';
-import type { Plan } from '../../engine/case/plan';
+import type { Plan } from '../../engine/plan/plan';
 import {
   SWEEP_PARAMETERS,
   SWEEP_PARAMETER_UNITS,
@@ -26,7 +26,7 @@ import {
   type SweepSpacing,
 } from '../../engine/case/sweep';
 import { parseQuantity } from '../../engine/units/engineeringUnits';
-import { createSimulation, stepsRemaining } from '../../engine/simulation';
+import { createSimulation, stepsRemaining } from '../../engine/run/simulation';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
 import { summarizeSamples } from '../../engine/results/summarize';
 import { resultFiles, type Performance } from '../../engine/results/exports';

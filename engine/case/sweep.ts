@@ -13,7 +13,7 @@
  */
 import type { Case } from './schema';
 import { SIDE_NAMES } from './schema';
-import { gasModelOf, plan, referenceStateOf, type Plan } from './plan';
+import { gasModelOf, plan, referenceStateOf, type Plan } from '../plan/plan';
 import type { QuantityKind } from '../units/engineeringUnits';
 import { csvDocument, summaryJsonText, type SummaryJson, type JsonNumber, type Performance } from '../results/exports';
 import type { SimulationResult } from '../results/summarize';

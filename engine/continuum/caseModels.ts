@@ -19,7 +19,7 @@
  * Eucken's relation, gasState.ts), whose mean free path is the viscosity-based λ of every Knudsen number in Tenuis;
  * each slip coefficient is converted from the mean free path it is quoted in (slipCoefficients.ts).
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import type { BoundarySpec, FlowReportSpec, WallSpec } from '../case/schema';
 import { flowReferenceOf } from '../results/flowQuantities';
 import { viscosityPaS } from '../gas/molecularModel';

@@ -10,7 +10,7 @@
  * A lid moving towards −x is the mirror image x → L − x of one moving towards +x: u on x = L/2 keeps the lid's
  * sign, v(x) = |U|·ṽ(1 − x/L).
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import { solveCavity, type CavityResult } from './cavity/solveCavity';
 import { interpolateLine } from './cavity/centerlines';
 import type { ContinuumModelName, PredictedProfile } from './caseModelTypes';

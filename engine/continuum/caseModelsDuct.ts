@@ -10,7 +10,7 @@
  * Free-molecular tube: G_P = ((2 − σ)/σ)·8/(3√π) at every p (poiseuille.ts), so ṁ = (πR³/v0)(Δp/L) G_P.
  * The DSMC reduced flow rate is ṁ v0 L/(S Δp) (flowQuantities.ts); the predictions are scaled the same way.
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import type { FlowReportSpec } from '../case/schema';
 import { flowQuantityUnits } from '../results/flowQuantities';
 import { mostProbableSpeedMPerS } from '../gas/molecularModel';

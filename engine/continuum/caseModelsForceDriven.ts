@@ -15,7 +15,7 @@
  *   reaching the walls as heat (in their frame, slip dissipation included): a·ṁ′/2 per area on each channel wall,
  *   a·ṁ/(2πR) on the tube wall — so the heat flux follows each model's flow rate.
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import { forceDrivenChannelFlow, forceDrivenTubeFlow } from './poiseuille';
 import { unifiedFlow } from './unifiedFlowModel';
 import type { GasState } from './gasState';

@@ -12,7 +12,7 @@
  *   area of the gas on the wall along +x, so +τ on the bottom wall and −τ on the top; heatFlux is the energy per area
  *   from the gas into the wall, so −q_y at the bottom and +q_y at the top.
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import type { WallSpec } from '../case/schema';
 import { couetteFlow } from './couette';
 import { fourierFlow, type TemperatureJumpModel } from './fourier';

@@ -3,7 +3,7 @@
  * with a verdict per quantity (verdict.ts). What summary.json (`continuum`, `verdict`) and profiles.csv (one column
  * per model) are written from (engine/results/exports.ts). Pure.
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import type { FieldTable, SimulationResult } from '../results/summarize';
 import { caseModelsOf, type CaseModelOptions } from './caseModels';
 import type { CaseModels, ContinuumModelName, PredictedProfile, ProfileLine } from './caseModelTypes';

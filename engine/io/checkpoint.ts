@@ -12,8 +12,8 @@
  * What is not saved is rebuilt: the plan (from the case), the cell index and sort order (recomputed by the next
  * step's move and index), scratch buffers. Pure: no Node or DOM API.
  */
-import { planFromInput } from '../case/plan';
-import { createSimulation, type Simulation } from '../simulation';
+import { planFromInput } from '../plan/plan';
+import { createSimulation, type Simulation } from '../run/simulation';
 import { growParticles } from '../kernel/state';
 import { createSeries } from '../stats/series';
 import { replayTransientMonitor, MONITOR_NAMES } from '../run/transientMonitor';

@@ -16,7 +16,7 @@
  * machine or an older version is refused with a message rather than misread.
  */
 import { parseCase } from '../case/schema';
-import { plan as planCase } from '../case/plan';
+import { plan as planCase } from '../plan/plan';
 import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from '../kernel/state';
 import { wallNamesOf } from '../kernel/sideTable';
 import type { BatchList } from '../stats/batchList';

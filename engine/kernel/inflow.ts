@@ -19,7 +19,7 @@ import {
   INFLOW_DRIFT_X,
   INFLOW_DRIFT_Y,
   INFLOW_DRIFT_Z,
-} from '../geometry/inflow';
+} from '../plan/inflowSegments';
 import { flyAndSettle } from './settle';
 
 const SQRT_PI = Math.sqrt(Math.PI);

@@ -12,7 +12,7 @@
  * pressure of a kinetic boundary layer, so it is meant for the exit of ducts several mean free paths long, not for
  * an opening into a vessel (use a reservoir side and a vessel region there).
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { type SimState, SIDE_STRIDE, SIDE_TYPE, SIDE_INWARD, SIDE_PRESSURE, BOUNDARY_PRESSURE_OUTLET } from './state';
 import {
@@ -29,7 +29,7 @@ import {
   INFLOW_CELL_VOLUME,
   INFLOW_AREA,
   maxwellianInfluxPerM2S,
-} from '../geometry/inflow';
+} from '../plan/inflowSegments';
 
 /** Weight of the newest step in the running average of the outlet cells (memory of about 50 steps). */
 const RELAXATION = 0.02;

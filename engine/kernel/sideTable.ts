@@ -8,7 +8,7 @@
  * state.ts's constants: the cycle is harmless because neither uses the other's bindings while it loads, only when a
  * function is called.
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import type { SurfacePlan } from '../geometry/surfaces';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import {

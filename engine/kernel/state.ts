@@ -8,13 +8,13 @@
  * Side table: one row of SIDE_STRIDE numbers per side (left, right, bottom, top), so the boundary code reads
  * numbers, not objects. Wall sums: per wall bin, SUMS_PER_WALL_BIN running sums of the current batch.
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { createRng, uniform, standardNormal, rotationalEnergyOverKT, type RngState } from '../particles/rng';
 import { sigmaCrCoefficient } from '../gas/molecularModel';
 import { geometryOf, wallBinTotalOf, type SamplingGeometry } from '../results/samplingGeometry';
 import { insideBlock, type BlockRectangle } from '../geometry/cellGeometry';
-import { inflowTableOf, INFLOW_STRIDE } from '../geometry/inflow';
+import { inflowTableOf, INFLOW_STRIDE } from '../plan/inflowSegments';
 import { initialOutletMoments } from './pressureOutlet';
 
 export const SIDE_LEFT = 0;

@@ -16,7 +16,7 @@
  * `continuumModels` (what each model is); a case no model applies to gets `continuumNote` (why). profiles.csv gains
  * one column per model after each DSMC quantity a model predicts: `velocityX noSlip [m/s]`.
  */
-import type { Plan, ReferenceState } from '../case/plan';
+import type { Plan, ReferenceState } from '../plan/plan';
 import { continuumComparisonOf, type ContinuumComparisonResult } from '../continuum/comparison';
 import type { QuantityVerdict } from '../continuum/verdict';
 import { FLOW_QUANTITIES, flowQuantityUnits, type FlowResult } from './flowQuantities';

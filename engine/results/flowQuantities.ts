@@ -13,7 +13,7 @@
  *   radius R, with −dp/dx = Δp / L between vessels, or ρ a for a force-driven duct (body acceleration a).
  * Every number is a fixed multiple of ṁ, so each carries ṁ's 95 % half-width scaled alike.
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { MOLECULES_PER_S_PER_SCCM } from '../units/engineeringUnits';
 import type { Estimate } from './summarize';

@@ -4,8 +4,8 @@
  * the run's counters. One replica's set comes from a live simulation (sampleSetOf); sets of replicas of one case
  * merge into one (mergeSamples.ts); a set is saved and read back as a sample file (io/sampleFile.ts).
  */
-import type { Plan } from '../case/plan';
-import type { Simulation } from '../simulation';
+import type { Plan } from '../plan/plan';
+import type { Simulation } from '../run/simulation';
 import { batchListOf, type BatchList } from '../stats/batchList';
 import { seriesView } from '../stats/series';
 import { copyGeometry, type SamplingGeometry } from './samplingGeometry';

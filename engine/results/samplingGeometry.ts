@@ -3,7 +3,7 @@
  * weight, molecular mass and the side table — without particles. SimState has the same names, so a live state is a
  * SamplingGeometry as it stands, and a plan gives one without running anything (geometryOf).
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import { buildSideTable } from '../kernel/sideTable';
 import { SIDE_STRIDE, SIDE_BIN_COUNT } from '../kernel/state';
 

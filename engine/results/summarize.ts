@@ -6,8 +6,8 @@
  *   (batch-level ratios for ratio quantities), t interval with batches − 1 degrees of freedom.
  * Means use every sampled step, including those not yet in a complete batch.
  */
-import type { Plan, ReferenceState } from '../case/plan';
-import type { Simulation } from '../simulation';
+import type { Plan, ReferenceState } from '../plan/plan';
+import type { Simulation } from '../run/simulation';
 import {
   RAW_CELL_SUMS,
   SUMS_PER_WALL_BIN,

@@ -3,7 +3,7 @@
  * `flow.sections.outlet.massFlowRate`: the paths of summary.json), and reading such a path's estimate from a result.
  * Shared by `tenuis run --target` and the workbench's run panel, so both accept the same names.
  */
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 import { wallNamesOf } from '../kernel/sideTable';
 import { WALL_QUANTITIES } from './wallQuantities';
 import { FLOW_QUANTITIES } from './flowQuantities';

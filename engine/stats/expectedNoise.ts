@@ -15,7 +15,7 @@
  * These are estimates for planning: they hold for cells near equilibrium with M truly independent samples.
  */
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
-import type { Plan } from '../case/plan';
+import type { Plan } from '../plan/plan';
 
 export type NoiseQuantity = 'velocity' | 'density' | 'temperature';
 export const NOISE_QUANTITIES: readonly NoiseQuantity[] = ['velocity', 'density', 'temperature'];

@@ -1,5 +1,5 @@
-import { planFromInput, type Plan } from '../../engine/case/plan';
-import { createSimulation, runToCompletion, type Simulation } from '../../engine/simulation';
+import { planFromInput, type Plan } from '../../engine/plan/plan';
+import { createSimulation, runToCompletion, type Simulation } from '../../engine/run/simulation';
 
 /** Parses and plans a case a test built itself; any refusal is a bug in the test, so it throws. */
 export function planOrThrow(input: unknown): Plan {

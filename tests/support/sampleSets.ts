@@ -1,6 +1,6 @@
 /** Small Couette replicas as SampleSets, and a field-by-field comparison of results, for the sample-set tests. */
 import { buildPreset } from '../../engine/case/presets';
-import { createSimulation, advance, type Simulation } from '../../engine/simulation';
+import { createSimulation, advance, type Simulation } from '../../engine/run/simulation';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
 import { planOrThrow } from './planOrThrow';
 

@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { planOrThrow } from '../support/planOrThrow';
-import { createSimulation, advance } from '../../engine/simulation';
+import { createSimulation, advance } from '../../engine/run/simulation';
 import { gasVolumeOfBoxM3, cellGeometryOf } from '../../engine/geometry/cellGeometry';
 import type { CaseInput } from '../../engine/case/schema';
 

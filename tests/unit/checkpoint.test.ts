@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { planOrThrow } from '../support/planOrThrow';
-import { createSimulation, advance, runToCompletion } from '../../engine/simulation';
+import { createSimulation, advance, runToCompletion } from '../../engine/run/simulation';
 import { summarize } from '../../engine/results/summarize';
 import { encodeCheckpoint, decodeCheckpoint } from '../../engine/io/checkpoint';
 

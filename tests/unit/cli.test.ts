@@ -7,7 +7,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseCase } from '../../engine/case/schema';
-import { plan } from '../../engine/case/plan';
+import { plan } from '../../engine/plan/plan';
 
 const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 const cli = join(repoRoot, 'dist-cli', 'tenuis.mjs');

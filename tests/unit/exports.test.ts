@@ -15,7 +15,7 @@ import {
   surfacesCsv,
 } from '../../engine/results/exports';
 import { continuumComparisonOf, type ContinuumComparison } from '../../engine/continuum/comparison';
-import type { Plan } from '../../engine/case/plan';
+import type { Plan } from '../../engine/plan/plan';
 
 /**
  * A small RFC 4180 reader (quoted fields, doubled quotes, CR/LF inside quotes; rows end in LF or CRLF), written here

@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { summarizeSamples, averageSamplesOverCells } from '../../engine/results/summarize';
 import { mergeSampleSets } from '../../engine/results/mergeSamples';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
-import { createSimulation, advance } from '../../engine/simulation';
+import { createSimulation, advance } from '../../engine/run/simulation';
 import { planOrThrow } from '../support/planOrThrow';
 import { buildPreset } from '../../engine/case/presets';
 import { tQuantile975 } from '../../engine/stats/studentT';

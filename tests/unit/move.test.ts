@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { planOrThrow } from '../support/planOrThrow';
-import { createSimulation } from '../../engine/simulation';
+import { createSimulation } from '../../engine/run/simulation';
 import { moveParticles } from '../../engine/kernel/move';
 
 type Side =

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { parseCase, type Case } from '../../engine/case/schema';
-import { plan, type Plan } from '../../engine/case/plan';
+import { plan, type Plan } from '../../engine/plan/plan';
 import { SPECIES_IDS } from '../../engine/gas/species';
 import { buildPreset, defaultNumerics, presetHelp, presetNames, PRESETS } from '../../engine/case/presets';
 

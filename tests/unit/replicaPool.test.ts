@@ -9,7 +9,7 @@ import { runReplicaPool } from '../../workers/replicaPool';
 import { nodeReplicaFactory } from '../../workers/nodeReplica';
 import { buildPreset } from '../../engine/case/presets';
 import { planOrThrow } from '../support/planOrThrow';
-import { createSimulation, advance } from '../../engine/simulation';
+import { createSimulation, advance } from '../../engine/run/simulation';
 import { sampleSetOf } from '../../engine/results/sampleSet';
 import { mergeSampleSets } from '../../engine/results/mergeSamples';
 import { summarizeSamples } from '../../engine/results/summarize';

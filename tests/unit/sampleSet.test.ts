@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { advance } from '../../engine/simulation';
+import { advance } from '../../engine/run/simulation';
 import { summarize, summarizeSamples, averageOverCells, averageSamplesOverCells } from '../../engine/results/summarize';
 import { sampleSetOf, geometryOf } from '../../engine/results/sampleSet';
 import { GEOMETRY_SCALARS } from '../../engine/results/samplingGeometry';

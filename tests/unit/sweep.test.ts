@@ -1,7 +1,7 @@
 // The pure side of `tenuis sweep` (engine/case/sweep.ts): what a point is, the spacing of the points, and the table.
 import { describe, expect, it } from 'vitest';
 import { parseCase, type Case, type CaseInput } from '../../engine/case/schema';
-import { plan, type Plan } from '../../engine/case/plan';
+import { plan, type Plan } from '../../engine/plan/plan';
 import { buildPreset } from '../../engine/case/presets';
 import {
   caseAtSweepPoint,

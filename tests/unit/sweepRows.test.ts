@@ -3,7 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { parseCase, type Case } from '../../engine/case/schema';
 import { buildPreset } from '../../engine/case/presets';
-import { createSimulation, runToCompletion } from '../../engine/simulation';
+import { createSimulation, runToCompletion } from '../../engine/run/simulation';
 import { summarize } from '../../engine/results/summarize';
 import { resultFiles, type SummaryJson } from '../../engine/results/exports';
 import { continuumComparisonOf } from '../../engine/continuum/comparison';

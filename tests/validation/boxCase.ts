@@ -1,6 +1,6 @@
 /** A closed, homogeneous gas: periodic on all four sides (no walls), square cells. Test scenario of our own. */
 import { parseCase, type Case } from '../../engine/case/schema';
-import type { Plan } from '../../engine/case/plan';
+import type { Plan } from '../../engine/plan/plan';
 import { planOrThrow } from '../support/planOrThrow';
 import type { SpeciesId } from '../../engine/gas/species';
 

@@ -4,7 +4,7 @@
  * step, far more often than the gas decorrelates: intervals that treated steps as independent would fail this.
  */
 import { describe, expect, it } from 'vitest';
-import { createSimulation, advance } from '../../engine/simulation';
+import { createSimulation, advance } from '../../engine/run/simulation';
 import { summarize } from '../../engine/results/summarize';
 import { BOLTZMANN_J_PER_K as K_B } from '../../engine/physics/constants';
 import { boxPlan } from './boxCase';

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import jStat from 'jstat';
-import { createSimulation, advance } from '../../engine/simulation';
+import { createSimulation, advance } from '../../engine/run/simulation';
 import { moveParticles } from '../../engine/kernel/move';
 import { indexParticles } from '../../engine/kernel/indexCells';
 import { collideParticles } from '../../engine/kernel/collide';

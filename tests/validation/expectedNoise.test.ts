@@ -8,7 +8,7 @@
  * The issue's criterion: measured/predicted within 10 %.
  */
 import { describe, expect, it } from 'vitest';
-import { createSimulation, advance } from '../../engine/simulation';
+import { createSimulation, advance } from '../../engine/run/simulation';
 import { BOLTZMANN_J_PER_K as K_B } from '../../engine/physics/constants';
 import {
   densityRelativeError,

@@ -1,7 +1,7 @@
 /** Runs a planar gap preset (couette or fourier) to completion with a fixed seed and returns what the tests read. */
 import { buildPreset } from '../../engine/case/presets';
-import type { Plan } from '../../engine/case/plan';
-import type { Simulation } from '../../engine/simulation';
+import type { Plan } from '../../engine/plan/plan';
+import type { Simulation } from '../../engine/run/simulation';
 import { runToEnd } from '../support/planOrThrow';
 import { summarize, averageOverCells, type SimulationResult, type FieldTable } from '../../engine/results/summarize';
 

@@ -7,18 +7,18 @@
  * pending sums are closed into a batch: cell and wall-bin sums go to doubling batch stores, wall totals to the
  * integral-quantity series that the blocking analysis reads.
  */
-import type { Plan } from './case/plan';
-import { createState, type SimState, RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from './kernel/state';
-import { wallNamesOf } from './kernel/sideTable';
-import { seriesKeysOf, sectionSeriesKey } from './results/seriesKeys';
-import { moveParticles } from './kernel/move';
-import { indexParticles, reorderParticles } from './kernel/indexCells';
-import { collideParticles } from './kernel/collide';
-import { updatePressureOutlets } from './kernel/pressureOutlet';
-import { createBatchStore, addToBatches, type DoublingBatchStore } from './stats/doublingBatches';
-import { wallTotalsOfBatch, type WallQuantityName } from './results/wallQuantities';
-import { createSeries, pushSeries, type GrowableSeries } from './stats/series';
-import { createTransientMonitor, monitorValues, pushMonitor, type TransientMonitor } from './run/transientMonitor';
+import type { Plan } from '../plan/plan';
+import { createState, type SimState, RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from '../kernel/state';
+import { wallNamesOf } from '../kernel/sideTable';
+import { seriesKeysOf, sectionSeriesKey } from '../results/seriesKeys';
+import { moveParticles } from '../kernel/move';
+import { indexParticles, reorderParticles } from '../kernel/indexCells';
+import { collideParticles } from '../kernel/collide';
+import { updatePressureOutlets } from '../kernel/pressureOutlet';
+import { createBatchStore, addToBatches, type DoublingBatchStore } from '../stats/doublingBatches';
+import { wallTotalsOfBatch, type WallQuantityName } from '../results/wallQuantities';
+import { createSeries, pushSeries, type GrowableSeries } from '../stats/series';
+import { createTransientMonitor, monitorValues, pushMonitor, type TransientMonitor } from './transientMonitor';
 
 /**
  * Steps between physical reorders of particle memory into cell order (performance guide, item 1). Measured on the

@@ -7,10 +7,10 @@
  *   Γ = n v_mp / (2√π) · [exp(−s²) + √π s (1 + erf s)],  s = u_n / v_mp.
  */
 import jStat from 'jstat';
-import type { Plan } from '../case/plan';
+import type { Plan } from './plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
-import { insideBlock } from './cellGeometry';
-import { surfaceAreaM2 } from './surfaces';
+import { insideBlock } from '../geometry/cellGeometry';
+import { surfaceAreaM2 } from '../geometry/surfaces';
 
 /** Columns of the inflow table (one row per segment). */
 export const INFLOW_SURFACE = 0;
