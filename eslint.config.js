@@ -79,8 +79,7 @@ const engineTypesOnly = {
     const allTypes = (node) =>
       node.importKind === 'type' ||
       node.exportKind === 'type' ||
-      (node.specifiers?.length > 0 &&
-        node.specifiers.every((s) => s.importKind === 'type' || s.exportKind === 'type'));
+      (node.specifiers?.length > 0 && node.specifiers.every((s) => s.importKind === 'type' || s.exportKind === 'type'));
     return {
       ImportDeclaration: (node) => check(node, node.source.value, allTypes(node)),
       ExportNamedDeclaration: (node) => node.source && check(node, node.source.value, allTypes(node)),

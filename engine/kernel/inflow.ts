@@ -1,5 +1,5 @@
 /**
- * Molecules entering through reservoir sides and pressure outlets, each step: per segment (geometry/inflow.ts) the mean number of
+ * Molecules entering through reservoir sides and pressure outlets, each step: per segment (plan/inflowSegments.ts) the mean number of
  * simulated particles of the Maxwellian influx, the fractional part carried to the next step so the mean is exact.
  * Each enters at a uniform point of its segment (uniform in area: in r² on an axisymmetric end), with the velocity
  * distribution of molecules crossing a plane — the normal component flux-weighted, f(c_n) ∝ c_n exp(−(c_n − u_n)²/v_mp²),

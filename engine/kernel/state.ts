@@ -142,7 +142,7 @@ export interface SimState extends SamplingGeometry {
   /** Per flow section: weighted particles crossing it towards +x minus those crossing towards −x, pending batch. */
   sectionSums: Float64Array;
   /**
-   * Inflow segments (geometry/inflow.ts columns) and the fractional particles carried between steps. Reservoir rows
+   * Inflow segments (plan/inflowSegments.ts columns) and the fractional particles carried between steps. Reservoir rows
    * are fixed; pressure-outlet rows are updated every step from outletMoments (kernel/pressureOutlet.ts).
    */
   readonly inflowTable: Float64Array;

@@ -35,13 +35,11 @@ test('a negative length, an accommodation of 1.5 and malformed case files each s
 
   // A case file that is not JSON: refused with a message; the case is unchanged.
   const before = await page.getByLabel('case JSON').inputValue();
-  await page
-    .getByTestId('open-case-file')
-    .setInputFiles({
-      name: 'broken.json',
-      mimeType: 'application/json',
-      buffer: Buffer.from('{"schemaVersion": 1, "name": '),
-    });
+  await page.getByTestId('open-case-file').setInputFiles({
+    name: 'broken.json',
+    mimeType: 'application/json',
+    buffer: Buffer.from('{"schemaVersion": 1, "name": '),
+  });
   await expect(page.getByTestId('file-message')).toContainText('broken.json was not opened');
   await expect(page.getByTestId('file-message')).toContainText('not valid JSON');
   await expect(page.getByLabel('case JSON')).toHaveValue(before);

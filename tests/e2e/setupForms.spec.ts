@@ -6,9 +6,7 @@ const AVOGADRO = 6.02214076e23;
 // Many small form steps: on a shared two-core machine each can take a second or more, so allow more than the default.
 test.describe.configure({ timeout: 60_000 });
 
-async function caseJson(
-  page: Page,
-): Promise<{
+async function caseJson(page: Page): Promise<{
   gas: Record<string, unknown> & { custom?: Record<string, unknown> };
   boundaries: Record<string, Record<string, unknown>>;
   blocks: Record<string, unknown>[];

@@ -109,12 +109,10 @@ describe('gas panel', () => {
     expect(c.initial.pressurePa).toBeCloseTo(tableCase.initial.pressurePa, 6);
     // Smaller molecules: at fixed Kn, p ∝ μ/sqrt(m) ∝ 1/d² for VHS (the mass cancels), and the plan's Knudsen number
     // is still the preset's.
-    store
-      .getState()
-      .setGas({
-        ...argonLike,
-        custom: { ...argonLike.custom, diameter: { text: '0.3', unit: 'nm' }, mass: { text: '4.0026', unit: 'g/mol' } },
-      });
+    store.getState().setGas({
+      ...argonLike,
+      custom: { ...argonLike.custom, diameter: { text: '0.3', unit: 'nm' }, mass: { text: '4.0026', unit: 'g/mol' } },
+    });
     const light = caseOf(store);
     expect(light.initial.pressurePa / tableCase.initial.pressurePa).toBeCloseTo((0.417 / 0.3) ** 2, 10);
     const left = light.boundaries.left as { pressurePa: number };
@@ -125,12 +123,10 @@ describe('gas panel', () => {
 
   it('invalid custom fields are marked at their gas fields with what is allowed', () => {
     const store = newStore('couette');
-    store
-      .getState()
-      .setGas({
-        ...argonLike,
-        custom: { ...argonLike.custom, viscosityIndex: '1.4', diameter: { text: 'wide', unit: 'nm' }, name: '' },
-      });
+    store.getState().setGas({
+      ...argonLike,
+      custom: { ...argonLike.custom, viscosityIndex: '1.4', diameter: { text: 'wide', unit: 'nm' }, name: '' },
+    });
     const errors = store.getState().derived!.fieldErrors;
     expect(errors['gas:viscosityIndex']).toMatch(/between 0.5 .* and 1/);
     expect(errors['gas:referenceDiameterM']).toMatch(/"wide" is not a number/);

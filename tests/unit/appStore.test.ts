@@ -94,19 +94,17 @@ describe('case slice', () => {
 
   it('applyExample() starts the form from the example parameters with their units', () => {
     const store = newStore();
-    store
-      .getState()
-      .applyExample(
-        {
-          id: 'x',
-          title: 'an example',
-          scenario: '',
-          file: 'x.json',
-          preset: 'couette',
-          parameters: { gap: '2 µm', knudsen: '0.5', temperature: '25 °C' },
-        },
-        null,
-      );
+    store.getState().applyExample(
+      {
+        id: 'x',
+        title: 'an example',
+        scenario: '',
+        file: 'x.json',
+        preset: 'couette',
+        parameters: { gap: '2 µm', knudsen: '0.5', temperature: '25 °C' },
+      },
+      null,
+    );
     const s = store.getState();
     expect(s.params.gap).toEqual({ text: '2', unit: 'µm' });
     expect(s.params.temperature).toEqual({ text: '25', unit: '°C' });
