@@ -21,7 +21,8 @@ import { continuumComparisonOf, type ContinuumComparisonResult } from '../contin
 import type { QuantityVerdict } from '../continuum/verdict';
 import { FLOW_QUANTITIES, flowQuantityUnits, type FlowResult } from './flowQuantities';
 import { flowCsv } from './flowCsv';
-import type { SimulationResult, FieldTable, IntegralEstimate } from './summarize';
+import type { SimulationResult, FieldTable } from './summarize';
+import type { IntegralEstimate } from '../stats/estimate';
 import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, type WallQuantityName } from './wallQuantities';
 
 export const CSV_LINE_END = '\n';
