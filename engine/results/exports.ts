@@ -1,15 +1,7 @@
 /**
  * Result exports as strings: summary.json and three CSV tables (profiles, cell fields, wall bins). Pure, so the
- * command line writes them to disk and the browser offers them as downloads from the same code.
- *
- * CSV dialect: RFC 4180 except for the line end, which is LF ("\n") rather than CRLF — every spreadsheet and CSV
- * library reads both, and LF keeps files diff-friendly in git. A field is quoted when it holds a comma, a double
- * quote, CR or LF (quotes doubled inside). Numbers are written as JavaScript's shortest round-trip decimal
- * (String(x): parsing the text gives back the same double), never quoted or escaped; a value that is not finite
- * (NaN: no information, e.g. an empty cell or fewer than two batches for a ci95) is an empty field. Text fields that
- * a spreadsheet would evaluate as a formula (starting with = + - @, tab or CR) get a leading apostrophe (OWASP,
- * "CSV Injection"; common practice). Headers carry the SI unit in brackets: `temperature [K]`,
- * `temperature ci95 [K]`.
+ * command line writes them to disk and the browser offers them as downloads from the same code. The CSV dialect is
+ * csv.ts's.
  *
  * With a continuum comparison (engine/continuum/comparison.ts) summary.json gains `continuum` (each model's integral
  * quantities), `verdict` (per quantity: best model, deviation, text and the numbers behind it) and
@@ -21,11 +13,11 @@ import { continuumComparisonOf, type ContinuumComparisonResult } from '../contin
 import type { QuantityVerdict } from '../continuum/verdict';
 import { FLOW_QUANTITIES, flowQuantityUnits, type FlowResult } from './flowQuantities';
 import { flowCsv } from './flowCsv';
+import { csvDocument, estimateHeaders, unitHeader } from './csv';
 import type { SimulationResult, FieldTable } from './summarize';
 import type { IntegralEstimate } from '../stats/estimate';
 import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, type WallQuantityName } from './wallQuantities';
 
-export const CSV_LINE_END = '\n';
 export const SUMMARY_FORMAT = 'tenuis-summary';
 export const SUMMARY_FORMAT_VERSION = 1;
 
@@ -305,25 +297,9 @@ export function summaryJsonText(result: SimulationResult, extra: SummaryExtra): 
 
 // ─── CSV ─────────────────────────────────────────────────────────────────────────────────────────────────────────
 
-const FORMULA_START = /^[=+\-@\t\r]/;
-const NEEDS_QUOTES = /[",\r\n]/;
-
-/** One CSV field: numbers as shortest round-trip text (empty if not finite); text escaped and quoted as needed. */
-export function csvField(value: number | string): string {
-  if (typeof value === 'number') return Number.isFinite(value) ? String(value) : '';
-  const text = FORMULA_START.test(value) ? `'${value}` : value;
-  return NEEDS_QUOTES.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
-
-/** A whole CSV document: header row, data rows, LF after every row. */
-export function csvDocument(header: readonly string[], rows: readonly (readonly (number | string)[])[]): string {
-  const lines = [header, ...rows].map((r) => r.map(csvField).join(','));
-  return lines.join(CSV_LINE_END) + CSV_LINE_END;
-}
-
 /** `name [unit]` and `name ci95 [unit]` for each field of a table. */
 function fieldHeaders(t: FieldTable): string[] {
-  return t.names.flatMap((name, f) => [`${name} [${t.units[f]}]`, `${name} ci95 [${t.units[f]}]`]);
+  return t.names.flatMap((name, f) => estimateHeaders(name, t.units[f]));
 }
 
 /** Row `r` of a table as mean, ci95 pairs in column order. */
@@ -352,9 +328,8 @@ export function profilesCsv(result: SimulationResult, comparison?: ContinuumComp
   const header = ['y [m]'];
   t.names.forEach((name, f) =>
     header.push(
-      `${name} [${t.units[f]}]`,
-      `${name} ci95 [${t.units[f]}]`,
-      ...models[f].map(([m]) => `${name} ${m} [${t.units[f]}]`),
+      ...estimateHeaders(name, t.units[f]),
+      ...models[f].map(([m]) => unitHeader(`${name} ${m}`, t.units[f])),
     ),
   );
   const rows: (number | string)[][] = [];
@@ -389,11 +364,7 @@ export function surfacesCsv(result: SimulationResult): string {
     header ??= ['wall', 'position [m]', ...fieldHeaders(bins.table)];
     for (let b = 0; b < bins.table.rows; b++) rows.push([wall, bins.position[b], ...fieldValues(bins.table, b)]);
   }
-  header ??= [
-    'wall',
-    'position [m]',
-    ...WALL_QUANTITIES.flatMap((q) => [`${q} [${WALL_QUANTITY_UNITS[q]}]`, `${q} ci95 [${WALL_QUANTITY_UNITS[q]}]`]),
-  ];
+  header ??= ['wall', 'position [m]', ...WALL_QUANTITIES.flatMap((q) => estimateHeaders(q, WALL_QUANTITY_UNITS[q]))];
   return csvDocument(header, rows);
 }
 

@@ -5,7 +5,7 @@
  */
 import type { FlowResult } from './flowQuantities';
 import { FLOW_QUANTITIES, flowQuantityUnits } from './flowQuantities';
-import { csvDocument } from './exports';
+import { csvDocument } from './csv';
 
 /** 1 Pa·m³/s = 10 mbar·L/s (1 mbar = 100 Pa, 1 L = 1e-3 m³); 1 m³/s = 1000 L/s. */
 const ENGINEERING = {

@@ -4,9 +4,8 @@ import { planOrThrow as planFromCase, runToEnd } from '../support/planOrThrow';
 import { summarize, type SimulationResult } from '../../engine/results/summarize';
 import { CELL_FIELDS } from '../../engine/results/cellFields';
 import { WALL_QUANTITIES } from '../../engine/results/wallQuantities';
+import { csvDocument, csvField } from '../../engine/results/csv';
 import {
-  csvDocument,
-  csvField,
   fieldsCsv,
   profilesCsv,
   resultFiles,
