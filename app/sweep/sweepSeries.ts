@@ -2,7 +2,7 @@
  * One quantity of a sweep read out of its rows (each point's summary.json object) and the continuum curves, in the
  * shape the plot and the values table use. Pure; SI throughout (the views convert the swept value for display).
  */
-import type { SummaryJson } from '../../engine/results/exports';
+import type { SummaryJson } from '../../engine/report/summaryJson';
 import type { SweepContinuumCurves, SweepRow } from '../../engine/case/sweep';
 
 export interface SweepPointValue {

@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { planOrThrow } from '../support/planOrThrow';
 import { flowResultOf } from '../../engine/results/flowQuantities';
-import { flowCsv } from '../../engine/results/flowCsv';
+import { flowCsv } from '../../engine/report/flowCsv';
 import { convertFromSI, MOLECULES_PER_S_PER_SCCM } from '../../engine/units/engineeringUnits';
 import type { IntegralEstimate } from '../../engine/stats/estimate';
 

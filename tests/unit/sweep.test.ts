@@ -12,7 +12,7 @@ import {
   sweepValues,
   type SweepRow,
 } from '../../engine/case/sweep';
-import type { SummaryJson } from '../../engine/results/exports';
+import type { SummaryJson } from '../../engine/report/summaryJson';
 
 function parsed(input: unknown): Case {
   const r = parseCase(input);

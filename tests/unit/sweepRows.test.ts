@@ -5,8 +5,9 @@ import { parseCase, type Case } from '../../engine/case/schema';
 import { buildPreset } from '../../engine/case/presets';
 import { createSimulation, runToCompletion } from '../../engine/run/simulation';
 import { summarize } from '../../engine/results/summarize';
-import { resultFiles, type SummaryJson } from '../../engine/results/exports';
-import { continuumComparisonOf } from '../../engine/continuum/comparison';
+import { resultFiles } from '../../engine/report/resultFiles';
+import type { SummaryJson } from '../../engine/report/summaryJson';
+import { continuumComparisonOf } from '../../engine/report/comparison';
 import { caseModelsOf } from '../../engine/continuum/caseModels';
 import { planSweepPoints, sweepContinuumCurves, sweepCsv, sweepRowOf, sweepValues } from '../../engine/case/sweep';
 

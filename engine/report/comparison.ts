@@ -1,12 +1,13 @@
 /**
- * continuumComparisonOf(plan, result): the continuum predictions of caseModels.ts set beside a finished DSMC result,
- * with a verdict per quantity (verdict.ts). What summary.json (`continuum`, `verdict`) and profiles.csv (one column
- * per model) are written from (engine/results/exports.ts). Pure.
+ * continuumComparisonOf(plan, result): the continuum predictions of continuum/caseModels.ts set beside a finished
+ * DSMC result, with a verdict per quantity (verdict.ts). What summary.json (`continuum`, `verdict`) and profiles.csv
+ * (one column per model) are written from (summaryJson.ts, continuumJson.ts, resultCsv.ts). Pure. In report/, the
+ * top layer, because it reads both the results and the continuum models.
  */
 import type { Plan } from '../plan/plan';
 import type { FieldTable, SimulationResult } from '../results/summarize';
-import { caseModelsOf, type CaseModelOptions } from './caseModels';
-import type { CaseModels, ContinuumModelName, PredictedProfile, ProfileLine } from './caseModelTypes';
+import { caseModelsOf, type CaseModelOptions } from '../continuum/caseModels';
+import type { CaseModels, ContinuumModelName, PredictedProfile, ProfileLine } from '../continuum/caseModelTypes';
 import { integralVerdict, profileVerdict, type QuantityVerdict, type VerdictOptions } from './verdict';
 
 export interface ContinuumComparison {
