@@ -3,7 +3,8 @@
  * shape the plot and the values table use. Pure; SI throughout (the views convert the swept value for display).
  */
 import type { SummaryJson } from '../../engine/report/summaryJson';
-import type { SweepContinuumCurves, SweepRow } from '../../engine/case/sweep';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import type { SweepRow } from '../../engine/report/sweepRow';
 
 export interface SweepPointValue {
   readonly point: number;

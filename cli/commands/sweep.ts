@@ -14,17 +14,13 @@ import {
   SWEEP_PARAMETERS,
   SWEEP_PARAMETER_UNITS,
   sweepValues,
-  caseValueOf,
-  planSweepPoints,
   sweepPointFolder,
-  sweepCsv,
-  sweepJson,
-  sweepRowOf,
-  type PlannedSweepPoint,
   type SweepParameter,
-  type SweepRow,
   type SweepSpacing,
 } from '../../engine/case/sweep';
+import { caseValueOf, planSweepPoints, type PlannedSweepPoint } from '../../engine/plan/sweepPoints';
+import { sweepCsv, sweepJson } from '../../engine/report/sweepTable';
+import { sweepRowOf, type SweepRow } from '../../engine/report/sweepRow';
 import { parseQuantity } from '../../engine/units/engineeringUnits';
 import { createSimulation, stepsRemaining } from '../../engine/run/simulation';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';

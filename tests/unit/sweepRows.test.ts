@@ -9,7 +9,11 @@ import { resultFiles } from '../../engine/report/resultFiles';
 import type { SummaryJson } from '../../engine/report/summaryJson';
 import { continuumComparisonOf } from '../../engine/report/comparison';
 import { caseModelsOf } from '../../engine/continuum/caseModels';
-import { planSweepPoints, sweepContinuumCurves, sweepCsv, sweepRowOf, sweepValues } from '../../engine/case/sweep';
+import { planSweepPoints } from '../../engine/plan/sweepPoints';
+import { sweepContinuumCurves } from '../../engine/report/sweepCurves';
+import { sweepCsv } from '../../engine/report/sweepTable';
+import { sweepRowOf } from '../../engine/report/sweepRow';
+import { sweepValues } from '../../engine/case/sweep';
 
 function parsed(input: unknown): Case {
   const r = parseCase(input);
