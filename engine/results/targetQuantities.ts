@@ -1,7 +1,9 @@
 /**
  * The quantities a precision target can name (`walls.top.shearStress`, `flow.massFlowRate`,
  * `flow.sections.outlet.massFlowRate`: the paths of summary.json), and reading such a path's estimate from a result.
- * Shared by `tenuis run --target` and the workbench's run panel, so both accept the same names.
+ * Shared by `tenuis run --target` and the workbench's run panel, so both accept the same names. In results/, not
+ * stats/: it knows the result's shape, while the stop rule (stats/stopping.ts) takes only the numbers read here, so
+ * stats stays below results.
  */
 import type { Plan } from '../plan/plan';
 import { wallNamesOf } from '../kernel/sideTable';
