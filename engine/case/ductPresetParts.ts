@@ -4,7 +4,7 @@
  * sampling part of their cases. One module, so each preset module holds only its own geometry.
  */
 import type { CaseInput } from './schema';
-import { CASE_SCHEMA_VERSION } from './schema';
+import { CASE_SCHEMA_VERSION } from './caseConstants';
 import type { SpeciesId } from '../gas/species';
 import type { CollisionModelKind } from '../gas/molecularModel';
 import { type PresetParameter, type PresetValues, presetSampling } from './presetParameters';

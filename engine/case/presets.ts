@@ -9,7 +9,7 @@
  * p = μ(T)·sqrt(πkT/(2m)) / (Kn·H).
  */
 import type { CaseInput } from './schema';
-import { CASE_SCHEMA_VERSION, COLLISION_MODELS } from './schema';
+import { CASE_SCHEMA_VERSION, COLLISION_MODELS } from './caseConstants';
 import { SPECIES_IDS, type SpeciesId } from '../gas/species';
 import { modelFromSpecies, viscosityPaS, type CollisionModelKind, type MolecularModel } from '../gas/molecularModel';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';

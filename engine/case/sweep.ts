@@ -14,7 +14,7 @@
  * planner re-derives those it leaves open for each point; a body acceleration is kept as it is.
  */
 import type { Case } from './schema';
-import { SIDE_NAMES } from './schema';
+import { SIDE_NAMES } from './caseConstants';
 import type { QuantityKind } from '../units/engineeringUnits';
 
 export const SWEEP_PARAMETERS = ['knudsen', 'pressure'] as const;
