@@ -6,6 +6,7 @@
  */
 import type { Plan } from '../plan/plan';
 import type { FieldTable, SimulationResult } from '../results/summarize';
+import type { Estimate } from '../stats/estimate';
 import { caseModelsOf, type CaseModelOptions } from '../continuum/caseModels';
 import type { CaseModels, ContinuumModelName, PredictedProfile, ProfileLine } from '../continuum/caseModelTypes';
 import { integralVerdict, profileVerdict, type QuantityVerdict, type VerdictOptions } from './verdict';
@@ -29,14 +30,14 @@ export type ContinuumComparisonResult = ContinuumComparison | { readonly recogni
 export interface ComparisonOptions extends CaseModelOptions, VerdictOptions {}
 
 /** The DSMC {mean, ci95} of `walls.SIDE.QUANTITY` or `flow.QUANTITY`; undefined if the result has none. */
-export function dsmcIntegral(result: SimulationResult, key: string): { mean: number; ci95: number } | undefined {
+export function dsmcIntegral(result: SimulationResult, key: string): Estimate | undefined {
   const parts = key.split('.');
   if (parts[0] === 'walls' && parts.length === 3) {
-    const e = (result.walls[parts[1]] as Record<string, { mean: number; ci95: number }> | undefined)?.[parts[2]];
+    const e = (result.walls[parts[1]] as Record<string, Estimate> | undefined)?.[parts[2]];
     return e ? { mean: e.mean, ci95: e.ci95 } : undefined;
   }
   if (parts[0] === 'flow' && parts.length === 2) {
-    const e = (result.flow?.values as Record<string, { mean: number; ci95: number }> | undefined)?.[parts[1]];
+    const e = (result.flow?.values as Record<string, Estimate> | undefined)?.[parts[1]];
     return e ? { mean: e.mean, ci95: e.ci95 } : undefined;
   }
   return undefined;

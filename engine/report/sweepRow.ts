@@ -21,7 +21,7 @@ export interface SweepRow {
 
 /**
  * What one point's run gave, as the row needs it: its result with the continuum comparison of the same plan
- * (engine/continuum/comparison.ts), or nothing, because it was stopped before sampling began or it failed.
+ * (engine/report/comparison.ts), or nothing, because it was stopped before sampling began or it failed.
  */
 export type SweepPointRun =
   | {
