@@ -1,7 +1,7 @@
 /** Human-readable reports: a plan (for `check` and before `run`) and the short summary after a run. */
 import type { Plan } from '../engine/plan/plan';
 import type { SimulationResult } from '../engine/results/summarize';
-import type { Performance } from '../engine/results/exports';
+import type { Performance } from '../engine/report/summaryJson';
 import { sig, plusMinus, duration, bytes, table } from './format';
 import {
   independentSamples,

@@ -7,7 +7,7 @@ import type { Case } from '../engine/case/schema';
 import type { SampleSet } from '../engine/results/sampleSet';
 import { runReplicaPool, type ReplicaReport } from '../workers/replicaPool';
 import { summarizeSamples, type SimulationResult } from '../engine/results/summarize';
-import { summaryJson } from '../engine/results/exports';
+import { summaryJson } from '../engine/report/summaryJson';
 import { evaluateStop, relativeHalfWidthOf, estimateRemaining, type PrecisionTarget } from '../engine/stats/stopping';
 import { duration } from './format';
 import { estimateAt } from '../engine/results/targetQuantities';

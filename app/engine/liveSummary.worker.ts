@@ -5,7 +5,7 @@
 import { expose, transfer } from 'comlink';
 import { decodeSampleSet, encodeSampleSet } from '../../engine/io/sampleFile';
 import type { SampleSet } from '../../engine/results/sampleSet';
-import { continuumComparisonOf, type ContinuumComparisonResult } from '../../engine/continuum/comparison';
+import { continuumComparisonOf, type ContinuumComparisonResult } from '../../engine/report/comparison';
 import { mergeSampleSets } from '../../engine/results/mergeSamples';
 import { summarizeSamples, type SimulationResult } from '../../engine/results/summarize';
 

@@ -12,17 +12,18 @@ import { estimateAt } from '../../engine/results/targetQuantities';
 import { evaluateStop, estimateRemaining, relativeHalfWidthOf } from '../../engine/stats/stopping';
 import { planFromInput } from '../../engine/plan/plan';
 import type { SimulationResult } from '../../engine/results/summarize';
-import type { Performance } from '../../engine/results/exports';
+import type { Performance } from '../../engine/report/summaryJson';
 import type { TenuisTestHooks } from '../testing/testHooks';
-import type { ContinuumComparisonResult } from '../../engine/continuum/comparison';
+import type { ContinuumComparisonResult } from '../../engine/report/comparison';
 import type { ResultGeometry } from '../results/resultGeometry';
 
-export { profilesCsv, fieldsCsv, surfacesCsv, summaryJsonText } from '../../engine/results/exports';
+export { profilesCsv, fieldsCsv, surfacesCsv } from '../../engine/report/resultCsv';
+export { summaryJsonText } from '../../engine/report/summaryJson';
 export { defaultReplicaCount };
 export { flowQuantityUnits } from '../../engine/results/flowQuantities';
 export { MODEL_LABELS } from '../../engine/continuum/caseModelTypes';
 export * from './sweepApi';
-export { cutProfileCsv } from '../../engine/results/cutProfileCsv';
+export { cutProfileCsv } from '../../engine/report/cutProfileCsv';
 
 export interface ReplicaView {
   readonly stream: number;

@@ -4,7 +4,8 @@
  * page's main bundle holds no engine code.
  */
 export { PRESETS, buildPreset, presetNames } from '../../engine/case/presets';
-export { parseCase, SIDE_NAMES, WALL_MODELS, COLLISION_MODELS } from '../../engine/case/schema';
+export { parseCase } from '../../engine/case/schema';
+export { SIDE_NAMES, WALL_MODELS, COLLISION_MODELS } from '../../engine/case/caseConstants';
 export { SPECIES, SPECIES_IDS } from '../../engine/gas/species';
 export { AVOGADRO_PER_MOL } from '../../engine/physics/constants';
 export { unitsOf, convertFromSI, formatQuantity } from '../../engine/units/engineeringUnits';

@@ -7,17 +7,14 @@ import { parseCase } from '../../engine/case/schema';
 import { wallNamesOf } from '../../engine/kernel/sideTable';
 import { FLOW_QUANTITIES, flowQuantityUnits } from '../../engine/results/flowQuantities';
 import { WALL_QUANTITY_UNITS } from '../../engine/results/wallQuantities';
-import {
-  planSweepPoints,
-  sweepContinuumCurves,
-  sweepValues,
-  type SweepContinuumCurves,
-  type SweepParameter,
-  type SweepSpacing,
-} from '../../engine/case/sweep';
+import { planSweepPoints } from '../../engine/plan/sweepPoints';
+import { sweepContinuumCurves, type SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import { sweepValues, type SweepParameter, type SweepSpacing } from '../../engine/case/sweep';
 import type { ContinuumModelName } from '../../engine/continuum/caseModelTypes';
 
-export { sweepCsv, sweepJson, sweepRowOf, SWEEP_PARAMETER_UNITS } from '../../engine/case/sweep';
+export { sweepCsv, sweepJson } from '../../engine/report/sweepTable';
+export { sweepRowOf } from '../../engine/report/sweepRow';
+export { SWEEP_PARAMETER_UNITS } from '../../engine/case/sweep';
 export { convertToSI } from '../../engine/units/engineeringUnits';
 
 export interface SweepRequest {

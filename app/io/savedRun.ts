@@ -3,7 +3,7 @@
  * (the case and the merged samples as a sample file, from which the summary is recomputed) and what the list shows.
  */
 import type { CaseInput } from '../../engine/case/schema';
-import type { Performance } from '../../engine/results/exports';
+import type { Performance } from '../../engine/report/summaryJson';
 import type { ReplicaEnd } from '../engine/runApi';
 
 export interface SavedRunMeta {

@@ -5,7 +5,9 @@
  * A sweep is saved when it starts and again as each point ends, so a record still marked `running` that no page is
  * running was interrupted (by a reload or a closed tab) after its `pointsDone` points.
  */
-import type { SweepContinuumCurves, SweepParameter, SweepRow } from '../../engine/case/sweep';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import type { SweepParameter } from '../../engine/case/sweep';
+import type { SweepRow } from '../../engine/report/sweepRow';
 import type { SweepQuantity, SweepRequest } from '../engine/sweepApi';
 import type { SweepFormState } from '../sweep/sweepStore';
 

@@ -4,7 +4,8 @@
  * of the planned grid, so a drawn block cuts whole cells.
  */
 import { useRef, useState, type PointerEvent } from 'react';
-import type { CaseInput, SideName } from '../../engine/case/schema';
+import type { CaseInput } from '../../engine/case/schema';
+import type { SideName } from '../../engine/case/caseConstants';
 import { setupApi } from '../engine/loadEngine';
 import { sig } from '../format';
 import { lengthLabel, snapToGrid, type RectSI } from '../setup/blockEdits';

@@ -3,7 +3,8 @@
  * builds. A field left empty keeps the preset's value (shown greyed as its placeholder).
  */
 import { setupApi } from '../engine/loadEngine';
-import type { SideName, WallSpec } from '../../engine/case/schema';
+import type { SideName } from '../../engine/case/caseConstants';
+import type { WallSpec } from '../../engine/case/schema';
 import { QuantityField } from '../fields/QuantityField';
 import { convertEntry, entryOfSI, numberText, fromSI, unitChoices, type ParamEntry } from '../setup/formModel';
 import { appStore, useApp } from '../store/appStore';

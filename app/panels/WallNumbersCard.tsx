@@ -1,5 +1,6 @@
 /** Whole-wall numbers with 95 % half-widths and units: shear stress, normal stress, heat flux, number flux. */
-import type { SimulationResult, IntegralEstimate } from '../../engine/results/summarize';
+import type { SimulationResult } from '../../engine/results/summarize';
+import type { IntegralEstimate } from '../../engine/stats/estimate';
 import { estimateText, sig } from '../format';
 
 const LABELS: Readonly<Record<string, string>> = {

@@ -2,7 +2,7 @@
  * The engine's continuum comparison (engine/continuum/comparison.ts) as what the results view draws: overlay curves
  * for the profile plot and verdict rows in plain words. Types only from the engine; model labels come with the run API.
  */
-import type { ContinuumComparisonResult } from '../../engine/continuum/comparison';
+import type { ContinuumComparisonResult } from '../../engine/report/comparison';
 import type { ContinuumCurve } from './extensions';
 
 export interface VerdictRow {

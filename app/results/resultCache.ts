@@ -3,9 +3,9 @@
  * The store holds the id of the result shown and a version number that changes when the entry does.
  */
 import type { SimulationResult } from '../../engine/results/summarize';
-import type { Performance } from '../../engine/results/exports';
+import type { Performance } from '../../engine/report/summaryJson';
 import type { CaseInput } from '../../engine/case/schema';
-import type { ContinuumComparisonResult } from '../../engine/continuum/comparison';
+import type { ContinuumComparisonResult } from '../../engine/report/comparison';
 
 export interface CachedResult {
   readonly result: SimulationResult;

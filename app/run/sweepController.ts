@@ -6,7 +6,7 @@
  * run chunk's, the unit tests a fake pool. Single runs (runController.ts) are untouched by it.
  */
 import type { RunCallbacks, RunHandle, RunProgressView, RunRequest } from '../engine/runApi';
-import type { SweepPointRun, SweepRow } from '../../engine/case/sweep';
+import type { SweepPointRun, SweepRow } from '../../engine/report/sweepRow';
 
 export interface SweepRunDeps {
   startRun(request: RunRequest, callbacks: RunCallbacks): RunHandle;

@@ -17,7 +17,8 @@
  * or `other`); messages that belong to no field of the form (e.g. from JSON typed by the user) go to caseErrors.
  */
 import { PRESETS, buildPreset, type Preset } from '../../engine/case/presets';
-import { parseCase, SIDE_NAMES, type Case, type CaseInput, type SideName } from '../../engine/case/schema';
+import { parseCase, type Case, type CaseInput } from '../../engine/case/schema';
+import { SIDE_NAMES, type SideName } from '../../engine/case/caseConstants';
 import { gasModelOf, planFromInput } from '../../engine/plan/plan';
 import { scalePressures } from '../../engine/case/sweep';
 import { modelFromSpecies, viscosityPaS, type MolecularModel } from '../../engine/gas/molecularModel';

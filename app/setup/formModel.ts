@@ -6,7 +6,7 @@
  */
 import type { SetupApi } from '../engine/loadEngine';
 import type { PresetParameter } from '../../engine/case/presets';
-import type { SideName } from '../../engine/case/schema';
+import type { SideName } from '../../engine/case/caseConstants';
 
 export interface ParamEntry {
   readonly text: string;

@@ -4,7 +4,7 @@
  * Part of the lazily loaded set-up chunk (it calls the planner); components import its types only.
  */
 import { planFromInput, type ReferenceState } from '../../engine/plan/plan';
-import { SIDE_NAMES } from '../../engine/case/schema';
+import { SIDE_NAMES } from '../../engine/case/caseConstants';
 import { targetPathsOf } from '../../engine/results/targetQuantities';
 import {
   densityRelativeError,

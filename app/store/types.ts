@@ -7,7 +7,7 @@ import type { CaseDerivation } from '../setup/deriveCase';
 import type { FormState, ParamEntry, WallEdit, CaseSource, GasEdit, BlockTable } from '../setup/formModel';
 import type { PlanView } from '../setup/planView';
 import type { RunProgressView } from '../engine/runApi';
-import type { SideName } from '../../engine/case/schema';
+import type { SideName } from '../../engine/case/caseConstants';
 import type { SavedRunMeta } from '../io/savedRun';
 import type { ExampleEntry } from '../io/examples';
 

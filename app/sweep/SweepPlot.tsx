@@ -7,7 +7,7 @@ import { Plot } from '../charts/Plot';
 import type { Data, Layout } from '../charts/plotly';
 import { runApiIfLoaded } from '../engine/loadEngine';
 import { allPositive, modelLines, type SweepPointValue } from './sweepSeries';
-import type { SweepContinuumCurves } from '../../engine/case/sweep';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
 
 export interface SweepPlotProps {
   readonly points: readonly SweepPointValue[];

@@ -7,7 +7,7 @@
  */
 import { loadRunApi } from '../engine/loadEngine';
 import type { RunProgressView } from '../engine/runApi';
-import type { SweepContinuumCurves } from '../../engine/case/sweep';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
 import { runSweepPoints, type SweepHandle } from '../run/sweepController';
 import { readTestHooks } from '../testing/testHooks';
 import { appStore } from '../store/appStore';

@@ -2,8 +2,9 @@
  * One quantity of a sweep read out of its rows (each point's summary.json object) and the continuum curves, in the
  * shape the plot and the values table use. Pure; SI throughout (the views convert the swept value for display).
  */
-import type { SummaryJson } from '../../engine/results/exports';
-import type { SweepContinuumCurves, SweepRow } from '../../engine/case/sweep';
+import type { SummaryJson } from '../../engine/report/summaryJson';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import type { SweepRow } from '../../engine/report/sweepRow';
 
 export interface SweepPointValue {
   readonly point: number;

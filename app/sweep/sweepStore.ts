@@ -9,7 +9,9 @@ import { useStore } from 'zustand';
 import type { RunProgressView } from '../engine/runApi';
 import type { SweepRequest } from '../engine/sweepApi';
 import type { SavedSweepMeta, SweepPlanOutline } from '../io/savedSweep';
-import type { SweepContinuumCurves, SweepParameter, SweepRow, SweepSpacing } from '../../engine/case/sweep';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import type { SweepParameter, SweepSpacing } from '../../engine/case/sweep';
+import type { SweepRow } from '../../engine/report/sweepRow';
 
 /** `interrupted`: a saved sweep this page did not finish (a reload or a closed tab ended it), shown with its finished points. */
 export type SweepStatus = 'idle' | 'planning' | 'running' | 'stopping' | 'finished' | 'stopped' | 'interrupted';

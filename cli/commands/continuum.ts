@@ -11,7 +11,7 @@ import {
   type CavityOptions,
   type CavitySlipModel,
 } from '../../engine/continuum/cavity/cavityOptions';
-import { csvDocument } from '../../engine/results/exports';
+import { csvDocument } from '../../engine/report/csv';
 import { CliError, UsageError, EXIT_OK } from '../errors';
 import { CONTINUUM_USAGE } from '../usage';
 import { checkOutputDir, writeResultsAtomically } from '../writeResults';

@@ -8,7 +8,7 @@ import { readFileSync } from 'node:fs';
 import { decodeSampleSet } from '../../engine/io/sampleFile';
 import { mergeSampleSets } from '../../engine/results/mergeSamples';
 import { summarizeSamples } from '../../engine/results/summarize';
-import { resultFiles } from '../../engine/results/exports';
+import { resultFiles } from '../../engine/report/resultFiles';
 import { UsageError, CliError, EXIT_OK } from '../errors';
 import { MERGE_USAGE } from '../usage';
 import { checkOutputDir, writeResultsAtomically } from '../writeResults';

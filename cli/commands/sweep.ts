@@ -14,23 +14,20 @@ import {
   SWEEP_PARAMETERS,
   SWEEP_PARAMETER_UNITS,
   sweepValues,
-  caseValueOf,
-  planSweepPoints,
   sweepPointFolder,
-  sweepCsv,
-  sweepJson,
-  sweepRowOf,
-  type PlannedSweepPoint,
   type SweepParameter,
-  type SweepRow,
   type SweepSpacing,
 } from '../../engine/case/sweep';
+import { caseValueOf, planSweepPoints, type PlannedSweepPoint } from '../../engine/plan/sweepPoints';
+import { sweepCsv, sweepJson } from '../../engine/report/sweepTable';
+import { sweepRowOf, type SweepRow } from '../../engine/report/sweepRow';
 import { parseQuantity } from '../../engine/units/engineeringUnits';
 import { createSimulation, stepsRemaining } from '../../engine/run/simulation';
 import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
 import { summarizeSamples } from '../../engine/results/summarize';
-import { resultFiles, type Performance } from '../../engine/results/exports';
-import { continuumComparisonOf } from '../../engine/continuum/comparison';
+import { resultFiles } from '../../engine/report/resultFiles';
+import type { Performance } from '../../engine/report/summaryJson';
+import { continuumComparisonOf } from '../../engine/report/comparison';
 import { CliError, UsageError, EXIT_OK, EXIT_INTERRUPTED } from '../errors';
 import { SWEEP_USAGE } from '../usage';
 import { readJsonFile, parseSeedOption } from '../readCase';

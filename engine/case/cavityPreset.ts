@@ -9,7 +9,7 @@
  * (engine/continuum/caseModelsCavity.ts) solves the incompressible cavity at Re = ρUL/μ of that same state.
  */
 import type { CaseInput } from './schema';
-import { CASE_SCHEMA_VERSION } from './schema';
+import { CASE_SCHEMA_VERSION } from './caseConstants';
 import type { SpeciesId } from '../gas/species';
 import { modelFromSpecies, type CollisionModelKind } from '../gas/molecularModel';
 import { formatQuantity } from '../units/engineeringUnits';

@@ -3,7 +3,8 @@
  * parameters several presets share (gas, collision model, Knudsen number, gap, numerics).
  */
 import { SPECIES_IDS } from '../gas/species';
-import { COLLISION_MODELS, type CaseInput } from './schema';
+import { COLLISION_MODELS } from './caseConstants';
+import type { CaseInput } from './schema';
 import { viscosityPaS, type MolecularModel } from '../gas/molecularModel';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import type { QuantityKind } from '../units/engineeringUnits';

@@ -1,11 +1,11 @@
 /**
  * What the continuum models predict for a DSMC case (caseModels.ts): integral quantities and profiles per model,
  * in the field names and SI units of the DSMC results (engine/results/cellFields.ts, wallQuantities.ts,
- * flowQuantities.ts), so verdict.ts can set them side by side.
+ * flowQuantities.ts), so report/verdict.ts can set them side by side.
  */
 import type { ViscosityMeanFreePath } from './meanFreePath';
 
-/** The models compared with DSMC, simplest first (verdict.ts prefers the simplest adequate one). */
+/** The models compared with DSMC, simplest first (report/verdict.ts prefers the simplest adequate one). */
 export const CONTINUUM_MODELS = ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular'] as const;
 export type ContinuumModelName = (typeof CONTINUUM_MODELS)[number];
 

@@ -3,7 +3,7 @@
  * it — for the same gas, geometry, wall temperatures, wall speeds and accommodation, at the DSMC profile positions,
  * in the DSMC field names and SI units (caseModelTypes.ts). Pure.
  *
- * Recognised (first match wins):
+ * Recognised (first match wins; the recognisers are in caseRecognisers.ts):
  * - pressure-driven channel or tube between vessels: flowReport.duct 'channel' or 'tube' with lengthM, the two
  *   vessel pressures known (caseModelsDuct.ts);
  * - force-driven channel (planar) or tube (axisymmetric, the top side the tube wall): periodic in x, body
@@ -20,29 +20,27 @@
  * each slip coefficient is converted from the mean free path it is quoted in (slipCoefficients.ts).
  */
 import type { Plan } from '../plan/plan';
-import type { BoundarySpec, FlowReportSpec, WallSpec } from '../case/schema';
-import { flowReferenceOf } from '../results/flowQuantities';
-import { viscosityPaS } from '../gas/molecularModel';
-import { gasStateFromModel, type GasState } from './gasState';
-import { meanFreePathOfKind, pathPerViscosityPath } from './meanFreePath';
+import { gasStateFromModel } from './gasState';
+import { meanFreePathOfKind } from './meanFreePath';
 import {
   HADJICONSTANTINOU_SECOND_ORDER,
   KINETIC_BGK_SLIP,
   type FirstOrderSlipCoefficient,
   type SecondOrderSlipCoefficients,
 } from './slipCoefficients';
-import { couettePredictions, fourierPredictions, type SlipChoice } from './caseModelsGap';
-import { forceDrivenChannelPredictions, forceDrivenTubePredictions } from './caseModelsForceDriven';
-import { pressureDrivenPredictions } from './caseModelsDuct';
-import { cavityPredictions } from './caseModelsCavity';
-import type {
-  CaseModels,
-  CaseModelsResult,
-  CaseProblem,
-  ContinuumModelName,
-  PredictedProfile,
-  PredictedQuantity,
-} from './caseModelTypes';
+import type { SlipChoice } from './caseModelsGap';
+import { forceDrivenTubePredictions } from './caseModelsForceDriven';
+import {
+  atRest,
+  cavityCaseModels,
+  commonAccommodation,
+  ductCaseModels,
+  gapCaseModels,
+  isWall,
+  unrecognised,
+  type RecogniserContext,
+} from './caseRecognisers';
+import type { CaseModelsResult, ContinuumModelName } from './caseModelTypes';
 
 export interface CaseModelOptions {
   /**
@@ -60,180 +58,8 @@ export interface CaseModelOptions {
   readonly secondOrder?: SecondOrderSlipCoefficients;
 }
 
-const unrecognised = (reason: string): CaseModelsResult => ({ recognised: false, reason });
-
-/** σ of a wall: 1 diffuse, the accommodation of a Maxwell wall; a reason for other wall models. */
-function accommodationOf(w: WallSpec, where: string): number | string {
-  if (w.model === 'diffuse') return 1;
-  if (w.model === 'maxwell' && w.accommodation !== undefined && w.accommodation > 0) return w.accommodation;
-  if (w.model === 'maxwell') return `${where}: a Maxwell wall with accommodation 0 is specular; no slip model applies`;
-  return `${where}: ${w.model} walls have no counterpart in the slip models (diffuse and Maxwell walls only)`;
-}
-
-/** The one σ shared by all the walls, or a reason. */
-function commonAccommodation(walls: readonly [WallSpec, string][]): number | string {
-  let sigma: number | undefined;
-  for (const [w, where] of walls) {
-    const s = accommodationOf(w, where);
-    if (typeof s === 'string') return s;
-    if (sigma !== undefined && Math.abs(s - sigma) > 1e-12)
-      return `the walls have different accommodation coefficients (${sigma} and ${s}); the slip models assume one`;
-    sigma = s;
-  }
-  return sigma ?? 1;
-}
-
-const isWall = (b: BoundarySpec): b is WallSpec => b.type === 'wall';
-const atRest = (w: WallSpec) => w.velocityMPerS.every((v) => v === 0);
-const sameTemperature = (a: WallSpec, b: WallSpec) =>
-  Math.abs(a.temperatureK - b.temperatureK) <= 1e-9 * a.temperatureK;
-
 function describeSecondOrder(set: SecondOrderSlipCoefficients): string {
   return `second-order slip, ${set.id} coefficients C1 = ${set.c1}, C2 = ${set.c2} in the ${set.meanFreePath} mean free path (${set.source}), with the Smoluchowski jump`;
-}
-
-/** What every recogniser needs: the plan, the gas state, the slip coefficients and the result builder. */
-interface Context {
-  readonly plan: Plan;
-  readonly gas: GasState;
-  readonly slip: SlipChoice;
-  /** Descriptions of the models; a recogniser may reword them for its problem before building the result. */
-  readonly models: Partial<Record<ContinuumModelName, string>>;
-  readonly result: (
-    problem: CaseProblem,
-    description: string,
-    p: { quantities: PredictedQuantity[]; profiles: PredictedProfile[] },
-    present: ContinuumModelName[],
-  ) => CaseModels;
-}
-
-/** Long pressure-driven channel or tube between vessels (flowReport with lengthM). */
-function ductCase(x: Context, report: FlowReportSpec & { lengthM: number }): CaseModelsResult {
-  const { plan } = x;
-  const c = plan.caseData;
-  const walls: [WallSpec, string][] = [];
-  for (const k of c.blocks) {
-    walls.push([k.wall, `block ${k.name}`]);
-    for (const f of ['left', 'right', 'bottom', 'top'] as const)
-      if (k.faces?.[f]) walls.push([k.faces[f]!, `block ${k.name}.${f}`]);
-  }
-  for (const side of ['bottom', 'top'] as const) {
-    const w = plan.boundaries[side];
-    if (isWall(w)) walls.push([w, side]);
-  }
-  const sigma = commonAccommodation(walls);
-  if (typeof sigma === 'string') return unrecognised(sigma);
-  const { up, down, temperatureK } = flowReferenceOf(plan);
-  if (!(up > down && down > 0))
-    return unrecognised(
-      `pressure-driven ${report.duct}: the long-duct models need an upstream pressure above a downstream pressure above 0 (have ${up} Pa and ${down} Pa)`,
-    );
-  const state = {
-    viscosityPaS: viscosityPaS(plan.gas.model, temperatureK),
-    massKg: plan.gas.model.massKg,
-    temperatureK,
-    upstreamPressurePa: up,
-    downstreamPressurePa: down,
-  };
-  const quantities = pressureDrivenPredictions(plan, report, state, sigma, x.slip);
-  const tube = report.duct === 'tube';
-  return x.result(
-    tube ? 'pressureDrivenTube' : 'pressureDrivenChannel',
-    `long pressure-driven ${report.duct} (isothermal, locally fully developed; entrance effects of a short duct are not modelled), p_in/p_out = ${(up / down).toPrecision(4)}`,
-    { quantities, profiles: [] },
-    tube
-      ? ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular']
-      : ['noSlip', 'firstOrder', 'secondOrder', 'unified'],
-  );
-}
-
-/** Planar and periodic in x: force-driven channel, Couette or Fourier between the bottom and top walls. */
-function gapCase(x: Context): CaseModelsResult {
-  const { plan, gas, slip } = x;
-  const { bottom, top } = plan.boundaries;
-  if (!isWall(bottom) || !isWall(top))
-    return unrecognised('periodic in x, but the bottom and top sides are not both walls: no gap problem to compare');
-  if (bottom.velocityMPerS.some((v, i) => i > 0 && v !== 0) || top.velocityMPerS.some((v, i) => i > 0 && v !== 0))
-    return unrecognised('a wall moves along z: the gap models are for motion along x');
-  const sigma = commonAccommodation([
-    [bottom, 'bottom'],
-    [top, 'top'],
-  ]);
-  if (typeof sigma === 'string') return unrecognised(sigma);
-  const same = sameTemperature(bottom, top);
-  if (plan.bodyAccelerationXMPerS2 !== 0) {
-    if (!(atRest(bottom) && atRest(top) && same))
-      return unrecognised('a body-force-driven channel is compared only with both walls at rest at one temperature');
-    return x.result(
-      'forceDrivenChannel',
-      'force-driven Poiseuille flow in a planar channel (linearized, fully developed)',
-      forceDrivenChannelPredictions(plan, gas, bottom.temperatureK, sigma, slip),
-      ['noSlip', 'firstOrder', 'secondOrder', 'unified'],
-    );
-  }
-  const du = top.velocityMPerS[0] - bottom.velocityMPerS[0];
-  if (du !== 0 && same) {
-    return x.result(
-      'couette',
-      'planar Couette flow (linearized: constant μ and κ; viscous heating to first order)',
-      couettePredictions(plan, gas, bottom, top, sigma, slip),
-      ['noSlip', 'firstOrder', 'secondOrder', 'freeMolecular'],
-    );
-  }
-  if (du === 0 && atRest(bottom) && atRest(top) && !same) {
-    x.models.noSlip = 'Fourier conduction with no temperature jump';
-    x.models.firstOrder = 'Fourier conduction with the Smoluchowski temperature jump (Smoluchowski 1898)';
-    return x.result(
-      'fourier',
-      'planar Fourier heat conduction (linearized: constant κ)',
-      fourierPredictions(plan, gas, bottom, top, sigma),
-      ['noSlip', 'firstOrder', 'freeMolecular'],
-    );
-  }
-  if (du === 0 && same)
-    return unrecognised(
-      'both walls move together at one temperature: the gas is in equilibrium, there is nothing to compare',
-    );
-  return unrecognised(
-    'the walls both move and have different temperatures: the gap models treat shear and heat conduction one at a time',
-  );
-}
-
-/** Walls on all four sides: the lid-driven square cavity, lid the top side moving along x. */
-function cavityCase(x: Context, left: WallSpec, right: WallSpec, bottom: WallSpec, top: WallSpec): CaseModelsResult {
-  const { plan } = x;
-  const square = Math.abs(plan.grid.lengthXM - plan.grid.lengthYM) <= 1e-9 * plan.grid.lengthYM;
-  const lid = top.velocityMPerS[0];
-  const lidOnly =
-    atRest(left) &&
-    atRest(right) &&
-    atRest(bottom) &&
-    lid !== 0 &&
-    top.velocityMPerS[1] === 0 &&
-    top.velocityMPerS[2] === 0;
-  const oneTemperature = [left, right, bottom].every((w) => sameTemperature(w, top));
-  if (!(square && lidOnly && oneTemperature))
-    return unrecognised(
-      'walls on all four sides, but not a lid-driven square cavity (square domain, only the top wall moving along x, one wall temperature)',
-    );
-  const sigma = commonAccommodation([
-    [left, 'left'],
-    [right, 'right'],
-    [bottom, 'bottom'],
-    [top, 'top'],
-  ]);
-  if (typeof sigma === 'string') return unrecognised(sigma);
-  const first = x.slip.firstOrder;
-  const perLambda = first.value * pathPerViscosityPath(first.meanFreePath);
-  const p = cavityPredictions(plan, lid, sigma, perLambda);
-  x.models.noSlip = `incompressible Navier–Stokes (stream function–vorticity, cavity/solveCavity.ts) at Re = ρUL/μ = ${p.reynolds.toPrecision(4)}, no slip`;
-  x.models.firstOrder = `the same with first-order slip on all walls (slip length ((2 − σ)/σ)·${perLambda.toPrecision(5)}·Kn sides, Kn = ${plan.reference.knudsen.toPrecision(4)})${p.notes.length ? `; ${p.notes.join('; ')}` : ''}`;
-  return x.result(
-    'cavity',
-    `lid-driven square cavity (incompressible, Re = ${p.reynolds.toPrecision(4)}; centreline profiles)`,
-    { quantities: [], profiles: p.profiles },
-    ['noSlip', 'firstOrder'],
-  );
 }
 
 /** What the continuum models predict for a planned case, or why none applies (see the file header). */
@@ -252,7 +78,7 @@ export function caseModelsOf(plan: Plan, options: CaseModelOptions = {}): CaseMo
     unified: 'Beskok & Karniadakis 1999 unified flow-rate model (unifiedFlowModel.ts)',
     freeMolecular: 'free-molecular limit (collisionless gas between the same walls)',
   };
-  const x: Context = {
+  const x: RecogniserContext = {
     plan,
     gas: gasStateFromModel(plan.gas.model, ref.pressurePa, ref.temperatureK),
     slip,
@@ -277,7 +103,7 @@ export function caseModelsOf(plan: Plan, options: CaseModelOptions = {}): CaseMo
     report.lengthM !== undefined &&
     c.bodyAccelerationXMPerS2 === 0
   ) {
-    return ductCase(x, { ...report, lengthM: report.lengthM });
+    return ductCaseModels(x, { ...report, lengthM: report.lengthM });
   }
   if (c.blocks.length > 0)
     return unrecognised(
@@ -299,9 +125,9 @@ export function caseModelsOf(plan: Plan, options: CaseModelOptions = {}): CaseMo
       ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular'],
     );
   }
-  if (periodicX) return gapCase(x);
+  if (periodicX) return gapCaseModels(x);
   if (isWall(left) && isWall(right) && isWall(bottom) && isWall(top) && c.bodyAccelerationXMPerS2 === 0)
-    return cavityCase(x, left, right, bottom, top);
+    return cavityCaseModels(x, left, right, bottom, top);
   return unrecognised(
     'not one of the analytic problems (Couette, Fourier, force-driven channel or tube, long pressure-driven channel or tube, lid-driven cavity)',
   );

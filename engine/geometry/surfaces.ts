@@ -13,7 +13,7 @@
  *        bottom (y = 0, inward +y; the axis when axisymmetric)
  */
 import type { Case, BoundarySpec, WallSpec } from '../case/schema';
-import { SIDE_NAMES, BLOCK_FACES } from '../case/schema';
+import { SIDE_NAMES, BLOCK_FACES } from '../case/caseConstants';
 
 export interface SurfacePlan {
   /** Side name (left …, or the wall's own `name`) or BLOCK.FACE for block faces; walls report under this name. */

@@ -3,8 +3,10 @@
  * weight, sampling schedule — and the numerics advisor's ratios and warnings. Pure and cheap, so a form can call it
  * on every keystroke.
  */
-import type { Case, SideName, BoundarySpec } from '../case/schema';
-import { SIDE_NAMES, parseCase } from '../case/schema';
+import type { Case, BoundarySpec } from '../case/schema';
+import type { SideName } from '../case/caseConstants';
+import { SIDE_NAMES } from '../case/caseConstants';
+import { parseCase } from '../case/schema';
 import {
   cellGeometryOf,
   gasVolumeOfBoxM3,

@@ -4,15 +4,7 @@
  */
 import { blockingAnalysis } from '../stats/blocking';
 import { replicaBlockingAnalysis } from '../stats/replicaBlocking';
-import type { Estimate } from './summarize';
-
-export interface IntegralEstimate extends Estimate {
-  standardError: number;
-  effectiveSamples: number;
-  correlationTimeSteps: number;
-  /** False when the blocking analysis found no plateau: the error bar is then a lower bound. */
-  plateauFound: boolean;
-}
+import type { IntegralEstimate } from '../stats/estimate';
 
 /** A blocking result (one replica or combined) as the estimate reported, with its correlation time in steps. */
 function fromBlocking(

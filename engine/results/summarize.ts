@@ -21,7 +21,8 @@ import { tQuantile975 } from '../stats/studentT';
 import { sampleSetOf, type SampleSet } from './sampleSet';
 import { flowResultOf, type FlowResult } from './flowQuantities';
 import { sectionSeriesKey } from './seriesKeys';
-import { replicaIntegralEstimate, type IntegralEstimate } from './integralEstimate';
+import type { IntegralEstimate } from '../stats/estimate';
+import { replicaIntegralEstimate } from './integralEstimate';
 import { CELL_FIELDS, CELL_FIELD_COUNT, deriveCellFields, type CellFieldConstants } from './cellFields';
 import {
   WALL_QUANTITIES,
@@ -32,14 +33,6 @@ import {
   wallBinAreaM2,
   type WallQuantityName,
 } from './wallQuantities';
-
-export type { IntegralEstimate };
-
-export interface Estimate {
-  mean: number;
-  /** 95 % confidence half-width; NaN when there were too few batches to say. */
-  ci95: number;
-}
 
 /** Values for `rows` items × names.length quantities, row-major. */
 export interface FieldTable {

@@ -1,12 +1,15 @@
 /**
  * The quantities a precision target can name (`walls.top.shearStress`, `flow.massFlowRate`,
  * `flow.sections.outlet.massFlowRate`: the paths of summary.json), and reading such a path's estimate from a result.
- * Shared by `tenuis run --target` and the workbench's run panel, so both accept the same names.
+ * Shared by `tenuis run --target` and the workbench's run panel, so both accept the same names. In results/, not
+ * stats/: it knows the result's shape, while the stop rule (stats/stopping.ts) takes only the numbers read here, so
+ * stats stays below results.
  */
 import type { Plan } from '../plan/plan';
 import { wallNamesOf } from '../kernel/sideTable';
 import { WALL_QUANTITIES } from './wallQuantities';
 import { FLOW_QUANTITIES } from './flowQuantities';
+import type { Estimate } from '../stats/estimate';
 import type { SimulationResult } from './summarize';
 
 /** Every path a target may name for this plan: each wall's quantities, then the flow numbers and sections. */
@@ -22,7 +25,7 @@ export function targetPathsOf(plan: Plan): string[] {
  * Reads a target path from a result: the estimate, or undefined. Names may hold dots (block faces such as
  * `plate.left`), so at each level the longest run of segments that is a key wins.
  */
-export function estimateAt(result: SimulationResult, path: string): { mean: number; ci95: number } | undefined {
+export function estimateAt(result: SimulationResult, path: string): Estimate | undefined {
   const flow = result.flow
     ? {
         ...result.flow.values,

@@ -21,6 +21,7 @@
  * declaration may come a check or two after the minimum. Pure: no clock, no randomness; O(S·W) per push.
  */
 import { tQuantile } from './studentT';
+import { describeDrift, windowDrift, type SeriesDrift } from './windowDrift';
 
 export interface SteadyStateOptions {
   /** W: samples in the window examined at each check (a multiple of batches). */
@@ -39,16 +40,6 @@ export interface SteadyStateOptions {
   readonly confidence?: number;
   /** Drift below this fraction of |window mean| always counts as none (round-off); 1e-9 by default. */
   readonly relativeDriftFloor?: number;
-}
-
-/** One series at the latest check. */
-export interface SeriesDrift {
-  readonly name: string;
-  /** Change of the fitted line over the window, in the series' unit. */
-  readonly drift: number;
-  /** The statistical bound on |drift| (same unit). */
-  readonly bound: number;
-  readonly steady: boolean;
 }
 
 export interface SteadyStateReport {
@@ -72,48 +63,6 @@ function requireInteger(value: number, min: number, what: string): void {
   if (!(Number.isInteger(value) && value >= min)) {
     throw new Error(`steady-state detector: ${what} = ${value}: must be an integer ≥ ${min}`);
   }
-}
-
-/**
- * Drift and bound of one series from its last W samples (ring buffer `ring`, the oldest at `start`): least-squares
- * line through the B batch means at batch positions 0 … B−1 (see the module comment for the method).
- */
-function windowDrift(
-  ring: Float64Array,
-  start: number,
-  batches: number,
-  tFactor: number,
-  relativeDriftFloor: number,
-): { drift: number; bound: number; steady: boolean } {
-  const w = ring.length;
-  const batchLength = w / batches;
-  const centre = (batches - 1) / 2;
-  let meanY = 0;
-  let sxy = 0;
-  let sxx = 0;
-  const means = new Float64Array(batches);
-  for (let j = 0; j < batches; j++) {
-    let sum = 0;
-    for (let i = j * batchLength; i < (j + 1) * batchLength; i++) sum += ring[(start + i) % w];
-    means[j] = sum / batchLength;
-    meanY += means[j] / batches;
-  }
-  for (let j = 0; j < batches; j++) {
-    sxy += (j - centre) * (means[j] - meanY);
-    sxx += (j - centre) ** 2;
-  }
-  const slope = sxy / sxx;
-  let residuals = 0;
-  for (let j = 0; j < batches; j++) residuals += (means[j] - meanY - slope * (j - centre)) ** 2;
-  const slopeSE = Math.sqrt(residuals / (batches - 2) / sxx);
-  const drift = slope * batches;
-  const bound = tFactor * slopeSE * batches;
-  const steady = Math.abs(drift) <= bound || Math.abs(drift) <= relativeDriftFloor * Math.abs(meanY);
-  return { drift, bound, steady };
-}
-
-function describeDrift(d: SeriesDrift, window: number): string {
-  return `"${d.name}" drifts ${d.drift.toPrecision(3)} over the last ${window} samples (bound ±${d.bound.toPrecision(3)})`;
 }
 
 interface Settings {

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { extensionsOf } from '../../app/results/extensions';
 import { comparisonView } from '../../app/results/comparisonView';
 import type { SimulationResult } from '../../engine/results/summarize';
-import type { ContinuumComparisonResult } from '../../engine/continuum/comparison';
+import type { ContinuumComparisonResult } from '../../engine/report/comparison';
 import { estimateText, sig } from '../../app/format';
 
 describe('extensionsOf()', () => {

@@ -4,17 +4,11 @@ import { planOrThrow as planFromCase, runToEnd } from '../support/planOrThrow';
 import { summarize, type SimulationResult } from '../../engine/results/summarize';
 import { CELL_FIELDS } from '../../engine/results/cellFields';
 import { WALL_QUANTITIES } from '../../engine/results/wallQuantities';
-import {
-  csvDocument,
-  csvField,
-  fieldsCsv,
-  profilesCsv,
-  resultFiles,
-  summaryJson,
-  summaryJsonText,
-  surfacesCsv,
-} from '../../engine/results/exports';
-import { continuumComparisonOf, type ContinuumComparison } from '../../engine/continuum/comparison';
+import { csvDocument, csvField } from '../../engine/report/csv';
+import { fieldsCsv, profilesCsv, surfacesCsv } from '../../engine/report/resultCsv';
+import { resultFiles } from '../../engine/report/resultFiles';
+import { summaryJson, summaryJsonText } from '../../engine/report/summaryJson';
+import { continuumComparisonOf, type ContinuumComparison } from '../../engine/report/comparison';
 import type { Plan } from '../../engine/plan/plan';
 
 /**

@@ -6,9 +6,9 @@ import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { planOrThrow } from '../support/planOrThrow';
 import { flowResultOf } from '../../engine/results/flowQuantities';
-import { flowCsv } from '../../engine/results/flowCsv';
+import { flowCsv } from '../../engine/report/flowCsv';
 import { convertFromSI, MOLECULES_PER_S_PER_SCCM } from '../../engine/units/engineeringUnits';
-import type { IntegralEstimate } from '../../engine/results/integralEstimate';
+import type { IntegralEstimate } from '../../engine/stats/estimate';
 
 const K_B = 1.380649e-23; // J/K, SI exact
 const estimate = (mean: number, ci95: number): IntegralEstimate =>

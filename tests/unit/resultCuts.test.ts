@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { FieldTable } from '../../engine/results/summarize';
-import { cutProfileCsv } from '../../engine/results/cutProfileCsv';
+import { cutProfileCsv } from '../../engine/report/cutProfileCsv';
 import { buildPreset } from '../../engine/case/presets';
 import {
   cutColumn,

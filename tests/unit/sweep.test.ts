@@ -3,16 +3,11 @@ import { describe, expect, it } from 'vitest';
 import { parseCase, type Case, type CaseInput } from '../../engine/case/schema';
 import { plan, type Plan } from '../../engine/plan/plan';
 import { buildPreset } from '../../engine/case/presets';
-import {
-  caseAtSweepPoint,
-  caseValueOf,
-  scalePressures,
-  sweepCsv,
-  sweepJson,
-  sweepValues,
-  type SweepRow,
-} from '../../engine/case/sweep';
-import type { SummaryJson } from '../../engine/results/exports';
+import { caseAtSweepPoint, caseValueOf } from '../../engine/plan/sweepPoints';
+import { scalePressures, sweepValues } from '../../engine/case/sweep';
+import { sweepCsv, sweepJson } from '../../engine/report/sweepTable';
+import type { SweepRow } from '../../engine/report/sweepRow';
+import type { SummaryJson } from '../../engine/report/summaryJson';
 
 function parsed(input: unknown): Case {
   const r = parseCase(input);

@@ -3,7 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { runSweepPoints, type SweepPointInput, type SweepRunDeps } from '../../app/run/sweepController';
 import type { FinishedRun, RunCallbacks, RunEnd, RunHandle, RunRequest } from '../../app/engine/runApi';
-import type { SweepPointRun, SweepRow } from '../../engine/case/sweep';
+import type { SweepPointRun, SweepRow } from '../../engine/report/sweepRow';
 
 /** A run that ends when told to: ok with a result that names its case, or refused. */
 interface FakeRun {

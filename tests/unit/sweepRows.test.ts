@@ -5,10 +5,15 @@ import { parseCase, type Case } from '../../engine/case/schema';
 import { buildPreset } from '../../engine/case/presets';
 import { createSimulation, runToCompletion } from '../../engine/run/simulation';
 import { summarize } from '../../engine/results/summarize';
-import { resultFiles, type SummaryJson } from '../../engine/results/exports';
-import { continuumComparisonOf } from '../../engine/continuum/comparison';
+import { resultFiles } from '../../engine/report/resultFiles';
+import type { SummaryJson } from '../../engine/report/summaryJson';
+import { continuumComparisonOf } from '../../engine/report/comparison';
 import { caseModelsOf } from '../../engine/continuum/caseModels';
-import { planSweepPoints, sweepContinuumCurves, sweepCsv, sweepRowOf, sweepValues } from '../../engine/case/sweep';
+import { planSweepPoints } from '../../engine/plan/sweepPoints';
+import { sweepContinuumCurves } from '../../engine/report/sweepCurves';
+import { sweepCsv } from '../../engine/report/sweepTable';
+import { sweepRowOf } from '../../engine/report/sweepRow';
+import { sweepValues } from '../../engine/case/sweep';
 
 function parsed(input: unknown): Case {
   const r = parseCase(input);

@@ -3,7 +3,7 @@
  * the module's documented ones (tolerance 2 %, kinetic above 10 %; common practice, no source).
  */
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_TOLERANCE, KINETIC_THRESHOLD, integralVerdict, profileVerdict } from '../../engine/continuum/verdict';
+import { DEFAULT_TOLERANCE, KINETIC_THRESHOLD, integralVerdict, profileVerdict } from '../../engine/report/verdict';
 
 const dsmc = { mean: 100, ci95: 1.1 };
 

@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { runToEnd } from '../support/planOrThrow';
 import { summarize } from '../../engine/results/summarize';
-import type { IntegralEstimate } from '../../engine/results/integralEstimate';
+import type { IntegralEstimate } from '../../engine/stats/estimate';
 import { field } from './runGapPreset';
 
 function expectSameFlow(sections: Readonly<Record<string, IntegralEstimate>>): void {

@@ -1,11 +1,11 @@
 /**
- * A profile along one cut through the cell grid as CSV, in the dialect of exports.ts (RFC 4180 fields, LF line ends,
+ * A profile along one cut through the cell grid as CSV, in the dialect of csv.ts (RFC 4180 fields, LF line ends,
  * numbers as shortest round-trip text, non-finite values as empty fields, formula-like text escaped, SI units in
  * brackets in every header). Columns: the position along the cut, the cut's fixed coordinate (vertical cut: x,
  * horizontal cut: y; absent for the row average), then each quantity's mean and ci95 followed by the continuum
  * predictions given for it (`velocityX no-slip [m/s]`). Points with no gas (inside a block) are empty fields.
  */
-import { csvDocument } from './exports';
+import { csvDocument, estimateHeaders, unitHeader } from './csv';
 
 export interface CutProfileTable {
   /** The coordinate the profile runs along. */
@@ -36,9 +36,8 @@ export function cutProfileCsv(cut: CutProfileTable, predictions: readonly CutPre
   const header = [`${cut.along} [m]`, ...(fixed ? [`${other} [m]`] : [])];
   cut.names.forEach((name, f) =>
     header.push(
-      `${name} [${cut.units[f]}]`,
-      `${name} ci95 [${cut.units[f]}]`,
-      ...models[f].map((p) => `${name} ${p.model} [${cut.units[f]}]`),
+      ...estimateHeaders(name, cut.units[f]),
+      ...models[f].map((p) => unitHeader(`${name} ${p.model}`, cut.units[f])),
     ),
   );
   const rows: number[][] = [];

@@ -3,9 +3,9 @@
  * practice reads them in (throughput in mbar·L/s, conductance in L/s; molar flow is already in sccm) — with the 95 %
  * half-width next to each value, and each section's mass flow rate.
  */
-import type { FlowResult } from './flowQuantities';
-import { FLOW_QUANTITIES, flowQuantityUnits } from './flowQuantities';
-import { csvDocument } from './exports';
+import type { FlowResult } from '../results/flowQuantities';
+import { FLOW_QUANTITIES, flowQuantityUnits } from '../results/flowQuantities';
+import { csvDocument } from './csv';
 
 /** 1 Pa·m³/s = 10 mbar·L/s (1 mbar = 100 Pa, 1 L = 1e-3 m³); 1 m³/s = 1000 L/s. */
 const ENGINEERING = {

@@ -1,11 +1,12 @@
 /**
  * Which continuum model is good enough: for each quantity a DSMC run measured and the models predicted
- * (caseModels.ts), the deviation of every model from DSMC and a plain-language verdict with the numbers behind it.
- * Pure. The thresholds (also in README.md, "Which model is good enough"):
+ * (continuum/caseModels.ts), the deviation of every model from DSMC and a plain-language verdict with the numbers
+ * behind it. Pure; in report/ beside the comparison that applies it. The thresholds (also in README.md, "Which model is good enough"):
  *
  * - Relative deviation of a model: (model − DSMC)/scale. Integral quantities: scale = |DSMC mean|. Profiles: the
- *   profile's scale (caseModelTypes.ts ProfileScale: e.g. the wall speed difference of Couette flow, the centre
- *   speed of a channel, the lid speed of a cavity) — a point-wise ratio would blow up where the profile crosses 0.
+ *   profile's scale (continuum/caseModelTypes.ts ProfileScale: e.g. the wall speed difference of Couette flow, the
+ *   centre speed of a channel, the lid speed of a cavity) — a point-wise ratio would blow up where the profile
+ *   crosses 0.
  * - DSMC error: the 95 % half-width over the same scale. Profiles use profile-wide measures over the N points where
  *   both DSMC and the model have a value:
  *     deviation = RMS_i of (m_i − d_i)/scale,   max = max_i |m_i − d_i|/scale,
@@ -20,7 +21,7 @@
  *   "continuum models off by more than 10 %: kinetic effects dominate".
  * - Otherwise, no model adequate: "no model within tolerance", naming the closest.
  */
-import { CONTINUUM_MODELS, MODEL_LABELS, type ContinuumModelName } from './caseModelTypes';
+import { CONTINUUM_MODELS, MODEL_LABELS, type ContinuumModelName } from '../continuum/caseModelTypes';
 
 /** The default tolerance: 2 % of the quantity's scale. */
 export const DEFAULT_TOLERANCE = 0.02;

@@ -1,12 +1,14 @@
 /**
- * continuumComparisonOf(plan, result): the continuum predictions of caseModels.ts set beside a finished DSMC result,
- * with a verdict per quantity (verdict.ts). What summary.json (`continuum`, `verdict`) and profiles.csv (one column
- * per model) are written from (engine/results/exports.ts). Pure.
+ * continuumComparisonOf(plan, result): the continuum predictions of continuum/caseModels.ts set beside a finished
+ * DSMC result, with a verdict per quantity (verdict.ts). What summary.json (`continuum`, `verdict`) and profiles.csv
+ * (one column per model) are written from (summaryJson.ts, continuumJson.ts, resultCsv.ts). Pure. In report/, the
+ * top layer, because it reads both the results and the continuum models.
  */
 import type { Plan } from '../plan/plan';
 import type { FieldTable, SimulationResult } from '../results/summarize';
-import { caseModelsOf, type CaseModelOptions } from './caseModels';
-import type { CaseModels, ContinuumModelName, PredictedProfile, ProfileLine } from './caseModelTypes';
+import type { Estimate } from '../stats/estimate';
+import { caseModelsOf, type CaseModelOptions } from '../continuum/caseModels';
+import type { CaseModels, ContinuumModelName, PredictedProfile, ProfileLine } from '../continuum/caseModelTypes';
 import { integralVerdict, profileVerdict, type QuantityVerdict, type VerdictOptions } from './verdict';
 
 export interface ContinuumComparison {
@@ -28,14 +30,14 @@ export type ContinuumComparisonResult = ContinuumComparison | { readonly recogni
 export interface ComparisonOptions extends CaseModelOptions, VerdictOptions {}
 
 /** The DSMC {mean, ci95} of `walls.SIDE.QUANTITY` or `flow.QUANTITY`; undefined if the result has none. */
-export function dsmcIntegral(result: SimulationResult, key: string): { mean: number; ci95: number } | undefined {
+export function dsmcIntegral(result: SimulationResult, key: string): Estimate | undefined {
   const parts = key.split('.');
   if (parts[0] === 'walls' && parts.length === 3) {
-    const e = (result.walls[parts[1]] as Record<string, { mean: number; ci95: number }> | undefined)?.[parts[2]];
+    const e = (result.walls[parts[1]] as Record<string, Estimate> | undefined)?.[parts[2]];
     return e ? { mean: e.mean, ci95: e.ci95 } : undefined;
   }
   if (parts[0] === 'flow' && parts.length === 2) {
-    const e = (result.flow?.values as Record<string, { mean: number; ci95: number }> | undefined)?.[parts[1]];
+    const e = (result.flow?.values as Record<string, Estimate> | undefined)?.[parts[1]];
     return e ? { mean: e.mean, ci95: e.ci95 } : undefined;
   }
   return undefined;

@@ -1,0 +1,78 @@
+/**
+ * Preset `poiseuille`: the force-driven planar channel, periodic along x between two walls and driven by a uniform
+ * body acceleration — the stand-in for a long pressure-driven channel in the linear regime, with its one flow
+ * section `middle`.
+ */
+import type { SpeciesId } from '../gas/species';
+import { modelFromSpecies, mostProbableSpeedMPerS, type CollisionModelKind } from '../gas/molecularModel';
+import { formatQuantity } from '../units/engineeringUnits';
+import {
+  type Preset,
+  gasParameter,
+  modelParameter,
+  knudsenParameter,
+  pressureForKnudsenPa,
+  defaultGapNumerics,
+} from './presetParameters';
+import { accommodationParameter, ductCommon, ductNumerics, temperatureParameter, wallOf } from './ductPresetParts';
+
+export const poiseuille: Preset = {
+  name: 'poiseuille',
+  description:
+    'force-driven planar channel: gas between two parallel walls, periodic along x, driven by a uniform body acceleration (the stand-in for a long pressure-driven channel in the linear regime)',
+  parameters: [
+    gasParameter,
+    modelParameter,
+    knudsenParameter,
+    {
+      name: 'gap',
+      kind: 'length',
+      unitShown: 'µm',
+      default: 1e-6,
+      min: 0,
+      exclusiveMin: true,
+      description: 'distance H between the walls',
+    },
+    {
+      name: 'acceleration',
+      kind: 'acceleration',
+      unitShown: 'm/s²',
+      default: null,
+      min: 0,
+      exclusiveMin: true,
+      description: 'body acceleration along x; default: a mean speed of about 5 % of v0 = sqrt(2kT/m) (linear regime)',
+    },
+    temperatureParameter,
+    accommodationParameter,
+    ...ductNumerics,
+  ],
+  build(v) {
+    const h = v.gap as number;
+    const model = modelFromSpecies(v.gas as SpeciesId, v.model as CollisionModelKind);
+    const p = pressureForKnudsenPa(model, v.temperature as number, v.knudsen as number, h);
+    const v0 = mostProbableSpeedMPerS(model.massKg, v.temperature as number);
+    const delta = Math.sqrt(Math.PI) / (2 * (v.knudsen as number));
+    // Mean speed ≈ H a G_P / v0 with G_P ≈ δ/6 + 1.5 across the range (Sharipov & Seleznev 1998): aim at 0.05 v0.
+    const a = (v.acceleration as number | undefined) ?? (0.05 * v0 * v0) / (h * (delta / 6 + 1.5));
+    const auto = defaultGapNumerics(v.knudsen as number);
+    const cellsY = (v.cellsY as number | undefined) ?? auto.cellsY;
+    const lx = h / cellsY;
+    const c = ductCommon({ ...v, cellsY, sampleSteps: v.sampleSteps ?? auto.sampleSteps }, p, lx, h);
+    return {
+      ...c,
+      name: `poiseuille ${v.gas} Kn ${v.knudsen}`,
+      description: `Force-driven planar channel of ${v.gas} (${v.model}), Kn = ${v.knudsen}, gap ${formatQuantity(h, 'µm')}, acceleration ${a.toPrecision(3)} m/s²`,
+      domain: { lengthXM: lx, lengthYM: h, characteristicLengthM: h },
+      boundaries: { left: { type: 'periodic' }, right: { type: 'periodic' }, bottom: wallOf(v), top: wallOf(v) },
+      bodyAccelerationXMPerS2: a,
+      flowSections: [{ name: 'middle', xM: lx / 2 }],
+      flowReport: { duct: 'channel', sizeM: h },
+      numerics: {
+        ...c.numerics,
+        cellsX: 1,
+        cellsY,
+        particlesPerCell: (v.particlesPerCell as number | undefined) ?? auto.particlesPerCell,
+      },
+    };
+  },
+};
