@@ -4,7 +4,7 @@
  */
 import type { CaseInput } from '../../engine/case/schema';
 import type { Performance } from '../../engine/results/exports';
-import type { ReplicaEnd } from '../engine/runApi';
+import type { ReplicaEnd } from '../bridge/types';
 
 export interface SavedRunMeta {
   readonly id: string;

@@ -6,7 +6,7 @@
  * running was interrupted (by a reload or a closed tab) after its `pointsDone` points.
  */
 import type { SweepContinuumCurves, SweepParameter, SweepRow } from '../../engine/case/sweep';
-import type { SweepQuantity, SweepRequest } from '../engine/sweepApi';
+import type { SweepQuantity, SweepRequest } from '../bridge/types';
 import type { SweepFormState } from '../sweep/sweepStore';
 
 export type SavedSweepStatus = 'running' | 'finished' | 'stopped';

@@ -4,7 +4,7 @@
  * into the form, and from then on the table replaces them (until "use the preset's blocks again").
  */
 import { useRef } from 'react';
-import { setupApi } from '../engine/loadEngine';
+import { setupApi } from '../bridge/loadEngine';
 import {
   addBlockRow,
   blockTableFrom,

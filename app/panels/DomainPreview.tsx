@@ -5,7 +5,7 @@
  */
 import { useRef, useState, type PointerEvent } from 'react';
 import type { CaseInput, SideName } from '../../engine/case/schema';
-import { setupApi } from '../engine/loadEngine';
+import { setupApi } from '../bridge/loadEngine';
 import { sig } from '../format';
 import { lengthLabel, snapToGrid, type RectSI } from '../setup/blockEdits';
 

@@ -3,7 +3,7 @@
  * code: RFC 4180 fields, units in every header, ci95 columns next to values, formula-like text escaped), the case,
  * and the merged samples as a sample file for `tenuis merge`.
  */
-import { loadRunApi } from '../engine/loadEngine';
+import { loadRunApi } from '../bridge/loadEngine';
 import type { CachedResult } from '../results/resultCache';
 import { downloadBlob, downloadText } from '../io/download';
 import { slug } from '../format';

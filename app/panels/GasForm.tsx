@@ -3,7 +3,7 @@
  * from the Knudsen number is that gas's), or a custom gas with the case file's gas.custom fields. A custom gas keeps
  * the Knudsen number typed above: every pressure of the case is rescaled to it (app/setup/deriveCase.ts).
  */
-import { setupApi } from '../engine/loadEngine';
+import { setupApi } from '../bridge/loadEngine';
 import type { SpeciesId } from '../../engine/gas/species';
 import { QuantityField } from '../fields/QuantityField';
 import {

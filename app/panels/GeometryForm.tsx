@@ -2,7 +2,7 @@
  * The starting geometry (read from the engine's presets at run time) and the form of its parameters; the gas and
  * collision model parameters are edited in the gas panel (GasForm).
  */
-import { setupApi } from '../engine/loadEngine';
+import { setupApi } from '../bridge/loadEngine';
 import type { Preset } from '../../engine/case/presets';
 import { ParameterField } from '../fields/ParameterField';
 import { appStore, useApp } from '../store/appStore';

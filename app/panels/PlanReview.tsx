@@ -1,5 +1,5 @@
 /** Before the run: reference state, the advisor's ratios with a pass/warn mark, size, expected error and time. */
-import type { PlanView } from '../setup/planView';
+import type { PlanView } from '../bridge/types';
 import { bytesText, countText, durationText, lengthUnitFor, sig } from '../format';
 import { useApp } from '../store/appStore';
 

@@ -20,7 +20,7 @@ import {
   type ProfileCut,
 } from '../results/profileCut';
 import { solidCellsFor, type ResultGeometry } from '../results/resultGeometry';
-import { loadRunApi } from '../engine/loadEngine';
+import { loadRunApi } from '../bridge/loadEngine';
 import { downloadText } from '../io/download';
 import { estimateText, lengthUnitFor, sig, slug } from '../format';
 import { appStore, useApp } from '../store/appStore';

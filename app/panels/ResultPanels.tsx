@@ -1,7 +1,7 @@
 /** The result of a run (live or finished): numbers, warnings, plots, extension cards and exports. */
 import { useMemo } from 'react';
 import { extensionsOf } from '../results/extensions';
-import { runApiIfLoaded } from '../engine/loadEngine';
+import { runApiIfLoaded } from '../bridge/loadEngine';
 import { useComparedResult, useShownResult } from '../results/useResult';
 import { countText, durationText } from '../format';
 import { WallNumbersCard } from './WallNumbersCard';

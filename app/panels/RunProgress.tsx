@@ -1,6 +1,6 @@
 /** Progress of the run: bar, steps, samples, elapsed and remaining time, each replica's state, and notices. */
 import { countText, durationText } from '../format';
-import type { TargetView } from '../engine/runApi';
+import type { TargetView } from '../bridge/types';
 import { pauseRun, resumeRun, stopRun } from '../run/runController';
 import { appStore, useApp } from '../store/appStore';
 

@@ -2,7 +2,7 @@
  * Per wall: model, accommodation, temperature and speed along the wall, applied on top of the case the geometry form
  * builds. A field left empty keeps the preset's value (shown greyed as its placeholder).
  */
-import { setupApi } from '../engine/loadEngine';
+import { setupApi } from '../bridge/loadEngine';
 import type { SideName, WallSpec } from '../../engine/case/schema';
 import { QuantityField } from '../fields/QuantityField';
 import { convertEntry, entryOfSI, numberText, fromSI, unitChoices, type ParamEntry } from '../setup/formModel';

@@ -2,8 +2,8 @@
  * Starts, pauses, resumes and stops runs, outside React: loads the run chunk, feeds progress and live results into
  * the store (progress at most five times a second), and keeps every finished or stopped run in IndexedDB.
  */
-import { loadRunApi } from '../engine/loadEngine';
-import type { RunHandle, FinishedRun } from '../engine/runApi';
+import { loadRunApi } from '../bridge/loadEngine';
+import type { RunHandle, FinishedRun } from '../bridge/runApi';
 import { putResult } from '../results/resultCache';
 import { readTestHooks } from '../testing/testHooks';
 import { targetRequestOf } from './targetSetting';

@@ -1,5 +1,5 @@
 /** Reopening, comparing, renaming and deleting saved runs (IndexedDB), outside React. */
-import { loadRunApi } from '../engine/loadEngine';
+import { loadRunApi } from '../bridge/loadEngine';
 import { deleteRun, getRun, listRuns, renameRun } from '../io/db';
 import { dropResult, getResult, putResult } from '../results/resultCache';
 import type { AppStore } from '../store/store';

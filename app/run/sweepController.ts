@@ -5,7 +5,7 @@
  * interrupted) and runs no more. The run API and the row function are injected: the page passes the lazily loaded
  * run chunk's, the unit tests a fake pool. Single runs (runController.ts) are untouched by it.
  */
-import type { RunCallbacks, RunHandle, RunProgressView, RunRequest } from '../engine/runApi';
+import type { RunCallbacks, RunHandle, RunProgressView, RunRequest } from '../bridge/runApi';
 import type { SweepPointRun, SweepRow } from '../../engine/case/sweep';
 
 export interface SweepRunDeps {

@@ -3,10 +3,8 @@
  * results (which result is shown, and the saved runs), ui (views and selections). Large typed arrays never enter it:
  * results live in results/resultCache.ts and the store holds their id and a version number.
  */
-import type { CaseDerivation } from '../setup/deriveCase';
+import type { CaseDerivation, PlanView, RunProgressView } from '../bridge/types';
 import type { FormState, ParamEntry, WallEdit, CaseSource, GasEdit, BlockTable } from '../setup/formModel';
-import type { PlanView } from '../setup/planView';
-import type { RunProgressView } from '../engine/runApi';
 import type { SideName } from '../../engine/case/schema';
 import type { SavedRunMeta } from '../io/savedRun';
 import type { ExampleEntry } from '../io/examples';

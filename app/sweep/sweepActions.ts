@@ -5,8 +5,8 @@
  * the Run panel; the app store's run state is left alone, so single runs go on as before. The sweep is saved in
  * IndexedDB as it starts and as each point ends (savedSweeps.ts), so a reload keeps its finished points.
  */
-import { loadRunApi } from '../engine/loadEngine';
-import type { RunProgressView } from '../engine/runApi';
+import { loadRunApi } from '../bridge/loadEngine';
+import type { RunProgressView } from '../bridge/runApi';
 import type { SweepContinuumCurves } from '../../engine/case/sweep';
 import { runSweepPoints, type SweepHandle } from '../run/sweepController';
 import { readTestHooks } from '../testing/testHooks';

@@ -3,7 +3,7 @@
  * `tenuis sweep` (ends above 0, 1 to 999 points, two different ends unless one point). Pure; the unit conversion
  * is passed in (the engine's, through the set-up API).
  */
-import type { SweepRequest } from '../engine/sweepApi';
+import type { SweepRequest } from '../bridge/types';
 import type { SweepFormState } from './sweepStore';
 
 export type SweepFormResult =

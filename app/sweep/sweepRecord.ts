@@ -4,7 +4,7 @@
  * `interrupted` for a sweep that a reload ended.
  */
 import type { SweepRow } from '../../engine/case/sweep';
-import type { SweepRequest } from '../engine/sweepApi';
+import type { SweepRequest } from '../bridge/types';
 import { sweepCounts, sweepStanding, type SavedSweepRecord, type SweepPlanOutline } from '../io/savedSweep';
 import type { SweepFormState, SweepRunState } from './sweepStore';
 

@@ -6,8 +6,8 @@
  */
 import { createStore } from 'zustand/vanilla';
 import { useStore } from 'zustand';
-import type { RunProgressView } from '../engine/runApi';
-import type { SweepRequest } from '../engine/sweepApi';
+import type { RunProgressView } from '../bridge/types';
+import type { SweepRequest } from '../bridge/types';
 import type { SavedSweepMeta, SweepPlanOutline } from '../io/savedSweep';
 import type { SweepContinuumCurves, SweepParameter, SweepRow, SweepSpacing } from '../../engine/case/sweep';
 

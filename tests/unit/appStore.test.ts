@@ -3,10 +3,10 @@
  * placed at their fields, and case files that are refused without changing anything.
  */
 import { describe, expect, it } from 'vitest';
-import * as setup from '../../app/engine/setupApi';
+import * as setup from '../../app/bridge/setupApi';
 import { createAppStore } from '../../app/store/store';
 import { convertEntry, entriesFor } from '../../app/setup/formModel';
-import type { SetupApi } from '../../app/engine/loadEngine';
+import type { SetupApi } from '../../app/bridge/types';
 
 const api = setup as SetupApi;
 const newStore = (cores = 2) => createAppStore({ setup: () => api }, cores);

@@ -2,7 +2,7 @@
 // failed and the rest go on, stop() keeps the running point's samples and runs no more.
 import { describe, expect, it } from 'vitest';
 import { runSweepPoints, type SweepPointInput, type SweepRunDeps } from '../../app/run/sweepController';
-import type { FinishedRun, RunCallbacks, RunEnd, RunHandle, RunRequest } from '../../app/engine/runApi';
+import type { FinishedRun, RunCallbacks, RunEnd, RunHandle, RunRequest } from '../../app/bridge/types';
 import type { SweepPointRun, SweepRow } from '../../engine/case/sweep';
 
 /** A run that ends when told to: ok with a result that names its case, or refused. */

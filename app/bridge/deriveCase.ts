@@ -33,8 +33,8 @@ import {
   type FormState,
   type ParamEntry,
   type UnitApi,
-} from './formModel';
-import { lengthLabel } from './blockEdits';
+} from '../setup/formModel';
+import { lengthLabel } from '../setup/blockEdits';
 
 export interface CaseDerivation {
   /** The valid case, or null while anything is wrong. */

@@ -1,17 +1,17 @@
 /**
  * Loads the engine's main-thread parts lazily, each into a chunk of its own: the set-up API (presets, validation,
- * planner) and the run API (worker pool, merging, summaries, exports). Everything else in app/ imports them as
- * types only, so the engine never lands in the main bundle.
+ * planner) and the run API (worker pool, merging, summaries, exports). Each chunk is taken as the interface it
+ * promises (types.ts), so the type check fails here if a chunk stops providing a member. Everything else in app/
+ * imports the chunks' types only, so the engine never lands in the main bundle.
  */
-export type SetupApi = typeof import('./setupApi');
-export type RunApi = typeof import('./runApi');
+import type { RunApi, SetupApi } from './types';
 
 let setup: SetupApi | null = null;
 let setupLoading: Promise<SetupApi> | null = null;
 let runLoading: Promise<RunApi> | null = null;
 
 export function loadSetupApi(): Promise<SetupApi> {
-  setupLoading ??= import('./setupApi').then((m) => (setup = m));
+  setupLoading ??= import('./setupApi').then((m: SetupApi) => (setup = m));
   return setupLoading;
 }
 
@@ -24,7 +24,7 @@ export function setupApi(): SetupApi {
 let run: RunApi | null = null;
 
 export function loadRunApi(): Promise<RunApi> {
-  runLoading ??= import('./runApi').then((m) => (run = m));
+  runLoading ??= import('./runApi').then((m: RunApi) => (run = m));
   return runLoading;
 }
 
