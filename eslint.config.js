@@ -69,7 +69,6 @@ export const APP_BRIDGE = [
   'app/bridge/runApi.ts',
   'app/bridge/sweepApi.ts',
   'app/bridge/liveViews.ts',
-  'app/bridge/liveSummary.worker.ts',
 ];
 
 /**

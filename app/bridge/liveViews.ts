@@ -8,7 +8,7 @@ import type { ReplicaFactory } from '../../workers/replicaPool';
 import type { ReplicaApi } from '../../workers/protocol';
 import { browserReplicaFactory } from '../../workers/browserReplica';
 import type { SimulationResult } from '../../engine/results/summarize';
-import type { LiveSummaryApi } from './liveSummary.worker';
+import type { LiveSummaryApi } from '../../workers/liveSummary.worker';
 
 /** Replicas whose workers are up, for the live snapshots: stream → its remote API. */
 export type LiveReplicas = Map<number, Remote<ReplicaApi>>;
@@ -60,7 +60,7 @@ const SNAPSHOT_TIMEOUT_MS = 3000;
  */
 /** A summary worker (decoding, merging and summarising samples off the page's thread) and how to end it. */
 export function openSummaryWorker(name: string): { summary: Remote<LiveSummaryApi>; close(): void } {
-  const worker = new Worker(new URL('./liveSummary.worker.ts', import.meta.url), { type: 'module', name });
+  const worker = new Worker(new URL('../../workers/liveSummary.worker.ts', import.meta.url), { type: 'module', name });
   return { summary: wrap<LiveSummaryApi>(worker), close: () => worker.terminate() };
 }
 

@@ -6,7 +6,7 @@
 import { runReplicaPool, type PoolProgress, type ReplicaReport } from '../../workers/replicaPool';
 import { defaultReplicaCount } from '../../workers/browserReplica';
 import { observedFactory, openSummaryWorker, startLiveViews, type LiveReplicas } from './liveViews';
-import type { FinishedSummary } from './liveSummary.worker';
+import type { FinishedSummary } from '../../workers/liveSummary.worker';
 import { transfer } from 'comlink';
 import { estimateAt } from '../../engine/results/targetQuantities';
 import { evaluateStop, estimateRemaining, relativeHalfWidthOf } from '../../engine/stats/stopping';

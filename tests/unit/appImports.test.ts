@@ -19,7 +19,6 @@ const LAZY = new Set([
   'app/bridge/runApi.ts',
   'app/bridge/sweepApi.ts',
   'app/bridge/liveViews.ts',
-  'app/bridge/liveSummary.worker.ts',
 ]);
 
 function files(dir: string): string[] {

@@ -3,11 +3,11 @@
  * page's thread only passes buffers along while a run goes on. One such worker per run (engine/runApi.ts).
  */
 import { expose, transfer } from 'comlink';
-import { decodeSampleSet, encodeSampleSet } from '../../engine/io/sampleFile';
-import type { SampleSet } from '../../engine/results/sampleSet';
-import { continuumComparisonOf, type ContinuumComparisonResult } from '../../engine/continuum/comparison';
-import { mergeSampleSets } from '../../engine/results/mergeSamples';
-import { summarizeSamples, type SimulationResult } from '../../engine/results/summarize';
+import { decodeSampleSet, encodeSampleSet } from '../engine/io/sampleFile';
+import type { SampleSet } from '../engine/results/sampleSet';
+import { continuumComparisonOf, type ContinuumComparisonResult } from '../engine/continuum/comparison';
+import { mergeSampleSets } from '../engine/results/mergeSamples';
+import { summarizeSamples, type SimulationResult } from '../engine/results/summarize';
 
 /** The typed arrays' buffers of a result, to transfer rather than copy it back. */
 function buffersOf(r: SimulationResult): ArrayBuffer[] {
