@@ -9,7 +9,7 @@ import { readTestHooks } from '../testing/testHooks';
 import { targetRequestOf } from './targetSetting';
 import { sweepStore } from '../sweep/sweepStore';
 import { putRun, listRuns, saveSpeed } from '../io/db';
-import type { SavedRunRecord } from '../io/savedRun';
+import type { SavedRunRecord } from '../saved/savedRun';
 import type { AppStore } from '../store/store';
 import type { CaseInput } from '../../engine/case/schema';
 

@@ -6,7 +6,7 @@
 import type { CaseDerivation, PlanView, RunProgressView } from '../bridge/types';
 import type { FormState, ParamEntry, WallEdit, CaseSource, GasEdit, BlockTable } from '../setup/formModel';
 import type { SideName } from '../../engine/case/schema';
-import type { SavedRunMeta } from '../io/savedRun';
+import type { SavedRunMeta } from '../saved/savedRun';
 import type { ExampleEntry } from '../io/examples';
 
 export type { FormState, ParamEntry, WallEdit, CaseSource, GasEdit, BlockTable };

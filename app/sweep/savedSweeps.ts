@@ -4,7 +4,7 @@
  */
 import { loadRunApi } from '../bridge/loadEngine';
 import { deleteSweep, getSweep, listSweeps, patchSweep, putSweep } from '../io/db';
-import { sweepMetaOf, type SavedSweepMeta, type SavedSweepRecord } from '../io/savedSweep';
+import { sweepMetaOf, type SavedSweepMeta, type SavedSweepRecord } from './savedSweep';
 import { shownSweepOf } from './sweepRecord';
 import { initialSweepRun, sweepStore, SWEEP_BUSY as BUSY } from './sweepStore';
 

@@ -8,7 +8,7 @@
 import { loadRunApi } from '../bridge/loadEngine';
 import type { RunProgressView } from '../bridge/runApi';
 import type { SweepContinuumCurves } from '../../engine/case/sweep';
-import { runSweepPoints, type SweepHandle } from '../run/sweepController';
+import { runSweepPoints, type SweepHandle } from './sweepController';
 import { readTestHooks } from '../testing/testHooks';
 import { appStore } from '../store/appStore';
 import { initialSweepRun, sweepStore, SWEEP_BUSY } from './sweepStore';

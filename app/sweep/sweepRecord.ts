@@ -5,7 +5,7 @@
  */
 import type { SweepRow } from '../../engine/case/sweep';
 import type { SweepRequest } from '../bridge/types';
-import { sweepCounts, sweepStanding, type SavedSweepRecord, type SweepPlanOutline } from '../io/savedSweep';
+import { sweepCounts, sweepStanding, type SavedSweepRecord, type SweepPlanOutline } from './savedSweep';
 import type { SweepFormState, SweepRunState } from './sweepStore';
 
 /** "tube: Kn 1–10, 3 points (log)", "channel: pressure 20–80 mbar, 4 points (linear)". */

@@ -8,7 +8,7 @@ import { createStore } from 'zustand/vanilla';
 import { useStore } from 'zustand';
 import type { RunProgressView } from '../bridge/types';
 import type { SweepRequest } from '../bridge/types';
-import type { SavedSweepMeta, SweepPlanOutline } from '../io/savedSweep';
+import type { SavedSweepMeta, SweepPlanOutline } from './savedSweep';
 import type { SweepContinuumCurves, SweepParameter, SweepRow, SweepSpacing } from '../../engine/case/sweep';
 
 /** `interrupted`: a saved sweep this page did not finish (a reload or a closed tab ended it), shown with its finished points. */

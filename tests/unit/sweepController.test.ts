@@ -1,7 +1,7 @@
-// app/run/sweepController.ts driven by a fake run API: points run one after the other, a failed point is marked
+// app/sweep/sweepController.ts driven by a fake run API: points run one after the other, a failed point is marked
 // failed and the rest go on, stop() keeps the running point's samples and runs no more.
 import { describe, expect, it } from 'vitest';
-import { runSweepPoints, type SweepPointInput, type SweepRunDeps } from '../../app/run/sweepController';
+import { runSweepPoints, type SweepPointInput, type SweepRunDeps } from '../../app/sweep/sweepController';
 import type { FinishedRun, RunCallbacks, RunEnd, RunHandle, RunRequest } from '../../app/bridge/types';
 import type { SweepPointRun, SweepRow } from '../../engine/case/sweep';
 

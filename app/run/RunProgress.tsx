@@ -1,7 +1,7 @@
 /** Progress of the run: bar, steps, samples, elapsed and remaining time, each replica's state, and notices. */
 import { countText, durationText } from '../format';
 import type { TargetView } from '../bridge/types';
-import { pauseRun, resumeRun, stopRun } from '../run/runController';
+import { pauseRun, resumeRun, stopRun } from './runController';
 import { appStore, useApp } from '../store/appStore';
 
 function percentText(fraction: number): string {

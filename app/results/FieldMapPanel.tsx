@@ -2,15 +2,15 @@
  * A map of one cell field over the domain (heatmap of the cells), with the case's walls and blocks drawn on top.
  * Speed and Mach number are derived from the cell means (results/derivedFields.ts); cells with no gas are blank.
  */
-import { cellSizeOf } from '../results/profileCut';
+import { cellSizeOf } from './profileCut';
 import { useMemo } from 'react';
 import type { SimulationResult } from '../../engine/results/summarize';
 import { Plot } from '../charts/Plot';
 import type { Data, Layout } from '../charts/plotly';
 import { lengthUnitFor } from '../format';
-import { withDerivedFields } from '../results/derivedFields';
-import { geometryOverlay } from '../results/geometryOverlay';
-import { solidCellsFor, type ResultGeometry } from '../results/resultGeometry';
+import { withDerivedFields } from './derivedFields';
+import { geometryOverlay } from './geometryOverlay';
+import { solidCellsFor, type ResultGeometry } from './resultGeometry';
 import { appStore, useApp } from '../store/appStore';
 import { QuantitySelect } from './QuantitySelect';
 

@@ -6,8 +6,8 @@ import { useMemo, useState } from 'react';
 import type { SimulationResult } from '../../engine/results/summarize';
 import { Plot } from '../charts/Plot';
 import type { Data, Layout } from '../charts/plotly';
-import type { ContinuumCurve } from '../results/extensions';
-import { withDerivedFields } from '../results/derivedFields';
+import type { ContinuumCurve } from './extensions';
+import { withDerivedFields } from './derivedFields';
 import {
   cellCentres,
   cellSizeOf,
@@ -18,8 +18,8 @@ import {
   type CutSource,
   type CutSpec,
   type ProfileCut,
-} from '../results/profileCut';
-import { solidCellsFor, type ResultGeometry } from '../results/resultGeometry';
+} from './profileCut';
+import { solidCellsFor, type ResultGeometry } from './resultGeometry';
 import { loadRunApi } from '../bridge/loadEngine';
 import { downloadText } from '../io/download';
 import { estimateText, lengthUnitFor, sig, slug } from '../format';

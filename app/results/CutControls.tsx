@@ -1,7 +1,7 @@
 /** Chooses the cut a profile is read along: the row average, or one column or row of cells at a snapped position. */
 import { useEffect, useState } from 'react';
-import type { CutKind, CutSpec } from '../results/profileCut';
-import { nearestCentre } from '../results/profileCut';
+import type { CutKind, CutSpec } from './profileCut';
+import { nearestCentre } from './profileCut';
 import { sig } from '../format';
 
 export interface CutControlsProps {

@@ -5,7 +5,7 @@
 import { setupApi } from '../bridge/loadEngine';
 import type { SideName, WallSpec } from '../../engine/case/schema';
 import { QuantityField } from '../fields/QuantityField';
-import { convertEntry, entryOfSI, numberText, fromSI, unitChoices, type ParamEntry } from '../setup/formModel';
+import { convertEntry, entryOfSI, numberText, fromSI, unitChoices, type ParamEntry } from './formModel';
 import { appStore, useApp } from '../store/appStore';
 
 const COEFFICIENTS = {

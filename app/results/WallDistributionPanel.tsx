@@ -6,7 +6,7 @@ import { useMemo, useState } from 'react';
 import type { SimulationResult, FieldTable } from '../../engine/results/summarize';
 import { Plot } from '../charts/Plot';
 import type { Data, Layout } from '../charts/plotly';
-import type { ResultGeometry } from '../results/resultGeometry';
+import type { ResultGeometry } from './resultGeometry';
 import { lengthUnitFor } from '../format';
 import { appStore, useApp } from '../store/appStore';
 import { QuantitySelect } from './QuantitySelect';

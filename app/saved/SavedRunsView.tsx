@@ -1,7 +1,7 @@
 /** Runs kept in this browser: reopen, rename, delete, overlay. */
 import { useState } from 'react';
-import { compareWithSavedRun, deleteSavedRun, openSavedRun, renameSavedRun } from '../run/savedRuns';
-import type { SavedRunMeta } from '../io/savedRun';
+import { compareWithSavedRun, deleteSavedRun, openSavedRun, renameSavedRun } from './savedRuns';
+import type { SavedRunMeta } from './savedRun';
 import { countText } from '../format';
 import { appStore, useApp } from '../store/appStore';
 

@@ -4,7 +4,7 @@
  * and the merged samples as a sample file for `tenuis merge`.
  */
 import { loadRunApi } from '../bridge/loadEngine';
-import type { CachedResult } from '../results/resultCache';
+import type { CachedResult } from './resultCache';
 import { downloadBlob, downloadText } from '../io/download';
 import { slug } from '../format';
 

@@ -14,8 +14,8 @@ import {
   snapToGrid,
   updateBlockRow,
   type RectSI,
-} from '../setup/blockEdits';
-import type { BlockEdit, BlockTable } from '../setup/formModel';
+} from './blockEdits';
+import type { BlockEdit, BlockTable } from './formModel';
 import { appStore, useApp } from '../store/appStore';
 import { DomainPreview } from './DomainPreview';
 

@@ -1,7 +1,7 @@
 /**
  * The gas: a table gas and collision model (the preset's own `gas` and `model` parameters, so the pressure it derives
  * from the Knudsen number is that gas's), or a custom gas with the case file's gas.custom fields. A custom gas keeps
- * the Knudsen number typed above: every pressure of the case is rescaled to it (app/setup/deriveCase.ts).
+ * the Knudsen number typed above: every pressure of the case is rescaled to it (app/bridge/deriveCase.ts).
  */
 import { setupApi } from '../bridge/loadEngine';
 import type { SpeciesId } from '../../engine/gas/species';
@@ -14,7 +14,7 @@ import {
   type CustomGasEdit,
   type GasEdit,
   type ParamEntry,
-} from '../setup/formModel';
+} from './formModel';
 import { appStore, useApp } from '../store/appStore';
 
 /** The custom fields filled from a table gas, so that "custom" starts from known data. */

@@ -1,12 +1,12 @@
 /** The result of a run (live or finished): numbers, warnings, plots, extension cards and exports. */
 import { useMemo } from 'react';
-import { extensionsOf } from '../results/extensions';
+import { extensionsOf } from './extensions';
 import { runApiIfLoaded } from '../bridge/loadEngine';
-import { useComparedResult, useShownResult } from '../results/useResult';
+import { useComparedResult, useShownResult } from './useResult';
 import { countText, durationText } from '../format';
 import { WallNumbersCard } from './WallNumbersCard';
 import { ComparisonCard, FlowNumbersCard, VerdictCard } from './ResultExtensionCards';
-import { comparisonView } from '../results/comparisonView';
+import { comparisonView } from './comparisonView';
 import { ProfilePanel } from './ProfilePanel';
 import { FieldMapPanel } from './FieldMapPanel';
 import { WallDistributionPanel } from './WallDistributionPanel';
@@ -14,23 +14,6 @@ import { ExportPanel } from './ExportPanel';
 import { WarningsList } from './WarningsList';
 import { CompareSelect } from './CompareSelect';
 import { LiveProfilePanel } from './LiveProfilePanel';
-
-/** The run view's live profile and wall numbers (plain SVG while live; the plotly panel once final). */
-export function LiveProfile() {
-  const { entry, live } = useShownResult();
-  if (!entry)
-    return (
-      <section className="panel">
-        <p className="hint">Live profiles appear here once the replicas have sampled.</p>
-      </section>
-    );
-  return (
-    <div className="results">
-      {live ? <LiveProfilePanel result={entry.result} /> : <ProfilePanel result={entry.result} live={false} />}
-      <WallNumbersCard result={entry.result} />
-    </div>
-  );
-}
 
 export function ResultPanels() {
   const { entry, live, id } = useShownResult();

@@ -1,5 +1,5 @@
 /** Overlay a saved run on the plots of the shown one. */
-import { compareWithSavedRun } from '../run/savedRuns';
+import { compareWithSavedRun } from '../saved/savedRuns';
 import { appStore, useApp } from '../store/appStore';
 
 export function CompareSelect() {

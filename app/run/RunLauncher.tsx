@@ -2,8 +2,8 @@
  * Replica count, the precision target and the Run button, disabled (with the reason) while the case or the target has
  * problems or a run goes on.
  */
-import { startRun } from '../run/runController';
-import { targetRequestOf } from '../run/targetSetting';
+import { startRun } from './runController';
+import { targetRequestOf } from './targetSetting';
 import { useSweep } from '../sweep/sweepStore';
 import { appStore, useApp } from '../store/appStore';
 

@@ -7,7 +7,7 @@ import { useRef, useState, type PointerEvent } from 'react';
 import type { CaseInput, SideName } from '../../engine/case/schema';
 import { setupApi } from '../bridge/loadEngine';
 import { sig } from '../format';
-import { lengthLabel, snapToGrid, type RectSI } from '../setup/blockEdits';
+import { lengthLabel, snapToGrid, type RectSI } from './blockEdits';
 
 export interface PreviewBlock {
   readonly name: string;

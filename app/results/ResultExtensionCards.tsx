@@ -2,8 +2,8 @@
  * Flow numbers and the model verdict, shown when the engine's result carries `flow` or `verdict`
  * (results/extensions.ts); nothing is shown, and nothing is made up, while it does not.
  */
-import type { ResultExtensions } from '../results/extensions';
-import type { ComparisonView } from '../results/comparisonView';
+import type { ResultExtensions } from './extensions';
+import type { ComparisonView } from './comparisonView';
 import { estimateText, sig } from '../format';
 
 export function FlowNumbersCard({ ext }: { ext: ResultExtensions }) {
