@@ -4,11 +4,10 @@
  */
 import { startRun } from './runController';
 import { targetRequestOf } from './targetSetting';
-import { useSweep } from '../sweep/sweepStore';
+import { SWEEP_BUSY, useSweep } from '../sweep/sweepStore';
 import { appStore, useApp } from '../store/appStore';
 
 const BUSY = ['starting', 'running', 'paused', 'stopping'];
-const SWEEP_BUSY = ['planning', 'running', 'stopping'];
 
 export function RunLauncher() {
   const replicas = useApp((s) => s.replicas);

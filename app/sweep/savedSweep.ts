@@ -7,7 +7,7 @@
  */
 import type { SweepContinuumCurves, SweepParameter, SweepRow } from '../../engine/case/sweep';
 import type { SweepQuantity, SweepRequest } from '../bridge/types';
-import type { SweepFormState } from './sweepStore';
+import type { SweepFormState } from './sweepForm';
 
 export type SavedSweepStatus = 'running' | 'finished' | 'stopped';
 

@@ -6,7 +6,8 @@
 import type { SweepRow } from '../../engine/case/sweep';
 import type { SweepRequest } from '../bridge/types';
 import { sweepCounts, sweepStanding, type SavedSweepRecord, type SweepPlanOutline } from './savedSweep';
-import type { SweepFormState, SweepRunState } from './sweepStore';
+import type { SweepRunState } from '../store/types';
+import type { SweepFormState } from './sweepForm';
 
 /** "tube: Kn 1–10, 3 points (log)", "channel: pressure 20–80 mbar, 4 points (linear)". */
 export function defaultSweepName(caseName: string, f: SweepFormState): string {

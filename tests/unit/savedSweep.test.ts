@@ -17,7 +17,7 @@ import {
   type SweepPlanOutline,
 } from '../../app/sweep/savedSweep';
 import { defaultSweepName, newSweepRecord, pointEndedPatch, shownSweepOf } from '../../app/sweep/sweepRecord';
-import type { SweepFormState } from '../../app/sweep/sweepStore';
+import type { SweepFormState } from '../../app/sweep/sweepForm';
 import type { SweepRow } from '../../engine/case/sweep';
 
 /** A database as the upgrade sees it: named stores, each with its records, and a log of what was created. */
