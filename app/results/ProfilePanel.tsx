@@ -6,7 +6,7 @@ import { useMemo, useState } from 'react';
 import type { SimulationResult } from '../../engine/results/summarize';
 import { Plot } from '../charts/Plot';
 import type { Data, Layout } from '../charts/plotly';
-import type { ContinuumCurve } from './extensions';
+import type { ContinuumCurve } from './comparisonView';
 import { withDerivedFields } from './derivedFields';
 import {
   cellCentres,

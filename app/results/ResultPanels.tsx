@@ -1,11 +1,12 @@
-/** The result of a run (live or finished): numbers, warnings, plots, extension cards and exports. */
+/** The result of a run (live or finished): numbers, warnings, comparison, plots and exports. */
 import { useMemo } from 'react';
-import { extensionsOf } from './extensions';
+import { flowNumbersOf } from './flowNumbers';
 import { runApiIfLoaded } from '../bridge/loadEngine';
 import { useComparedResult, useShownResult } from './useResult';
 import { countText, durationText } from '../format';
 import { WallNumbersCard } from './WallNumbersCard';
-import { ComparisonCard, FlowNumbersCard, VerdictCard } from './ResultExtensionCards';
+import { FlowNumbersCard } from './FlowNumbersCard';
+import { ComparisonCard } from './ComparisonCard';
 import { comparisonView } from './comparisonView';
 import { ProfilePanel } from './ProfilePanel';
 import { FieldMapPanel } from './FieldMapPanel';
@@ -18,22 +19,21 @@ import { LiveProfilePanel } from './LiveProfilePanel';
 export function ResultPanels() {
   const { entry, live, id } = useShownResult();
   const compared = useComparedResult();
-  const ext = useMemo(() => {
+  const flow = useMemo(() => {
     if (!entry) return null;
-    const units = runApiIfLoaded()?.flowQuantityUnits(!(entry.result as { axisymmetric?: boolean }).axisymmetric) ?? {};
-    return extensionsOf(entry.result, units);
+    return flowNumbersOf(entry.result, runApiIfLoaded()?.flowQuantityUnits(!entry.result.axisymmetric) ?? {});
   }, [entry?.result]);
   const comparison = useMemo(
     () => comparisonView(entry?.comparison, runApiIfLoaded()?.MODEL_LABELS ?? {}),
     [entry?.comparison],
   );
-  const curves = useMemo(() => [...(ext?.continuum ?? []), ...(comparison?.curves ?? [])], [ext, comparison]);
+  const curves = useMemo(() => comparison?.curves ?? [], [comparison]);
   // Walls, blocks, no-gas cells and gas constants from the case's plan (null if the run API is not loaded).
   const geometry = useMemo(
     () => (entry ? (runApiIfLoaded()?.resultGeometryOf(entry.caseInput) ?? null) : null),
     [entry?.caseInput],
   );
-  if (!entry || !ext) return <p className="hint">No result yet: run a case, or open a saved run.</p>;
+  if (!entry || !flow) return <p className="hint">No result yet: run a case, or open a saved run.</p>;
   const r = entry.result;
   const n = r.numerics;
   if (live) {
@@ -61,8 +61,7 @@ export function ResultPanels() {
         </p>
         <CompareSelect />
       </section>
-      <FlowNumbersCard ext={ext} />
-      <VerdictCard ext={ext} />
+      <FlowNumbersCard flow={flow} />
       <WallNumbersCard result={r} />
       <ComparisonCard view={comparison} />
       <WarningsList warnings={r.warnings} />
