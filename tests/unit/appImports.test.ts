@@ -30,7 +30,7 @@ function files(dir: string): string[] {
 const valueImport = /^\s*(?:import|export)\s+(?!type\b)[^;]*?from\s+['"]([^'"]+)['"]/gm;
 
 describe('app/ imports', () => {
-  it('only the lazily loaded modules import engine/ or workers/ code; everything else imports types', () => {
+  it('only the lazily loaded modules import engine/ or workers/ code; everything else imports types (theirs too)', () => {
     const problems: string[] = [];
     for (const file of files(appDir)) {
       const rel = relative(repoRoot, file).split('\\').join('/');
@@ -41,6 +41,11 @@ describe('app/ imports', () => {
           .split('\\')
           .join('/');
         if (m[1].startsWith('.') && /^(engine|workers)\//.test(target)) problems.push(`${rel}: imports ${m[1]}`);
+        // A static value import of a lazy module would pull its chunk, and the engine with it, into the main bundle.
+        if (m[1].startsWith('.') && LAZY.has(target.replace(/(\.tsx?)?$/, '.ts')))
+          problems.push(
+            `${rel}: imports the lazily loaded ${m[1]} (import its types, or load it through loadEngine.ts)`,
+          );
       }
       for (const m of source.matchAll(/import\(\s*['"]([^'"]+)['"]\s*\)/g)) {
         const target = relative(repoRoot, join(file, '..', m[1]))
