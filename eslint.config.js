@@ -55,36 +55,58 @@ function engineLayerZones() {
   return zones;
 }
 
-/** Modules of app/ that run behind a dynamic import (their own chunks) and so may import engine and worker code. */
-const APP_BRIDGE = ['app/bridge/**', 'app/engine/**', 'app/setup/planView.ts', 'app/setup/deriveCase.ts'];
+/**
+ * Modules of app/ that run behind a dynamic import (their own chunks) and so may import engine and worker code: the
+ * two chunks app/bridge/loadEngine.ts loads, each its entry module and what only it imports. The rest of app/bridge/
+ * (loadEngine.ts itself and the APIs' interfaces in types.ts) is in the main bundle and is checked like all of app/.
+ */
+export const APP_BRIDGE = [
+  // The set-up chunk (loadSetupApi).
+  'app/bridge/setupApi.ts',
+  'app/bridge/deriveCase.ts',
+  'app/bridge/planView.ts',
+  // The run chunk (loadRunApi), sweep side included.
+  'app/bridge/runApi.ts',
+  'app/bridge/sweepApi.ts',
+  'app/bridge/liveViews.ts',
+];
 
 /**
  * app/ outside the bridge imports engine/ and workers/ modules as types only, so that no engine code lands in the
- * page's main bundle (the bridge loads it by dynamic import). Relative specifiers are resolved against the file, so
- * `app/engine/…` or any other app folder named like an engine one is not mistaken for the engine.
+ * page's main bundle (the bridge loads it by dynamic import). The same holds for the lazily loaded modules
+ * themselves (APP_BRIDGE): a static value import of one would pull its chunk, engine and all, into the main bundle,
+ * so they are imported as types or loaded by import(). Relative specifiers are resolved against the file, so an app
+ * folder named like an engine one (app/results/ beside engine/results/) is not mistaken for the engine.
  */
 const engineTypesOnly = {
   meta: { type: 'problem', schema: [] },
   create(context) {
     const root = path.dirname(fileURLToPath(import.meta.url));
-    const check = (node, source, isTypeOnly) => {
+    const lazy = new Set(APP_BRIDGE.map((f) => f.replace(/\.tsx?$/, '')));
+    const check = (node, source, isTypeOnly, isDynamic) => {
       if (isTypeOnly || typeof source !== 'string' || !source.startsWith('.')) return;
       const target = path.relative(root, path.resolve(path.dirname(context.filename), source)).split(path.sep);
-      if (target[0] !== 'engine' && target[0] !== 'workers') return;
-      context.report({
-        node,
-        message: `'${source}' is ${target[0]}/ code: import it as a type here, or use it through app/bridge/ (a lazy chunk)`,
-      });
+      if (target[0] === 'engine' || target[0] === 'workers') {
+        context.report({
+          node,
+          message: `'${source}' is ${target[0]}/ code: import it as a type here, or use it through app/bridge/ (a lazy chunk)`,
+        });
+      } else if (!isDynamic && lazy.has(target.join('/').replace(/\.tsx?$/, ''))) {
+        context.report({
+          node,
+          message: `'${source}' is lazily loaded (APP_BRIDGE): import it as a type here, or through app/bridge/loadEngine.ts`,
+        });
+      }
     };
     const allTypes = (node) =>
       node.importKind === 'type' ||
       node.exportKind === 'type' ||
       (node.specifiers?.length > 0 && node.specifiers.every((s) => s.importKind === 'type' || s.exportKind === 'type'));
     return {
-      ImportDeclaration: (node) => check(node, node.source.value, allTypes(node)),
-      ExportNamedDeclaration: (node) => node.source && check(node, node.source.value, allTypes(node)),
-      ExportAllDeclaration: (node) => check(node, node.source.value, node.exportKind === 'type'),
-      ImportExpression: (node) => node.source.type === 'Literal' && check(node, node.source.value, false),
+      ImportDeclaration: (node) => check(node, node.source.value, allTypes(node), false),
+      ExportNamedDeclaration: (node) => node.source && check(node, node.source.value, allTypes(node), false),
+      ExportAllDeclaration: (node) => check(node, node.source.value, node.exportKind === 'type', false),
+      ImportExpression: (node) => node.source.type === 'Literal' && check(node, node.source.value, false, true),
     };
   },
 };

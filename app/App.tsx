@@ -4,20 +4,21 @@ import { bootstrap } from './bootstrap';
 import type { ExampleEntry } from './io/examples';
 import { appStore, useApp } from './store/appStore';
 import type { ViewName } from './store/types';
-import { ExamplePicker } from './panels/ExamplePicker';
-import { GeometryForm } from './panels/GeometryForm';
-import { WallForm } from './panels/WallForm';
-import { GasForm } from './panels/GasForm';
-import { BlocksForm } from './panels/BlocksForm';
-import { CaseJsonPanel } from './panels/CaseJsonPanel';
-import { PlanReview } from './panels/PlanReview';
-import { RunLauncher } from './panels/RunLauncher';
-import { RunProgress } from './panels/RunProgress';
-import { LiveProfile, ResultPanels } from './panels/ResultPanels';
-import { SavedRunsView } from './panels/SavedRunsView';
+import { ExamplePicker } from './setup/ExamplePicker';
+import { GeometryForm } from './setup/GeometryForm';
+import { WallForm } from './setup/WallForm';
+import { GasForm } from './setup/GasForm';
+import { BlocksForm } from './setup/BlocksForm';
+import { CaseJsonPanel } from './setup/CaseJsonPanel';
+import { PlanReview } from './setup/PlanReview';
+import { RunLauncher } from './run/RunLauncher';
+import { RunProgress } from './run/RunProgress';
+import { ResultPanels } from './results/ResultPanels';
+import { LiveProfile } from './run/LiveProfile';
+import { SavedRunsView } from './saved/SavedRunsView';
 import { SweepView } from './sweep/SweepView';
-import { DropTarget } from './panels/DropTarget';
-import { Footer } from './panels/Footer';
+import { DropTarget } from './setup/DropTarget';
+import { Footer } from './Footer';
 
 const VIEWS: readonly { id: ViewName; label: string }[] = [
   { id: 'setup', label: '1 Set up and check' },

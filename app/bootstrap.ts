@@ -3,7 +3,7 @@
  * example on a first visit), keep the set-up saved as it changes, and warm the run and plot chunks while idle so
  * they are not parsed in the middle of a run.
  */
-import { loadRunApi, loadSetupApi } from './engine/loadEngine';
+import { loadRunApi, loadSetupApi } from './bridge/loadEngine';
 import { warmPlotly } from './charts/plotly';
 import { fetchExampleCase, fetchExamples, type ExampleEntry } from './io/examples';
 import { listRuns, loadForm, loadSpeed, saveForm } from './io/db';

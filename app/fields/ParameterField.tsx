@@ -1,6 +1,6 @@
 /** One preset parameter: a number with a unit selector, a whole number, or a choice; its message shown beneath. */
 import type { PresetParameter } from '../../engine/case/presets';
-import { setupApi } from '../engine/loadEngine';
+import { setupApi } from '../bridge/loadEngine';
 import { unitChoices } from '../setup/formModel';
 import { appStore, useApp } from '../store/appStore';
 

@@ -5,8 +5,8 @@
  */
 import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
 import type { FormState } from '../setup/formModel';
-import { metaOf, type SavedRunMeta, type SavedRunRecord } from './savedRun';
-import { isSavedSweepRecord, sweepMetaOf, type SavedSweepMeta, type SavedSweepRecord } from './savedSweep';
+import { metaOf, type SavedRunMeta, type SavedRunRecord } from '../saved/savedRun';
+import { isSavedSweepRecord, sweepMetaOf, type SavedSweepMeta, type SavedSweepRecord } from '../sweep/savedSweep';
 import { upgradeWorkbenchDb, WORKBENCH_DB_NAME, WORKBENCH_DB_VERSION } from './dbUpgrade';
 
 interface TenuisDb extends DBSchema {

@@ -3,7 +3,20 @@
  * for the profile plot and verdict rows in plain words. Types only from the engine; model labels come with the run API.
  */
 import type { ContinuumComparisonResult } from '../../engine/report/comparison';
-import type { ContinuumCurve } from './extensions';
+
+/** One model's prediction of one profile quantity, as the profile plot overlays it. */
+export interface ContinuumCurve {
+  readonly model: string;
+  readonly quantity: string;
+  readonly values: readonly number[];
+  /** Positions (m); absent = the profile's own rows. */
+  readonly y?: readonly number[];
+  /**
+   * Where the prediction holds: across the gap for every column (absent, the 1D flows), or along one column or row
+   * of the domain at a position (m), e.g. the cavity's centrelines.
+   */
+  readonly line?: { readonly kind: 'column' | 'row'; readonly atM: number };
+}
 
 export interface VerdictRow {
   readonly quantity: string;

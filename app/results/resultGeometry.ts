@@ -1,7 +1,7 @@
 /**
  * What the results view needs of a case's geometry and gas to draw and derive: the domain, its blocks, the sides that
  * are walls, which cells hold no gas, and the gas constants for the speed of sound. Made from the case's plan by
- * the run API (app/engine/runApi.ts resultGeometryOf), so the engine stays out of the main chunk; types only here.
+ * the run API (app/bridge/runApi.ts resultGeometryOf), so the engine stays out of the main chunk; types only here.
  */
 
 export interface DomainWall {

@@ -2,14 +2,14 @@
  * Starts, pauses, resumes and stops runs, outside React: loads the run chunk, feeds progress and live results into
  * the store (progress at most five times a second), and keeps every finished or stopped run in IndexedDB.
  */
-import { loadRunApi } from '../engine/loadEngine';
-import type { RunHandle, FinishedRun } from '../engine/runApi';
+import { loadRunApi } from '../bridge/loadEngine';
+import type { RunHandle, FinishedRun } from '../bridge/runApi';
 import { putResult } from '../results/resultCache';
 import { readTestHooks } from '../testing/testHooks';
 import { targetRequestOf } from './targetSetting';
 import { sweepStore } from '../sweep/sweepStore';
 import { putRun, listRuns, saveSpeed } from '../io/db';
-import type { SavedRunRecord } from '../io/savedRun';
+import type { SavedRunRecord } from '../saved/savedRun';
 import type { AppStore } from '../store/store';
 import type { CaseInput } from '../../engine/case/schema';
 

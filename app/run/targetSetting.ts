@@ -3,7 +3,7 @@
  * (the rule itself is engine/stats/stopping.ts, applied in the run chunk).
  */
 import type { TargetSetting } from '../store/types';
-import type { TargetRequest } from '../engine/runApi';
+import type { TargetRequest } from '../bridge/types';
 
 export type TargetCheck =
   { readonly ok: true; readonly request: TargetRequest | undefined } | { readonly ok: false; readonly message: string };

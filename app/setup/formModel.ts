@@ -4,9 +4,9 @@
  * currently comes from (the form, or JSON typed or opened by the user). No engine imports: the engine's functions
  * arrive as an argument (the lazily loaded set-up API).
  */
-import type { SetupApi } from '../engine/loadEngine';
 import type { PresetParameter } from '../../engine/case/presets';
-import type { SideName } from '../../engine/case/caseConstants';
+import { type SideName } from '../../engine/case/caseConstants';
+import type { QuantityKind } from '../../engine/units/engineeringUnits';
 
 export interface ParamEntry {
   readonly text: string;
@@ -102,8 +102,20 @@ const PREFERRED_UNITS: Readonly<Record<string, readonly string[]>> = {
 /** Units of the mass of one molecule: the molar mass people look up, or kilograms per molecule as the case file has it. */
 export const MOLECULAR_MASS_UNITS = ['g/mol', 'kg'] as const;
 
-/** The part of the set-up API that unit conversions need. */
-export type UnitApi = Pick<SetupApi, 'convertFromSI' | 'unitsOf' | 'AVOGADRO_PER_MOL'>;
+/**
+ * The part of the set-up API (app/bridge/types.ts) that unit conversions need, declared here rather than picked
+ * from it: the set-up API's deriveCase takes this module's FormState, so the dependency runs one way only.
+ */
+export interface UnitApi {
+  convertFromSI(valueSI: number, unit: string): number;
+  unitsOf(kind: QuantityKind): readonly string[];
+  readonly AVOGADRO_PER_MOL: number;
+}
+
+/** The unit conversions and the presets' parameters: what the entries a preset starts with are made from. */
+export interface PresetApi extends UnitApi {
+  readonly PRESETS: Readonly<Record<string, { readonly parameters: readonly PresetParameter[] }>>;
+}
 
 /** An SI value in `unit`, including the molecular-mass units the engine's unit table does not have. */
 export function fromSI(valueSI: number, unit: string, api: UnitApi): number {
@@ -141,9 +153,9 @@ export function entryOfSI(valueSI: number, unit: string, api: UnitApi): ParamEnt
   return { text: numberText(fromSI(valueSI, unit, api)), unit };
 }
 
-export function unitChoices(kind: string, api: Pick<SetupApi, 'unitsOf'>): readonly string[] {
+export function unitChoices(kind: string, api: Pick<UnitApi, 'unitsOf'>): readonly string[] {
   if (kind === 'count' || kind === 'choice' || kind === 'dimensionless') return [];
-  const all = api.unitsOf(kind as Parameters<SetupApi['unitsOf']>[0]);
+  const all = api.unitsOf(kind as QuantityKind);
   const preferred = (PREFERRED_UNITS[kind] ?? []).filter((u) => all.includes(u));
   return preferred.length ? preferred : all;
 }
@@ -156,7 +168,7 @@ export function numberText(x: number): string {
 const NUMBER_THEN_UNIT = /^\s*([+\-\u2212]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*?)\s*$/;
 
 /** The entry a parameter starts with: its default in its shown unit, or `given` text such as "2 µm". */
-export function entryFor(p: PresetParameter, api: SetupApi, given?: string): ParamEntry {
+export function entryFor(p: PresetParameter, api: UnitApi, given?: string): ParamEntry {
   const units = unitChoices(p.kind, api);
   const shown = units.includes(p.unitShown) ? p.unitShown : (units[0] ?? '');
   if (given !== undefined) {
@@ -174,10 +186,10 @@ export function entryFor(p: PresetParameter, api: SetupApi, given?: string): Par
 /** Entries of every parameter of a preset; `given` (e.g. an example's parameters) overrides defaults by name. */
 export function entriesFor(
   presetName: string,
-  api: SetupApi,
+  api: PresetApi,
   given: Readonly<Record<string, string>> = {},
 ): ParamEntries {
-  const preset = (api.PRESETS as Readonly<Record<string, { parameters: readonly PresetParameter[] }>>)[presetName];
+  const preset = api.PRESETS[presetName];
   const out: Record<string, ParamEntry> = {};
   for (const p of preset?.parameters ?? []) out[p.name] = entryFor(p, api, given[p.name]);
   return out;

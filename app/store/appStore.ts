@@ -1,6 +1,6 @@
 /** The page's store instance and the hook components select from (narrowest slice each). */
 import { useStore } from 'zustand';
-import { setupApi } from '../engine/loadEngine';
+import { setupApi } from '../bridge/loadEngine';
 import { createAppStore } from './store';
 import type { AppState } from './types';
 

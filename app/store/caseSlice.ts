@@ -1,6 +1,6 @@
 /** The case slice: the set-up form, and the case, messages and plan derived from it on every change. */
 import type { StateCreator } from 'zustand/vanilla';
-import type { SetupApi } from '../engine/loadEngine';
+import type { SetupApi } from '../bridge/types';
 import { convertEntry, entriesFor, type FormState } from '../setup/formModel';
 import type { AppState, CaseSlice } from './types';
 

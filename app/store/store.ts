@@ -2,6 +2,7 @@
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import { createCaseSlice, type StoreDeps } from './caseSlice';
 import { createResultsSlice, createRunSlice, createUiSlice } from './otherSlices';
+import { createSweepSlice } from './sweepSlice';
 import type { AppState } from './types';
 
 export type AppStore = StoreApi<AppState>;
@@ -12,5 +13,6 @@ export function createAppStore(deps: StoreDeps, cores: number): AppStore {
     ...createRunSlice(deps, cores)(...a),
     ...createResultsSlice(...a),
     ...createUiSlice(...a),
+    ...createSweepSlice(...a),
   }));
 }

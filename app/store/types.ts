@@ -1,15 +1,21 @@
 /**
- * The workbench's one store, in four slices: case (the set-up and what is derived from it), run (the run going on),
- * results (which result is shown, and the saved runs), ui (views and selections). Large typed arrays never enter it:
- * results live in results/resultCache.ts and the store holds their id and a version number.
+ * The workbench's one store, in five slices: case (the set-up and what is derived from it), run (the run going on),
+ * results (which result is shown, and the saved runs), ui (views and selections), and sweep (the Sweep view's form,
+ * its sweep and the saved sweeps). Large typed arrays never enter it: results live in results/resultCache.ts and the
+ * store holds their id and a version number; a sweep keeps only its points' summary.json objects.
+ *
+ * The sweep slice is one field, `sweep`, rather than fields spread over the store like the others': its names
+ * (status, notices, error …) are the run slice's too, and a sweep never changes the state of single runs.
  */
-import type { CaseDerivation } from '../setup/deriveCase';
+import type { CaseDerivation, PlanView, RunProgressView, SweepRequest } from '../bridge/types';
 import type { FormState, ParamEntry, WallEdit, CaseSource, GasEdit, BlockTable } from '../setup/formModel';
-import type { PlanView } from '../setup/planView';
-import type { RunProgressView } from '../engine/runApi';
-import type { SideName } from '../../engine/case/caseConstants';
-import type { SavedRunMeta } from '../io/savedRun';
+import { type SideName } from '../../engine/case/caseConstants';
+import { type SweepRow } from '../../engine/report/sweepRow';
+import { type SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import type { SavedRunMeta } from '../saved/savedRun';
 import type { ExampleEntry } from '../io/examples';
+import type { SavedSweepMeta, SweepPlanOutline } from '../sweep/savedSweep';
+import type { SweepFormState } from '../sweep/sweepForm';
 
 export type { FormState, ParamEntry, WallEdit, CaseSource, GasEdit, BlockTable };
 
@@ -97,4 +103,44 @@ export interface UiSlice {
   select(patch: Partial<Pick<UiSlice, 'profileQuantity' | 'fieldQuantity' | 'wallQuantity'>>): void;
 }
 
-export type AppState = CaseSlice & RunSlice & ResultsSlice & UiSlice;
+/** `interrupted`: a saved sweep this page did not finish (a reload or a closed tab ended it), shown with its finished points. */
+export type SweepStatus = 'idle' | 'planning' | 'running' | 'stopping' | 'finished' | 'stopped' | 'interrupted';
+
+export interface SweepRunState {
+  readonly status: SweepStatus;
+  /** The planned sweep being run or last run (for the table options and the export). */
+  readonly planned: SweepPlanOutline | null;
+  /** Id of the record in IndexedDB the sweep shown is kept as (null before it is saved or after it is deleted). */
+  readonly savedId: string | null;
+  readonly request: SweepRequest | null;
+  /** The set-up's case the sweep started from (exported as case.json for `tenuis sweep`). */
+  readonly baseCase: unknown;
+  /** The finished points' rows, each a point's summary.json object (plain numbers, no typed arrays). */
+  readonly rows: readonly SweepRow[];
+  /** Why a failed point failed, by point number. */
+  readonly failures: Readonly<Record<number, string>>;
+  readonly current: {
+    readonly index: number;
+    readonly count: number;
+    readonly progress: RunProgressView | null;
+  } | null;
+  /** The continuum curves over the range (a few hundred numbers), or why there are none. */
+  readonly curves: SweepContinuumCurves | { readonly reason: string } | null;
+  readonly error: string | null;
+  readonly notices: readonly string[];
+}
+
+/** The sweep slice's state (AppState.sweep): the form's texts, what the sweep is doing, the saved sweeps. */
+export interface SweepState extends SweepFormState, SweepRunState {
+  /** Sweeps saved in this browser, the latest started first. */
+  readonly saved: readonly SavedSweepMeta[];
+  setForm(patch: Partial<SweepFormState>): void;
+  setRun(patch: Partial<SweepRunState>): void;
+  setSaved(saved: readonly SavedSweepMeta[]): void;
+}
+
+export interface SweepSlice {
+  readonly sweep: SweepState;
+}
+
+export type AppState = CaseSlice & RunSlice & ResultsSlice & UiSlice & SweepSlice;

@@ -1,7 +1,7 @@
 /** Sweeps kept in this browser: which one is shown, how each stands (interrupted ones at which point), reopen, rename, delete. */
 import { useState } from 'react';
-import type { SavedSweepMeta } from '../io/savedSweep';
-import { sweepStandingText } from '../io/savedSweep';
+import type { SavedSweepMeta } from './savedSweep';
+import { sweepStandingText } from './savedSweep';
 import { deleteSavedSweep, renameSavedSweep, reopenSavedSweep } from './savedSweeps';
 import { SWEEP_BUSY, useSweep } from './sweepStore';
 

@@ -3,7 +3,7 @@
  * `tenuis sweep` writes them with: RFC 4180, units in every header, ci95 columns next to values), and the case the
  * sweep started from, so `tenuis sweep case.json …` repeats it.
  */
-import { loadRunApi } from '../engine/loadEngine';
+import { loadRunApi } from '../bridge/loadEngine';
 import { downloadText } from '../io/download';
 import { slug } from '../format';
 import { useSweep, sweepStore } from './sweepStore';

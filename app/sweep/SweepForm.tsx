@@ -5,7 +5,7 @@
  */
 import { useApp } from '../store/appStore';
 import { sig } from '../format';
-import { setupApi } from '../engine/loadEngine';
+import { setupApi } from '../bridge/loadEngine';
 import { startSweep, SWEEP_BUSY } from './sweepActions';
 import { readSweepForm, SWEEP_PRESSURE_UNITS } from './sweepForm';
 import { sweepStore, useSweep } from './sweepStore';

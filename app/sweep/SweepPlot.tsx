@@ -5,7 +5,7 @@
 import { useMemo } from 'react';
 import { Plot } from '../charts/Plot';
 import type { Data, Layout } from '../charts/plotly';
-import { runApiIfLoaded } from '../engine/loadEngine';
+import { runApiIfLoaded } from '../bridge/loadEngine';
 import { allPositive, modelLines, type SweepPointValue } from './sweepSeries';
 import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
 

@@ -3,7 +3,7 @@
  * right. The first time it is shown it lists the saved sweeps and shows the latest again.
  */
 import { useCallback, useEffect, useMemo } from 'react';
-import { setupApi } from '../engine/loadEngine';
+import { setupApi } from '../bridge/loadEngine';
 import { SweepForm } from './SweepForm';
 import { SweepProgress } from './SweepProgress';
 import { SweepPlot } from './SweepPlot';

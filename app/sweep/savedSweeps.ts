@@ -2,9 +2,9 @@
  * Sweeps kept in this browser's IndexedDB, outside React: each sweep is saved as it starts and again as each point
  * ends (so a reload keeps the finished points), listed, shown again at start-up, reopened, renamed and deleted.
  */
-import { loadRunApi } from '../engine/loadEngine';
+import { loadRunApi } from '../bridge/loadEngine';
 import { deleteSweep, getSweep, listSweeps, patchSweep, putSweep } from '../io/db';
-import { sweepMetaOf, type SavedSweepMeta, type SavedSweepRecord } from '../io/savedSweep';
+import { sweepMetaOf, type SavedSweepMeta, type SavedSweepRecord } from './savedSweep';
 import { shownSweepOf } from './sweepRecord';
 import { initialSweepRun, sweepStore, SWEEP_BUSY as BUSY } from './sweepStore';
 

@@ -5,10 +5,10 @@
  * the Run panel; the app store's run state is left alone, so single runs go on as before. The sweep is saved in
  * IndexedDB as it starts and as each point ends (savedSweeps.ts), so a reload keeps its finished points.
  */
-import { loadRunApi } from '../engine/loadEngine';
-import type { RunProgressView } from '../engine/runApi';
-import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
-import { runSweepPoints, type SweepHandle } from '../run/sweepController';
+import { loadRunApi } from '../bridge/loadEngine';
+import type { RunProgressView } from '../bridge/runApi';
+import { type SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import { runSweepPoints, type SweepHandle } from './sweepController';
 import { readTestHooks } from '../testing/testHooks';
 import { appStore } from '../store/appStore';
 import { initialSweepRun, sweepStore, SWEEP_BUSY } from './sweepStore';

@@ -3,8 +3,21 @@
  * `tenuis sweep` (ends above 0, 1 to 999 points, two different ends unless one point). Pure; the unit conversion
  * is passed in (the engine's, through the set-up API).
  */
-import type { SweepRequest } from '../engine/sweepApi';
-import type { SweepFormState } from './sweepStore';
+import type { SweepParameter, SweepSpacing } from '../../engine/case/sweep';
+import type { SweepRequest } from '../bridge/types';
+
+/** What the user typed: texts, read by readSweepForm. Kept in the store's sweep slice and in each saved sweep. */
+export interface SweepFormState {
+  readonly parameter: SweepParameter;
+  readonly fromText: string;
+  readonly toText: string;
+  /** Unit of from/to when the parameter is the pressure (Pa, mbar, Torr). */
+  readonly pressureUnit: string;
+  readonly pointsText: string;
+  readonly spacing: SweepSpacing;
+  /** The quantity plotted: `flow.NAME` or `walls.WALL.QUANTITY`. */
+  readonly quantity: string;
+}
 
 export type SweepFormResult =
   | { readonly ok: true; readonly request: SweepRequest }

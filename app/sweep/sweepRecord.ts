@@ -3,10 +3,11 @@
  * as its points end, and what the view shows when a saved sweep is reopened — the same rows, curves and form, and
  * `interrupted` for a sweep that a reload ended.
  */
-import type { SweepRow } from '../../engine/report/sweepRow';
-import type { SweepRequest } from '../engine/sweepApi';
-import { sweepCounts, sweepStanding, type SavedSweepRecord, type SweepPlanOutline } from '../io/savedSweep';
-import type { SweepFormState, SweepRunState } from './sweepStore';
+import { type SweepRow } from '../../engine/report/sweepRow';
+import type { SweepRequest } from '../bridge/types';
+import { sweepCounts, sweepStanding, type SavedSweepRecord, type SweepPlanOutline } from './savedSweep';
+import type { SweepRunState } from '../store/types';
+import type { SweepFormState } from './sweepForm';
 
 /** "tube: Kn 1–10, 3 points (log)", "channel: pressure 20–80 mbar, 4 points (linear)". */
 export function defaultSweepName(caseName: string, f: SweepFormState): string {

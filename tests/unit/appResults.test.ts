@@ -1,12 +1,12 @@
 /** Reading the engine's optional result sections for display: flow numbers and the continuum comparison. */
 import { describe, expect, it } from 'vitest';
-import { extensionsOf } from '../../app/results/extensions';
+import { flowNumbersOf } from '../../app/results/flowNumbers';
 import { comparisonView } from '../../app/results/comparisonView';
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { ContinuumComparisonResult } from '../../engine/report/comparison';
 import { estimateText, sig } from '../../app/format';
 
-describe('extensionsOf()', () => {
+describe('flowNumbersOf()', () => {
   it('reads the engine FlowResult: values by name with the given units and the section and vessel pressures', () => {
     const result = {
       flow: {
@@ -18,17 +18,16 @@ describe('extensionsOf()', () => {
         values: { massFlowRate: { mean: 1e-9, ci95: 1e-11 }, conductance: { mean: 2e-3, ci95: 3e-5 } },
       },
     } as unknown as SimulationResult;
-    const ext = extensionsOf(result, { massFlowRate: 'kg/s', conductance: 'm^3/s' });
-    expect(ext.flow).toEqual([
+    const flow = flowNumbersOf(result, { massFlowRate: 'kg/s', conductance: 'm^3/s' });
+    expect(flow.rows).toEqual([
       { name: 'massFlowRate', label: 'mass flow rate', mean: 1e-9, ci95: 1e-11, unit: 'kg/s' },
       { name: 'conductance', label: 'conductance', mean: 2e-3, ci95: 3e-5, unit: 'm^3/s' },
     ]);
-    expect(ext.flowContext).toBe('through section exit, upstream 200.0 Pa, downstream 100.0 Pa, 300.0 K');
+    expect(flow.context).toBe('through section exit, upstream 200.0 Pa, downstream 100.0 Pa, 300.0 K');
   });
 
-  it('shows nothing when the result has no flow, continuum or verdict (no made-up content)', () => {
-    const ext = extensionsOf({} as SimulationResult);
-    expect(ext).toEqual({ flow: [], flowContext: null, continuum: [], verdict: null });
+  it('shows nothing when the result has no flow sections (no made-up content)', () => {
+    expect(flowNumbersOf({} as SimulationResult)).toEqual({ rows: [], context: null });
   });
 });
 

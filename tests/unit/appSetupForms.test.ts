@@ -3,7 +3,7 @@
  * block table (typed, drawn, taken over from the preset), each reaching the case or giving a message at its field.
  */
 import { describe, expect, it } from 'vitest';
-import * as setup from '../../app/engine/setupApi';
+import * as setup from '../../app/bridge/setupApi';
 import { createAppStore } from '../../app/store/store';
 import { formOf } from '../../app/store/caseSlice';
 import { convertEntry, type CustomGasEdit, type GasEdit } from '../../app/setup/formModel';
@@ -15,7 +15,7 @@ import {
   snapToGrid,
   updateBlockRow,
 } from '../../app/setup/blockEdits';
-import type { SetupApi } from '../../app/engine/loadEngine';
+import type { SetupApi } from '../../app/bridge/types';
 import type { CaseInput } from '../../engine/case/schema';
 
 const api = setup as SetupApi;

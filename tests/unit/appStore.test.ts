@@ -1,12 +1,12 @@
 /**
  * The workbench store's logic in Node (no DOM): the set-up form, what is derived from it on every change, messages
- * placed at their fields, and case files that are refused without changing anything.
+ * placed at their fields, case files that are refused without changing anything, and the sweep's slice.
  */
 import { describe, expect, it } from 'vitest';
-import * as setup from '../../app/engine/setupApi';
+import * as setup from '../../app/bridge/setupApi';
 import { createAppStore } from '../../app/store/store';
 import { convertEntry, entriesFor } from '../../app/setup/formModel';
-import type { SetupApi } from '../../app/engine/loadEngine';
+import type { SetupApi } from '../../app/bridge/types';
 
 const api = setup as SetupApi;
 const newStore = (cores = 2) => createAppStore({ setup: () => api }, cores);
@@ -134,6 +134,25 @@ describe('run slice', () => {
     const store = newStore(2);
     for (const bad of [0, -1, 1.5, NaN, 65]) store.getState().setReplicas(bad);
     expect(store.getState().replicas).toBe(2);
+  });
+});
+
+describe('sweep slice', () => {
+  it('keeps the sweep under `sweep`: its setters change nothing of the run slice, whose names it shares', () => {
+    const store = newStore();
+    store.getState().selectPreset('couette');
+    const before = store.getState();
+    before.sweep.setForm({ fromText: '0.5', parameter: 'pressure' });
+    before.sweep.setRun({ status: 'running', notices: ['a sweep notice'], error: 'x' });
+    before.sweep.setSaved([]);
+    const s = store.getState();
+    expect(s.sweep).toMatchObject({ fromText: '0.5', parameter: 'pressure', status: 'running', toText: '10' });
+    expect(s.sweep.notices).toEqual(['a sweep notice']);
+    expect([s.status, s.notices, s.runError]).toEqual([before.status, before.notices, before.runError]);
+    expect(s.derived).toBe(before.derived);
+    // The setters read the latest state, so ones taken from an earlier snapshot still patch the current one.
+    before.sweep.setRun({ error: null });
+    expect(store.getState().sweep).toMatchObject({ fromText: '0.5', status: 'running', error: null });
   });
 });
 

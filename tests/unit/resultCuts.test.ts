@@ -18,7 +18,7 @@ import {
 } from '../../app/results/profileCut';
 import { machOf, speedOf, withDerivedFields } from '../../app/results/derivedFields';
 import { geometryOverlay } from '../../app/results/geometryOverlay';
-import { resultGeometryOf } from '../../app/engine/runApi';
+import { resultGeometryOf } from '../../app/bridge/runApi';
 
 const NAMES = ['numberDensity', 'velocityX', 'velocityY', 'velocityZ', 'temperature'];
 const UNITS = ['1/m^3', 'm/s', 'm/s', 'm/s', 'K'];

@@ -1,4 +1,4 @@
-// Saved sweeps (app/io/savedSweep.ts, app/sweep/sweepRecord.ts) and the database upgrade (app/io/dbUpgrade.ts):
+// Saved sweeps (app/sweep/savedSweep.ts, app/sweep/sweepRecord.ts) and the database upgrade (app/io/dbUpgrade.ts):
 // the record a sweep is kept as, how a record reads back into the Sweep view, how an interrupted one is told, and
 // an upgrade from the first database version that adds the sweeps store and keeps the saved runs.
 import { describe, expect, it } from 'vitest';
@@ -15,10 +15,10 @@ import {
   sweepStanding,
   sweepStandingText,
   type SweepPlanOutline,
-} from '../../app/io/savedSweep';
+} from '../../app/sweep/savedSweep';
 import { defaultSweepName, newSweepRecord, pointEndedPatch, shownSweepOf } from '../../app/sweep/sweepRecord';
-import type { SweepFormState } from '../../app/sweep/sweepStore';
-import type { SweepRow } from '../../engine/report/sweepRow';
+import type { SweepFormState } from '../../app/sweep/sweepForm';
+import { type SweepRow } from '../../engine/report/sweepRow';
 
 /** A database as the upgrade sees it: named stores, each with its records, and a log of what was created. */
 function fakeDb(

@@ -1,9 +1,10 @@
-// app/run/sweepController.ts driven by a fake run API: points run one after the other, a failed point is marked
+// app/sweep/sweepController.ts driven by a fake run API: points run one after the other, a failed point is marked
 // failed and the rest go on, stop() keeps the running point's samples and runs no more.
 import { describe, expect, it } from 'vitest';
-import { runSweepPoints, type SweepPointInput, type SweepRunDeps } from '../../app/run/sweepController';
-import type { FinishedRun, RunCallbacks, RunEnd, RunHandle, RunRequest } from '../../app/engine/runApi';
-import type { SweepPointRun, SweepRow } from '../../engine/report/sweepRow';
+import { runSweepPoints, type SweepPointInput, type SweepRunDeps } from '../../app/sweep/sweepController';
+import type { FinishedRun, RunCallbacks, RunEnd, RunHandle, RunRequest } from '../../app/bridge/types';
+import { type SweepRow } from '../../engine/report/sweepRow';
+import { type SweepPointRun } from '../../engine/report/sweepRow';
 
 /** A run that ends when told to: ok with a result that names its case, or refused. */
 interface FakeRun {

@@ -1,7 +1,7 @@
 // The browser's sweep form (app/sweep/sweepForm.ts): the same rules as `tenuis sweep`, each message naming its field.
 import { describe, expect, it } from 'vitest';
 import { readSweepForm } from '../../app/sweep/sweepForm';
-import type { SweepFormState } from '../../app/sweep/sweepStore';
+import type { SweepFormState } from '../../app/sweep/sweepForm';
 import { convertToSI, PA_PER_TORR } from '../../engine/units/engineeringUnits';
 
 const form = (patch: Partial<SweepFormState>): SweepFormState => ({
