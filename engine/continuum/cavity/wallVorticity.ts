@@ -8,7 +8,8 @@
  * "Computational Fluid Dynamics", §3-C; from memory). Why not Thom's one-point formula ω_w = −2(ψ₁ − h ψ_η)/h²:
  * it is first-order in ω_w, and with the fourth-order interior (compactVorticity.ts) it left the centreline extrema
  * at Re = 1000 on 129² 0.5–0.6 % weak where Jensen's leaves 0.06–0.15 % (measured against Botella & Peyret 1998).
- * Briley's third-order formula diverged at Re = 400 on 129² (measured) and is not used.
+ * Briley's third-order formula diverged at Re = 400 on 129² (measured, before the implicit operator carried the
+ * compact scheme's diffusion; vorticityAdi.ts) and is not used.
  *
  * Slip (Maxwell 1879, first order): u_s − u_wall = ℓ ∂u_t/∂η with slip length ℓ = ((2−σ)/σ) Kn (cavity sides), Kn
  * the viscosity-based mean free path over the side and σ the tangential momentum accommodation. At a straight wall
