@@ -1,6 +1,7 @@
 /**
- * Multigrid V-cycles for the stream function of the cavity: −∇²ψ = ω on the unit square with ψ = 0 on all four
+ * Multigrid V-cycles for the stream function of the cavity: −∇²ψ = f on the unit square with ψ = 0 on all four
  * sides (every wall is a streamline, with or without slip), second-order 5-point Laplacian on a uniform n × n grid.
+ * The fourth-order compact stream-function equation is reached through f (compactStream.ts: deferred correction).
  *
  * Why multigrid: the vorticity iteration (vorticityAdi.ts) needs a fresh ψ every pseudo-time step; one V-cycle,
  * warm-started from the previous ψ, costs about ten grid sweeps and cuts the error by roughly a factor of ten
@@ -54,8 +55,8 @@ export function createPoissonMultigrid(n: number): PoissonMultigrid {
 }
 
 /**
- * One V-cycle for −∇²ψ = rhs, improving `psi` in place (dimensionless: ψ in lid speed × side, rhs = ω in lid speed
- * per side). Boundary values of psi must be zero and stay so. Returns nothing; see poissonResidualMax for the error.
+ * One V-cycle for −∇²ψ = rhs, improving `psi` in place (dimensionless: ψ in lid speed × side, rhs like ω in lid speed
+ * per side). Boundary values of psi must be zero and stay so. Returns nothing; compactStream.ts measures the residual of the equation solved.
  */
 export function vCycle(mg: PoissonMultigrid, psi: Float64Array, rhs: Float64Array): void {
   cycle(mg.levels, 0, psi, rhs);
@@ -145,20 +146,4 @@ function prolongAdd(nc: number, uc: Float64Array, nf: number, uf: Float64Array):
       uf[j * nf + i] += v;
     }
   }
-}
-
-/** max |∇²ψ + ω| over interior points: the stream-function equation's residual (lid speed per side). */
-export function poissonResidualMax(n: number, psi: Float64Array, omega: Float64Array): number {
-  const h = 1 / (n - 1);
-  const inv = 1 / (h * h);
-  let max = 0;
-  for (let j = 1; j < n - 1; j++) {
-    const row = j * n;
-    for (let i = 1; i < n - 1; i++) {
-      const k = row + i;
-      const r = Math.abs((psi[k - 1] + psi[k + 1] + psi[k - n] + psi[k + n] - 4 * psi[k]) * inv + omega[k]);
-      if (r > max) max = r;
-    }
-  }
-  return max;
 }

@@ -3,16 +3,20 @@
  * walls or first-order Maxwell slip on all four walls.
  *
  * Every wall is a streamline, ψ = 0. Along a wall ψ is constant, so ω_w = −∂²ψ/∂η² there (η: distance into the
- * fluid), and a Taylor expansion to the first interior point ψ₁ = ψ_w + h ∂ψ/∂η + (h²/2) ∂²ψ/∂η² gives Thom's
- * formula (Thom 1933; Roache 1976, "Computational Fluid Dynamics", §3-C): on the lid (y = 1, moving at +1)
- * ω_w = −2(ψ₁ + h u_s)/h², on the other walls ω_w = −2(ψ₁ ∓ h u_s)/h² with u_s the tangential gas velocity at the wall.
+ * fluid). Taylor expansions to the first two interior points, ψ_k = k h ψ_η + (k h)²/2 ψ_ηη + (k h)³/6 ψ_ηηη + …,
+ * give 8ψ₁ − ψ₂ = 6h ψ_η + 2h² ψ_ηη + O(h⁴): Jensen's second-order formula (Jensen 1959; Roache 1976,
+ * "Computational Fluid Dynamics", §3-C; from memory). Why not Thom's one-point formula ω_w = −2(ψ₁ − h ψ_η)/h²:
+ * it is first-order in ω_w, and with the fourth-order interior (compactVorticity.ts) it left the centreline extrema
+ * at Re = 1000 on 129² 0.5–0.6 % weak where Jensen's leaves 0.06–0.15 % (measured against Botella & Peyret 1998).
+ * Briley's third-order formula diverged at Re = 400 on 129² (measured, before the implicit operator carried the
+ * compact scheme's diffusion; vorticityAdi.ts) and is not used.
  *
  * Slip (Maxwell 1879, first order): u_s − u_wall = ℓ ∂u_t/∂η with slip length ℓ = ((2−σ)/σ) Kn (cavity sides), Kn
  * the viscosity-based mean free path over the side and σ the tangential momentum accommodation. At a straight wall
- * the normal velocity vanishes along it, so ∂u_t/∂η is ±ω_w; on each of the four walls the slip condition and
- * Thom's formula then close in the same form (signs worked out wall by wall in the comments below):
+ * the normal velocity vanishes along it, so ∂u_t/∂η is ±ω_w, and on each of the four walls ψ_η = −U_wall − ℓ ω_w
+ * (signs worked out wall by wall in the comments below). Jensen's formula then closes as
  *
- *     ω_w = −2 (ψ₁ + h·U_wall) / (h (h + 2ℓ)),   U_wall = 1 on the lid, 0 elsewhere,
+ *     ω_w = −(8ψ₁ − ψ₂ + 6h·U_wall) / (2h (h + 3ℓ)),   U_wall = 1 on the lid, 0 elsewhere,
  *
  * which is the no-slip formula exactly when ℓ = 0. Arrays are n × n, index i + n·j (i along x, j along y).
  */
@@ -32,20 +36,21 @@ export function slipLength(knudsen: number, accommodation: number): number {
  */
 export function setWallVorticity(n: number, psi: Float64Array, omega: Float64Array, slip: number, relax: number): void {
   const h = 1 / (n - 1);
-  const scale = -2 / (h * (h + 2 * slip));
+  const scale = -1 / (2 * h * (h + 3 * slip));
+  const lid = 6 * h;
   const top = (n - 1) * n;
   for (let i = 1; i < n - 1; i++) {
-    // Bottom, η = y: ψ₁ = h u_s − (h²/2) ω_w with u_s = ℓ ∂u/∂y = −ℓ ω_w.
-    omega[i] += relax * (scale * psi[n + i] - omega[i]);
-    // Lid, η = 1 − y: ψ₁ = −h u_s − (h²/2) ω_w with u_s = 1 − ℓ ∂u/∂y = 1 + ℓ ω_w.
-    omega[top + i] += relax * (scale * (psi[top - n + i] + h) - omega[top + i]);
+    // Bottom, η = y: ψ_η = u_s = ℓ ∂u/∂y = −ℓ ω_w.
+    omega[i] += relax * (scale * (8 * psi[n + i] - psi[2 * n + i]) - omega[i]);
+    // Lid, η = 1 − y: ψ_η = −u_s with u_s = 1 − ℓ ∂u/∂y = 1 + ℓ ω_w.
+    omega[top + i] += relax * (scale * (8 * psi[top - n + i] - psi[top - 2 * n + i] + lid) - omega[top + i]);
   }
   for (let j = 1; j < n - 1; j++) {
     const row = j * n;
-    // Left, η = x: ψ₁ = −h v_s − (h²/2) ω_w with v_s = ℓ ∂v/∂x = ℓ ω_w.
-    omega[row] += relax * (scale * psi[row + 1] - omega[row]);
-    // Right, η = 1 − x: ψ₁ = h v_s − (h²/2) ω_w with v_s = −ℓ ∂v/∂x = −ℓ ω_w.
-    omega[row + n - 1] += relax * (scale * psi[row + n - 2] - omega[row + n - 1]);
+    // Left, η = x: ψ_η = −v_s with v_s = ℓ ∂v/∂x = ℓ ω_w.
+    omega[row] += relax * (scale * (8 * psi[row + 1] - psi[row + 2]) - omega[row]);
+    // Right, η = 1 − x: ψ_η = v_s with v_s = −ℓ ∂v/∂x = −ℓ ω_w.
+    omega[row + n - 1] += relax * (scale * (8 * psi[row + n - 2] - psi[row + n - 3]) - omega[row + n - 1]);
   }
   omega[0] = 0.5 * (omega[1] + omega[n]);
   omega[n - 1] = 0.5 * (omega[n - 2] + omega[2 * n - 1]);
