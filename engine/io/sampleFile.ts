@@ -17,11 +17,10 @@
  */
 import { parseCase } from '../case/schema';
 import { plan as planCase } from '../plan/plan';
-import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from '../kernel/state';
 import { wallNamesOf } from '../kernel/sideTable';
 import type { BatchList } from '../stats/batchList';
 import { seriesKeysOf } from '../results/seriesKeys';
-import { geometryOf, geometryDifferences, wallBinTotalOf } from '../results/samplingGeometry';
+import { geometryOf, geometryDifferences, wallBinTotalOf } from '../kernel/samplingGeometry';
 import type { SampleSet } from '../results/sampleSet';
 import {
   parseSampleFileHeader,
@@ -31,6 +30,7 @@ import {
   type BatchStoreHeader,
 } from './sampleFileHeader';
 import { TextEncoder, TextDecoder } from './utf8';
+import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from '../kernel/layout';
 
 export const SAMPLE_FILE_MAGIC = Uint8Array.of(0x89, 0x54, 0x4e, 0x53, 0x0d, 0x0a, 0x1a, 0x0a);
 export const SAMPLE_FILE_VERSION = 1;

@@ -14,8 +14,9 @@
  * relative translation is a Beta(5/2 − ω, ζ/2) deviate (Bird 1994, §5.3, VHS form).
  */
 import { uniform, betaDeviate } from '../particles/rng';
-import { type SimState, RAW_CELL_SUMS } from './state';
+import { type SimState } from './state';
 import { sampleCell } from './sampleCells';
+import { RAW_CELL_SUMS } from './layout';
 
 /** 2^-32: scales a 32-bit unsigned draw to [0, 1). */
 const U32 = 2.3283064365386963e-10;

@@ -6,88 +6,18 @@
  * gives both the cell index used by sampling and the sub-cell index used to pick near collision partners.
  *
  * Side table: one row of SIDE_STRIDE numbers per side (left, right, bottom, top), so the boundary code reads
- * numbers, not objects. Wall sums: per wall bin, SUMS_PER_WALL_BIN running sums of the current batch.
+ * numbers, not objects. Wall sums: per wall bin, SUMS_PER_WALL_BIN running sums of the current batch. Every table's
+ * columns are in kernel/layout.ts.
  */
 import type { Plan } from '../plan/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { createRng, uniform, standardNormal, rotationalEnergyOverKT, type RngState } from '../particles/rng';
 import { sigmaCrCoefficient } from '../gas/molecularModel';
-import { geometryOf, wallBinTotalOf, type SamplingGeometry } from '../results/samplingGeometry';
+import { geometryOf, wallBinTotalOf, type SamplingGeometry } from './samplingGeometry';
 import { insideBlock, type BlockRectangle } from '../geometry/cellGeometry';
-import { inflowTableOf, INFLOW_STRIDE } from '../plan/inflowSegments';
+import { inflowTableOf } from './inflowTable';
 import { initialOutletMoments } from './pressureOutlet';
-
-export const SIDE_LEFT = 0;
-export const SIDE_RIGHT = 1;
-export const SIDE_BOTTOM = 2;
-export const SIDE_TOP = 3;
-
-export const BOUNDARY_PERIODIC = 0;
-export const BOUNDARY_SPECULAR = 1; // symmetry planes and specular walls
-export const BOUNDARY_WALL = 2;
-/** Open to a vessel: molecules leave freely and enter with the reservoir's Maxwellian influx (kernel/inflow.ts). */
-export const BOUNDARY_RESERVOIR = 3;
-/** The axis of an axisymmetric domain: never reached by a 3D flight, so nothing happens there. */
-export const BOUNDARY_AXIS = 4;
-/** The end of a long duct held at a pressure by characteristic relations (kernel/pressureOutlet.ts). */
-export const BOUNDARY_PRESSURE_OUTLET = 5;
-
-export const WALL_DIFFUSE = 0;
-export const WALL_SPECULAR = 1;
-export const WALL_MAXWELL = 2;
-export const WALL_CERCIGNANI_LAMPIS = 3;
-
-/** Side table columns. */
-export const SIDE_TYPE = 0;
-export const SIDE_MODEL = 1;
-export const SIDE_TEMPERATURE = 2;
-export const SIDE_UX = 3;
-export const SIDE_UY = 4;
-export const SIDE_UZ = 5;
-/** Maxwell: accommodation; Cercignani–Lampis: normal energy accommodation α_n. */
-export const SIDE_ACCOMMODATION = 6;
-/** Cercignani–Lampis tangential energy accommodation α_t = σ_t(2 − σ_t). */
-export const SIDE_TANGENTIAL_ENERGY_ACCOMMODATION = 7;
-export const SIDE_BIN_OFFSET = 8;
-export const SIDE_BIN_COUNT = 9;
-/** Thermal speed sqrt(kT_w/m) of the wall (m/s). */
-export const SIDE_THERMAL_SPEED = 10;
-/** 1 when the surface is normal to x (a line x = SIDE_PLANE), 0 when normal to y. */
-export const SIDE_NORMAL_IS_X = 11;
-/** +1 or −1: direction along the normal axis pointing into the gas. */
-export const SIDE_INWARD = 12;
-/** Position of the surface's line (m) and its extent along the surface (m). */
-export const SIDE_PLANE = 13;
-export const SIDE_FROM = 14;
-export const SIDE_TO = 15;
-/** Reservoirs: number density (1/m³); temperature and drift are in SIDE_TEMPERATURE and SIDE_UX…. */
-export const SIDE_NUMBER_DENSITY = 16;
-/** Pressure outlets: the pressure held (Pa). */
-export const SIDE_PRESSURE = 17;
-export const SIDE_STRIDE = 18;
-/** Rows of the domain's sides; block faces follow from row 4, four per block (left, right, bottom, top). */
-export const DOMAIN_SIDES = 4;
-
-/** Block table columns (one row per block): the solid rectangle [x0, x1] × [y0, y1], m. */
-export const BLOCK_X0 = 0;
-export const BLOCK_X1 = 1;
-export const BLOCK_Y0 = 2;
-export const BLOCK_Y1 = 3;
-export const BLOCK_STRIDE = 4;
-
-/** Flow-section table columns: the line x = SECTION_X from SECTION_Y0 to SECTION_Y1, m. */
-export const SECTION_X = 0;
-export const SECTION_Y0 = 1;
-export const SECTION_Y1 = 2;
-export const SECTION_STRIDE = 3;
-
-/** Per wall bin: incident count, momentum given to the wall (x, y, z), energy given to the wall in its own frame. */
-export const WALL_HITS = 0;
-export const WALL_PX = 1;
-export const WALL_PY = 2;
-export const WALL_PZ = 3;
-export const WALL_ENERGY = 4;
-export const SUMS_PER_WALL_BIN = 5;
+import { INFLOW_STRIDE, RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from './layout';
 
 /** The sampling geometry (cells, lengths, time step, weights, side table) plus the particles and kernel scratch. */
 export interface SimState extends SamplingGeometry {
@@ -142,7 +72,7 @@ export interface SimState extends SamplingGeometry {
   /** Per flow section: weighted particles crossing it towards +x minus those crossing towards −x, pending batch. */
   sectionSums: Float64Array;
   /**
-   * Inflow segments (plan/inflowSegments.ts columns) and the fractional particles carried between steps. Reservoir rows
+   * Inflow segments (INFLOW_* columns of kernel/layout.ts) and the fractional particles carried between steps. Reservoir rows
    * are fixed; pressure-outlet rows are updated every step from outletMoments (kernel/pressureOutlet.ts).
    */
   readonly inflowTable: Float64Array;
@@ -228,8 +158,6 @@ function particleArrays(capacity: number) {
   return { ...spareArrays(capacity), key: new Int32Array(capacity) };
 }
 
-export const RAW_CELL_SUMS = 15;
-
 /** Creates the state and fills the domain with the initial equilibrium gas, particlesPerCell per cell on average. */
 export function createState(plan: Plan, stream = 0): SimState {
   const g = plan.grid;
@@ -239,7 +167,7 @@ export function createState(plan: Plan, stream = 0): SimState {
   const main = particleArrays(capacity);
   const rng = createRng(plan.seed, stream);
 
-  // The sampling geometry (grid, weights, side table, names) is the plan's, as results/samplingGeometry.ts derives it.
+  // The sampling geometry (grid, weights, side table, names) is the plan's, as kernel/samplingGeometry.ts derives it.
   const geometry = geometryOf(plan);
   const wallBinTotal = wallBinTotalOf(geometry);
   const cg = g.cells;

@@ -8,9 +8,9 @@ import type { Plan } from '../plan/plan';
 import type { Simulation } from '../run/simulation';
 import { batchListOf, type BatchList } from '../stats/batchList';
 import { seriesView } from '../stats/series';
-import { copyGeometry, type SamplingGeometry } from './samplingGeometry';
+import { copyGeometry, type SamplingGeometry } from '../kernel/samplingGeometry';
 
-export { geometryOf, type SamplingGeometry } from './samplingGeometry';
+export { geometryOf, type SamplingGeometry } from '../kernel/samplingGeometry';
 
 /** Counts over a run, summed over replicas when sets merge. */
 export interface SampleCounters {

@@ -8,14 +8,6 @@
  */
 import type { Plan, ReferenceState } from '../plan/plan';
 import type { Simulation } from '../run/simulation';
-import {
-  RAW_CELL_SUMS,
-  SUMS_PER_WALL_BIN,
-  SIDE_STRIDE,
-  SIDE_BIN_OFFSET,
-  SIDE_BIN_COUNT,
-  SIDE_FROM,
-} from '../kernel/state';
 import { totalOf, batchView, batchSteps, storedSteps, type BatchSums } from '../stats/doublingBatches';
 import { tQuantile975 } from '../stats/studentT';
 import { sampleSetOf, type SampleSet } from './sampleSet';
@@ -32,6 +24,14 @@ import {
   wallBinAreaM2,
   type WallQuantityName,
 } from './wallQuantities';
+import {
+  RAW_CELL_SUMS,
+  SUMS_PER_WALL_BIN,
+  SIDE_STRIDE,
+  SIDE_BIN_OFFSET,
+  SIDE_BIN_COUNT,
+  SIDE_FROM,
+} from '../kernel/layout';
 
 export type { IntegralEstimate };
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { advance } from '../../engine/run/simulation';
 import { summarize, summarizeSamples, averageOverCells, averageSamplesOverCells } from '../../engine/results/summarize';
 import { sampleSetOf, geometryOf } from '../../engine/results/sampleSet';
-import { GEOMETRY_SCALARS } from '../../engine/results/samplingGeometry';
+import { GEOMETRY_SCALARS } from '../../engine/kernel/samplingGeometry';
 import { couetteSimulation, differingLeaves } from '../support/sampleSets';
 
 describe('sampleSetOf', () => {
