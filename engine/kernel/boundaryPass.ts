@@ -7,7 +7,8 @@ import { type SimState, copyParticle } from './state';
 import { flyAndSettle, reweight, rowOf } from './settle';
 import { injectReservoirMolecules } from './inflow';
 
-export function finishMove(st: SimState, dt: number, listed: number): void {
+/** The boundary pass after moveFreely: `listed` is the number of particles it put on st.boundaryList. */
+export function boundaryPass(st: SimState, dt: number, listed: number): void {
   const halfKick = 0.5 * st.bodyAccelerationX * dt;
   const list = st.boundaryList;
   for (let k = 0; k < listed; k++) flyAndSettle(st, list[k], dt, halfKick);

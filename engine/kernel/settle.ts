@@ -5,7 +5,7 @@
  */
 import { type SimState, addParticle, copyParticle } from './state';
 import { flyParticle, FLIGHT_LEFT_DOMAIN } from './flight';
-import { keyOf } from './move';
+import { keyOf } from './subcellKey';
 
 /** Row of the cell holding radius/height y (clamped onto the grid). */
 export function rowOf(st: SimState, y: number): number {
