@@ -27,7 +27,7 @@ import {
 } from '../../engine/case/sweep';
 import { parseQuantity } from '../../engine/units/engineeringUnits';
 import { createSimulation, stepsRemaining } from '../../engine/run/simulation';
-import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
+import type { SampleSet } from '../../engine/results/sampleSet';
 import { summarizeSamples } from '../../engine/results/summarize';
 import { resultFiles, type Performance } from '../../engine/results/exports';
 import { continuumComparisonOf } from '../../engine/continuum/comparison';
@@ -41,6 +41,7 @@ import { createProgress, type Progress } from '../progress';
 import { sig, duration } from '../format';
 import { prettyJson } from '../prettyJson';
 import type { CommandIO } from './io';
+import { sampleSetOf } from '../../engine/run/simulationSamples';
 
 interface SweepOptions {
   readonly casePath: string;

@@ -16,8 +16,8 @@
 import type { Plan } from '../plan/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { MOLECULES_PER_S_PER_SCCM } from '../units/engineeringUnits';
-import type { Estimate } from './summarize';
 import type { IntegralEstimate } from './integralEstimate';
+import type { Estimate } from './estimate';
 
 export const FLOW_QUANTITIES = [
   'massFlowRate',

@@ -4,7 +4,7 @@
  */
 import { blockingAnalysis } from '../stats/blocking';
 import { replicaBlockingAnalysis } from '../stats/replicaBlocking';
-import type { Estimate } from './summarize';
+import type { Estimate } from './estimate';
 
 export interface IntegralEstimate extends Estimate {
   standardError: number;

@@ -4,11 +4,11 @@ import { describe, expect, it } from 'vitest';
 import { parseCase, type Case } from '../../engine/case/schema';
 import { buildPreset } from '../../engine/case/presets';
 import { createSimulation, runToCompletion } from '../../engine/run/simulation';
-import { summarize } from '../../engine/results/summarize';
 import { resultFiles, type SummaryJson } from '../../engine/results/exports';
 import { continuumComparisonOf } from '../../engine/continuum/comparison';
 import { caseModelsOf } from '../../engine/continuum/caseModels';
 import { planSweepPoints, sweepContinuumCurves, sweepCsv, sweepRowOf, sweepValues } from '../../engine/case/sweep';
+import { summarize } from '../../engine/run/simulationSamples';
 
 function parsed(input: unknown): Case {
   const r = parseCase(input);

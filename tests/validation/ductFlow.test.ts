@@ -9,9 +9,9 @@
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { runToEnd } from '../support/planOrThrow';
-import { summarize } from '../../engine/results/summarize';
 import type { IntegralEstimate } from '../../engine/results/integralEstimate';
 import { field } from './runGapPreset';
+import { summarize } from '../../engine/run/simulationSamples';
 
 function expectSameFlow(sections: Readonly<Record<string, IntegralEstimate>>): void {
   const all = Object.values(sections);

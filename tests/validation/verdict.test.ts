@@ -23,9 +23,9 @@
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { runToEnd } from '../support/planOrThrow';
-import { summarize } from '../../engine/results/summarize';
 import { continuumComparisonOf, type ContinuumComparison } from '../../engine/continuum/comparison';
 import type { QuantityVerdict } from '../../engine/continuum/verdict';
+import { summarize } from '../../engine/run/simulationSamples';
 
 function compare(name: string, overrides: Record<string, string>): ContinuumComparison {
   const sim = runToEnd(buildPreset(name, overrides));
