@@ -18,7 +18,7 @@
  */
 import { PRESETS, buildPreset, type Preset } from '../../engine/case/presets';
 import { parseCase, SIDE_NAMES, type Case, type CaseInput, type SideName } from '../../engine/case/schema';
-import { gasModelOf, planFromInput } from '../../engine/plan/plan';
+import { planFromInput } from '../../engine/plan/plan';
 import { scalePressures } from '../../engine/case/sweep';
 import { modelFromSpecies, viscosityPaS, type MolecularModel } from '../../engine/gas/molecularModel';
 import { SPECIES_IDS, type SpeciesId } from '../../engine/gas/species';
@@ -35,6 +35,7 @@ import {
   type UnitApi,
 } from './formModel';
 import { lengthLabel } from './blockEdits';
+import { gasModelOf } from '../../engine/plan/referenceState';
 
 export interface CaseDerivation {
   /** The valid case, or null while anything is wrong. */

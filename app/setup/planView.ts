@@ -3,7 +3,7 @@
  * mark, particle count, memory, expected statistical error of the planned sampling and a run-time estimate.
  * Part of the lazily loaded set-up chunk (it calls the planner); components import its types only.
  */
-import { planFromInput, type ReferenceState } from '../../engine/plan/plan';
+import { planFromInput } from '../../engine/plan/plan';
 import { SIDE_NAMES } from '../../engine/case/schema';
 import { targetPathsOf } from '../../engine/results/targetQuantities';
 import {
@@ -13,6 +13,7 @@ import {
   temperatureRelativeError,
   velocityStandardErrorMPerS,
 } from '../../engine/stats/expectedNoise';
+import type { ReferenceState } from '../../engine/plan/referenceState';
 
 export interface AdvisorRow {
   readonly label: string;

@@ -13,7 +13,7 @@
  */
 import type { Case } from './schema';
 import { SIDE_NAMES } from './schema';
-import { gasModelOf, plan, referenceStateOf, type Plan } from '../plan/plan';
+import { plan, type Plan } from '../plan/plan';
 import type { QuantityKind } from '../units/engineeringUnits';
 import { csvDocument, summaryJsonText, type SummaryJson, type JsonNumber, type Performance } from '../results/exports';
 import type { SimulationResult } from '../results/summarize';
@@ -22,6 +22,7 @@ import { caseModelsOf } from '../continuum/caseModels';
 import type { CaseProblem, ContinuumModelName } from '../continuum/caseModelTypes';
 import { FLOW_QUANTITIES, flowQuantityUnits } from '../results/flowQuantities';
 import { WALL_QUANTITY_UNITS } from '../results/wallQuantities';
+import { gasModelOf, referenceStateOf } from '../plan/referenceState';
 
 export const SWEEP_PARAMETERS = ['knudsen', 'pressure'] as const;
 export type SweepParameter = (typeof SWEEP_PARAMETERS)[number];

@@ -14,10 +14,10 @@
  */
 import { planFromInput } from '../plan/plan';
 import { createSimulation, type Simulation } from '../run/simulation';
-import { growParticles } from '../kernel/state';
 import { createSeries } from '../stats/series';
 import { replayTransientMonitor, MONITOR_NAMES } from '../run/transientMonitor';
 import { TextEncoder, TextDecoder } from './utf8';
+import { growParticles } from '../kernel/particleStore';
 
 export const CHECKPOINT_MAGIC = Uint8Array.of(0x89, 0x54, 0x4e, 0x43, 0x0d, 0x0a, 0x1a, 0x0a);
 export const CHECKPOINT_VERSION = 1;

@@ -7,7 +7,7 @@
  */
 import { uniform, standardNormal, rotationalEnergyOverKT, type RngState } from '../particles/rng';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
-import { type SimState, addParticle } from './state';
+import type { SimState } from './state';
 import { flyAndSettle } from './settle';
 import {
   SIDE_STRIDE,
@@ -25,6 +25,7 @@ import {
   INFLOW_DRIFT_Y,
   INFLOW_DRIFT_Z,
 } from './layout';
+import { addParticle } from './particleStore';
 
 const SQRT_PI = Math.sqrt(Math.PI);
 

@@ -13,7 +13,7 @@
  * second-order accurate in free flight; a wall met during the flight sees the velocity after the first half kick,
  * an error of order a Δt, far below thermal speeds in the linear regime where force-driven flow is used.
  */
-import { type SimState } from './state';
+import type { SimState } from './state';
 import { boundaryPass } from './boundaryPass';
 
 /** Moves all particles by dt (s), boundaries included; fills st.key and st.keyCount. */

@@ -16,13 +16,14 @@
  * `continuumModels` (what each model is); a case no model applies to gets `continuumNote` (why). profiles.csv gains
  * one column per model after each DSMC quantity a model predicts: `velocityX noSlip [m/s]`.
  */
-import type { Plan, ReferenceState } from '../plan/plan';
+import type { Plan } from '../plan/plan';
 import { continuumComparisonOf, type ContinuumComparisonResult } from '../continuum/comparison';
 import type { QuantityVerdict } from '../continuum/verdict';
 import { FLOW_QUANTITIES, flowQuantityUnits, type FlowResult } from './flowQuantities';
 import { flowCsv } from './flowCsv';
 import type { SimulationResult, FieldTable, IntegralEstimate } from './summarize';
 import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, type WallQuantityName } from './wallQuantities';
+import type { ReferenceState } from '../plan/referenceState';
 
 export const CSV_LINE_END = '\n';
 export const SUMMARY_FORMAT = 'tenuis-summary';

@@ -9,13 +9,14 @@
  * SimulationResult is declared here with the function that makes it; the types it is built of are re-exported, so a
  * reader of results imports them from one place. The summary of a live simulation is in run/simulationSamples.ts.
  */
-import type { Plan, ReferenceState } from '../plan/plan';
+import type { Plan } from '../plan/plan';
 import type { SampleSet } from './sampleSet';
 import { flowResultOf, type FlowResult } from './flowQuantities';
 import { sectionSeriesKey } from './seriesKeys';
 import { replicaIntegralEstimate, type IntegralEstimate } from './integralEstimate';
 import { WALL_QUANTITIES, type WallQuantityName } from './wallQuantities';
 import { groupedFields, wallBinTable, type FieldTable } from './fieldTables';
+import type { ReferenceState } from '../plan/referenceState';
 
 export type { IntegralEstimate, FieldTable };
 

@@ -8,7 +8,7 @@
  * integral-quantity series that the blocking analysis reads.
  */
 import type { Plan } from '../plan/plan';
-import { createState, type SimState } from '../kernel/state';
+import type { SimState } from '../kernel/state';
 import { wallNamesOf } from '../kernel/sideTable';
 import { seriesKeysOf, sectionSeriesKey } from '../results/seriesKeys';
 import { moveFreely } from '../kernel/move';
@@ -21,6 +21,7 @@ import { wallTotalsOfBatch, type WallQuantityName } from '../results/wallQuantit
 import { createSeries, pushSeries, type GrowableSeries } from '../stats/series';
 import { createTransientMonitor, monitorValues, pushMonitor, type TransientMonitor } from './transientMonitor';
 import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from '../kernel/layout';
+import { createState } from '../kernel/createState';
 
 /**
  * Steps between physical reorders of particle memory into cell order (performance guide, item 1). Measured on the
