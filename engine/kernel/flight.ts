@@ -12,7 +12,7 @@
  * Blocks: a face is met from the gas side only (block interiors are open sets: a particle on a face is in the gas),
  * which keeps a particle that has just left a face from meeting it again at t = 0.
  */
-import { type SimState } from './state';
+import type { SimState } from './state';
 import { reflectAtWall } from './wallReflection';
 import {
   SIDE_STRIDE,

@@ -14,7 +14,7 @@
  */
 import type { Plan } from '../plan/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
-import { type SimState } from './state';
+import type { SimState } from './state';
 import { maxwellianInfluxPerM2S } from './inflowTable';
 import {
   SIDE_STRIDE,

@@ -4,7 +4,7 @@
  * function of these 15 sums (see results/cellFields.ts). advance() adds them inside the collision pass, cell by cell
  * (collideParticles with sample = true, which calls sampleCell); sampleCells is the same thing as a pass of its own.
  */
-import { type SimState } from './state';
+import type { SimState } from './state';
 import {
   RAW_CELL_SUMS,
   SUM_N,

@@ -8,7 +8,7 @@
  */
 import { uniform, standardNormal, rotationalEnergyOverKT } from '../particles/rng';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
-import { type SimState } from './state';
+import type { SimState } from './state';
 import {
   SIDE_STRIDE,
   SIDE_MODEL,
