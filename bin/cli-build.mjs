@@ -55,7 +55,7 @@ async function withBuildLock(fn) {
       break;
     } catch (error) {
       if (error.code !== 'EEXIST') throw error;
-      let age = 0;
+      let age;
       try {
         age = Date.now() - statSync(lockDir).mtimeMs;
       } catch {

@@ -14,9 +14,9 @@ import {
   stepsRemaining,
   type Simulation,
 } from '../engine/run/simulation';
-import { sampleSetOf } from '../engine/results/sampleSet';
 import { encodeSampleSet } from '../engine/io/sampleFile';
 import type { ReplicaApi, ReplicaOutcome, ReplicaProgress, ReplicaStartRequest } from './protocol';
+import { sampleSetOf } from '../engine/run/simulationSamples';
 
 const DEFAULT_CHUNK_MS = 100;
 const DEFAULT_PROGRESS_MS = 250;

@@ -7,7 +7,7 @@ import { readFileSync } from 'node:fs';
 import { createSimulation, stepsRemaining, type Simulation } from '../../engine/run/simulation';
 import { encodeCheckpoint, decodeCheckpoint } from '../../engine/io/checkpoint';
 import { summarizeSamples } from '../../engine/results/summarize';
-import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
+import type { SampleSet } from '../../engine/results/sampleSet';
 import { encodeSampleSet } from '../../engine/io/sampleFile';
 import { runReplicas, replicaReportJson, type StoppingOptions } from '../runReplicas';
 import { parseTarget } from '../../engine/stats/stopping';
@@ -26,6 +26,7 @@ import { advanceInChunks } from '../advanceInChunks';
 import { runSummary } from '../report';
 import { prettyJson } from '../prettyJson';
 import type { CommandIO } from './io';
+import { sampleSetOf } from '../../engine/run/simulationSamples';
 
 /** Sets a flag on the first Ctrl-C; a second Ctrl-C ends the process at once (the default action). */
 function watchInterrupt(): { readonly interrupted: boolean; dispose(): void } {

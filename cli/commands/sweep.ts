@@ -23,7 +23,7 @@ import { sweepCsv, sweepJson } from '../../engine/report/sweepTable';
 import { sweepRowOf, type SweepRow } from '../../engine/report/sweepRow';
 import { parseQuantity } from '../../engine/units/engineeringUnits';
 import { createSimulation, stepsRemaining } from '../../engine/run/simulation';
-import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
+import type { SampleSet } from '../../engine/results/sampleSet';
 import { summarizeSamples } from '../../engine/results/summarize';
 import { resultFiles } from '../../engine/report/resultFiles';
 import type { Performance } from '../../engine/report/summaryJson';
@@ -38,6 +38,7 @@ import { createProgress, type Progress } from '../progress';
 import { sig, duration } from '../format';
 import { prettyJson } from '../prettyJson';
 import type { CommandIO } from './io';
+import { sampleSetOf } from '../../engine/run/simulationSamples';
 
 interface SweepOptions {
   readonly casePath: string;

@@ -3,10 +3,11 @@
  * file from disk or another machine is checked once, here, with messages that name the field.
  */
 import { z } from 'zod';
+import { CONTAINER_DTYPE } from './binaryContainer';
 
 export const SAMPLE_FILE_FORMAT = 'tenuis-samples';
-/** The one array element type: IEEE 754 double, little-endian. */
-export const SAMPLE_FILE_DTYPE = 'float64le' as const;
+/** The one array element type of the binary container: IEEE 754 double, little-endian. */
+export const SAMPLE_FILE_DTYPE = CONTAINER_DTYPE;
 
 const count = z.number().int().min(0);
 const positive = z.number().finite().positive();

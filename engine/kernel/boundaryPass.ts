@@ -3,11 +3,13 @@
  * changed row, this step's reservoir molecules, and the removal of every particle that left or was deleted.
  * Removal swaps the last particle into each freed slot, in descending slot order, so no slot is visited twice.
  */
-import { type SimState, copyParticle } from './state';
+import type { SimState } from './state';
 import { flyAndSettle, reweight, rowOf } from './settle';
 import { injectReservoirMolecules } from './inflow';
+import { copyParticle } from './particleStore';
 
-export function finishMove(st: SimState, dt: number, listed: number): void {
+/** The boundary pass after moveFreely: `listed` is the number of particles it put on st.boundaryList. */
+export function boundaryPass(st: SimState, dt: number, listed: number): void {
   const halfKick = 0.5 * st.bodyAccelerationX * dt;
   const list = st.boundaryList;
   for (let k = 0; k < listed; k++) flyAndSettle(st, list[k], dt, halfKick);

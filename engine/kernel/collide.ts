@@ -2,8 +2,9 @@
  * Binary collisions by Bird's no-time-counter (NTC) scheme with sub-cell partner selection.
  *
  * Per cell and step, N_sel = ½ N (N−1) F_N w_c (σ_T c_r)_max Δt / V_c candidate pairs (Bird 1994, eq. 11.3 in its
- * N(N−1) form, from memory; w_c the cell's particle weight, V_c its gas volume: st.selectionFactor); a pair collides with probability σ_T c_r / (σ_T c_r)_max. The fractional part of N_sel is
- * carried to the next step so the mean rate is exact. The first particle is drawn from the whole cell, the second
+ * N(N−1) form, from memory; w_c the cell's particle weight, V_c its gas volume: st.selectionFactor); a pair
+ * collides with probability σ_T c_r / (σ_T c_r)_max. The fractional part of N_sel is carried to the next step so the
+ * mean rate is exact. The first particle is drawn from the whole cell, the second
  * from its sub-cell when that holds another particle (else from the cell), which keeps the mean collision
  * separation a small fraction of the cell size (Bird 1994, §11.1); the separation is summed for the report.
  *
@@ -12,10 +13,16 @@
  * the post-collision relative velocity). Rotational energy: Larsen–Borgnakke (Borgnakke & Larsen 1975, J. Comput.
  * Phys. 18:405) applied to each partner with probability 1/Z_rot; the share of the pooled energy E_c that stays in
  * relative translation is a Beta(5/2 − ω, ζ/2) deviate (Bird 1994, §5.3, VHS form).
+ *
+ * Hot path: collideParticles is one long function on purpose (the generator inlined at each draw, isotropic
+ * scattering written out), about 200 lines; the rarer VSS deflection and Larsen–Borgnakke exchange are in
+ * vssDeflection.ts and larsenBorgnakke.ts.
  */
-import { uniform, betaDeviate } from '../particles/rng';
-import { type SimState, RAW_CELL_SUMS } from './state';
+import type { SimState } from './state';
 import { sampleCell } from './sampleCells';
+import { RAW_CELL_SUMS } from './layout';
+import { deflectVss, DEFLECTED } from './vssDeflection';
+import { relaxRotation } from './larsenBorgnakke';
 
 /** 2^-32: scales a 32-bit unsigned draw to [0, 1). */
 const U32 = 2.3283064365386963e-10;
@@ -89,15 +96,14 @@ export function collideParticles(st: SimState, sample = false): void {
   let separation = 0;
   const pairList = PAIR_LIST;
   let listed = 0;
-  // Generator state. One draw, spelled out at each use (Blackman & Vigna 2018):
+  // Generator state. One draw, spelled out at each use (Blackman & Vigna 2018), its temporaries m and t numbered by
+  // draw (const locals, so each is a fresh value, never carried across iterations):
   //   m = imul(s1, 5); u = (imul(rotl(m, 7), 9) >>> 0) · 2^-32 + 2^-33;
   //   t = s1 << 9; s2 ^= s0; s3 ^= s1; s1 ^= s2; s0 ^= s3; s2 ^= t; s3 = rotl(s3, 11).
   let s0 = rng[0] | 0;
   let s1 = rng[1] | 0;
   let s2 = rng[2] | 0;
   let s3 = rng[3] | 0;
-  let m = 0;
-  let t = 0;
 
   for (let c = 0; c < cells; c++) {
     const cellKey0 = c * subcells;
@@ -113,14 +119,14 @@ export function collideParticles(st: SimState, sample = false): void {
     }
     for (let p = 0; p < pairs; p++) {
       // First partner: anywhere in the cell.
-      m = Math.imul(s1, 5);
-      const u1 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
-      t = s1 << 9;
+      const m1 = Math.imul(s1, 5);
+      const u1 = (Math.imul((m1 << 7) | (m1 >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
+      const t1 = s1 << 9;
       s2 ^= s0;
       s3 ^= s1;
       s1 ^= s2;
       s0 ^= s3;
-      s2 ^= t;
+      s2 ^= t1;
       s3 = (s3 << 11) | (s3 >>> 21);
       const pi = first + ((u1 * nCell) | 0);
       const i = order[pi];
@@ -136,14 +142,14 @@ export function collideParticles(st: SimState, sample = false): void {
       const sub0 = start[ki];
       const nSub = start[ki + 1] - sub0;
       // Second partner: another particle of the same sub-cell if there is one, else of the cell.
-      m = Math.imul(s1, 5);
-      const u2 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
-      t = s1 << 9;
+      const m2 = Math.imul(s1, 5);
+      const u2 = (Math.imul((m2 << 7) | (m2 >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
+      const t2 = s1 << 9;
       s2 ^= s0;
       s3 ^= s1;
       s1 ^= s2;
       s0 ^= s3;
-      s2 ^= t;
+      s2 ^= t2;
       s3 = (s3 << 11) | (s3 >>> 21);
       let pj = nSub > 1 ? sub0 + ((u2 * (nSub - 1)) | 0) : first + ((u2 * (nCell - 1)) | 0);
       if (pj >= pi) pj++;
@@ -158,14 +164,14 @@ export function collideParticles(st: SimState, sample = false): void {
         maxArr[c] = sigmaCr;
       }
       // Acceptance with probability σc / (σc)max.
-      m = Math.imul(s1, 5);
-      const u3 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
-      t = s1 << 9;
+      const m3 = Math.imul(s1, 5);
+      const u3 = (Math.imul((m3 << 7) | (m3 >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
+      const t3 = s1 << 9;
       s2 ^= s0;
       s3 ^= s1;
       s1 ^= s2;
       s0 ^= s3;
-      s2 ^= t;
+      s2 ^= t3;
       s3 = (s3 << 11) | (s3 >>> 21);
       if (u3 * sigmaCrMax >= sigmaCr) continue;
 
@@ -200,23 +206,23 @@ export function collideParticles(st: SimState, sample = false): void {
         if (crNew >= 0) cr = crNew;
       }
       // Deflection: cos χ and the azimuth ε.
-      m = Math.imul(s1, 5);
-      const u4 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
-      t = s1 << 9;
+      const m4 = Math.imul(s1, 5);
+      const u4 = (Math.imul((m4 << 7) | (m4 >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
+      const t4 = s1 << 9;
       s2 ^= s0;
       s3 ^= s1;
       s1 ^= s2;
       s0 ^= s3;
-      s2 ^= t;
+      s2 ^= t4;
       s3 = (s3 << 11) | (s3 >>> 21);
-      m = Math.imul(s1, 5);
-      const u5 = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
-      t = s1 << 9;
+      const m5 = Math.imul(s1, 5);
+      const u5 = (Math.imul((m5 << 7) | (m5 >>> 25), 9) >>> 0) * U32 + 0.5 * U32;
+      const t5 = s1 << 9;
       s2 ^= s0;
       s3 ^= s1;
       s1 ^= s2;
       s0 ^= s3;
-      s2 ^= t;
+      s2 ^= t5;
       s3 = (s3 << 11) | (s3 >>> 21);
       // Post-collision velocities: centre-of-mass velocity kept, relative velocity of magnitude cr (differs from
       // |c_r| after a Larsen–Borgnakke exchange) in the new direction. Isotropic scattering (HS, VHS) is written
@@ -258,75 +264,4 @@ export function collideParticles(st: SimState, sample = false): void {
   st.collisionCount += collisions;
   st.candidateCount += candidates;
   st.separationSum += addPairSeparations(separation, x, y, pairList, listed);
-}
-
-/** Output of deflectVss (three numbers without an allocation). */
-const DEFLECTED = new Float64Array(3);
-
-/**
- * VSS deflection: writes to out the new relative velocity (m/s), of magnitude crNew (differs from |c_r| = crOld
- * after a Larsen–Borgnakke exchange), turned from the old direction (crx, cry, crz) by the deflection angle χ at
- * azimuth eps (rad) (Bird 1994 eq. 2.22).
- */
-function deflectVss(
-  out: Float64Array,
-  crx: number,
-  cry: number,
-  crz: number,
-  crOld: number,
-  crNew: number,
-  cosChi: number,
-  eps: number,
-): void {
-  const sinChi = Math.sqrt(1 - cosChi * cosChi);
-  const cosEps = Math.cos(eps);
-  const sinEps = Math.sin(eps);
-  // Scale the old relative velocity to the new speed first, then turn it.
-  const scale = crOld > 0 ? crNew / crOld : 0;
-  const ax = crx * scale;
-  const ay = cry * scale;
-  const az = crz * scale;
-  const perp = Math.sqrt(ay * ay + az * az);
-  if (perp > 1e-12 * crNew) {
-    out[0] = cosChi * ax + sinChi * sinEps * perp;
-    out[1] = cosChi * ay + (sinChi * (crNew * az * cosEps - ax * ay * sinEps)) / perp;
-    out[2] = cosChi * az - (sinChi * (crNew * ay * cosEps + ax * az * sinEps)) / perp;
-  } else {
-    // Relative velocity along x: any perpendicular basis will do.
-    out[0] = cosChi * ax;
-    out[1] = crNew * sinChi * cosEps;
-    out[2] = crNew * sinChi * sinEps;
-  }
-}
-
-/**
- * Larsen–Borgnakke exchange for a colliding pair: each partner, with probability 1/Z_rot, pools its rotational
- * energy with the relative translational energy etr (J) and keeps the Beta(5/2 − ω, ζ/2) share in translation.
- * Returns the new relative speed (m/s), or −1 when neither partner relaxed. Draws from rng.
- */
-function relaxRotation(
-  rng: Uint32Array,
-  erot: Float64Array,
-  i: number,
-  j: number,
-  etr: number,
-  quarterMass: number,
-  relaxProbability: number,
-  lbTranslational: number,
-  lbRotational: number,
-): number {
-  let changed = false;
-  if (uniform(rng) < relaxProbability) {
-    const pool = etr + erot[i];
-    etr = pool * betaDeviate(rng, lbTranslational, lbRotational);
-    erot[i] = pool - etr;
-    changed = true;
-  }
-  if (uniform(rng) < relaxProbability) {
-    const pool = etr + erot[j];
-    etr = pool * betaDeviate(rng, lbTranslational, lbRotational);
-    erot[j] = pool - etr;
-    changed = true;
-  }
-  return changed ? Math.sqrt(etr / quarterMass) : -1;
 }

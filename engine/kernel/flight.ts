@@ -12,8 +12,9 @@
  * Blocks: a face is met from the gas side only (block interiors are open sets: a particle on a face is in the gas),
  * which keeps a particle that has just left a face from meeting it again at t = 0.
  */
+import type { SimState } from './state';
+import { reflectAtWall } from './wallReflection';
 import {
-  type SimState,
   SIDE_STRIDE,
   SIDE_TYPE,
   SIDE_LEFT,
@@ -35,8 +36,7 @@ import {
   SECTION_X,
   SECTION_Y0,
   SECTION_Y1,
-} from './state';
-import { reflectAtWall } from './wallReflection';
+} from './layout';
 
 /** A flight ends with the particle in the gas, or gone through a reservoir side. */
 export const FLIGHT_STAYS = 0;

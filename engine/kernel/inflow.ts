@@ -1,5 +1,5 @@
 /**
- * Molecules entering through reservoir sides and pressure outlets, each step: per segment (plan/inflowSegments.ts) the mean number of
+ * Molecules entering through reservoir sides and pressure outlets, each step: per segment (kernel/inflowTable.ts) the mean number of
  * simulated particles of the Maxwellian influx, the fractional part carried to the next step so the mean is exact.
  * Each enters at a uniform point of its segment (uniform in area: in r² on an axisymmetric end), with the velocity
  * distribution of molecules crossing a plane — the normal component flux-weighted, f(c_n) ∝ c_n exp(−(c_n − u_n)²/v_mp²),
@@ -7,8 +7,13 @@
  */
 import { uniform, standardNormal, rotationalEnergyOverKT, type RngState } from '../particles/rng';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
-import { type SimState, addParticle, SIDE_STRIDE, SIDE_NORMAL_IS_X, SIDE_INWARD, SIDE_PLANE } from './state';
+import type { SimState } from './state';
+import { flyAndSettle } from './settle';
 import {
+  SIDE_STRIDE,
+  SIDE_NORMAL_IS_X,
+  SIDE_INWARD,
+  SIDE_PLANE,
   INFLOW_STRIDE,
   INFLOW_SURFACE,
   INFLOW_FROM,
@@ -19,8 +24,8 @@ import {
   INFLOW_DRIFT_X,
   INFLOW_DRIFT_Y,
   INFLOW_DRIFT_Z,
-} from '../plan/inflowSegments';
-import { flyAndSettle } from './settle';
+} from './layout';
+import { addParticle } from './particleStore';
 
 const SQRT_PI = Math.sqrt(Math.PI);
 

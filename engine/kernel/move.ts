@@ -6,30 +6,30 @@
  * thin block) are put on a short list and flown exactly afterwards (kernel/flight.ts), so a particle may hit several
  * surfaces in one step. Counting occupancy inside the move loop saves the index step one pass (performance guide,
  * item 4). After the loop, kernel/boundaryPass.ts flies the listed particles, applies radial weighting, lets
- * reservoir molecules in and removes the particles that left.
+ * reservoir molecules in and removes the particles that left: advance() calls the two as phases of their own
+ * (moveFreely, then boundaryPass); moveParticles is both, for callers that move without the rest of a step.
  *
  * A body acceleration a along x is applied as two half kicks around the drift (v += a Δt/2; x += v Δt; v += a Δt/2),
  * second-order accurate in free flight; a wall met during the flight sees the velocity after the first half kick,
  * an error of order a Δt, far below thermal speeds in the linear regime where force-driven flow is used.
  */
-import { type SimState } from './state';
-import { finishMove } from './boundaryPass';
+import type { SimState } from './state';
+import { boundaryPass } from './boundaryPass';
 
-/** Moves all particles by dt (s); fills st.key and st.keyCount. */
+/** Moves all particles by dt (s), boundaries included; fills st.key and st.keyCount. */
 export function moveParticles(st: SimState, dt: number): void {
+  boundaryPass(st, dt, moveFreely(st, dt));
+}
+
+/**
+ * The move loop: straight flights of every particle by dt (s), keys and counts of those that stayed clear of every
+ * surface. Returns the number of particles put on st.boundaryList for the boundary pass.
+ */
+export function moveFreely(st: SimState, dt: number): number {
   st.keyCount.fill(0);
   const listed = st.axisymmetric ? moveAxisymmetric(st, dt) : movePlanar(st, dt);
   st.particleSteps += st.count;
-  finishMove(st, dt, listed);
-}
-
-/** Sub-cell key of a position inside the domain (clamped so round-off on a side never leaves the grid). */
-export function keyOf(st: SimState, xi: number, yi: number): number {
-  let gx = Math.floor(xi * st.subcolumnsPerM);
-  gx = gx < 0 ? 0 : gx >= st.columnKey.length ? st.columnKey.length - 1 : gx;
-  let gy = Math.floor(yi * st.subrowsPerM);
-  gy = gy < 0 ? 0 : gy >= st.rowKey.length ? st.rowKey.length - 1 : gy;
-  return st.columnKey[gx] + st.rowKey[gy];
+  return listed;
 }
 
 /** Planar main loop; returns the number of particles put on st.boundaryList. */

@@ -14,8 +14,14 @@
  */
 import type { Plan } from '../plan/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
-import { type SimState, SIDE_STRIDE, SIDE_TYPE, SIDE_INWARD, SIDE_PRESSURE, BOUNDARY_PRESSURE_OUTLET } from './state';
+import type { SimState } from './state';
+import { maxwellianInfluxPerM2S } from './inflowTable';
 import {
+  SIDE_STRIDE,
+  SIDE_TYPE,
+  SIDE_INWARD,
+  SIDE_PRESSURE,
+  BOUNDARY_PRESSURE_OUTLET,
   INFLOW_STRIDE,
   INFLOW_SURFACE,
   INFLOW_PER_STEP,
@@ -28,8 +34,7 @@ import {
   INFLOW_CELL,
   INFLOW_CELL_VOLUME,
   INFLOW_AREA,
-  maxwellianInfluxPerM2S,
-} from '../plan/inflowSegments';
+} from './layout';
 
 /** Weight of the newest step in the running average of the outlet cells (memory of about 50 steps). */
 const RELAXATION = 0.02;

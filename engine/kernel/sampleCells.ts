@@ -4,24 +4,25 @@
  * function of these 15 sums (see results/cellFields.ts). advance() adds them inside the collision pass, cell by cell
  * (collideParticles with sample = true, which calls sampleCell); sampleCells is the same thing as a pass of its own.
  */
-import { type SimState, RAW_CELL_SUMS } from './state';
-
-export const SUM_N = 0;
-export const SUM_VX = 1;
-export const SUM_VY = 2;
-export const SUM_VZ = 3;
-export const SUM_VXX = 4;
-export const SUM_VYY = 5;
-export const SUM_VZZ = 6;
-export const SUM_VXY = 7;
-export const SUM_VXZ = 8;
-export const SUM_VYZ = 9;
-/** Σ |v|² v_x and Σ |v|² v_y: translational energy flux moments. */
-export const SUM_V2VX = 10;
-export const SUM_V2VY = 11;
-export const SUM_EROT = 12;
-export const SUM_EROT_VX = 13;
-export const SUM_EROT_VY = 14;
+import type { SimState } from './state';
+import {
+  RAW_CELL_SUMS,
+  SUM_N,
+  SUM_VX,
+  SUM_VY,
+  SUM_VZ,
+  SUM_VXX,
+  SUM_VYY,
+  SUM_VZZ,
+  SUM_VXY,
+  SUM_VXZ,
+  SUM_VYZ,
+  SUM_V2VX,
+  SUM_V2VY,
+  SUM_EROT,
+  SUM_EROT_VX,
+  SUM_EROT_VY,
+} from './layout';
 
 /** Adds one sampling step of every cell's sums to st.cellSums. Needs st.order and st.keyStart from indexParticles. */
 export function sampleCells(st: SimState): void {

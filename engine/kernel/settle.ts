@@ -3,9 +3,10 @@
  * it changed row in an axisymmetric domain, and its sub-cell key and count for the index step. Rare work (a few per
  * cent of particles per step), so it may call helpers.
  */
-import { type SimState, addParticle, copyParticle } from './state';
+import type { SimState } from './state';
 import { flyParticle, FLIGHT_LEFT_DOMAIN } from './flight';
-import { keyOf } from './move';
+import { keyOf } from './subcellKey';
+import { addParticle, copyParticle } from './particleStore';
 
 /** Row of the cell holding radius/height y (clamped onto the grid). */
 export function rowOf(st: SimState, y: number): number {

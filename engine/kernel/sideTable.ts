@@ -1,12 +1,10 @@
 /**
  * The side table: one row of SIDE_STRIDE numbers per surface (the domain's four sides, then four faces per block, in
- * plan.surfaces order), so the boundary code reads numbers, not objects; column meanings are the SIDE_* constants in
- * state.ts.
+ * plan.surfaces order), so the boundary code reads numbers, not objects; column meanings and codes are the SIDE_*,
+ * BOUNDARY_* and WALL_* constants of kernel/layout.ts.
  *
  * Built from the plan alone (no particles), so sampled sums can be reduced to wall quantities without a live state
- * (results/samplingGeometry.ts). state.ts reaches this module through samplingGeometry.ts and this one reads
- * state.ts's constants: the cycle is harmless because neither uses the other's bindings while it loads, only when a
- * function is called.
+ * (kernel/samplingGeometry.ts).
  */
 import type { Plan } from '../plan/plan';
 import type { SurfacePlan } from '../geometry/surfaces';
@@ -41,7 +39,7 @@ import {
   WALL_SPECULAR,
   WALL_MAXWELL,
   WALL_CERCIGNANI_LAMPIS,
-} from './state';
+} from './layout';
 
 function surfaceRow(plan: Plan, f: SurfacePlan, binOffset: number): number[] {
   const b = f.spec;

@@ -8,8 +8,8 @@
  */
 import { uniform, standardNormal, rotationalEnergyOverKT } from '../particles/rng';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
+import type { SimState } from './state';
 import {
-  type SimState,
   SIDE_STRIDE,
   SIDE_MODEL,
   SIDE_TEMPERATURE,
@@ -34,7 +34,7 @@ import {
   WALL_PY,
   WALL_PZ,
   WALL_ENERGY,
-} from './state';
+} from './layout';
 
 /**
  * Re-emits particle i from surface `side` (a side-table row) at position `along` (m) measured along it (x for

@@ -19,7 +19,7 @@ import {
   SUM_EROT,
   SUM_EROT_VX,
   SUM_EROT_VY,
-} from '../kernel/sampleCells';
+} from '../kernel/layout';
 
 /** Field names with their SI unit; the order is the column order of every export. */
 export const CELL_FIELDS = [

@@ -13,7 +13,7 @@
  */
 import { caseDifferences } from '../case/caseDifferences';
 import { mergeBatchLists } from '../stats/batchList';
-import { geometryDifferences } from './samplingGeometry';
+import { geometryDifferences } from '../kernel/samplingGeometry';
 import type { SampleCounters, SampleSet } from './sampleSet';
 
 /** Case fields in which replicas may differ: the seed (replicas of one seed differ in their stream instead). */

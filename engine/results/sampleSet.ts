@@ -1,16 +1,12 @@
 /**
  * SampleSet: everything summarizeSamples needs, detached from particles — the plan, the sampling geometry, the batch
  * sums of cells and wall bins, the integral-quantity series of each replica, the sums not yet closed into a batch and
- * the run's counters. One replica's set comes from a live simulation (sampleSetOf); sets of replicas of one case
+ * the run's counters. One replica's set comes from a live simulation (sampleSetOf, run/simulationSamples.ts); sets of replicas of one case
  * merge into one (mergeSamples.ts); a set is saved and read back as a sample file (io/sampleFile.ts).
  */
 import type { Plan } from '../plan/plan';
-import type { Simulation } from '../run/simulation';
-import { batchListOf, type BatchList } from '../stats/batchList';
-import { seriesView } from '../stats/series';
-import { copyGeometry, type SamplingGeometry } from './samplingGeometry';
-
-export { geometryOf, type SamplingGeometry } from './samplingGeometry';
+import type { BatchList } from '../stats/batchList';
+import type { SamplingGeometry } from '../kernel/samplingGeometry';
 
 /** Counts over a run, summed over replicas when sets merge. */
 export interface SampleCounters {
@@ -46,35 +42,4 @@ export interface SampleSet {
   readonly replicas: number;
   /** The case seed of each replica (replicas of one seed differ in their random stream instead). */
   readonly seeds: readonly number[];
-}
-
-/**
- * One replica's samples, copied out of a live simulation (so it can go on running, and the set stays as it was).
- * Cost: a copy of the batch stores, about (FIELD_BATCH_CAPACITY + 2) × (cells × 15 + wall bins × 5) numbers.
- */
-export function sampleSetOf(sim: Simulation): SampleSet {
-  const st = sim.state;
-  const series = new Map<string, Float64Array[]>();
-  for (const [key, s] of sim.series) series.set(key, [seriesView(s).slice()]);
-  return {
-    plan: sim.plan,
-    geometry: copyGeometry(st),
-    wallNames: [...sim.wallNames],
-    cellStore: batchListOf(sim.cellStore),
-    wallStore: batchListOf(sim.wallStore),
-    series,
-    pendingCellSums: Float64Array.from(st.cellSums),
-    pendingWallSums: Float64Array.from(st.wallSums),
-    pendingSteps: sim.batchStepsDone,
-    counters: {
-      steps: st.step,
-      sampledSteps: sim.sampledSteps,
-      particles: st.count,
-      particleSteps: st.particleSteps,
-      collisionCount: st.collisionCount,
-      separationSum: st.separationSum,
-    },
-    replicas: 1,
-    seeds: [sim.plan.seed],
-  };
 }

@@ -8,7 +8,8 @@
  * - heatFlux: energy per area per time from the gas into the wall, in the wall's own frame;
  * - numberFlux: molecules striking the wall per area per time.
  */
-import type { SamplingGeometry } from './samplingGeometry';
+import type { SamplingGeometry } from '../kernel/samplingGeometry';
+import { surfaceAreaM2 } from '../geometry/surfaces';
 import {
   SIDE_STRIDE,
   SIDE_BIN_OFFSET,
@@ -23,8 +24,7 @@ import {
   WALL_PX,
   WALL_PY,
   WALL_ENERGY,
-} from '../kernel/state';
-import { surfaceAreaM2 } from '../geometry/surfaces';
+} from '../kernel/layout';
 
 export const WALL_QUANTITIES = ['shearStress', 'normalStress', 'heatFlux', 'numberFlux'] as const;
 export type WallQuantityName = (typeof WALL_QUANTITIES)[number];

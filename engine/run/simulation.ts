@@ -1,17 +1,18 @@
 /**
  * The engine's public surface for one replica: create a simulation from a plan, advance it, read its result.
  *
- * A step is move (with boundary interactions and wall sampling) → index → collide → sample, Bird's usual order; the
- * cell sampling runs inside the collision pass, each cell right after its collisions (see collideParticles).
+ * A step is move → boundary pass (boundary interactions and wall sampling) → index → collide → sample, Bird's usual
+ * order; the cell sampling runs inside the collision pass, each cell right after its collisions (see collideParticles).
  * During the transient nothing is sampled; afterwards every step is sampled, and every `batchSteps` steps the
  * pending sums are closed into a batch: cell and wall-bin sums go to doubling batch stores, wall totals to the
  * integral-quantity series that the blocking analysis reads.
  */
 import type { Plan } from '../plan/plan';
-import { createState, type SimState, RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from '../kernel/state';
+import type { SimState } from '../kernel/state';
 import { wallNamesOf } from '../kernel/sideTable';
 import { seriesKeysOf, sectionSeriesKey } from '../results/seriesKeys';
-import { moveParticles } from '../kernel/move';
+import { moveFreely } from '../kernel/move';
+import { boundaryPass } from '../kernel/boundaryPass';
 import { indexParticles, reorderParticles } from '../kernel/indexCells';
 import { collideParticles } from '../kernel/collide';
 import { updatePressureOutlets } from '../kernel/pressureOutlet';
@@ -19,6 +20,8 @@ import { createBatchStore, addToBatches, type DoublingBatchStore } from '../stat
 import { wallTotalsOfBatch, type WallQuantityName } from '../results/wallQuantities';
 import { createSeries, pushSeries, type GrowableSeries } from '../stats/series';
 import { createTransientMonitor, monitorValues, pushMonitor, type TransientMonitor } from './transientMonitor';
+import { RAW_CELL_SUMS, SUMS_PER_WALL_BIN } from '../kernel/layout';
+import { createState } from '../kernel/createState';
 
 /**
  * Steps between physical reorders of particle memory into cell order (performance guide, item 1). Measured on the
@@ -31,7 +34,7 @@ export type Clock = () => number;
 
 /** Milliseconds spent per phase, when timePhases is on. */
 export interface PhaseTimes {
-  /** Free flight, boundaries, wall sampling, sub-cell keys and counts. */
+  /** Free flight and the boundary pass: boundaries, wall sampling, sub-cell keys and counts. */
   move: number;
   /** Counting sort, and the physical reorder every REORDER_INTERVAL steps. */
   index: number;
@@ -91,48 +94,74 @@ export function createSimulation(plan: Plan, options: CreateOptions = {}): Simul
   };
 }
 
-/** Advances the simulation by `steps` time steps. Allocates nothing per step. */
+/**
+ * Advances the simulation by `steps` time steps. Each step is its phases in order, one call each: move (straight
+ * flights), boundary pass, index, collide (with the cell sampling fused in), sample (batch bookkeeping). Allocates
+ * nothing per step; the phase helpers run once per step, not per particle, so they cost nothing measurable.
+ */
 export function advance(sim: Simulation, steps: number): void {
   const st = sim.state;
   const dt = st.timeStep;
-  const timed = sim.timePhases;
-  const clock = sim.clock;
-  const ph = sim.phaseMs;
   for (let s = 0; s < steps; s++) {
-    if (sim.monitor && st.step < sim.transientEndStep && st.step % sim.monitor.every === 0) {
-      if (pushMonitor(sim.monitor, monitorValues(st))) sim.transientEndStep = st.step;
-    }
-    st.sampling = st.step >= sim.transientEndStep;
-    let t0 = timed ? clock() : 0;
-    moveParticles(st, dt);
-    if (timed) {
-      const t = clock();
-      ph.move += t - t0;
-      t0 = t;
-    }
-    indexParticles(st);
-    if (st.step % REORDER_INTERVAL === 0) reorderParticles(st);
-    if (st.hasPressureOutlets) updatePressureOutlets(st);
-    if (timed) {
-      const t = clock();
-      ph.index += t - t0;
-      t0 = t;
-    }
-    // Cell sampling is fused into the collision pass (see collideParticles), so `collide` times both and `sample`
-    // only the batch bookkeeping.
+    beginStep(sim);
+    let t0 = startTiming(sim);
+    const listed = moveFreely(st, dt);
+    boundaryPass(st, dt, listed);
+    t0 = lap(sim, 'move', t0);
+    indexStep(st);
+    t0 = lap(sim, 'index', t0);
     collideParticles(st, st.sampling);
-    if (timed) {
-      const t = clock();
-      ph.collide += t - t0;
-      t0 = t;
-    }
+    t0 = lap(sim, 'collide', t0);
     if (st.sampling) {
-      sim.sampledSteps++;
-      if (++sim.batchStepsDone === sim.plan.batchSteps) closeBatch(sim);
-      if (timed) ph.sample += clock() - t0;
+      sampleStep(sim);
+      lap(sim, 'sample', t0);
     }
     st.step++;
   }
+}
+
+/** Feeds the transient monitor on its steps, and decides whether this step is sampled. */
+function beginStep(sim: Simulation): void {
+  const st = sim.state;
+  if (sim.monitor && st.step < sim.transientEndStep && st.step % sim.monitor.every === 0) {
+    if (pushMonitor(sim.monitor, monitorValues(st))) sim.transientEndStep = st.step;
+  }
+  st.sampling = st.step >= sim.transientEndStep;
+}
+
+/**
+ * The index phase: counting sort by sub-cell key, the physical reorder every REORDER_INTERVAL steps, and the
+ * pressure outlets' entry state from their cells (which needs this step's index).
+ */
+function indexStep(st: SimState): void {
+  indexParticles(st);
+  if (st.step % REORDER_INTERVAL === 0) reorderParticles(st);
+  if (st.hasPressureOutlets) updatePressureOutlets(st);
+}
+
+/**
+ * The sample phase. The cell sums were added in the collision pass (see collideParticles), so what is left is the
+ * batch bookkeeping: count the step, and close the batch when it is full.
+ */
+function sampleStep(sim: Simulation): void {
+  sim.sampledSteps++;
+  if (++sim.batchStepsDone === sim.plan.batchSteps) closeBatch(sim);
+}
+
+/** The clock's reading when phases are timed, else 0 (the clock is not read). */
+function startTiming(sim: Simulation): number {
+  if (!sim.timePhases) return 0;
+  const clock = sim.clock;
+  return clock();
+}
+
+/** Adds the time since t0 to `phase` when phases are timed; returns the clock's reading (the next phase's t0). */
+function lap(sim: Simulation, phase: keyof PhaseTimes, t0: number): number {
+  if (!sim.timePhases) return 0;
+  const clock = sim.clock;
+  const t = clock();
+  sim.phaseMs[phase] += t - t0;
+  return t;
 }
 
 function closeBatch(sim: Simulation): void {

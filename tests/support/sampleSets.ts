@@ -1,8 +1,9 @@
 /** Small Couette replicas as SampleSets, and a field-by-field comparison of results, for the sample-set tests. */
 import { buildPreset } from '../../engine/case/presets';
 import { createSimulation, advance, type Simulation } from '../../engine/run/simulation';
-import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
+import type { SampleSet } from '../../engine/results/sampleSet';
 import { planOrThrow } from './planOrThrow';
+import { sampleSetOf } from '../../engine/run/simulationSamples';
 
 /** Kn 0.3 planar Couette, 10 cells × 20 particles, 300 + 4000 steps (base batch 10 steps): about 0.1 s per run. */
 export const SMALL_COUETTE = {

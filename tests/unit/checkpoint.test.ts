@@ -6,8 +6,8 @@ import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { planOrThrow } from '../support/planOrThrow';
 import { createSimulation, advance, runToCompletion } from '../../engine/run/simulation';
-import { summarize } from '../../engine/results/summarize';
 import { encodeCheckpoint, decodeCheckpoint } from '../../engine/io/checkpoint';
+import { summarize } from '../../engine/run/simulationSamples';
 
 function nitrogenCouette(transient: 'fixed' | 'auto' = 'fixed') {
   const settings: Record<string, string> = {

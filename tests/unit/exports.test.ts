@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { planOrThrow as planFromCase, runToEnd } from '../support/planOrThrow';
-import { summarize, type SimulationResult } from '../../engine/results/summarize';
+import type { SimulationResult } from '../../engine/results/summarize';
 import { CELL_FIELDS } from '../../engine/results/cellFields';
 import { WALL_QUANTITIES } from '../../engine/results/wallQuantities';
 import { csvDocument, csvField } from '../../engine/report/csv';
@@ -10,6 +10,7 @@ import { resultFiles } from '../../engine/report/resultFiles';
 import { summaryJson, summaryJsonText } from '../../engine/report/summaryJson';
 import { continuumComparisonOf, type ContinuumComparison } from '../../engine/report/comparison';
 import type { Plan } from '../../engine/plan/plan';
+import { summarize } from '../../engine/run/simulationSamples';
 
 /**
  * A small RFC 4180 reader (quoted fields, doubled quotes, CR/LF inside quotes; rows end in LF or CRLF), written here

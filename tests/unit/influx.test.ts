@@ -11,7 +11,7 @@
 import { describe, expect, it } from 'vitest';
 import jStat from 'jstat';
 import { fluxNormalSpeed } from '../../engine/kernel/inflow';
-import { maxwellianInfluxPerM2S } from '../../engine/plan/inflowSegments';
+import { maxwellianInfluxPerM2S } from '../../engine/kernel/inflowTable';
 import { createRng } from '../../engine/particles/rng';
 
 const erfc1 = (s: number) => 1 + jStat.erf(s);

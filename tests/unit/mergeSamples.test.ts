@@ -1,12 +1,14 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { summarizeSamples, averageSamplesOverCells } from '../../engine/results/summarize';
+import { summarizeSamples } from '../../engine/results/summarize';
 import { mergeSampleSets } from '../../engine/results/mergeSamples';
-import { sampleSetOf, type SampleSet } from '../../engine/results/sampleSet';
+import type { SampleSet } from '../../engine/results/sampleSet';
 import { createSimulation, advance } from '../../engine/run/simulation';
 import { planOrThrow } from '../support/planOrThrow';
 import { buildPreset } from '../../engine/case/presets';
 import { tQuantile975 } from '../../engine/stats/studentT';
 import { couetteReplica, differingLeaves, SMALL_COUETTE } from '../support/sampleSets';
+import { averageSamplesOverCells } from '../../engine/results/fieldTables';
+import { sampleSetOf } from '../../engine/run/simulationSamples';
 
 let full: SampleSet[];
 beforeAll(() => {

@@ -2,7 +2,7 @@
  * Property tests of free flight with boundaries (fast-check): whatever the sides, speeds and time step, no particle
  * ends outside the domain, keys stay on the grid, and specular sides and periodic pairs conserve kinetic energy.
  */
-import { describe, expect, it } from 'vitest';
+import { describe, it } from 'vitest';
 import fc from 'fast-check';
 import { planOrThrow } from '../support/planOrThrow';
 import { createSimulation } from '../../engine/run/simulation';

@@ -10,11 +10,11 @@ import { nodeReplicaFactory } from '../../workers/nodeReplica';
 import { buildPreset } from '../../engine/case/presets';
 import { planOrThrow } from '../support/planOrThrow';
 import { createSimulation, advance } from '../../engine/run/simulation';
-import { sampleSetOf } from '../../engine/results/sampleSet';
 import { mergeSampleSets } from '../../engine/results/mergeSamples';
 import { summarizeSamples } from '../../engine/results/summarize';
 import { parseCase } from '../../engine/case/schema';
 import { decodeSampleSet } from '../../engine/io/sampleFile';
+import { sampleSetOf } from '../../engine/run/simulationSamples';
 
 const workerUrl = pathToFileURL(join(__dirname, '..', '..', 'dist-cli', 'replica.node.mjs'));
 const smallCouette = (sampleSteps: number) => {

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { advance } from '../../engine/run/simulation';
-import { summarize, summarizeSamples, averageOverCells, averageSamplesOverCells } from '../../engine/results/summarize';
-import { sampleSetOf, geometryOf } from '../../engine/results/sampleSet';
-import { GEOMETRY_SCALARS } from '../../engine/results/samplingGeometry';
+import { summarizeSamples } from '../../engine/results/summarize';
+import { averageSamplesOverCells } from '../../engine/results/fieldTables';
+import { summarize, averageOverCells, sampleSetOf } from '../../engine/run/simulationSamples';
+import { GEOMETRY_SCALARS, geometryOf } from '../../engine/kernel/samplingGeometry';
 import { couetteSimulation, differingLeaves } from '../support/sampleSets';
 
 describe('sampleSetOf', () => {

@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { parseCase, type Case } from '../../engine/case/schema';
 import { buildPreset } from '../../engine/case/presets';
 import { createSimulation, runToCompletion } from '../../engine/run/simulation';
-import { summarize } from '../../engine/results/summarize';
+import { summarize } from '../../engine/run/simulationSamples';
 import { resultFiles } from '../../engine/report/resultFiles';
 import type { SummaryJson } from '../../engine/report/summaryJson';
 import { continuumComparisonOf } from '../../engine/report/comparison';

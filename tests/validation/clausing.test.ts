@@ -13,8 +13,8 @@
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { runToEnd } from '../support/planOrThrow';
-import { summarize } from '../../engine/results/summarize';
 import type { CaseInput } from '../../engine/case/schema';
+import { summarize } from '../../engine/run/simulationSamples';
 
 const CLAUSING_TUBE: Record<number, number> = { 1: 0.67198, 2: 0.51423, 10: 0.19094 };
 const CLAUSING_SLIT: Record<number, number> = { 1: 0.68438, 2: 0.54206, 10: 0.24056 };

@@ -5,9 +5,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import { createSimulation, advance } from '../../engine/run/simulation';
-import { summarize } from '../../engine/results/summarize';
 import { BOLTZMANN_J_PER_K as K_B } from '../../engine/physics/constants';
 import { boxPlan } from './boxCase';
+import { summarize } from '../../engine/run/simulationSamples';
 
 describe('confidence intervals of cell fields', () => {
   it('cover the true density, velocity and temperature of an equilibrium gas 92–98 % of the time', () => {

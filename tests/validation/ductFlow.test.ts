@@ -9,7 +9,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { runToEnd } from '../support/planOrThrow';
-import { summarize } from '../../engine/results/summarize';
+import { summarize } from '../../engine/run/simulationSamples';
 import type { IntegralEstimate } from '../../engine/stats/estimate';
 import { field } from './runGapPreset';
 

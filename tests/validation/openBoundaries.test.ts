@@ -13,9 +13,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import { runToEnd } from '../support/planOrThrow';
-import { averageOverCells, summarize } from '../../engine/results/summarize';
 import { field } from './runGapPreset';
 import type { CaseInput } from '../../engine/case/schema';
+import { averageOverCells, summarize } from '../../engine/run/simulationSamples';
 
 const K_B = 1.380649e-23; // J/K (SI, exact)
 const T = 300;

@@ -17,8 +17,8 @@
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { runToEnd } from '../support/planOrThrow';
-import { summarize } from '../../engine/results/summarize';
 import { knudsenOf } from './runGapPreset';
+import { summarize } from '../../engine/run/simulationSamples';
 
 const BGK_G_P: Record<number, number> = { 0.01: 3.04965, 0.1: 2.03271, 1: 1.53868, 10: 2.76864 };
 const SLIP_COEFFICIENT = 1.0162; // σ_P, BGK half-space value in units of ℓ (REFERENCES.md §2)

@@ -13,8 +13,8 @@
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { runToEnd } from '../support/planOrThrow';
-import { summarize } from '../../engine/results/summarize';
 import { field } from './runGapPreset';
+import { summarize } from '../../engine/run/simulationSamples';
 
 const V0 = Math.sqrt((2 * 1.380649e-23 * 300) / 66.3e-27); // argon at 300 K (species table, from memory)
 const KNUDSEN = 0.1;

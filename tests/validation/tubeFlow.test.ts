@@ -10,10 +10,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import { runToEnd } from '../support/planOrThrow';
-import { summarize } from '../../engine/results/summarize';
 import { modelFromSpecies } from '../../engine/gas/molecularModel';
 import { pressureForKnudsenPa } from '../../engine/case/presets';
 import type { CaseInput } from '../../engine/case/schema';
+import { summarize } from '../../engine/run/simulationSamples';
 
 const BGK_TUBE: Record<number, number> = { 0.01: 1.4768, 0.08: 1.4131 };
 const FREE_MOLECULAR = 8 / (3 * Math.sqrt(Math.PI));

@@ -23,7 +23,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import { runToEnd } from '../support/planOrThrow';
-import { summarize } from '../../engine/results/summarize';
+import { summarize } from '../../engine/run/simulationSamples';
 import { continuumComparisonOf, type ContinuumComparison } from '../../engine/report/comparison';
 import type { QuantityVerdict } from '../../engine/report/verdict';
 

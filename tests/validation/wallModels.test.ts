@@ -6,8 +6,8 @@ import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
 import type { CaseInput } from '../../engine/case/schema';
 import { runToEnd } from '../support/planOrThrow';
-import { summarize, averageOverCells } from '../../engine/results/summarize';
 import { field, knudsenOf } from './runGapPreset';
+import { summarize, averageOverCells } from '../../engine/run/simulationSamples';
 
 function run(input: CaseInput) {
   const sim = runToEnd(input);

@@ -2,10 +2,13 @@
  * SamplingGeometry: the numbers that turn sampled sums into fields and wall quantities — grid, time step, particle
  * weight, molecular mass and the side table — without particles. SimState has the same names, so a live state is a
  * SamplingGeometry as it stands, and a plan gives one without running anything (geometryOf).
+ *
+ * It lives in the kernel, the lowest layer that knows the side table, so that SimState can extend it and results/
+ * and io/ above can read it without the kernel depending on them.
  */
 import type { Plan } from '../plan/plan';
-import { buildSideTable } from '../kernel/sideTable';
-import { SIDE_STRIDE, SIDE_BIN_COUNT } from '../kernel/state';
+import { buildSideTable } from './sideTable';
+import { SIDE_STRIDE, SIDE_BIN_COUNT } from './layout';
 
 export interface SamplingGeometry {
   readonly cells: number;
@@ -25,7 +28,7 @@ export interface SamplingGeometry {
   /** Real molecules per simulated particle (per metre of depth). */
   readonly moleculesPerParticle: number;
   readonly rotationalDof: number;
-  /** SIDE_STRIDE numbers per surface (sides, then block faces); columns are the SIDE_* constants of kernel/state.ts. */
+  /** SIDE_STRIDE numbers per surface (sides, then block faces); columns are the SIDE_* constants of kernel/layout.ts. */
   readonly sideTable: Float64Array;
   /** Name of each side-table row. */
   readonly surfaceNames: readonly string[];

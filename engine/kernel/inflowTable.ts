@@ -1,38 +1,17 @@
 /**
  * Molecules entering through reservoir sides: the segments (one per cell along the side) through which they enter
- * and how many simulated particles each lets in per time step on average.
+ * and how many simulated particles each lets in per time step on average. A kernel table like the side table:
+ * built once from the plan by createState, its columns (INFLOW_*) in kernel/layout.ts.
  *
  * The one-way number flux of a Maxwellian gas of density n, most probable speed v_mp = sqrt(2kT/m) and drift u_n
  * along the inward normal through a plane (Bird 1994, eq. 4.22; common kinetic theory):
  *   Γ = n v_mp / (2√π) · [exp(−s²) + √π s (1 + erf s)],  s = u_n / v_mp.
  */
 import jStat from 'jstat';
-import type { Plan } from './plan';
+import type { Plan } from '../plan/plan';
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { insideBlock } from '../geometry/cellGeometry';
 import { surfaceAreaM2 } from '../geometry/surfaces';
-
-/** Columns of the inflow table (one row per segment). */
-export const INFLOW_SURFACE = 0;
-export const INFLOW_FROM = 1;
-export const INFLOW_TO = 2;
-/** Mean number of simulated particles entering per time step. */
-export const INFLOW_PER_STEP = 3;
-/** s = u_n / v_mp of the reservoir's drift along the inward normal. */
-export const INFLOW_SPEED_RATIO = 4;
-/** Particle weight of the cells next to the segment. */
-export const INFLOW_WEIGHT = 5;
-/** The state molecules enter from: temperature (K), drift velocity (m/s). */
-export const INFLOW_TEMPERATURE = 6;
-export const INFLOW_DRIFT_X = 7;
-export const INFLOW_DRIFT_Y = 8;
-export const INFLOW_DRIFT_Z = 9;
-/** The cell next to the segment (pressure outlets sample it). */
-export const INFLOW_CELL = 10;
-/** Gas volume of that cell (m³) and the segment's area (m²). */
-export const INFLOW_CELL_VOLUME = 11;
-export const INFLOW_AREA = 12;
-export const INFLOW_STRIDE = 13;
 
 /** One-way number flux through a plane (1/(m² s)) of a Maxwellian gas, n in 1/m³, v_mp in m/s, s = u_n/v_mp. */
 export function maxwellianInfluxPerM2S(numberDensity: number, mostProbableSpeed: number, s: number): number {
