@@ -1,16 +1,17 @@
 /**
- * The run side of the engine on the main thread, loaded by dynamic import into its own chunk: replicas in Web Workers
- * (workers/replicaPool.ts), live and final summaries, sample files for saved runs, and the exports the command line
- * writes (engine/results/exports.ts), so a CSV from the page and one from `tenuis run` hold the same numbers.
+ * The run side of the engine on the main thread, loaded by dynamic import into its own chunk: the page's runs go
+ * through the run pipeline (workers/runCase.ts, as `tenuis run` does) with replicas in Web Workers, live views and the
+ * final summary in a summary worker of their own, sample files for saved runs, and the exports the command line
+ * writes (engine/results/exports.ts), so a CSV from the page and one from `tenuis run` hold the same numbers. This
+ * file only turns the pipeline's progress into the page's views and its end into a saved run.
  */
-import { runReplicaPool, type PoolProgress, type ReplicaReport } from '../../workers/replicaPool';
+import type { ReplicaReport } from '../../workers/replicaPool';
+import { runCase, lostReplicaWarning, type RunCaseProgress, type TargetState } from '../../workers/runCase';
 import { defaultReplicaCount } from '../../workers/browserReplica';
-import { observedFactory, openSummaryWorker, startLiveViews, type LiveReplicas } from './liveViews';
+import { observedFactory, openSummaryWorker, startLiveViews, type LiveReplicas, type LiveViews } from './liveViews';
 import type { FinishedSummary } from './liveSummary.worker';
 import { transfer } from 'comlink';
-import { estimateAt } from '../../engine/results/targetQuantities';
-import { evaluateStop, estimateRemaining, relativeHalfWidthOf } from '../../engine/stats/stopping';
-import { planFromInput } from '../../engine/plan/plan';
+import { planFromInput, type Plan } from '../../engine/plan/plan';
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { Performance } from '../../engine/results/exports';
 import type { TenuisTestHooks } from '../testing/testHooks';
@@ -79,6 +80,11 @@ export const TARGET_SAMPLE_CAP = 50;
 
 export interface RunRequest {
   readonly caseInput: unknown;
+  /**
+   * The case's plan when the caller has it already (a sweep point, planned with the sweep): then caseInput is not
+   * validated and planned again here.
+   */
+  readonly plan?: Plan;
   readonly replicas: number;
   /** Interval of the live views (merged snapshots of every replica), ms. */
   readonly liveEveryMs: number;
@@ -126,7 +132,8 @@ export interface RunHandle {
 }
 
 export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandle {
-  const planned = planFromInput(request.caseInput);
+  // The page's case enters the run here: validated and planned once, then handed along as data and plan.
+  const planned = request.plan ? { ok: true as const, plan: request.plan } : planFromInput(request.caseInput);
   if (!planned.ok)
     return {
       done: Promise.resolve({ ok: false, message: planned.errors.join('\n') }),
@@ -137,7 +144,6 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
   const target = request.target;
   const stopsAtTarget = target?.stopWhenReached === true;
   const plannedSampleSteps = stopsAtTarget ? TARGET_SAMPLE_CAP * planned.plan.sampleSteps : planned.plan.sampleSteps;
-  let stoppedBy: string | null = null;
   let targetView: TargetView | undefined = target && {
     path: target.path,
     goal: target.relativeHalfWidth,
@@ -148,16 +154,21 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     remainingSeconds: NaN,
     stopWhenReached: stopsAtTarget,
   };
-  let samplingSince: number | null = null;
-  const t0 = performance.now();
-  let pausedAt: number | null = null;
-  let pausedMs = 0;
-  let cancelled = false;
+  const onTarget = (t: TargetState) => {
+    if (!targetView) return;
+    const { current, reached, remainingSeconds } = t;
+    targetView = {
+      ...targetView,
+      current,
+      mean: t.estimate?.mean ?? NaN,
+      ci95: t.estimate?.ci95 ?? NaN,
+      reached,
+      remainingSeconds,
+    };
+  };
   const lostReasons = new Map<number, string>();
-  const running = () =>
-    (performance.now() - t0 - pausedMs - (pausedAt === null ? 0 : performance.now() - pausedAt)) / 1000;
 
-  const progressView = (p: PoolProgress): RunProgressView => {
+  const progressView = (p: RunCaseProgress): RunProgressView => {
     const replicas: ReplicaView[] = [];
     let steps = 0;
     let total = 0;
@@ -191,9 +202,8 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     }
     const stepsDone = live ? steps / live : 0;
     const totalSteps = live ? total / live : 0;
-    const elapsed = running();
+    const elapsed = p.elapsedSeconds;
     const fraction = totalSteps > 0 ? Math.min(1, stepsDone / totalSteps) : 0;
-    if (samplingSince === null && sampled > 0) samplingSince = elapsed;
     let remainingSeconds = stepsDone > 0 ? (elapsed * (totalSteps - stepsDone)) / stepsDone : NaN;
     let shownFraction = fraction;
     // A run that ends at its target has a budget far beyond what it will use: the target's estimate says more.
@@ -222,73 +232,51 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
   // The test hook: fail one replica's worker afterMs after it first reported sampling (so always mid-run).
   const forced = request.hooks?.failReplica;
   let forcedTimer: ReturnType<typeof setTimeout> | null = null;
-  const maybeForceFailure = (p: PoolProgress) => {
+  const maybeForceFailure = (p: RunCaseProgress) => {
     if (!forced || forcedTimer !== null || p.replicas[forced.stream]?.phase !== 'sampling') return;
     forcedTimer = setTimeout(() => kills.get(forced.stream)?.(), forced.afterMs);
   };
-  const pool = runReplicaPool({
-    caseInput: request.caseInput,
-    replicas: request.replicas,
-    ...(stopsAtTarget ? { sampleSteps: plannedSampleSteps } : {}),
-    createReplica: observedFactory(
-      (stream, reason) => {
+  let views: LiveViews | null = null;
+  const run = runCase(
+    { plan: planned.plan },
+    {
+      replicas: request.replicas,
+      // The final samples stay sample files: the summary worker decodes and merges them, not the page's thread.
+      place: { kind: 'workers', createReplica: observedFactory(kills, liveReplicas), decodeOnThisThread: false },
+      stopping: target && {
+        target,
+        stopAtTarget: stopsAtTarget,
+        ...(stopsAtTarget ? { maxSampleSteps: plannedSampleSteps } : {}),
+      },
+      // Safety snapshots for lost workers; the stopping rule is judged on the live views, summarised off this thread.
+      snapshotEveryMs: Math.max(1000, request.liveEveryMs),
+      liveSummaries: (deliver) => (views = startLiveViews(liveReplicas, request.liveEveryMs, deliver)),
+    },
+    {
+      onProgress: (p) => {
+        maybeForceFailure(p);
+        callbacks.onProgress(progressView(p));
+      },
+      onLive: (result) => callbacks.onLive(result),
+      onTarget,
+      onReplicaLost: (stream, reason) => {
         lostReasons.set(stream, reason);
         callbacks.onReplicaLost(stream, reason);
       },
-      kills,
-      liveReplicas,
-    ),
-    // Safety snapshots for lost workers; no stopping check, so the pool merges nothing on this thread meanwhile.
-    snapshotEveryMs: Math.max(1000, request.liveEveryMs),
-    decodeOnThisThread: false,
-    onProgress: (p) => {
-      maybeForceFailure(p);
-      callbacks.onProgress(progressView(p));
     },
-  });
-  // The target is judged on each live view (summarised off this thread): no merging here for the stopping rule.
-  const onLive = (result: SimulationResult) => {
-    if (target && targetView) {
-      const estimate = estimateAt(result, target.path);
-      const decision = evaluateStop({ stepsDone: 0, elapsedSeconds: 0, target, estimate });
-      const current = estimate ? relativeHalfWidthOf(estimate) : NaN;
-      const reached = decision.rule === 'target';
-      const samplingSeconds = samplingSince === null ? 0 : running() - samplingSince;
-      const remainingSeconds = reached
-        ? 0
-        : Number.isFinite(current) && current > 0 && result.numerics.sampleSteps > 0
-          ? (estimateRemaining(current, target.relativeHalfWidth, result.numerics.sampleSteps, samplingSeconds)
-              .additionalSeconds ?? NaN)
-          : NaN;
-      targetView = {
-        ...targetView,
-        current,
-        mean: estimate?.mean ?? NaN,
-        ci95: estimate?.ci95 ?? NaN,
-        reached,
-        remainingSeconds,
-      };
-      if (reached && stopsAtTarget && stoppedBy === null && !cancelled) {
-        stoppedBy = decision.reason;
-        pool.cancel();
-      }
-    }
-    callbacks.onLive(result);
-  };
-  const liveViews = startLiveViews(liveReplicas, request.liveEveryMs, onLive);
+  );
 
-  const done = pool.done.then(async (outcome): Promise<RunEnd> => {
-    liveViews.stop();
-    const wallSeconds = (performance.now() - t0) / 1000;
+  const done = run.done.then(async (outcome): Promise<RunEnd> => {
+    const summary = views!;
     // Decoded, merged, summarised and encoded off this thread; the files are transferred, not copied.
     const files = outcome.replicas.map((r) => r.samplesFile);
     let finished: FinishedSummary | null;
     try {
-      finished = await liveViews.summary.finishFiles(
+      finished = await summary.summary.finishFiles(
         transfer(files, [...new Set(files.filter((b): b is ArrayBuffer => b !== null))]),
       );
     } finally {
-      liveViews.close();
+      summary.close();
     }
     if (!finished) {
       return {
@@ -297,20 +285,16 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
       };
     }
     const { result, samples, comparison, sampledSteps } = finished;
+    const { cancelled, stoppedBy, wallSeconds, particleSteps } = outcome;
     const runWarnings: string[] = [];
     outcome.replicas.forEach((r, k) => {
-      if (r.status === 'lost') {
-        runWarnings.push(
-          `replica ${r.stream} was lost (${r.reason}); ${sampledSteps[k] > 0 ? `its ${sampledSteps[k]} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`,
-        );
-      }
+      if (r.status === 'lost') runWarnings.push(lostReplicaWarning(r, sampledSteps[k] > 0 ? sampledSteps[k] : null));
     });
     const totalSampled = sampledSteps.reduce((a, b) => a + b, 0);
-    if (stoppedBy !== null && !cancelled) runWarnings.push(`stopped early: ${stoppedBy}`);
+    if (stoppedBy !== null) runWarnings.push(`stopped early: ${stoppedBy}`);
     if (cancelled)
       runWarnings.push(`stopped by the user: the result holds the ${totalSampled} steps sampled until then`);
     result.warnings.push(...runWarnings);
-    const particleSteps = outcome.replicas.reduce((s, r) => s + r.particleSteps, 0);
     return {
       ok: true,
       run: {
@@ -331,27 +315,11 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
         },
         runWarnings,
         cancelled,
-        stoppedBy: cancelled ? null : stoppedBy,
+        stoppedBy,
       },
     };
   });
-  return {
-    done,
-    pause: () => {
-      if (pausedAt === null) pausedAt = performance.now();
-      pool.pause();
-    },
-    resume: () => {
-      if (pausedAt !== null) pausedMs += performance.now() - pausedAt;
-      pausedAt = null;
-      pool.resume();
-    },
-    cancel: () => {
-      cancelled = true;
-      if (pausedAt !== null) pool.resume();
-      pool.cancel();
-    },
-  };
+  return { done, pause: run.pause, resume: run.resume, cancel: run.cancel };
 }
 
 /**

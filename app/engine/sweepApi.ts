@@ -16,6 +16,7 @@ import {
   type SweepSpacing,
 } from '../../engine/case/sweep';
 import type { ContinuumModelName } from '../../engine/continuum/caseModelTypes';
+import type { Plan } from '../../engine/plan/plan';
 
 export { sweepCsv, sweepJson, sweepRowOf, SWEEP_PARAMETER_UNITS } from '../../engine/case/sweep';
 export { convertToSI } from '../../engine/units/engineeringUnits';
@@ -34,6 +35,8 @@ export interface SweepPointView {
   readonly point: number;
   readonly value: number;
   readonly caseInput: unknown;
+  /** Its plan, made with the sweep's: the point's run starts from it rather than validating the case again. */
+  readonly plan: Plan;
   readonly caseName: string;
   readonly cellsX: number;
   readonly cellsY: number;
@@ -99,6 +102,7 @@ export function planSweep(caseInput: unknown, r: SweepRequest): SweepPlanView {
       point: p.point,
       value: p.value,
       caseInput: p.caseData,
+      plan: p.plan,
       caseName: p.caseData.name,
       cellsX: p.plan.grid.cellsX,
       cellsY: p.plan.grid.cellsY,
