@@ -3,7 +3,7 @@
  * range, the continuum curves over that range, and the engine's own sweep table (sweepRowOf, sweepCsv, sweepJson),
  * so a sweep.csv from the page and one from `tenuis sweep` are made by the same functions.
  */
-import { parseCase } from '../../engine/case/schema';
+import { parseCase, type Case } from '../../engine/case/schema';
 import { wallNamesOf } from '../../engine/kernel/sideTable';
 import { FLOW_QUANTITIES, flowQuantityUnits } from '../../engine/results/flowQuantities';
 import { WALL_QUANTITY_UNITS } from '../../engine/results/wallQuantities';
@@ -56,6 +56,8 @@ export interface SweepQuantity {
 export type SweepPlanView =
   | {
       readonly ok: true;
+      /** The set-up's case as validated here: what the continuum curves start from (not validated again). */
+      readonly caseData: Case;
       readonly caseName: string;
       readonly points: readonly SweepPointView[];
       /** For the table: planar cases give flow numbers per metre; cases without flow sections get wall columns. */
@@ -94,6 +96,7 @@ export function planSweep(caseInput: unknown, r: SweepRequest): SweepPlanView {
       );
   return {
     ok: true,
+    caseData: c,
     caseName: c.name,
     planar,
     hasFlow,
@@ -121,18 +124,18 @@ const nextTask = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
 /**
  * The continuum models' integral predictions over the sweep's range, on the smallest grid of its points: a log-spaced
  * grid of CURVE_POINTS values, or just the points' own values for the cavity (each value solves Navier–Stokes).
- * Evaluated a few values per macrotask, so the page stays responsive meanwhile.
+ * Evaluated a few values per macrotask, so the page stays responsive meanwhile. `caseData` is planSweep's validated
+ * case.
  */
 export async function sweepCurves(
-  caseInput: unknown,
+  caseData: Case,
   r: SweepRequest,
   points: readonly SweepPointView[],
 ): Promise<SweepContinuumCurves | { readonly reason: string }> {
-  const parsed = parseCase(caseInput);
-  if (!parsed.ok || points.length === 0) return { reason: 'no valid case' };
+  if (points.length === 0) return { reason: 'no valid case' };
   const smallest = points.reduce((a, b) => (b.cellsX * b.cellsY < a.cellsX * a.cellsY ? b : a));
   const cells = { cellsX: smallest.cellsX, cellsY: smallest.cellsY };
-  const first = sweepContinuumCurves(parsed.value, r.parameter, [points[0].value], cells);
+  const first = sweepContinuumCurves(caseData, r.parameter, [points[0].value], cells);
   if ('reason' in first) return first;
   const lo = Math.min(r.from, r.to);
   const hi = Math.max(r.from, r.to);
@@ -142,12 +145,7 @@ export async function sweepCurves(
   const units: Record<string, string> = {};
   for (let start = 0; start < values.length; start += CURVE_VALUES_PER_TASK) {
     await nextTask();
-    const part = sweepContinuumCurves(
-      parsed.value,
-      r.parameter,
-      values.slice(start, start + CURVE_VALUES_PER_TASK),
-      cells,
-    );
+    const part = sweepContinuumCurves(caseData, r.parameter, values.slice(start, start + CURVE_VALUES_PER_TASK), cells);
     if ('reason' in part) continue;
     Object.assign(units, part.units);
     for (const [key, byModel] of Object.entries(part.curves)) {
