@@ -5,18 +5,26 @@
  * writes (engine/results/exports.ts), so a CSV from the page and one from `tenuis run` hold the same numbers. This
  * file only turns the pipeline's progress into the page's views and its end into a saved run.
  */
-import type { ReplicaReport } from '../../workers/replicaPool';
-import { runCase, lostReplicaWarning, type RunCaseProgress, type TargetState } from '../../workers/runCase';
+import { runCase, type RunCaseProgress, type TargetState } from '../../workers/runCase';
 import { defaultReplicaCount } from '../../workers/browserReplica';
 import { observedFactory, openSummaryWorker, startLiveViews, type LiveReplicas, type LiveViews } from './liveViews';
 import type { FinishedSummary } from './liveSummary.worker';
 import { transfer } from 'comlink';
 import { planFromInput, type Plan } from '../../engine/plan/plan';
 import type { SimulationResult } from '../../engine/results/summarize';
-import type { Performance } from '../../engine/results/exports';
 import type { TenuisTestHooks } from '../testing/testHooks';
 import type { ContinuumComparisonResult } from '../../engine/continuum/comparison';
 import type { ResultGeometry } from '../results/resultGeometry';
+import {
+  finishedRunOf,
+  progressViewOf,
+  targetViewOf,
+  type RunEnd,
+  type RunProgressView,
+  type TargetView,
+} from './runViews';
+
+export type { ReplicaView, RunProgressView, TargetView, ReplicaEnd, FinishedRun, RunEnd } from './runViews';
 
 export { profilesCsv, fieldsCsv, surfacesCsv, summaryJsonText } from '../../engine/results/exports';
 export { defaultReplicaCount };
@@ -24,31 +32,6 @@ export { flowQuantityUnits } from '../../engine/results/flowQuantities';
 export { MODEL_LABELS } from '../../engine/continuum/caseModelTypes';
 export * from './sweepApi';
 export { cutProfileCsv } from '../../engine/results/cutProfileCsv';
-
-export interface ReplicaView {
-  readonly stream: number;
-  readonly state: 'starting' | 'transient' | 'sampling' | 'lost';
-  readonly stepsDone: number;
-  readonly totalSteps: number;
-  readonly reason?: string;
-}
-
-export interface RunProgressView {
-  /** Means over the replicas still running. */
-  readonly stepsDone: number;
-  readonly totalSteps: number;
-  /** Sampled steps, summed over replicas. */
-  readonly sampledSteps: number;
-  readonly plannedSampleSteps: number;
-  readonly fraction: number;
-  readonly elapsedSeconds: number;
-  /** From the rate so far; NaN until there is a rate. An estimate while a transient of open length runs. */
-  readonly remainingSeconds: number;
-  readonly inTransient: boolean;
-  readonly replicas: readonly ReplicaView[];
-  /** The precision target's state, when the run has one. */
-  readonly target?: TargetView;
-}
 
 /** A precision target on one reported quantity (engine/stats/stopping.ts; paths as in summary.json). */
 export interface TargetRequest {
@@ -59,19 +42,6 @@ export interface TargetRequest {
    * Stop every replica once the goal is met; the sampling budget is then TARGET_SAMPLE_CAP × the planned sampling,
    * as for `tenuis run --target`.
    */
-  readonly stopWhenReached: boolean;
-}
-
-export interface TargetView {
-  readonly path: string;
-  readonly goal: number;
-  /** Current 95 % half-width over |mean| of the live estimate; NaN until it has one, Infinity while it cannot say. */
-  readonly current: number;
-  readonly mean: number;
-  readonly ci95: number;
-  readonly reached: boolean;
-  /** Seconds of sampling still needed at the present rate (half-width ∝ 1/√samples); NaN when unknown, 0 once reached. */
-  readonly remainingSeconds: number;
   readonly stopWhenReached: boolean;
 }
 
@@ -97,32 +67,6 @@ export interface RunCallbacks {
   onLive(result: SimulationResult): void;
   onReplicaLost(stream: number, reason: string): void;
 }
-
-export interface ReplicaEnd {
-  readonly stream: number;
-  readonly status: ReplicaReport['status'];
-  readonly reason?: string;
-  readonly stepsDone: number;
-  readonly sampledSteps: number;
-}
-
-export interface FinishedRun {
-  readonly result: SimulationResult;
-  /** The merged samples as a sample file (engine/io/sampleFile.ts): what a saved run keeps. */
-  readonly samples: ArrayBuffer;
-  readonly replicas: readonly ReplicaEnd[];
-  readonly performance: Performance;
-  /** Continuum predictions beside the result, with verdicts (engine/continuum/comparison.ts), or why there are none. */
-  readonly comparison: ContinuumComparisonResult;
-  /** Warnings about the run itself (lost replicas, stopped early), also inside result.warnings. */
-  readonly runWarnings: readonly string[];
-  /** Cancelled by the user (not by the precision target). */
-  readonly cancelled: boolean;
-  /** Why the run ended before its budget by a rule of its own (the precision target), or null. */
-  readonly stoppedBy: string | null;
-}
-
-export type RunEnd = { ok: true; run: FinishedRun } | { ok: false; message: string };
 
 export interface RunHandle {
   readonly done: Promise<RunEnd>;
@@ -154,78 +98,17 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     remainingSeconds: NaN,
     stopWhenReached: stopsAtTarget,
   };
-  const onTarget = (t: TargetState) => {
-    if (!targetView) return;
-    const { current, reached, remainingSeconds } = t;
-    targetView = {
-      ...targetView,
-      current,
-      mean: t.estimate?.mean ?? NaN,
-      ci95: t.estimate?.ci95 ?? NaN,
-      reached,
-      remainingSeconds,
-    };
-  };
+  const onTarget = (t: TargetState) => void (targetView = targetView && targetViewOf(targetView, t));
   const lostReasons = new Map<number, string>();
 
-  const progressView = (p: RunCaseProgress): RunProgressView => {
-    const replicas: ReplicaView[] = [];
-    let steps = 0;
-    let total = 0;
-    let sampled = 0;
-    let live = 0;
-    let inTransient = false;
-    for (let k = 0; k < request.replicas; k++) {
-      const r = p.replicas[k];
-      const lost = p.lost.includes(k) || lostReasons.has(k);
-      if (lost) {
-        replicas.push({
-          stream: k,
-          state: 'lost',
-          stepsDone: r?.stepsDone ?? 0,
-          totalSteps: r?.totalSteps ?? 0,
-          reason: lostReasons.get(k),
-        });
-        continue;
-      }
-      if (!r) {
-        replicas.push({ stream: k, state: 'starting', stepsDone: 0, totalSteps: 0 });
-        inTransient = true;
-        continue;
-      }
-      replicas.push({ stream: k, state: r.phase, stepsDone: r.stepsDone, totalSteps: r.totalSteps });
-      live++;
-      steps += r.stepsDone;
-      total += r.totalSteps;
-      if (r.phase === 'sampling') sampled += Math.max(0, plannedSampleSteps - (r.totalSteps - r.stepsDone));
-      else inTransient = true;
-    }
-    const stepsDone = live ? steps / live : 0;
-    const totalSteps = live ? total / live : 0;
-    const elapsed = p.elapsedSeconds;
-    const fraction = totalSteps > 0 ? Math.min(1, stepsDone / totalSteps) : 0;
-    let remainingSeconds = stepsDone > 0 ? (elapsed * (totalSteps - stepsDone)) / stepsDone : NaN;
-    let shownFraction = fraction;
-    // A run that ends at its target has a budget far beyond what it will use: the target's estimate says more.
-    if (stopsAtTarget && targetView && !inTransient && Number.isFinite(targetView.remainingSeconds)) {
-      remainingSeconds = Number.isFinite(remainingSeconds)
-        ? Math.min(remainingSeconds, targetView.remainingSeconds)
-        : targetView.remainingSeconds;
-      shownFraction = Math.max(fraction, elapsed / (elapsed + remainingSeconds));
-    }
-    return {
-      stepsDone,
-      totalSteps,
-      sampledSteps: sampled,
+  const progressView = (p: RunCaseProgress) =>
+    progressViewOf(p, {
+      replicas: request.replicas,
       plannedSampleSteps,
-      fraction: shownFraction,
-      elapsedSeconds: elapsed,
-      remainingSeconds,
-      inTransient,
-      replicas,
+      stopsAtTarget,
+      lostReasons,
       target: targetView,
-    };
-  };
+    });
 
   const liveReplicas: LiveReplicas = new Map();
   const kills = new Map<number, () => void>();
@@ -278,46 +161,7 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     } finally {
       summary.close();
     }
-    if (!finished) {
-      return {
-        ok: false,
-        message: `no replica sampled anything: ${outcome.replicas.map((r) => `replica ${r.stream} ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('; ')}`,
-      };
-    }
-    const { result, samples, comparison, sampledSteps } = finished;
-    const { cancelled, stoppedBy, wallSeconds, particleSteps } = outcome;
-    const runWarnings: string[] = [];
-    outcome.replicas.forEach((r, k) => {
-      if (r.status === 'lost') runWarnings.push(lostReplicaWarning(r, sampledSteps[k] > 0 ? sampledSteps[k] : null));
-    });
-    const totalSampled = sampledSteps.reduce((a, b) => a + b, 0);
-    if (stoppedBy !== null) runWarnings.push(`stopped early: ${stoppedBy}`);
-    if (cancelled)
-      runWarnings.push(`stopped by the user: the result holds the ${totalSampled} steps sampled until then`);
-    result.warnings.push(...runWarnings);
-    return {
-      ok: true,
-      run: {
-        result,
-        samples,
-        comparison,
-        replicas: outcome.replicas.map((r, k) => ({
-          stream: r.stream,
-          status: r.status,
-          reason: r.reason,
-          stepsDone: r.stepsDone,
-          sampledSteps: sampledSteps[k],
-        })),
-        performance: {
-          wallSeconds,
-          particleSteps,
-          particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN,
-        },
-        runWarnings,
-        cancelled,
-        stoppedBy,
-      },
-    };
+    return finishedRunOf(outcome, finished);
   });
   return { done, pause: run.pause, resume: run.resume, cancel: run.cancel };
 }
