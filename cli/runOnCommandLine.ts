@@ -73,8 +73,8 @@ export async function runOnCommandLine(plan: Plan, o: CommandLineRunOptions): Pr
       },
     },
   );
-  o.interrupt.onInterrupt(() => handle.cancel());
-  const outcome = await handle.done;
+  const unwatch = o.interrupt.onInterrupt(() => handle.cancel());
+  const outcome = await handle.done.finally(unwatch);
   const meanSteps = Math.round(outcome.replicas.reduce((sum, r) => sum + r.stepsDone, 0) / outcome.replicas.length);
   // One replica here ends its line only when it completed; otherwise a message follows on a line of its own.
   if (!onThisThread || !outcome.cancelled) progress?.finish(meanSteps);

@@ -5,7 +5,13 @@
  * writes (engine/results/exports.ts), so a CSV from the page and one from `tenuis run` hold the same numbers. This
  * file only turns the pipeline's progress into the page's views and its end into a saved run.
  */
-import { runCase, type RunCaseProgress, type TargetState } from '../../workers/runCase';
+import {
+  runCase,
+  lostReplicaWarning,
+  type RunCaseOutcome,
+  type RunCaseProgress,
+  type TargetState,
+} from '../../workers/runCase';
 import { defaultReplicaCount } from '../../workers/browserReplica';
 import { observedFactory, openSummaryWorker, startLiveViews, type LiveReplicas, type LiveViews } from './liveViews';
 import type { FinishedSummary } from './liveSummary.worker';
@@ -15,14 +21,7 @@ import type { SimulationResult } from '../../engine/results/summarize';
 import type { TenuisTestHooks } from '../testing/testHooks';
 import type { ContinuumComparisonResult } from '../../engine/continuum/comparison';
 import type { ResultGeometry } from '../results/resultGeometry';
-import {
-  finishedRunOf,
-  progressViewOf,
-  targetViewOf,
-  type RunEnd,
-  type RunProgressView,
-  type TargetView,
-} from './runViews';
+import { progressViewOf, targetViewOf, type RunEnd, type RunProgressView, type TargetView } from './runViews';
 
 export type { ReplicaView, RunProgressView, TargetView, ReplicaEnd, FinishedRun, RunEnd } from './runViews';
 
@@ -164,6 +163,49 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     return finishedRunOf(outcome, finished);
   });
   return { done, pause: run.pause, resume: run.resume, cancel: run.cancel };
+}
+
+/** A run's end as the page keeps it: the summary worker's result with the run's own warnings, or why there is none. */
+export function finishedRunOf(outcome: RunCaseOutcome, finished: FinishedSummary | null): RunEnd {
+  if (!finished) {
+    return {
+      ok: false,
+      message: `no replica sampled anything: ${outcome.replicas.map((r) => `replica ${r.stream} ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('; ')}`,
+    };
+  }
+  const { result, samples, comparison, sampledSteps } = finished;
+  const { cancelled, stoppedBy, wallSeconds, particleSteps } = outcome;
+  const runWarnings: string[] = [];
+  outcome.replicas.forEach((r, k) => {
+    if (r.status === 'lost') runWarnings.push(lostReplicaWarning(r, sampledSteps[k] > 0 ? sampledSteps[k] : null));
+  });
+  const totalSampled = sampledSteps.reduce((a, b) => a + b, 0);
+  if (stoppedBy !== null) runWarnings.push(`stopped early: ${stoppedBy}`);
+  if (cancelled) runWarnings.push(`stopped by the user: the result holds the ${totalSampled} steps sampled until then`);
+  result.warnings.push(...runWarnings);
+  return {
+    ok: true,
+    run: {
+      result,
+      samples,
+      comparison,
+      replicas: outcome.replicas.map((r, k) => ({
+        stream: r.stream,
+        status: r.status,
+        reason: r.reason,
+        stepsDone: r.stepsDone,
+        sampledSteps: sampledSteps[k],
+      })),
+      performance: {
+        wallSeconds,
+        particleSteps,
+        particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN,
+      },
+      runWarnings,
+      cancelled,
+      stoppedBy,
+    },
+  };
 }
 
 /**

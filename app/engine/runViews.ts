@@ -1,11 +1,10 @@
 /**
  * What the page shows of a run, made from the run pipeline's reports (workers/runCase.ts): the progress view of every
- * replica and of the precision target, and the finished run a saved run keeps. Pure functions of their inputs, kept
- * apart from runApi.ts so the run's wiring there stays short.
+ * replica and of the precision target, and the types of the finished run a saved run keeps. Pure functions of their
+ * inputs and types only (no engine code), kept apart from runApi.ts so the run's wiring there stays short.
  */
 import type { ReplicaReport } from '../../workers/replicaPool';
-import { lostReplicaWarning, type RunCaseOutcome, type RunCaseProgress, type TargetState } from '../../workers/runCase';
-import type { FinishedSummary } from './liveSummary.worker';
+import type { RunCaseProgress, TargetState } from '../../workers/runCase';
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { Performance } from '../../engine/results/exports';
 import type { ContinuumComparisonResult } from '../../engine/continuum/comparison';
@@ -166,48 +165,5 @@ export function progressViewOf(p: RunCaseProgress, o: ProgressContext): RunProgr
     inTransient,
     replicas,
     target: targetView,
-  };
-}
-
-/** A run's end as the page keeps it: the summary worker's result with the run's own warnings, or why there is none. */
-export function finishedRunOf(outcome: RunCaseOutcome, finished: FinishedSummary | null): RunEnd {
-  if (!finished) {
-    return {
-      ok: false,
-      message: `no replica sampled anything: ${outcome.replicas.map((r) => `replica ${r.stream} ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('; ')}`,
-    };
-  }
-  const { result, samples, comparison, sampledSteps } = finished;
-  const { cancelled, stoppedBy, wallSeconds, particleSteps } = outcome;
-  const runWarnings: string[] = [];
-  outcome.replicas.forEach((r, k) => {
-    if (r.status === 'lost') runWarnings.push(lostReplicaWarning(r, sampledSteps[k] > 0 ? sampledSteps[k] : null));
-  });
-  const totalSampled = sampledSteps.reduce((a, b) => a + b, 0);
-  if (stoppedBy !== null) runWarnings.push(`stopped early: ${stoppedBy}`);
-  if (cancelled) runWarnings.push(`stopped by the user: the result holds the ${totalSampled} steps sampled until then`);
-  result.warnings.push(...runWarnings);
-  return {
-    ok: true,
-    run: {
-      result,
-      samples,
-      comparison,
-      replicas: outcome.replicas.map((r, k) => ({
-        stream: r.stream,
-        status: r.status,
-        reason: r.reason,
-        stepsDone: r.stepsDone,
-        sampledSteps: sampledSteps[k],
-      })),
-      performance: {
-        wallSeconds,
-        particleSteps,
-        particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN,
-      },
-      runWarnings,
-      cancelled,
-      stoppedBy,
-    },
   };
 }
