@@ -1,9 +1,16 @@
 /**
  * Live views off the main thread: merges the replicas' latest snapshots (sample files) and summarises them, so the
  * page's thread only passes buffers along while a run goes on. One such worker per run (engine/runApi.ts).
+ *
+ * Every file of one run holds the same case: the first one read is validated and planned (decodeSampleSet), and its
+ * plan is handed on to every later decode of the run through the pipeline's one decode call site
+ * (workers/decodeReplicaFile.ts), so the case need not be validated again on each round. A saved run's file
+ * (summarizeFile) comes from storage and is always read in full.
  */
 import { expose, transfer } from 'comlink';
 import { decodeSampleSet, encodeSampleSet } from '../engine/io/sampleFile';
+import { decodeReplicaFile } from './decodeReplicaFile';
+import type { Plan } from '../engine/plan/plan';
 import type { SampleSet } from '../engine/results/sampleSet';
 import { continuumComparisonOf, type ContinuumComparisonResult } from '../engine/report/comparison';
 import { mergeSampleSets } from '../engine/results/mergeSamples';
@@ -30,6 +37,14 @@ function buffersOf(r: SimulationResult): ArrayBuffer[] {
  */
 const kept = new Map<number, ArrayBuffer>();
 
+/** The plan of this run's case, from the first of its files decoded. */
+let runPlan: Plan | undefined;
+const decodeRunFile = (b: ArrayBuffer): SampleSet => {
+  const set = decodeReplicaFile(b, runPlan);
+  runPlan ??= set.plan;
+  return set;
+};
+
 const api = {
   /** Keeps a replica's latest snapshot (transferred here), replacing its previous one. */
   keep(stream: number, snapshot: ArrayBuffer): void {
@@ -37,7 +52,7 @@ const api = {
   },
   /** The summary of the kept snapshots that have sampled anything, or null if none has. */
   summarizeKept(): SimulationResult | null {
-    const sets = [...kept.values()].map((b) => decodeSampleSet(b)).filter((s) => s.counters.sampledSteps > 0);
+    const sets = [...kept.values()].map(decodeRunFile).filter((s) => s.counters.sampledSteps > 0);
     if (!sets.length) return null;
     const result = summarizeSamples(sets.length === 1 ? sets[0] : mergeSampleSets(sets));
     return transfer(result, buffersOf(result));
@@ -57,10 +72,10 @@ const finalApi = {
   /**
    * A finished run's sample files, one per replica (null for a replica that kept nothing): decoded, merged and
    * summarised here, and the merged samples encoded again for saving — all work the page's thread must not do
-   * (decoding plans the case again; merging a large grid takes long). Null when no replica sampled anything.
+   * (merging a large grid takes long). Null when no replica sampled anything.
    */
   finishFiles(files: readonly (ArrayBuffer | null)[]): FinishedSummary | null {
-    const sets = files.map((b) => (b ? decodeSampleSet(b) : null));
+    const sets = files.map((b) => (b ? decodeRunFile(b) : null));
     const sampledSteps = sets.map((s) => s?.counters.sampledSteps ?? 0);
     const sampled = sets.filter((s): s is SampleSet => s !== null && s.counters.sampledSteps > 0);
     if (!sampled.length) return null;

@@ -6,9 +6,14 @@
  * one ArrayBuffer in the sample-file format (engine/io/sampleFile.ts), transferred, not copied.
  */
 
+import type { Case } from '../engine/case/schema';
+
 export interface ReplicaStartRequest {
-  /** The case as parsed JSON (validated again inside the worker; never evaluated). */
-  readonly caseInput: unknown;
+  /**
+   * The case as validated on the main thread (plain data, structured-cloned): the worker plans it again, since a
+   * plan holds more than it is worth sending, but does not validate it again.
+   */
+  readonly caseData: Case;
   /** Replica number: selects the random stream, so replicas of one seed are independent. */
   readonly stream: number;
   /** Sampling steps to run, overriding the plan's (e.g. a step budget when a precision target decides the end). */

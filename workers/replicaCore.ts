@@ -1,10 +1,10 @@
 /**
  * The replica worker's logic, independent of the thread API around it (Web Worker in the browser, worker_threads in
- * Node): plan the case, run it in chunks of about chunkMilliseconds, report progress, honour pause/resume/cancel
+ * Node): plan the (already validated) case, run it in chunks of about chunkMilliseconds, report progress, honour pause/resume/cancel
  * between chunks, and hand back everything sampled as a transferable sample file.
  */
 import { transfer } from 'comlink';
-import { planFromInput } from '../engine/plan/plan';
+import { plan as planCase } from '../engine/plan/plan';
 import {
   createSimulation,
   advance,
@@ -35,7 +35,8 @@ export function createReplicaApi(clock: () => number = Date.now): ReplicaApi {
   return {
     async start(request: ReplicaStartRequest, onProgress: (p: ReplicaProgress) => void): Promise<ReplicaOutcome> {
       if (sim) throw new Error('this replica worker is already running a case; start a new worker for another');
-      const planned = planFromInput(request.caseInput);
+      // Validated where it was read; planning it again here is deterministic, so every replica has the same plan.
+      const planned = planCase(request.caseData);
       if (!planned.ok) throw new Error(`the case was refused:\n${planned.errors.join('\n')}`);
       const planned0 = planned.plan;
       const sampleSteps =

@@ -8,9 +8,11 @@
  */
 import { proxy, type Remote } from 'comlink';
 import type { ReplicaApi, ReplicaProgress } from './protocol';
-import { decodeSampleSet } from '../engine/io/sampleFile';
+import { decodeReplicaFile } from './decodeReplicaFile';
 import { mergeSampleSets } from '../engine/results/mergeSamples';
 import type { SampleSet } from '../engine/results/sampleSet';
+import type { Case } from '../engine/case/schema';
+import type { Plan } from '../engine/plan/plan';
 
 export interface ReplicaHandle {
   readonly api: Remote<ReplicaApi>;
@@ -56,10 +58,15 @@ export interface PoolOutcome {
 }
 
 export interface PoolOptions {
-  readonly caseInput: unknown;
+  /** The validated case, sent to every replica as plain data (each plans it, none validates it again). */
+  readonly caseInput: Case;
+  /** Its plan, when the caller holds it: for reading the replicas' sample files back (decodeReplicaFile.ts). */
+  readonly plan?: Plan;
   readonly replicas: number;
   readonly createReplica: ReplicaFactory;
   readonly onProgress?: (p: PoolProgress) => void;
+  /** Called once for each replica lost (its worker died, failed to start or threw), before the progress that lists it. */
+  readonly onLost?: (stream: number, reason: string) => void;
   /** Interval of the snapshots taken from every replica (ms): for fault safety and for `check`. */
   readonly snapshotEveryMs?: number;
   readonly chunkMilliseconds?: number;
@@ -95,7 +102,8 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
   const finished: boolean[] = new Array(options.replicas).fill(false);
   const t0 = Date.now();
   const decode = options.decodeOnThisThread !== false;
-  const decoded = (file: ArrayBuffer | null): SampleSet | null => (decode && file ? decodeSampleSet(file) : null);
+  const decoded = (file: ArrayBuffer | null): SampleSet | null =>
+    decode && file ? decodeReplicaFile(file, options.plan) : null;
   let stoppedBy: string | null = null;
   let checking = false;
   // One round of snapshots from every running replica: kept for fault safety, merged for the stopping check.
@@ -114,7 +122,9 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
         ),
       );
       if (!options.check) return;
-      const sets = lastSnapshot.filter((b): b is ArrayBuffer => b !== null).map((b) => decodeSampleSet(b.slice(0)));
+      const sets = lastSnapshot
+        .filter((b): b is ArrayBuffer => b !== null)
+        .map((b) => decodeReplicaFile(b.slice(0), options.plan));
       const sampled = sets.filter((x) => x.counters.sampledSteps > 0);
       if (!sampled.length) return;
       const reason = options.check(mergeSampleSets(sampled), (Date.now() - t0) / 1000);
@@ -142,6 +152,7 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
       handle = options.createReplica(stream);
     } catch (e) {
       lost.push(stream);
+      options.onLost?.(stream, `could not start a worker: ${(e as Error).message}`);
       return {
         stream,
         status: 'lost',
@@ -158,7 +169,7 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
     try {
       const started = handle.api.start(
         {
-          caseInput: options.caseInput,
+          caseData: options.caseInput,
           stream,
           chunkMilliseconds: options.chunkMilliseconds,
           sampleSteps: options.sampleSteps,
@@ -195,6 +206,7 @@ export function runReplicaPool(options: PoolOptions): ReplicaPoolRun {
 
   const lostReport = (stream: number, reason: string): ReplicaReport => {
     lost.push(stream);
+    options.onLost?.(stream, reason);
     emit();
     const p = latest[stream];
     const snap = lastSnapshot[stream];

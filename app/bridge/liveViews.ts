@@ -14,14 +14,10 @@ import type { LiveSummaryApi } from '../../workers/liveSummary.worker';
 export type LiveReplicas = Map<number, Remote<ReplicaApi>>;
 
 /**
- * Wraps the browser factory: reports a lost worker at once, lists running replicas for the live views, and applies
- * the test hook that fails one on purpose.
+ * Wraps the browser factory: lists running replicas for the live views (a lost one leaves the list at once), and
+ * applies the test hook that fails one on purpose. The loss itself reaches the page through the run pipeline.
  */
-export function observedFactory(
-  onLost: (stream: number, reason: string) => void,
-  kills: Map<number, () => void>,
-  live: LiveReplicas,
-): ReplicaFactory {
+export function observedFactory(kills: Map<number, () => void>, live: LiveReplicas): ReplicaFactory {
   const base = browserReplicaFactory();
   return (stream) => {
     const handle = base(stream);
@@ -32,7 +28,6 @@ export function observedFactory(
       if (failed) return;
       failed = true;
       live.delete(stream);
-      onLost(stream, reason);
       for (const l of listeners) l(reason);
     };
     handle.onFailure(fail);
@@ -54,21 +49,29 @@ export function observedFactory(
 /** Longest wait for one replica's snapshot (ms): a worker that ends meanwhile never answers. */
 const SNAPSHOT_TIMEOUT_MS = 3000;
 
-/**
- * Every `everyMs`, takes a snapshot of each running replica and has a worker of its own merge and summarise them
- * (engine/liveSummary.worker.ts); a replica that has ended keeps contributing its last snapshot. Returns a stop function.
- */
 /** A summary worker (decoding, merging and summarising samples off the page's thread) and how to end it. */
 export function openSummaryWorker(name: string): { summary: Remote<LiveSummaryApi>; close(): void } {
   const worker = new Worker(new URL('../../workers/liveSummary.worker.ts', import.meta.url), { type: 'module', name });
   return { summary: wrap<LiveSummaryApi>(worker), close: () => worker.terminate() };
 }
 
+/** A run's live views, and the summary worker behind them (which then summarises the finished run too). */
+export interface LiveViews {
+  stop(): void;
+  readonly summary: Remote<LiveSummaryApi>;
+  close(): void;
+}
+
+/**
+ * Every `everyMs`, takes a snapshot of each running replica and has a worker of its own merge and summarise them
+ * (liveSummary.worker.ts); a replica that has ended keeps contributing its last snapshot. The run pipeline
+ * (workers/runCase.ts) judges its stopping rule on each of them.
+ */
 export function startLiveViews(
   replicas: LiveReplicas,
   everyMs: number,
   onLive: (r: SimulationResult) => void,
-): { stop(): void; summary: Remote<LiveSummaryApi>; close(): void } {
+): LiveViews {
   const { summary, close } = openSummaryWorker('tenuis-live-summary');
   let kept = 0;
   let stopped = false;

@@ -3,7 +3,7 @@
  * range, the continuum curves over that range, and the engine's own sweep table (sweepRowOf, sweepCsv, sweepJson),
  * so a sweep.csv from the page and one from `tenuis sweep` are made by the same functions.
  */
-import { parseCase } from '../../engine/case/schema';
+import { parseCase, type Case } from '../../engine/case/schema';
 import { wallNamesOf } from '../../engine/kernel/sideTable';
 import { FLOW_QUANTITIES, flowQuantityUnits } from '../../engine/results/flowQuantities';
 import { WALL_QUANTITY_UNITS } from '../../engine/results/wallQuantities';
@@ -11,6 +11,7 @@ import { planSweepPoints } from '../../engine/plan/sweepPoints';
 import { sweepContinuumCurves, type SweepContinuumCurves } from '../../engine/report/sweepCurves';
 import { sweepValues, type SweepParameter, type SweepSpacing } from '../../engine/case/sweep';
 import type { ContinuumModelName } from '../../engine/continuum/caseModelTypes';
+import type { Plan } from '../../engine/plan/plan';
 
 export { sweepCsv, sweepJson } from '../../engine/report/sweepTable';
 export { sweepRowOf } from '../../engine/report/sweepRow';
@@ -31,6 +32,8 @@ export interface SweepPointView {
   readonly point: number;
   readonly value: number;
   readonly caseInput: unknown;
+  /** Its plan, made with the sweep's: the point's run starts from it rather than validating the case again. */
+  readonly plan: Plan;
   readonly caseName: string;
   readonly cellsX: number;
   readonly cellsY: number;
@@ -50,6 +53,8 @@ export interface SweepQuantity {
 export type SweepPlanView =
   | {
       readonly ok: true;
+      /** The set-up's case as validated here: what the continuum curves start from (not validated again). */
+      readonly caseData: Case;
       readonly caseName: string;
       readonly points: readonly SweepPointView[];
       /** For the table: planar cases give flow numbers per metre; cases without flow sections get wall columns. */
@@ -88,6 +93,7 @@ export function planSweep(caseInput: unknown, r: SweepRequest): SweepPlanView {
       );
   return {
     ok: true,
+    caseData: c,
     caseName: c.name,
     planar,
     hasFlow,
@@ -96,6 +102,7 @@ export function planSweep(caseInput: unknown, r: SweepRequest): SweepPlanView {
       point: p.point,
       value: p.value,
       caseInput: p.caseData,
+      plan: p.plan,
       caseName: p.caseData.name,
       cellsX: p.plan.grid.cellsX,
       cellsY: p.plan.grid.cellsY,
@@ -114,18 +121,18 @@ const nextTask = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
 /**
  * The continuum models' integral predictions over the sweep's range, on the smallest grid of its points: a log-spaced
  * grid of CURVE_POINTS values, or just the points' own values for the cavity (each value solves Navier–Stokes).
- * Evaluated a few values per macrotask, so the page stays responsive meanwhile.
+ * Evaluated a few values per macrotask, so the page stays responsive meanwhile. `caseData` is planSweep's validated
+ * case.
  */
 export async function sweepCurves(
-  caseInput: unknown,
+  caseData: Case,
   r: SweepRequest,
   points: readonly SweepPointView[],
 ): Promise<SweepContinuumCurves | { readonly reason: string }> {
-  const parsed = parseCase(caseInput);
-  if (!parsed.ok || points.length === 0) return { reason: 'no valid case' };
+  if (points.length === 0) return { reason: 'no valid case' };
   const smallest = points.reduce((a, b) => (b.cellsX * b.cellsY < a.cellsX * a.cellsY ? b : a));
   const cells = { cellsX: smallest.cellsX, cellsY: smallest.cellsY };
-  const first = sweepContinuumCurves(parsed.value, r.parameter, [points[0].value], cells);
+  const first = sweepContinuumCurves(caseData, r.parameter, [points[0].value], cells);
   if ('reason' in first) return first;
   const lo = Math.min(r.from, r.to);
   const hi = Math.max(r.from, r.to);
@@ -135,12 +142,7 @@ export async function sweepCurves(
   const units: Record<string, string> = {};
   for (let start = 0; start < values.length; start += CURVE_VALUES_PER_TASK) {
     await nextTask();
-    const part = sweepContinuumCurves(
-      parsed.value,
-      r.parameter,
-      values.slice(start, start + CURVE_VALUES_PER_TASK),
-      cells,
-    );
+    const part = sweepContinuumCurves(caseData, r.parameter, values.slice(start, start + CURVE_VALUES_PER_TASK), cells);
     if ('reason' in part) continue;
     Object.assign(units, part.units);
     for (const [key, byModel] of Object.entries(part.curves)) {

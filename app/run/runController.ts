@@ -15,7 +15,7 @@ import type { CaseInput } from '../../engine/case/schema';
 
 const PROGRESS_EVERY_MS = 200;
 
-/** Live views: merged snapshots about twice a second, less often for big grids (each round is merged on this thread). */
+/** Live views: merged snapshots about twice a second, less often for big grids (each round decodes every snapshot). */
 function liveIntervalMs(cells: number): number {
   return cells <= 5_000 ? 500 : cells <= 50_000 ? 2_000 : 5_000;
 }

@@ -103,7 +103,7 @@ export async function startSweep(): Promise<void> {
       if (sweepStore.getState().request === request) set({ curves });
     };
     api
-      .sweepCurves(caseInput, request, planned.points)
+      .sweepCurves(planned.caseData, request, planned.points)
       .then(withCurves, (e: Error) => withCurves({ reason: e.message }));
     const progress = throttled((p) => {
       const c = sweepStore.getState().current;

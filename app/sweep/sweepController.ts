@@ -1,6 +1,6 @@
 /**
- * Runs the points of a sweep one after the other, each as an ordinary run (the run API's startRun with its replica
- * pool), and turns each end into the point's row with the engine's sweepRowOf. A failed point gets a row marked
+ * Runs the points of a sweep one after the other, each as an ordinary run (the run API's startRun, and so the run
+ * pipeline of workers/runCase.ts: a sweep is a loop over it), and turns each end into the point's row with the engine's sweepRowOf. A failed point gets a row marked
  * failed and the next one starts; stop() ends the running point, keeps what it sampled (its row marked
  * interrupted) and runs no more. The run API and the row function are injected: the page passes the lazily loaded
  * run chunk's, the unit tests a fake pool. Single runs (runController.ts) are untouched by it.
@@ -8,6 +8,7 @@
 import type { RunCallbacks, RunHandle, RunProgressView, RunRequest } from '../bridge/runApi';
 import { type SweepRow } from '../../engine/report/sweepRow';
 import { type SweepPointRun } from '../../engine/report/sweepRow';
+import type { Plan } from '../../engine/plan/plan';
 
 export interface SweepRunDeps {
   startRun(request: RunRequest, callbacks: RunCallbacks): RunHandle;
@@ -18,6 +19,8 @@ export interface SweepPointInput {
   readonly point: number;
   readonly value: number;
   readonly caseInput: unknown;
+  /** The point's plan, when the sweep made it: the run then starts from it (no second validation). */
+  readonly plan?: Plan;
   readonly caseName: string;
 }
 
@@ -60,7 +63,13 @@ export function runSweepPoints(
     let handle: RunHandle;
     try {
       handle = deps.startRun(
-        { caseInput: p.caseInput, replicas: options.replicas, liveEveryMs: options.liveEveryMs, hooks: options.hooks },
+        {
+          caseInput: p.caseInput,
+          plan: p.plan,
+          replicas: options.replicas,
+          liveEveryMs: options.liveEveryMs,
+          hooks: options.hooks,
+        },
         {
           onProgress: (v) => events.onPointProgress(v),
           // The sweep shows each point when it ends; live views of a point are not kept.

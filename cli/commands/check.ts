@@ -1,26 +1,26 @@
 /** `tenuis check CASE.json`: validate and plan a case; print the plan; exit 0 only when it can run. */
-import { parseArgs } from 'node:util';
-import { UsageError, EXIT_OK } from '../errors';
-import { CHECK_USAGE } from '../usage';
+import { EXIT_OK } from '../errors';
 import { loadCase } from '../readCase';
 import { planReport } from '../report';
-import type { CommandIO } from './io';
+import { defineCommand } from '../command';
 
-export function checkCommand(args: string[], io: CommandIO): number {
-  let parsed;
-  try {
-    parsed = parseArgs({ args, allowPositionals: true, options: { help: { type: 'boolean', short: 'h' } } });
-  } catch (e) {
-    throw new UsageError((e as Error).message, CHECK_USAGE);
-  }
-  if (parsed.values.help) {
-    io.stdout.write(`${CHECK_USAGE}\n`);
+export const CHECK_USAGE = `Usage:
+  tenuis check CASE.json
+
+Validates the case and plans it: prints the reference state, grid, time step, particles and the advisor's ratios.
+Exit code 0 when the case is valid and can run, 1 otherwise.`;
+
+export const checkCommand = defineCommand({
+  name: 'check',
+  summary: '  tenuis check CASE.json                     validate a case and show its plan',
+  usage: CHECK_USAGE,
+  options: {},
+  run({ positionals }, { io, usageError }) {
+    if (positionals.length !== 1) throw usageError('check needs exactly one case file');
+    const { plan } = loadCase(positionals[0]);
+    io.stdout.write(`${planReport(plan)}\n`);
+    if (plan.warnings.length) io.stdout.write(`warnings:\n${plan.warnings.map((w) => `  ${w}`).join('\n')}\n`);
+    else io.stdout.write('warnings: none\n');
     return EXIT_OK;
-  }
-  if (parsed.positionals.length !== 1) throw new UsageError('check needs exactly one case file', CHECK_USAGE);
-  const { plan } = loadCase(parsed.positionals[0]);
-  io.stdout.write(`${planReport(plan)}\n`);
-  if (plan.warnings.length) io.stdout.write(`warnings:\n${plan.warnings.map((w) => `  ${w}`).join('\n')}\n`);
-  else io.stdout.write('warnings: none\n');
-  return EXIT_OK;
-}
+  },
+});

@@ -1,53 +1,76 @@
 /**
  * `tenuis run CASE.json --out DIR`: validate and plan (refusing bad input before anything starts or is created),
- * run the transient and sampling steps with a progress line, then summarise and write all result files at once.
+ * run the case through the run pipeline (cli/runOnCommandLine.ts → workers/runCase.ts) with a progress line, then
+ * summarise and write all result files at once. Its usage text sits beside its options, as for every command.
  */
-import { parseArgs } from 'node:util';
 import { readFileSync } from 'node:fs';
-import { createSimulation, stepsRemaining, type Simulation } from '../../engine/run/simulation';
-import { encodeCheckpoint, decodeCheckpoint } from '../../engine/io/checkpoint';
+import type { Simulation } from '../../engine/run/simulation';
+import { decodeCheckpoint } from '../../engine/io/checkpoint';
 import { summarizeSamples } from '../../engine/results/summarize';
-import type { SampleSet } from '../../engine/results/sampleSet';
 import { encodeSampleSet } from '../../engine/io/sampleFile';
-import { runReplicas, replicaReportJson, type StoppingOptions } from '../runReplicas';
+import { runOnCommandLine, replicaReportJson, replicaStatusLines } from '../runOnCommandLine';
+import type { StoppingRules } from '../../workers/runCase';
 import { parseTarget } from '../../engine/stats/stopping';
 import type { Plan } from '../../engine/plan/plan';
 import { targetPathsOf } from '../../engine/results/targetQuantities';
 import { writeBinaryAtomically } from '../writeResults';
-import { CliError } from '../errors';
+import { CliError, EXIT_OK, EXIT_INTERRUPTED, type UsageError } from '../errors';
+import { type Performance } from '../../engine/report/summaryJson';
 import { resultFiles } from '../../engine/report/resultFiles';
-import type { Performance } from '../../engine/report/summaryJson';
-import { UsageError, EXIT_OK, EXIT_INTERRUPTED } from '../errors';
-import { RUN_USAGE } from '../usage';
 import { loadCase, parseSeedOption } from '../readCase';
 import { checkOutputDir, writeResultsAtomically } from '../writeResults';
 import { createProgress } from '../progress';
-import { advanceInChunks } from '../advanceInChunks';
 import { runSummary } from '../report';
 import { prettyJson } from '../prettyJson';
-import type { CommandIO } from './io';
-import { sampleSetOf } from '../../engine/run/simulationSamples';
+import { defineCommand } from '../command';
 
-/** Sets a flag on the first Ctrl-C; a second Ctrl-C ends the process at once (the default action). */
-function watchInterrupt(): { readonly interrupted: boolean; dispose(): void } {
-  const state = { interrupted: false };
-  const onSigint = () => {
-    state.interrupted = true;
-  };
-  process.once('SIGINT', onSigint);
-  return {
-    get interrupted() {
-      return state.interrupted;
-    },
-    dispose: () => process.removeListener('SIGINT', onSigint),
-  };
-}
+export const RUN_USAGE = `Usage:
+  tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE]
+             [--target Q=F] [--max-steps N] [--max-seconds S] [--checkpoint FILE] [--quiet]
+  tenuis run --resume FILE --out DIR [--checkpoint FILE] [--quiet]
 
-/** --target, --max-steps, --max-seconds → the pool's stopping options (undefined when none is given). */
-function stoppingOptions(
+Runs the case and writes summary.json, profiles.csv, fields.csv, surfaces.csv and case.json (the case as run,
+complete and explicit) into DIR. The files appear only when the run has ended: an error leaves DIR as it was;
+Ctrl-C stops the run and writes what was sampled so far (exit code 130).
+  --out, -o DIR         output folder (created if needed; files of the same names in it are replaced)
+  --seed N              random seed, overriding the case's
+  --replicas, -r N      N independent replicas on N worker threads (one per core), merged into one result;
+                        replicas.json lists each replica's status and its own wall estimates.
+  --save-samples FILE   also write the raw batch sums as a sample file, for tenuis merge
+  --target Q=F          stop when quantity Q's 95 % half-width is within fraction F of its mean, e.g.
+                        walls.top.shearStress=0.01 (or =1%); the progress line shows the precision reached and the
+                        estimated time to the target. Without --max-steps, sampling may run to 50 × the case's
+                        sampleSteps per replica.
+  --max-steps N         sampling steps per replica (overrides the case's sampleSteps)
+  --max-seconds S       stop sampling after S seconds of wall time
+  --checkpoint FILE     keep a checkpoint of the whole run in FILE (every --checkpoint-every N steps, by default
+                        every twentieth of the run, and on Ctrl-C); single replica only
+  --resume FILE         continue a checkpointed run (no case file): the result is exactly that of an
+                        uninterrupted run
+  --quiet, -q           no progress line and no summary (warnings and errors are still printed)`;
+
+const RUN_OPTIONS = {
+  out: { type: 'string', short: 'o' },
+  seed: { type: 'string' },
+  replicas: { type: 'string', short: 'r' },
+  'save-samples': { type: 'string' },
+  target: { type: 'string' },
+  'max-steps': { type: 'string' },
+  'max-seconds': { type: 'string' },
+  checkpoint: { type: 'string' },
+  'checkpoint-every': { type: 'string' },
+  resume: { type: 'string' },
+  quiet: { type: 'boolean', short: 'q' },
+} as const;
+
+type UsageErrorOf = (message: string) => UsageError;
+
+/** --target, --max-steps, --max-seconds → the pipeline's stopping rules (undefined when none is given). */
+function stoppingRules(
   values: { target?: string; 'max-steps'?: string; 'max-seconds'?: string },
   plan: Plan,
-): StoppingOptions | undefined {
+  usage: UsageErrorOf,
+): StoppingRules | undefined {
   if (values.target === undefined && values['max-steps'] === undefined && values['max-seconds'] === undefined)
     return undefined;
   const knownPaths = targetPathsOf(plan);
@@ -55,13 +78,13 @@ function stoppingOptions(
   try {
     target = values.target === undefined ? undefined : parseTarget(values.target, knownPaths);
   } catch (e) {
-    throw new UsageError(`--target: ${(e as Error).message}`, RUN_USAGE);
+    throw usage(`--target: ${(e as Error).message}`);
   }
   const positive = (name: string, text: string | undefined, integer: boolean): number | undefined => {
     if (text === undefined) return undefined;
     const v = Number(text);
     if (!Number.isFinite(v) || v <= 0 || (integer && !Number.isInteger(v)))
-      throw new UsageError(`--${name} ${text}: give a ${integer ? 'whole ' : ''}number above 0`, RUN_USAGE);
+      throw usage(`--${name} ${text}: give a ${integer ? 'whole ' : ''}number above 0`);
     return v;
   };
   const maxSteps = positive('max-steps', values['max-steps'], true);
@@ -70,13 +93,14 @@ function stoppingOptions(
   return { target, maxSeconds: positive('max-seconds', values['max-seconds'], false), maxSampleSteps };
 }
 
-function parseCheckpointEvery(text: string): number {
+function parseCheckpointEvery(text: string, usage: UsageErrorOf): number {
   const n = Number(text);
   if (!Number.isInteger(n) || n < 1)
-    throw new UsageError(`--checkpoint-every ${text}: give a whole number of steps, at least 1`, RUN_USAGE);
+    throw usage(`--checkpoint-every ${text}: give a whole number of steps, at least 1`);
   return n;
 }
 
+/** A checkpoint read from disk: validated here, where it enters, and not again. */
 function readCheckpoint(path: string): { sim: Simulation } {
   let bytes: Buffer;
   try {
@@ -93,184 +117,119 @@ function readCheckpoint(path: string): { sim: Simulation } {
   }
 }
 
-function parseReplicasOption(text: string): number {
+function parseReplicasOption(text: string, usage: UsageErrorOf): number {
   const n = Number(text);
   if (!Number.isInteger(n) || n < 1 || n > 256)
-    throw new UsageError(
-      `--replicas ${text}: give a whole number from 1 to 256 (one per core is the useful maximum)`,
-      RUN_USAGE,
-    );
+    throw usage(`--replicas ${text}: give a whole number from 1 to 256 (one per core is the useful maximum)`);
   return n;
 }
 
-export async function runCommand(args: string[], io: CommandIO): Promise<number> {
-  let parsed;
-  try {
-    parsed = parseArgs({
-      args,
-      allowPositionals: true,
-      options: {
-        out: { type: 'string', short: 'o' },
-        seed: { type: 'string' },
-        replicas: { type: 'string', short: 'r' },
-        'save-samples': { type: 'string' },
-        target: { type: 'string' },
-        'max-steps': { type: 'string' },
-        'max-seconds': { type: 'string' },
-        checkpoint: { type: 'string' },
-        'checkpoint-every': { type: 'string' },
-        resume: { type: 'string' },
-        quiet: { type: 'boolean', short: 'q' },
-        help: { type: 'boolean', short: 'h' },
-      },
-    });
-  } catch (e) {
-    throw new UsageError((e as Error).message, RUN_USAGE);
-  }
-  const { values, positionals } = parsed;
-  if (values.help) {
-    io.stdout.write(`${RUN_USAGE}\n`);
-    return EXIT_OK;
-  }
-  const resumed = values.resume === undefined ? undefined : readCheckpoint(values.resume);
-  if (resumed ? positionals.length > 1 : positionals.length !== 1)
-    throw new UsageError('run needs exactly one case file (none with --resume)', RUN_USAGE);
-  if (!values.out) throw new UsageError('run needs an output folder: --out DIR', RUN_USAGE);
-  const outDir = values.out;
-  const quiet = values.quiet === true;
-  if (resumed && values.seed !== undefined)
-    throw new UsageError('--seed cannot change a resumed run: its random stream is in the checkpoint', RUN_USAGE);
+export const runCommand = defineCommand({
+  name: 'run',
+  summary: `  tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE] [--quiet]
+                                             run a case and write the results into DIR`,
+  usage: RUN_USAGE,
+  options: RUN_OPTIONS,
+  async run({ values, positionals }, { io, usageError: usage, watchInterrupt }) {
+    const resumed = values.resume === undefined ? undefined : readCheckpoint(values.resume);
+    if (resumed ? positionals.length > 1 : positionals.length !== 1)
+      throw usage('run needs exactly one case file (none with --resume)');
+    if (!values.out) throw usage('run needs an output folder: --out DIR');
+    const outDir = values.out;
+    const quiet = values.quiet === true;
+    if (resumed && values.seed !== undefined)
+      throw usage('--seed cannot change a resumed run: its random stream is in the checkpoint');
 
-  const seed = values.seed === undefined ? undefined : parseSeedOption(values.seed);
-  const { caseData, plan } = resumed
-    ? { caseData: resumed.sim.plan.caseData, plan: resumed.sim.plan }
-    : loadCase(positionals[0], { seed });
-  checkOutputDir(outDir);
-  for (const w of plan.warnings) io.stderr.write(`warning: ${w}\n`);
+    const seed = values.seed === undefined ? undefined : parseSeedOption(values.seed);
+    const { caseData, plan } = resumed
+      ? { caseData: resumed.sim.plan.caseData, plan: resumed.sim.plan }
+      : loadCase(positionals[0], { seed });
+    checkOutputDir(outDir);
+    for (const w of plan.warnings) io.stderr.write(`warning: ${w}\n`);
 
-  const replicas = values.replicas === undefined ? 1 : parseReplicasOption(values.replicas);
-  const stopping = stoppingOptions(values, plan);
-  const checkpointPath = values.checkpoint;
-  if ((checkpointPath || resumed) && (replicas > 1 || stopping)) {
-    throw new UsageError(
-      "--checkpoint and --resume work with a single replica and the case's own step count (no --replicas, --target, --max-steps or --max-seconds)",
-      RUN_USAGE,
-    );
-  }
-  const checkpointEvery =
-    values['checkpoint-every'] === undefined ? undefined : parseCheckpointEvery(values['checkpoint-every']);
-  const savePath = values['save-samples'];
-  const progress = quiet
-    ? undefined
-    : createProgress({
-        stream: io.stderr,
-        totalSteps: plan.transientSteps + (stopping?.maxSampleSteps ?? plan.sampleSteps),
-        transientSteps: plan.transientSteps,
+    const replicas = values.replicas === undefined ? 1 : parseReplicasOption(values.replicas, usage);
+    const stopping = stoppingRules(values, plan, usage);
+    const checkpointPath = values.checkpoint;
+    if ((checkpointPath || resumed) && (replicas > 1 || stopping)) {
+      throw usage(
+        "--checkpoint and --resume work with a single replica and the case's own step count (no --replicas, --target, --max-steps or --max-seconds)",
+      );
+    }
+    const checkpointEvery =
+      values['checkpoint-every'] === undefined ? undefined : parseCheckpointEvery(values['checkpoint-every'], usage);
+    const savePath = values['save-samples'];
+    const progress = quiet
+      ? undefined
+      : createProgress({
+          stream: io.stderr,
+          totalSteps: plan.transientSteps + (stopping?.maxSampleSteps ?? plan.sampleSteps),
+          transientSteps: plan.transientSteps,
+        });
+    const interrupt = watchInterrupt();
+    const extraFiles: Record<string, string> = {};
+    let run;
+    try {
+      run = await runOnCommandLine(plan, {
+        replicas,
+        stopping,
+        resumed: resumed?.sim,
+        checkpoint: checkpointPath
+          ? { everySteps: checkpointEvery, write: (bytes) => writeBinaryAtomically(checkpointPath, bytes) }
+          : undefined,
+        progress,
+        interrupt,
       });
-  const interrupt = watchInterrupt();
-  let samples: SampleSet | null;
-  let wallSeconds: number;
-  let particleSteps: number;
-  let interrupted: boolean;
-  const extraFiles: Record<string, string> = {};
-  const lostWarnings: string[] = [];
-  let stopNote: string | null = null;
-  try {
-    if (replicas === 1 && !stopping) {
-      const sim = resumed ? resumed.sim : createSimulation(plan);
-      const total = plan.transientSteps + plan.sampleSteps;
-      // Default interval: about every twentieth of the run.
-      const every = checkpointEvery ?? Math.max(1, Math.ceil(total / 20));
-      let nextCheckpoint = sim.state.step + every;
-      const saveCheckpoint = () => writeBinaryAtomically(checkpointPath!, encodeCheckpoint(sim, 0));
-      const outcome = await advanceInChunks(sim, {
-        onProgress: (d) => {
-          progress?.setTotals(
-            sim.state.step + stepsRemaining(sim),
-            Number.isFinite(sim.transientEndStep) ? sim.transientEndStep : Infinity,
-          );
-          progress?.update(d);
-          if (checkpointPath && d >= nextCheckpoint && d < total) {
-            saveCheckpoint();
-            nextCheckpoint = d + every;
-          }
-        },
-        shouldStop: () => interrupt.interrupted,
-        breakEvery: checkpointPath ? every : undefined,
-      });
-      if (!outcome.completed) {
-        progress?.clear();
-        if (checkpointPath) {
-          saveCheckpoint();
+    } finally {
+      interrupt.dispose();
+    }
+    const samples = run.merged;
+    const interrupted = run.cancelled;
+    if (run.onThisThread) {
+      if (interrupted) {
+        if (checkpointPath)
           io.stderr.write(
             `checkpoint written to ${checkpointPath}; continue with tenuis run --resume ${checkpointPath} --out ${outDir}\n`,
           );
-        }
-        if (sim.sampledSteps === 0) {
+        if (!samples) {
           io.stderr.write(
-            `interrupted at step ${outcome.stepsDone}, still in the transient: nothing was sampled, nothing was written\n`,
+            `interrupted at step ${run.replicas[0].stepsDone}, still in the transient: nothing was sampled, nothing was written\n`,
           );
           return EXIT_INTERRUPTED;
         }
         io.stderr.write(
-          `interrupted at step ${outcome.stepsDone}: writing the ${sim.sampledSteps} steps sampled so far\n`,
+          `interrupted at step ${run.replicas[0].stepsDone}: writing the ${samples.counters.sampledSteps} steps sampled so far\n`,
         );
-      } else progress?.finish(outcome.stepsDone);
-      samples = sampleSetOf(sim);
-      wallSeconds = outcome.wallSeconds;
-      particleSteps = sim.state.particleSteps;
-      interrupted = !outcome.completed;
-    } else {
-      const outcome = await runReplicas(caseData, replicas, {
-        progress,
-        isInterrupted: () => interrupt.interrupted,
-        stopping,
-      });
-      progress?.finish(Math.round(outcome.replicas.reduce((sum, r) => sum + r.stepsDone, 0) / outcome.replicas.length));
-      samples = outcome.merged;
-      wallSeconds = outcome.wallSeconds;
-      particleSteps = outcome.particleSteps;
-      interrupted = outcome.cancelled;
-      if (outcome.stoppedBy) stopNote = `stopped: ${outcome.stoppedBy}`;
-      extraFiles['replicas.json'] =
-        `${prettyJson({ replicas: outcome.replicas.map((r) => replicaReportJson(r, caseData.name)) })}\n`;
-      for (const r of outcome.replicas) {
-        if (r.status === 'lost') {
-          lostWarnings.push(
-            `replica ${r.stream} was lost (${r.reason}); ${r.samples ? `its ${r.samples.counters.sampledSteps} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`,
-          );
-        }
       }
-      if (!samples)
-        throw new CliError(
-          `no replica sampled anything:\n${outcome.replicas.map((r) => `  replica ${r.stream}: ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('\n')}`,
-        );
+    } else {
+      extraFiles['replicas.json'] =
+        `${prettyJson({ replicas: run.replicas.map((r) => replicaReportJson(r, caseData.name)) })}\n`;
     }
-  } finally {
-    interrupt.dispose();
-  }
+    if (!samples) throw new CliError(`no replica sampled anything:\n${replicaStatusLines(run.replicas)}`);
+    const stopNote = run.stoppedBy ? `stopped: ${run.stoppedBy}` : null;
 
-  const result = summarizeSamples(samples);
-  result.warnings.push(...lostWarnings);
-  if (interrupted)
-    result.warnings.push(
-      `interrupted by the user: the result holds the ${samples.counters.sampledSteps} steps sampled until then`,
-    );
-  const performance: Performance = {
-    wallSeconds,
-    particleSteps,
-    particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN,
-  };
-  const files = {
-    ...resultFiles(result, { performance, caseName: caseData.name, plan: samples.plan }),
-    'case.json': `${prettyJson(caseData)}\n`,
-    ...extraFiles,
-  };
-  writeResultsAtomically(outDir, files);
-  if (savePath) writeBinaryAtomically(savePath, encodeSampleSet(samples));
-  for (const w of result.warnings) if (!plan.warnings.includes(w)) io.stderr.write(`warning: ${w}\n`);
-  if (stopNote && !quiet) io.stderr.write(`${stopNote}\n`);
-  if (!quiet) io.stderr.write(`${runSummary(result, performance, outDir)}\n`);
-  if (interrupted) return EXIT_INTERRUPTED;
-  return EXIT_OK;
-}
+    const result = summarizeSamples(samples);
+    result.warnings.push(...run.lostWarnings);
+    if (interrupted)
+      result.warnings.push(
+        `interrupted by the user: the result holds the ${samples.counters.sampledSteps} steps sampled until then`,
+      );
+    const { wallSeconds, particleSteps } = run;
+    const performance: Performance = {
+      wallSeconds,
+      particleSteps,
+      particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN,
+    };
+    const files = {
+      ...resultFiles(result, { performance, caseName: caseData.name, plan: samples.plan }),
+      'case.json': `${prettyJson(caseData)}\n`,
+      ...extraFiles,
+    };
+    writeResultsAtomically(outDir, files);
+    if (savePath) writeBinaryAtomically(savePath, encodeSampleSet(samples));
+    for (const w of result.warnings) if (!plan.warnings.includes(w)) io.stderr.write(`warning: ${w}\n`);
+    if (stopNote && !quiet) io.stderr.write(`${stopNote}\n`);
+    if (!quiet) io.stderr.write(`${runSummary(result, performance, outDir)}\n`);
+    if (interrupted) return EXIT_INTERRUPTED;
+    return EXIT_OK;
+  },
+});

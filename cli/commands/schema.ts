@@ -1,15 +1,25 @@
-/** `tenuis schema`: the case file's JSON Schema on stdout. */
+/**
+ * `tenuis schema`: the case file's JSON Schema on stdout. It takes no arguments, so it parses loosely and refuses any
+ * it is given by naming them (rather than with the parser's message about an unknown option).
+ */
 import { caseJsonSchema } from '../../engine/case/schema';
-import { UsageError, EXIT_OK } from '../errors';
-import { SCHEMA_USAGE } from '../usage';
-import type { CommandIO } from './io';
+import { EXIT_OK } from '../errors';
+import { defineCommand } from '../command';
 
-export function schemaCommand(args: string[], io: CommandIO): number {
-  if (args.includes('--help') || args.includes('-h')) {
-    io.stdout.write(`${SCHEMA_USAGE}\n`);
+export const SCHEMA_USAGE = `Usage:
+  tenuis schema
+
+Prints the JSON Schema (draft 2020-12) of the case file.`;
+
+export const schemaCommand = defineCommand({
+  name: 'schema',
+  summary: "  tenuis schema                              print the case file's JSON Schema",
+  usage: SCHEMA_USAGE,
+  options: {},
+  strict: false,
+  run(_parsed, { io, args, usageError }) {
+    if (args.length > 0) throw usageError(`schema takes no arguments, got ${args.join(' ')}`);
+    io.stdout.write(`${JSON.stringify(caseJsonSchema(), null, 2)}\n`);
     return EXIT_OK;
-  }
-  if (args.length > 0) throw new UsageError(`schema takes no arguments, got ${args.join(' ')}`, SCHEMA_USAGE);
-  io.stdout.write(`${JSON.stringify(caseJsonSchema(), null, 2)}\n`);
-  return EXIT_OK;
-}
+  },
+});

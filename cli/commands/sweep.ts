@@ -4,9 +4,9 @@
  * planned before anything runs or is written; then the points run one after the other, each written into
  * DIR/points/NNN/ as `tenuis run` writes its folder, and at the end DIR/sweep.csv and DIR/sweep.json. Ctrl-C stops
  * the running point, keeps what it sampled (as `tenuis run` does), writes the table of the points so far with that
- * point marked interrupted, and exits with 130.
+ * point marked interrupted, and exits with 130. Each point runs through the run pipeline (cli/runOnCommandLine.ts →
+ * workers/runCase.ts), as `tenuis run` does: a sweep is a loop over it.
  */
-import { parseArgs } from 'node:util';
 import { join } from 'node:path';
 import { parseCase } from '../../engine/case/schema';
 import type { Plan } from '../../engine/plan/plan';
@@ -18,27 +18,61 @@ import {
   type SweepParameter,
   type SweepSpacing,
 } from '../../engine/case/sweep';
-import { caseValueOf, planSweepPoints, type PlannedSweepPoint } from '../../engine/plan/sweepPoints';
-import { sweepCsv, sweepJson } from '../../engine/report/sweepTable';
-import { sweepRowOf, type SweepRow } from '../../engine/report/sweepRow';
+import { sweepRowOf } from '../../engine/report/sweepRow';
+import { sweepJson } from '../../engine/report/sweepTable';
+import { sweepCsv } from '../../engine/report/sweepTable';
+import { type SweepRow } from '../../engine/report/sweepRow';
+import { type PlannedSweepPoint } from '../../engine/plan/sweepPoints';
+import { planSweepPoints } from '../../engine/plan/sweepPoints';
+import { caseValueOf } from '../../engine/plan/sweepPoints';
 import { parseQuantity } from '../../engine/units/engineeringUnits';
-import { createSimulation, stepsRemaining } from '../../engine/run/simulation';
 import type { SampleSet } from '../../engine/results/sampleSet';
 import { summarizeSamples } from '../../engine/results/summarize';
+import { type Performance } from '../../engine/report/summaryJson';
 import { resultFiles } from '../../engine/report/resultFiles';
-import type { Performance } from '../../engine/report/summaryJson';
 import { continuumComparisonOf } from '../../engine/report/comparison';
 import { CliError, UsageError, EXIT_OK, EXIT_INTERRUPTED } from '../errors';
-import { SWEEP_USAGE } from '../usage';
+import type { CommandIO } from './io';
 import { readJsonFile, parseSeedOption } from '../readCase';
 import { checkOutputDir, writeResultsAtomically } from '../writeResults';
-import { runReplicas, replicaReportJson } from '../runReplicas';
-import { advanceInChunks } from '../advanceInChunks';
+import { runOnCommandLine, replicaReportJson, replicaStatusLines } from '../runOnCommandLine';
 import { createProgress, type Progress } from '../progress';
 import { sig, duration } from '../format';
 import { prettyJson } from '../prettyJson';
-import type { CommandIO } from './io';
-import { sampleSetOf } from '../../engine/run/simulationSamples';
+import { defineCommand, type Interrupt, type ParsedArgs } from '../command';
+
+export const SWEEP_USAGE = `Usage:
+  tenuis sweep CASE.json --param knudsen|pressure --from A --to B --points N [--log] --out DIR
+               [--replicas R] [--seed S] [--quiet]
+
+Runs the case at N values of a parameter from A to B and writes DIR/sweep.csv (per point: the swept value, the
+reference Knudsen number, rarefaction δ and pressure, and every flow quantity with its 95 % half-width — or, for
+cases without flow sections, each wall's shear stress and heat flux; units in every header), DIR/sweep.json (every
+point's summary) and each point's full result in DIR/points/NNN/ (as tenuis run writes it). A point changes only the
+pressures: all of them are scaled by the same factor (Kn ∝ 1/p at fixed temperature and geometry), so pressure
+ratios are kept. Cells and time step the case leaves unset are planned again for each point; those it fixes are kept
+(the planner's warnings then say when cells grow beyond the mean free path). Every point is planned before anything
+runs; Ctrl-C stops the running point, keeps what it sampled and writes the table so far, marked interrupted (exit 130).
+  --param knudsen|pressure  knudsen: the case's reference Knudsen number; pressure: its reference (initial) pressure
+  --from A, --to B          the ends of the range, above 0; pressures may carry a unit (10Pa, 0.1mbar, 1Torr)
+  --points N                a whole number from 1 to 999 (1: just A)
+  --log                     geometric spacing (equal ratios) instead of equal steps
+  --out, -o DIR             output folder (created if needed; files of the same names in it are replaced)
+  --replicas, -r R          R replicas per point on R worker threads, merged (as tenuis run --replicas)
+  --seed S                  random seed of every point, overriding the case's
+  --quiet, -q               no progress lines (warnings and errors are still printed)`;
+
+const SWEEP_OPTIONS = {
+  param: { type: 'string' },
+  from: { type: 'string' },
+  to: { type: 'string' },
+  points: { type: 'string' },
+  log: { type: 'boolean' },
+  out: { type: 'string', short: 'o' },
+  replicas: { type: 'string', short: 'r' },
+  seed: { type: 'string' },
+  quiet: { type: 'boolean', short: 'q' },
+} as const;
 
 interface SweepOptions {
   readonly casePath: string;
@@ -84,30 +118,8 @@ function parseEnd(option: string, text: string | undefined, parameter: SweepPara
   return value;
 }
 
-function parseSweepArgs(args: string[]): SweepOptions | 'help' {
-  let parsed;
-  try {
-    parsed = parseArgs({
-      args,
-      allowPositionals: true,
-      options: {
-        param: { type: 'string' },
-        from: { type: 'string' },
-        to: { type: 'string' },
-        points: { type: 'string' },
-        log: { type: 'boolean' },
-        out: { type: 'string', short: 'o' },
-        replicas: { type: 'string', short: 'r' },
-        seed: { type: 'string' },
-        quiet: { type: 'boolean', short: 'q' },
-        help: { type: 'boolean', short: 'h' },
-      },
-    });
-  } catch (e) {
-    throw usage((e as Error).message);
-  }
+function sweepOptionsOf(parsed: ParsedArgs<typeof SWEEP_OPTIONS>): SweepOptions {
   const { values: v, positionals } = parsed;
-  if (v.help) return 'help';
   if (positionals.length !== 1)
     throw usage(`sweep needs exactly one case file${positionals.length ? `, not ${positionals.length}` : ''}`);
   if (v.param === undefined) throw usage(`sweep needs --param: one of ${SWEEP_PARAMETERS.join(', ')}`);
@@ -175,67 +187,31 @@ function planPoints(o: SweepOptions): { caseName: string; points: PlannedPoint[]
   return { caseName: parsed.value.name, points };
 }
 
-/** Runs one point to its end or until interrupted(): in this thread for one replica, on worker threads for more. */
+/** Runs one point through the run pipeline to its end or until Ctrl-C: in this thread for one replica, on worker threads for more. */
 async function runPoint(
   p: PlannedPoint,
   replicas: number,
-  interrupted: () => boolean,
+  interrupt: Interrupt,
   progress: Progress | undefined,
 ): Promise<PointRun> {
-  const warnings: string[] = [];
-  if (replicas === 1) {
-    const sim = createSimulation(p.plan);
-    const outcome = await advanceInChunks(sim, {
-      onProgress: (d) => {
-        progress?.setTotals(
-          sim.state.step + stepsRemaining(sim),
-          Number.isFinite(sim.transientEndStep) ? sim.transientEndStep : Infinity,
-        );
-        progress?.update(d);
-      },
-      shouldStop: interrupted,
-    });
-    if (outcome.completed) progress?.finish(outcome.stepsDone);
-    else progress?.clear();
-    const particleSteps = sim.state.particleSteps;
-    return {
-      samples: sim.sampledSteps > 0 ? sampleSetOf(sim) : null,
-      interrupted: !outcome.completed,
-      performance: {
-        wallSeconds: outcome.wallSeconds,
-        particleSteps,
-        particleStepsPerSecond: outcome.wallSeconds > 0 ? particleSteps / outcome.wallSeconds : NaN,
-      },
-      extraFiles: {},
-      warnings,
-    };
-  }
-  const outcome = await runReplicas(p.caseData, replicas, { progress, isInterrupted: interrupted });
-  progress?.finish(Math.round(outcome.replicas.reduce((sum, r) => sum + r.stepsDone, 0) / outcome.replicas.length));
-  for (const r of outcome.replicas) {
-    if (r.status === 'lost')
-      warnings.push(
-        `replica ${r.stream} was lost (${r.reason}); ${r.samples ? `its ${r.samples.counters.sampledSteps} sampled steps up to its last snapshot are included` : 'it had sampled nothing that could be kept'}`,
-      );
-  }
-  if (!outcome.merged && !outcome.cancelled) {
-    throw new CliError(
-      `point ${p.point}: no replica sampled anything:\n${outcome.replicas.map((r) => `  replica ${r.stream}: ${r.status}${r.reason ? ` (${r.reason})` : ''}`).join('\n')}`,
-    );
-  }
-  const { wallSeconds, particleSteps } = outcome;
+  const run = await runOnCommandLine(p.plan, { replicas, progress, interrupt });
+  if (!run.onThisThread && !run.merged && !run.cancelled)
+    throw new CliError(`point ${p.point}: no replica sampled anything:\n${replicaStatusLines(run.replicas)}`);
+  const { wallSeconds, particleSteps } = run;
   return {
-    samples: outcome.merged,
-    interrupted: outcome.cancelled,
+    samples: run.merged,
+    interrupted: run.cancelled,
     performance: {
       wallSeconds,
       particleSteps,
       particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN,
     },
-    extraFiles: {
-      'replicas.json': `${prettyJson({ replicas: outcome.replicas.map((r) => replicaReportJson(r, p.caseData.name)) })}\n`,
-    },
-    warnings,
+    extraFiles: run.onThisThread
+      ? {}
+      : {
+          'replicas.json': `${prettyJson({ replicas: run.replicas.map((r) => replicaReportJson(r, p.caseData.name)) })}\n`,
+        },
+    warnings: [...run.lostWarnings],
   };
 }
 
@@ -273,25 +249,10 @@ function writePoint(
   return { row, warnings: result.warnings.filter((w) => !p.plan.warnings.includes(w)) };
 }
 
-/** Sets a flag on the first Ctrl-C; a second Ctrl-C ends the process at once (the default action). */
-function watchInterrupt(): { readonly interrupted: () => boolean; dispose(): void } {
-  let flag = false;
-  const onSigint = () => {
-    flag = true;
-  };
-  process.once('SIGINT', onSigint);
-  return { interrupted: () => flag, dispose: () => process.removeListener('SIGINT', onSigint) };
-}
-
 /** Planned work of a point (particles × steps), to share the sweep's remaining time out among the points left. */
 const plannedWork = (p: Plan) => p.initialParticles * (p.transientSteps + p.sampleSteps);
 
-export async function sweepCommand(args: string[], io: CommandIO): Promise<number> {
-  const o = parseSweepArgs(args);
-  if (o === 'help') {
-    io.stdout.write(`${SWEEP_USAGE}\n`);
-    return EXIT_OK;
-  }
+async function sweep(o: SweepOptions, io: CommandIO, interruptWatch: () => Interrupt): Promise<number> {
   const { caseName, points } = planPoints(o);
   checkOutputDir(o.outDir);
   const base = points[0].caseData;
@@ -310,7 +271,7 @@ export async function sweepCommand(args: string[], io: CommandIO): Promise<numbe
   const start = performance.now();
   const totalWork = points.reduce((s, p) => s + plannedWork(p.plan), 0);
   let workDone = 0;
-  const interrupt = watchInterrupt();
+  const interrupt = interruptWatch();
   try {
     for (const p of points) {
       const label = `point ${p.point}/${o.points}`;
@@ -333,7 +294,7 @@ export async function sweepCommand(args: string[], io: CommandIO): Promise<numbe
       progress?.setNote(label);
       let run: PointRun;
       try {
-        run = await runPoint(p, o.replicas, interrupt.interrupted, progress);
+        run = await runPoint(p, o.replicas, interrupt, progress);
       } catch (e) {
         // Keep the table of the points already written; the failed one is marked as such.
         if (rows.some((r) => r.summary)) {
@@ -379,3 +340,12 @@ export async function sweepCommand(args: string[], io: CommandIO): Promise<numbe
     );
   return EXIT_OK;
 }
+
+export const sweepCommand = defineCommand({
+  name: 'sweep',
+  summary: `  tenuis sweep CASE.json --param knudsen --from A --to B --points N [--log] --out DIR
+                                             run a case over a range of Knudsen numbers or pressures`,
+  usage: SWEEP_USAGE,
+  options: SWEEP_OPTIONS,
+  run: (parsed, { io, watchInterrupt }) => sweep(sweepOptionsOf(parsed), io, watchInterrupt),
+});

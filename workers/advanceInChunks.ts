@@ -1,6 +1,8 @@
 /**
  * Drives a simulation through its transient and sampling steps in chunks of about `targetChunkMs` of work, yielding
- * to the event loop between chunks so that Ctrl-C (SIGINT) and progress output are handled while it runs.
+ * to the event loop between chunks so that Ctrl-C (SIGINT) and progress output are handled while it runs. Used by the
+ * run pipeline (runCase.ts) for a replica run on the calling thread (the command line's single replica, which can
+ * keep checkpoints); environment-neutral, so it lives beside the worker code rather than in cli/.
  */
 import { advance, isFinished, nextChunk, type Simulation } from '../engine/run/simulation';
 
@@ -21,7 +23,9 @@ export interface ChunkOutcome {
   readonly wallSeconds: number;
 }
 
-const yieldToEventLoop = () => new Promise<void>((resolve) => setImmediate(resolve));
+// setImmediate where there is one (Node: no 1 ms timer clamp between chunks), a zero timeout elsewhere.
+const yieldToEventLoop = () =>
+  new Promise<void>((resolve) => (typeof setImmediate === 'function' ? setImmediate(resolve) : setTimeout(resolve, 0)));
 
 /** Advances `sim` through its transient and sampling steps (isFinished), or until shouldStop() says so. */
 export async function advanceInChunks(sim: Simulation, o: ChunkOptions = {}): Promise<ChunkOutcome> {
