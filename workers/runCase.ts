@@ -17,7 +17,7 @@ import { advanceInChunks } from './advanceInChunks';
 import type { Plan } from '../engine/plan/plan';
 import { createSimulation, isSampling, stepsRemaining, type Simulation } from '../engine/run/simulation';
 import { encodeCheckpoint } from '../engine/io/checkpoint';
-import { type SampleSet } from '../engine/results/sampleSet';
+import type { SampleSet } from '../engine/results/sampleSet';
 import { sampleSetOf } from '../engine/run/simulationSamples';
 import { summarizeSamples, type SimulationResult } from '../engine/results/summarize';
 import { estimateAt } from '../engine/results/targetQuantities';

@@ -19,7 +19,8 @@
 import { PRESETS, buildPreset, type Preset } from '../../engine/case/presets';
 import { parseCase, type Case, type CaseInput } from '../../engine/case/schema';
 import { SIDE_NAMES, type SideName } from '../../engine/case/caseConstants';
-import { gasModelOf, planFromInput } from '../../engine/plan/plan';
+import { planFromInput } from '../../engine/plan/plan';
+import { gasModelOf } from '../../engine/plan/referenceState';
 import { scalePressures } from '../../engine/case/sweep';
 import { modelFromSpecies, viscosityPaS, type MolecularModel } from '../../engine/gas/molecularModel';
 import { SPECIES_IDS, type SpeciesId } from '../../engine/gas/species';

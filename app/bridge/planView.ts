@@ -3,7 +3,8 @@
  * mark, particle count, memory, expected statistical error of the planned sampling and a run-time estimate.
  * Part of the lazily loaded set-up chunk (it calls the planner); components import its types only.
  */
-import { planFromInput, type ReferenceState } from '../../engine/plan/plan';
+import { planFromInput } from '../../engine/plan/plan';
+import type { ReferenceState } from '../../engine/plan/referenceState';
 import { SIDE_NAMES } from '../../engine/case/caseConstants';
 import { targetPathsOf } from '../../engine/results/targetQuantities';
 import {

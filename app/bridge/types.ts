@@ -11,12 +11,12 @@
  */
 import type { Preset, PresetName } from '../../engine/case/presets';
 import type { CaseInput, CaseParseResult, WallSpec } from '../../engine/case/schema';
-import { type SideName } from '../../engine/case/caseConstants';
+import type { SideName } from '../../engine/case/caseConstants';
 import type { SweepParameter, SweepSpacing } from '../../engine/case/sweep';
-import { type SweepTableOptions } from '../../engine/report/sweepTable';
-import { type SweepRow } from '../../engine/report/sweepRow';
-import { type SweepPointRun } from '../../engine/report/sweepRow';
-import { type SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import type { SweepTableOptions } from '../../engine/report/sweepTable';
+import type { SweepRow } from '../../engine/report/sweepRow';
+import type { SweepPointRun } from '../../engine/report/sweepRow';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
 import type { SpeciesData, SpeciesId } from '../../engine/gas/species';
 import type { ConversionContext, QuantityKind } from '../../engine/units/engineeringUnits';
 import type { ContinuumComparisonResult } from '../../engine/report/comparison';

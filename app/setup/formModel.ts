@@ -5,7 +5,7 @@
  * arrive as an argument (the lazily loaded set-up API).
  */
 import type { PresetParameter } from '../../engine/case/presets';
-import { type SideName } from '../../engine/case/caseConstants';
+import type { SideName } from '../../engine/case/caseConstants';
 import type { QuantityKind } from '../../engine/units/engineeringUnits';
 
 export interface ParamEntry {

@@ -9,9 +9,9 @@
  */
 import type { CaseDerivation, PlanView, RunProgressView, SweepRequest } from '../bridge/types';
 import type { FormState, ParamEntry, WallEdit, CaseSource, GasEdit, BlockTable } from '../setup/formModel';
-import { type SideName } from '../../engine/case/caseConstants';
-import { type SweepRow } from '../../engine/report/sweepRow';
-import { type SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import type { SideName } from '../../engine/case/caseConstants';
+import type { SweepRow } from '../../engine/report/sweepRow';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
 import type { SavedRunMeta } from '../saved/savedRun';
 import type { ExampleEntry } from '../io/examples';
 import type { SavedSweepMeta, SweepPlanOutline } from '../sweep/savedSweep';

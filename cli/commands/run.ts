@@ -15,7 +15,7 @@ import type { Plan } from '../../engine/plan/plan';
 import { targetPathsOf } from '../../engine/results/targetQuantities';
 import { writeBinaryAtomically } from '../writeResults';
 import { CliError, EXIT_OK, EXIT_INTERRUPTED, type UsageError } from '../errors';
-import { type Performance } from '../../engine/report/summaryJson';
+import type { Performance } from '../../engine/report/summaryJson';
 import { resultFiles } from '../../engine/report/resultFiles';
 import { loadCase, parseSeedOption } from '../readCase';
 import { checkOutputDir, writeResultsAtomically } from '../writeResults';

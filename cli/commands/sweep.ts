@@ -21,14 +21,14 @@ import {
 import { sweepRowOf } from '../../engine/report/sweepRow';
 import { sweepJson } from '../../engine/report/sweepTable';
 import { sweepCsv } from '../../engine/report/sweepTable';
-import { type SweepRow } from '../../engine/report/sweepRow';
-import { type PlannedSweepPoint } from '../../engine/plan/sweepPoints';
+import type { SweepRow } from '../../engine/report/sweepRow';
+import type { PlannedSweepPoint } from '../../engine/plan/sweepPoints';
 import { planSweepPoints } from '../../engine/plan/sweepPoints';
 import { caseValueOf } from '../../engine/plan/sweepPoints';
 import { parseQuantity } from '../../engine/units/engineeringUnits';
 import type { SampleSet } from '../../engine/results/sampleSet';
 import { summarizeSamples } from '../../engine/results/summarize';
-import { type Performance } from '../../engine/report/summaryJson';
+import type { Performance } from '../../engine/report/summaryJson';
 import { resultFiles } from '../../engine/report/resultFiles';
 import { continuumComparisonOf } from '../../engine/report/comparison';
 import { CliError, UsageError, EXIT_OK, EXIT_INTERRUPTED } from '../errors';

@@ -5,7 +5,6 @@
  */
 import type { Case, BoundarySpec } from '../case/schema';
 import type { SideName } from '../case/caseConstants';
-import { SIDE_NAMES } from '../case/caseConstants';
 import { parseCase } from '../case/schema';
 import {
   cellGeometryOf,
@@ -15,32 +14,9 @@ import {
   type CellGeometry,
 } from '../geometry/cellGeometry';
 import { surfacesOf, type SurfacePlan } from '../geometry/surfaces';
-import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
-import {
-  type MolecularModel,
-  modelFromSpecies,
-  viscosityPaS,
-  mostProbableSpeedMPerS,
-  viscosityMeanFreePathM,
-  equilibriumCollisionRatePerParticle,
-} from '../gas/molecularModel';
-
-/** Reference state reported with every result. meanFreePathM is the viscosity-based λ = (μ/p)·sqrt(πkT/(2m)). */
-export interface ReferenceState {
-  readonly pressurePa: number;
-  readonly temperatureK: number;
-  readonly numberDensityPerM3: number;
-  readonly massDensityKgPerM3: number;
-  readonly viscosityPaS: number;
-  readonly mostProbableSpeedMPerS: number;
-  readonly meanFreePathM: number;
-  /** Kn = λ / lengthScaleM. */
-  readonly knudsen: number;
-  /** δ = p L / (μ v0) = sqrt(π) / (2 Kn). */
-  readonly rarefaction: number;
-  readonly lengthScaleM: number;
-  readonly meanCollisionTimeS: number;
-}
+import { mostProbableSpeedMPerS } from '../gas/molecularModel';
+import { gasModelOf, referenceStateOf, type GasPlan, type ReferenceState } from './referenceState';
+import { densestState, fastestFlowSpeed, hottestTemperature } from './caseExtremes';
 
 export interface GridPlan {
   readonly cellsX: number;
@@ -58,12 +34,6 @@ export interface GridPlan {
   readonly axisymmetric: boolean;
   readonly cells: CellGeometry;
   readonly blocks: readonly BlockRectangle[];
-}
-
-export interface GasPlan {
-  readonly name: string;
-  readonly model: MolecularModel;
-  readonly rotationalCollisionNumber: number;
 }
 
 export interface AdvisorRatios {
@@ -113,86 +83,6 @@ export type PlanResult = { ok: true; plan: Plan } | { ok: false; errors: string[
 const BYTES_PER_PARTICLE = 2 * (6 * 8 + 4) + 3 * 4;
 const RAW_CELL_SUMS = 15;
 const FIELD_BATCH_CAPACITY = 32;
-
-export function gasModelOf(c: Case): GasPlan {
-  const g = c.gas;
-  if (g.custom) {
-    const hs = g.model === 'HS';
-    return {
-      name: g.custom.name,
-      rotationalCollisionNumber: g.rotationalCollisionNumber,
-      model: {
-        kind: g.model,
-        name: g.custom.name,
-        massKg: g.custom.massKg,
-        referenceDiameterM: g.custom.referenceDiameterM,
-        referenceTemperatureK: g.custom.referenceTemperatureK,
-        viscosityIndex: hs ? 0.5 : g.custom.viscosityIndex,
-        scatteringExponent: g.model === 'VSS' ? g.custom.scatteringExponent : 1,
-        rotationalDof: g.custom.rotationalDof,
-      },
-    };
-  }
-  const model = modelFromSpecies(g.species!, g.model);
-  return { name: model.name, model, rotationalCollisionNumber: g.rotationalCollisionNumber };
-}
-
-export function referenceStateOf(c: Case, model: MolecularModel): ReferenceState {
-  const p = c.initial.pressurePa;
-  const t = c.initial.temperatureK;
-  const n = p / (K_B * t);
-  const mu = viscosityPaS(model, t);
-  const v0 = mostProbableSpeedMPerS(model.massKg, t);
-  const lambda = viscosityMeanFreePathM(mu, p, t, model.massKg);
-  const length = c.domain.characteristicLengthM ?? c.domain.lengthYM;
-  return {
-    pressurePa: p,
-    temperatureK: t,
-    numberDensityPerM3: n,
-    massDensityKgPerM3: n * model.massKg,
-    viscosityPaS: mu,
-    mostProbableSpeedMPerS: v0,
-    meanFreePathM: lambda,
-    knudsen: lambda / length,
-    rarefaction: (p * length) / (mu * v0),
-    lengthScaleM: length,
-    meanCollisionTimeS: 1 / equilibriumCollisionRatePerParticle(model, n, t),
-  };
-}
-
-/** Every wall and reservoir state of the case: sides and block faces. */
-function boundaryStates(c: Case): { temperatureK: number; velocityMPerS: readonly number[] }[] {
-  const out: { temperatureK: number; velocityMPerS: readonly number[] }[] = [];
-  for (const side of SIDE_NAMES) {
-    const b = c.boundaries[side];
-    if (b.type === 'wall' || b.type === 'reservoir') out.push(b);
-  }
-  for (const k of c.blocks)
-    for (const w of [k.wall, k.faces?.left, k.faces?.right, k.faces?.bottom, k.faces?.top]) if (w) out.push(w);
-  return out;
-}
-
-function fastestFlowSpeed(c: Case): number {
-  let u = Math.hypot(...c.initial.velocityMPerS);
-  for (const b of boundaryStates(c)) u = Math.max(u, Math.hypot(...b.velocityMPerS));
-  return u;
-}
-
-function hottestTemperature(c: Case): number {
-  let t = c.initial.temperatureK;
-  for (const b of boundaryStates(c)) t = Math.max(t, b.temperatureK);
-  return t;
-}
-
-/** The densest state the gas is held at (initial fill or a reservoir): it sets the cell size and time step. */
-function densestState(c: Case): { pressurePa: number; temperatureK: number } {
-  let best = { pressurePa: c.initial.pressurePa, temperatureK: c.initial.temperatureK };
-  for (const side of SIDE_NAMES) {
-    const b = c.boundaries[side];
-    if (b.type === 'reservoir' && b.pressurePa / b.temperatureK > best.pressurePa / best.temperatureK) best = b;
-  }
-  return best;
-}
 
 /** A direction is resolved unless it has one cell between periodic ends (then it is homogeneous, e.g. 1D Couette). */
 function resolved(cells: number, a: BoundarySpec, b: BoundarySpec): boolean {

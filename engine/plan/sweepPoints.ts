@@ -5,7 +5,9 @@
  */
 import type { Case } from '../case/schema';
 import { SWEEP_PARAMETER_UNITS, scalePressures, type SweepParameter } from '../case/sweep';
-import { gasModelOf, plan, referenceStateOf, type Plan } from './plan';
+import { plan, type Plan } from './plan';
+import { referenceStateOf } from './referenceState';
+import { gasModelOf } from './referenceState';
 
 /** The case's own value of the swept parameter: its reference Knudsen number (as plan() gives it) or pressure (Pa). */
 export function caseValueOf(c: Case, parameter: SweepParameter): number {

@@ -4,7 +4,7 @@
  * line writes it to disk and the browser offers it as a download from the same code. With a continuum comparison
  * (comparison.ts) it gains the continuum sections of continuumJson.ts.
  */
-import type { ReferenceState } from '../plan/plan';
+import type { ReferenceState } from '../plan/referenceState';
 import type { SimulationResult } from '../results/summarize';
 import type { IntegralEstimate } from '../stats/estimate';
 import { WALL_QUANTITIES, WALL_QUANTITY_UNITS, type WallQuantityName } from '../results/wallQuantities';

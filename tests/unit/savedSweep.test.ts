@@ -18,7 +18,7 @@ import {
 } from '../../app/sweep/savedSweep';
 import { defaultSweepName, newSweepRecord, pointEndedPatch, shownSweepOf } from '../../app/sweep/sweepRecord';
 import type { SweepFormState } from '../../app/sweep/sweepForm';
-import { type SweepRow } from '../../engine/report/sweepRow';
+import type { SweepRow } from '../../engine/report/sweepRow';
 
 /** A database as the upgrade sees it: named stores, each with its records, and a log of what was created. */
 function fakeDb(

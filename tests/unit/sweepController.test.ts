@@ -3,8 +3,8 @@
 import { describe, expect, it } from 'vitest';
 import { runSweepPoints, type SweepPointInput, type SweepRunDeps } from '../../app/sweep/sweepController';
 import type { FinishedRun, RunCallbacks, RunEnd, RunHandle, RunRequest } from '../../app/bridge/types';
-import { type SweepRow } from '../../engine/report/sweepRow';
-import { type SweepPointRun } from '../../engine/report/sweepRow';
+import type { SweepRow } from '../../engine/report/sweepRow';
+import type { SweepPointRun } from '../../engine/report/sweepRow';
 
 /** A run that ends when told to: ok with a result that names its case, or refused. */
 interface FakeRun {

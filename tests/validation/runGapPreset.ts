@@ -3,7 +3,7 @@ import { buildPreset } from '../../engine/case/presets';
 import type { Plan } from '../../engine/plan/plan';
 import type { Simulation } from '../../engine/run/simulation';
 import { runToEnd } from '../support/planOrThrow';
-import { type SimulationResult, type FieldTable } from '../../engine/results/summarize';
+import type { SimulationResult, FieldTable } from '../../engine/results/summarize';
 import { summarize, averageOverCells } from '../../engine/run/simulationSamples';
 
 export interface GapRun {
