@@ -1,10 +1,12 @@
 /**
  * Field tables: sampled cell and wall-bin sums reduced to fields per group of cells (each cell, each row, a region)
- * and per wall bin, each value with its 95 % half-width from the complete batches. summarizeSamples builds its
+ * and per wall bin, each value with its 95 % half-width from the complete batches (serial correlation of the batch
+ * means pooled over the table's rows: stats/pooledBatchMeans.ts). summarizeSamples builds its
  * cells, profile and wall-bin tables here; averageSamplesOverCells gives one region's fields on their own.
  */
 import { totalOf, batchView, batchSteps, storedSteps, type BatchSums } from '../stats/doublingBatches';
-import { tQuantile975 } from '../stats/studentT';
+import { pooledBatchHalfWidths } from '../stats/pooledBatchMeans';
+import type { BatchList } from '../stats/batchList';
 import type { SampleSet } from './sampleSet';
 import { CELL_FIELDS, CELL_FIELD_COUNT, deriveCellFields, type CellFieldConstants } from './cellFields';
 import {
@@ -63,7 +65,7 @@ export function groupedFields(set: SampleSet, groupOf: Int32Array, groups: numbe
   const gt = group(total);
   for (let g = 0; g < groups; g++)
     deriveCellFields(gt, g * RAW_CELL_SUMS, totalSteps, volumes[g], k, mean, g * CELL_FIELD_COUNT);
-  const ci95 = batchHalfWidths(store, groups * CELL_FIELD_COUNT, (b, out) => {
+  const ci95 = batchHalfWidths(store, groups, CELL_FIELD_COUNT, (b, out) => {
     const gb = group(batchView(store, b));
     for (let g = 0; g < groups; g++)
       deriveCellFields(gb, g * RAW_CELL_SUMS, batchSteps(store), volumes[g], k, out, g * CELL_FIELD_COUNT);
@@ -79,35 +81,15 @@ export function groupedFields(set: SampleSet, groupOf: Int32Array, groups: numbe
   };
 }
 
-/** 95 % half-widths over the store's complete batches of values produced by `derive` for each batch. */
+/** 95 % half-widths of `rows` × `quantities` values produced by `derive` for each complete batch of the store. */
 function batchHalfWidths(
   store: BatchSums,
-  width: number,
+  rows: number,
+  quantities: number,
   derive: (batch: number, out: Float64Array) => void,
 ): Float64Array {
-  const nb = store.batches;
-  const ci = new Float64Array(width).fill(NaN);
-  if (nb < 2) return ci;
-  const mean = new Float64Array(width);
-  const m2 = new Float64Array(width);
-  const values = new Float64Array(width);
-  const count = new Float64Array(width);
-  for (let b = 0; b < nb; b++) {
-    derive(b, values);
-    for (let q = 0; q < width; q++) {
-      const v = values[q];
-      if (!Number.isFinite(v)) continue;
-      const c = ++count[q];
-      const d = v - mean[q];
-      mean[q] += d / c;
-      m2[q] += d * (v - mean[q]);
-    }
-  }
-  for (let q = 0; q < width; q++) {
-    const c = count[q];
-    if (c >= 2) ci[q] = tQuantile975(c - 1) * Math.sqrt(m2[q] / (c - 1) / c);
-  }
-  return ci;
+  const segments = 'segments' in store ? (store as BatchList).segments : [store.batches];
+  return pooledBatchHalfWidths(store.batches, rows, quantities, segments, derive).ci95;
 }
 
 export function wallBinTable(set: SampleSet, name: string): { position: Float64Array; table: FieldTable } {
@@ -134,7 +116,7 @@ export function wallBinTable(set: SampleSet, name: string): { position: Float64A
   const totalSteps = storedSteps(store) + set.pendingSteps;
   const mean = new Float64Array(bins * nq);
   if (totalSteps > 0) fill(total, totalSteps, mean);
-  const ci95 = batchHalfWidths(store, bins * nq, (b, out) => fill(batchView(store, b), batchSteps(store), out));
+  const ci95 = batchHalfWidths(store, bins, nq, (b, out) => fill(batchView(store, b), batchSteps(store), out));
   const position = Float64Array.from({ length: bins }, (_, b) => st.sideTable[row + SIDE_FROM] + (b + 0.5) * binLength);
   return {
     position,

@@ -86,6 +86,23 @@ function blockingLevels(series: ArrayLike<number>): BlockingLevel[] {
 }
 
 /**
+ * The first level k whose σ_k is not significantly above any deeper level j ≤ deepest: σ_k ≤ σ_j + 2 δσ_j, with
+ * δσ_j = σ_j/sqrt(2(n_j − 1)) the standard error of the error (the plateau criterion of Flyvbjerg & Petersen 1989,
+ * applied to a falling curve). For a positively correlated or uncorrelated series σ_k rises or stays, so this is
+ * level 0 (or, by chance, a slightly deeper level, which only costs degrees of freedom).
+ */
+function firstLevelNotAboveDeeper(levels: readonly BlockingLevel[], deepest: number): number {
+  let bound = Infinity;
+  const boundAbove = new Float64Array(deepest + 1).fill(Infinity);
+  for (let j = deepest; j >= 1; j--) {
+    bound = Math.min(bound, levels[j].standardError + 2 * levels[j].standardErrorUncertainty);
+    boundAbove[j - 1] = bound;
+  }
+  for (let k = 0; k < deepest; k++) if (levels[k].standardError <= boundAbove[k]) return k;
+  return deepest;
+}
+
+/**
  * Mean of a correlated series with its standard error and 95 % interval, by blocking (Flyvbjerg & Petersen 1989):
  * the series is halved repeatedly by averaging neighbouring pairs; at level k, σ_k = sqrt(var_k/(n_k−1)) estimates
  * SE(mean) and rises towards a plateau once blocks are longer than the correlation time.
@@ -129,6 +146,8 @@ export function blockingAnalysis(series: ArrayLike<number>): BlockingResult {
       break;
     }
   }
+  // Anti-correlation: σ_k falls with k, and the rule above (τ̂ < 1/2) would stop at level 0, whose σ is too large.
+  chosen = Math.max(chosen, firstLevelNotAboveDeeper(levels, deepest));
 
   const level = levels[chosen];
   const correlationTime = tauAt(chosen);
