@@ -133,6 +133,17 @@ function parseParameter(preset: Preset, p: PresetParameter, text: string): numbe
 }
 
 /**
+ * Parses one parameter's text as buildPreset does, without building: the message of a value that is wrong by itself
+ * (unknown unit, below its minimum …), apart from the messages about parameters given together.
+ */
+export function checkPresetParameter(name: string, key: string, text: string): void {
+  const preset = presetOrThrow(name);
+  const p = preset.parameters.find((q) => q.name === key);
+  if (!p) throw new Error(`preset ${preset.name} has no parameter "${key}"`);
+  parseParameter(preset, p, text);
+}
+
+/**
  * Builds a preset's case from text overrides such as { gap: '2mm', temperature: '25C', knudsen: '0.5' }.
  * Throws an Error naming the valid presets, parameters, units or choices when something is not understood.
  */
