@@ -46,7 +46,7 @@ function derivedText(mode: GasStateMode, s: DerivedGasState, params: ParamEntrie
       ? `gives upstream ${up}, downstream ${down} (mean ${pressureText(s.pressurePa, 'meanPressure', params)})`
       : `gives the pressure ${pressureText(s.pressurePa, 'pressure', params)}`;
   if (mode === 'meanPressure') return `gives ${kn} at the mean pressure; upstream ${up}, downstream ${down}`;
-  return `gives ${kn} at the mean pressure ${pressureText(s.pressurePa, 'meanPressure', params)}, ratio ${sig(ratio, 4)}`;
+  return `gives ${kn} at the mean pressure ${pressureText(s.pressurePa, 'upstreamPressure', params)}, ratio ${sig(ratio, 4)}`;
 }
 
 function GasStateFields({

@@ -22,7 +22,7 @@ const caseOf = (store: Store) => store.getState().derived!.caseInput as CaseInpu
 /** What the radio does (GeometryForm.tsx): empty the other way's entries, then fill the chosen way's. */
 function choose(store: Store, mode: GasStateMode): void {
   const st = store.getState();
-  const preset = api.PRESETS[st.presetName];
+  const preset = (api.PRESETS as Readonly<Record<string, (typeof api.PRESETS)['tube']>>)[st.presetName];
   const names = new Set(preset.parameters.map((p) => p.name));
   const texts = Object.entries(
     gasStateSwitch(mode, gasStateModes(preset.parameters), st.params, st.derived!.gasState, api),
