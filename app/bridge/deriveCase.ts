@@ -5,7 +5,7 @@
  * The preset builds the case from its parameters; the form's edits are then applied on top of it: per wall model,
  * accommodation, temperature and speed; a custom gas; the block table (which replaces the preset's blocks).
  *
- * A custom gas keeps the preset's Knudsen number: the preset is built with its table gas (VHS), and every pressure
+ * A custom gas keeps the preset's Knudsen number when the form gives one (the pressures given stay otherwise): the preset is built with its table gas (VHS), and every pressure
  * (initial, reservoirs, flowReport's) is multiplied by p_custom/p_table, where p = μ(T)·sqrt(πkT/(2m))/(Kn·L) is
  * the pressure at which the viscosity-based mean free path gives that Knudsen number at the initial temperature T.
  * A force-driven preset whose acceleration is left to its default gets it scaled by m_table/m_custom, since that
@@ -16,7 +16,13 @@
  * rotationalCollisionNumber), `block:ROW:FIELD` (a row of the block table; FIELD xMinM … temperatureK, model, name,
  * or `other`); messages that belong to no field of the form (e.g. from JSON typed by the user) go to caseErrors.
  */
-import { PRESETS, buildPreset, type Preset } from '../../engine/case/presets';
+import {
+  PRESETS,
+  buildPreset,
+  checkPresetParameter,
+  gasStateOfPresetCase,
+  type Preset,
+} from '../../engine/case/presets';
 import { parseCase, type Case, type CaseInput } from '../../engine/case/schema';
 import { SIDE_NAMES, type SideName } from '../../engine/case/caseConstants';
 import { planFromInput } from '../../engine/plan/plan';
@@ -32,7 +38,9 @@ import {
   toSI,
   type BlockEdit,
   type CustomGasEdit,
+  type DerivedGasState,
   type FormState,
+  gasStateModeOf,
   type ParamEntry,
   type UnitApi,
 } from '../setup/formModel';
@@ -46,6 +54,11 @@ export interface CaseDerivation {
   readonly caseText: string;
   readonly fieldErrors: Readonly<Record<string, string>>;
   readonly caseErrors: readonly string[];
+  /**
+   * The case's gas state both ways — Knudsen number and pressures — for the form to show the one not given beside
+   * the one given: the planned reference state (custom gas included) when the case plans, else the preset's case.
+   */
+  readonly gasState: DerivedGasState | null;
 }
 
 const UNIT_API: UnitApi = { convertFromSI, unitsOf, AVOGADRO_PER_MOL };
@@ -90,7 +103,8 @@ function buildFromForm(form: FormState, fieldErrors: Record<string, string>, cas
     if (!e || e.text.trim() === '') continue;
     const text = overrideText(e);
     try {
-      buildPreset(preset.name, { [p.name]: text });
+      // The value alone: whether the parameters given go together is the whole build's to say (below).
+      checkPresetParameter(preset.name, p.name, text);
       overrides[p.name] = text;
     } catch (err) {
       fieldErrors[`param:${p.name}`] = fieldMessage((err as Error).message);
@@ -215,7 +229,8 @@ function applyGas(c: CaseInput, form: FormState, preset: Preset, fieldErrors: Re
     if (c.description) c.description = c.description.replace(word, `${name} (${model})`);
   }
   const mine = customModel(c.gas);
-  if (!mine || !table) return;
+  // Pressures given stay as given: the custom gas then changes the Knudsen number instead.
+  if (!mine || !table || gasStateModeOf(form.params) !== 'knudsen') return;
   const reference = modelFromSpecies(table, 'VHS');
   const t = c.initial.temperatureK;
   const factor =
@@ -382,19 +397,44 @@ export function deriveCase(form: FormState): CaseDerivation {
         caseText,
         fieldErrors,
         caseErrors: [`the case is not valid JSON: ${(err as Error).message}`],
+        gasState: null,
       };
     }
   }
-  if (!draft) return { caseInput: null, draft: null, caseText, fieldErrors, caseErrors };
+  if (!draft) return { caseInput: null, draft: null, caseText, fieldErrors, caseErrors, gasState: null };
   const placement: Placement = { form, blockRows, fieldErrors, caseErrors };
   const parsed = parseCase(draft);
+  let gasState: DerivedGasState | null = null;
   if (!parsed.ok) for (const e of parsed.errors) placeMessage(e, placement);
   else {
     const planned = planFromInput(draft);
     if (!planned.ok) for (const e of planned.errors) placeMessage(e, placement);
+    else gasState = gasStateOfPlan(planned.plan.reference, draft);
   }
+  if (!gasState && form.source.kind === 'form' && form.gas?.source !== 'custom') gasState = gasStateOf(draft);
   const valid = Object.keys(fieldErrors).length === 0 && caseErrors.length === 0;
-  return { caseInput: valid ? draft : null, draft, caseText, fieldErrors, caseErrors };
+  return { caseInput: valid ? draft : null, draft, caseText, fieldErrors, caseErrors, gasState };
+}
+
+/** Knudsen number and pressure of the planned reference state (the initial state), the vessels' pressures beside. */
+function gasStateOfPlan(ref: { knudsen: number; pressurePa: number }, c: CaseInput): DerivedGasState {
+  const { left, right } = c.boundaries;
+  return left.type === 'reservoir' && right.type === 'reservoir'
+    ? {
+        knudsen: ref.knudsen,
+        pressurePa: ref.pressurePa,
+        upstreamPressurePa: left.pressurePa,
+        downstreamPressurePa: right.pressurePa,
+      }
+    : { knudsen: ref.knudsen, pressurePa: ref.pressurePa };
+}
+
+function gasStateOf(c: CaseInput): DerivedGasState | null {
+  try {
+    return gasStateOfPresetCase(c);
+  } catch {
+    return null; // a draft too broken to say (unknown gas …): its messages are shown already
+  }
 }
 
 /** Checks a case file's text without changing anything: the parsed case, or every reason it was refused. */

@@ -1,4 +1,7 @@
-/** One preset parameter: a number with a unit selector, a whole number, or a choice; its message shown beneath. */
+/**
+ * One preset parameter: a number with a unit selector, a whole number, or a choice; its message shown beneath. The
+ * label is in words ("Upstream pressure"), the case-file name beside it in small type for people who edit the JSON.
+ */
 import type { PresetParameter } from '../../engine/case/presets';
 import { setupApi } from '../bridge/loadEngine';
 import { unitChoices } from '../setup/formModel';
@@ -20,7 +23,8 @@ export function ParameterField({ p }: { p: PresetParameter }) {
   return (
     <div className={`field${error ? ' field-invalid' : ''}`}>
       <label htmlFor={id} title={p.description}>
-        {p.name}
+        {p.label ?? p.name}
+        {p.label && <code className="field-key">{p.name}</code>}
         <span className="field-description">{p.description}</span>
       </label>
       <div className="field-input">

@@ -19,8 +19,10 @@ function ReferenceTable({ v }: { v: PlanView }) {
     ['length scale L', `${sig(r.lengthScaleM / len.factor)} ${len.unit}`],
     ['Knudsen number Kn = λ/L', sig(r.knudsen)],
     ['rarefaction parameter δ', sig(r.rarefaction)],
-    ['Mach number (fastest wall)', sig(v.machNumber, 3)],
-    ['Reynolds number (fastest wall, L)', sig(v.reynoldsNumber, 3)],
+    // The flow's speed: the fastest wall's, or the estimated mean speed of a driven flow (planView.ts says which).
+    ['flow speed', `${sig(v.flowSpeedMPerS, 3)} m/s — ${v.flowSpeedSource}`],
+    ['Mach number (flow speed)', sig(v.machNumber, 3)],
+    ['Reynolds number (flow speed, L)', sig(v.reynoldsNumber, 3)],
   ];
   return (
     <table className="kv" aria-label="reference state">

@@ -201,3 +201,78 @@ export function convertEntry(entry: ParamEntry, toUnit: string, api: UnitApi): P
   if (v === null || !Number.isFinite(v) || !entry.unit) return { text: entry.text, unit: toUnit };
   return entryOfSI(toSI(v, entry.unit, api), toUnit, api);
 }
+
+/**
+ * How the form gives a preset's gas state (engine/case/pressurePresetParameters.ts): by the Knudsen number, by the
+ * one gas pressure (gap presets), by the mean vessel pressure and the ratio, or by the two vessel pressures. Not
+ * stored: read from which of the entries hold text, so a saved form or an example's parameters carry it as they are.
+ */
+export type GasStateMode = 'knudsen' | 'pressure' | 'meanPressure' | 'vesselPressures';
+
+/** The parameters each mode gives (the others of its preset must be left empty). */
+export const GAS_STATE_PARAMETERS: Readonly<Record<GasStateMode, readonly string[]>> = {
+  knudsen: ['knudsen', 'pressureRatio'],
+  pressure: ['pressure'],
+  meanPressure: ['meanPressure', 'pressureRatio'],
+  vesselPressures: ['upstreamPressure', 'downstreamPressure'],
+};
+
+/** The modes a preset offers, by its parameters: none, knudsen/pressure (gaps), or the three between vessels. */
+export function gasStateModes(parameters: readonly { readonly name: string }[]): readonly GasStateMode[] {
+  const has = (n: string) => parameters.some((p) => p.name === n);
+  if (has('upstreamPressure')) return ['knudsen', 'meanPressure', 'vesselPressures'];
+  if (has('pressure')) return ['knudsen', 'pressure'];
+  return [];
+}
+
+const filled = (params: ParamEntries, name: string) => (params[name]?.text.trim() ?? '') !== '';
+
+/** The mode the entries are in: the pressures' when any of them holds text and the Knudsen number does not. */
+export function gasStateModeOf(params: ParamEntries): GasStateMode {
+  if (filled(params, 'knudsen')) return 'knudsen';
+  if (filled(params, 'upstreamPressure') || filled(params, 'downstreamPressure')) return 'vesselPressures';
+  if (filled(params, 'meanPressure')) return 'meanPressure';
+  if (filled(params, 'pressure')) return 'pressure';
+  return 'knudsen';
+}
+
+/** The case's gas state both ways, as the set-up shows it derived (app/bridge/deriveCase.ts). */
+export interface DerivedGasState {
+  readonly knudsen: number;
+  readonly pressurePa: number;
+  readonly upstreamPressurePa?: number;
+  readonly downstreamPressurePa?: number;
+}
+
+/**
+ * The texts that switch the entries to `mode`, carrying the current state over: the new mode's entries get the
+ * derived values in their own units, every other gas-state entry of the preset is emptied.
+ */
+export function gasStateSwitch(
+  mode: GasStateMode,
+  modes: readonly GasStateMode[],
+  params: ParamEntries,
+  state: DerivedGasState | null,
+  api: UnitApi,
+): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const m of modes) for (const name of GAS_STATE_PARAMETERS[m]) out[name] = '';
+  const inUnit = (name: string, pa: number | undefined) =>
+    pa === undefined ? '' : numberText(fromSI(pa, params[name]?.unit || 'Pa', api));
+  const ratio =
+    state?.upstreamPressurePa !== undefined && state.downstreamPressurePa
+      ? numberText(state.upstreamPressurePa / state.downstreamPressurePa)
+      : (params.pressureRatio?.text ?? '');
+  if (mode === 'knudsen') {
+    out.knudsen = state ? numberText(state.knudsen) : '';
+    if (modes.includes('meanPressure')) out.pressureRatio = ratio;
+  } else if (mode === 'pressure') out.pressure = inUnit('pressure', state?.pressurePa);
+  else if (mode === 'meanPressure') {
+    out.meanPressure = inUnit('meanPressure', state?.pressurePa);
+    out.pressureRatio = ratio;
+  } else {
+    out.upstreamPressure = inUnit('upstreamPressure', state?.upstreamPressurePa);
+    out.downstreamPressure = inUnit('downstreamPressure', state?.downstreamPressurePa);
+  }
+  return out;
+}

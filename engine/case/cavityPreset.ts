@@ -11,7 +11,7 @@
 import type { CaseInput } from './schema';
 import { CASE_SCHEMA_VERSION } from './caseConstants';
 import type { SpeciesId } from '../gas/species';
-import { modelFromSpecies, type CollisionModelKind } from '../gas/molecularModel';
+import type { CollisionModelKind } from '../gas/molecularModel';
 import { formatQuantity } from '../units/engineeringUnits';
 import {
   type Preset,
@@ -19,9 +19,10 @@ import {
   gasParameter,
   modelParameter,
   knudsenParameter,
-  pressureForKnudsenPa,
   presetSampling,
 } from './presetParameters';
+import { gapValues } from './gapCase';
+import { knudsenText, pressureParameter } from './pressurePresetParameters';
 
 export const CAVITY_WALL_MODELS = ['diffuse', 'maxwell'] as const;
 
@@ -54,8 +55,10 @@ export const cavity: Preset = {
       description:
         'Knudsen number λ/L on the side L, λ = (μ/p)·sqrt(πkT/(2m)) the viscosity-based mean free path; sets the pressure',
     },
+    pressureParameter,
     {
       name: 'side',
+      label: 'Side of the square',
       kind: 'length',
       unitShown: 'mm',
       default: 1e-3,
@@ -65,6 +68,7 @@ export const cavity: Preset = {
     },
     {
       name: 'lidSpeed',
+      label: 'Lid speed',
       kind: 'speed',
       unitShown: 'm/s',
       default: 100,
@@ -74,6 +78,7 @@ export const cavity: Preset = {
     },
     {
       name: 'temperature',
+      label: 'Temperature',
       kind: 'temperature',
       unitShown: 'K',
       default: 300,
@@ -83,6 +88,7 @@ export const cavity: Preset = {
     },
     {
       name: 'wallModel',
+      label: 'Wall model',
       kind: 'choice',
       unitShown: '',
       default: 'diffuse',
@@ -91,6 +97,7 @@ export const cavity: Preset = {
     },
     {
       name: 'accommodation',
+      label: 'Wall accommodation',
       kind: 'dimensionless',
       unitShown: '',
       default: 1,
@@ -100,6 +107,7 @@ export const cavity: Preset = {
     },
     {
       name: 'cells',
+      label: 'Cells along a side',
       kind: 'count',
       unitShown: '',
       default: null,
@@ -108,6 +116,7 @@ export const cavity: Preset = {
     },
     {
       name: 'particlesPerCell',
+      label: 'Particles per cell',
       kind: 'count',
       unitShown: '',
       default: null,
@@ -116,6 +125,7 @@ export const cavity: Preset = {
     },
     {
       name: 'transientSteps',
+      label: 'Steps before sampling',
       kind: 'count',
       unitShown: '',
       default: null,
@@ -124,19 +134,28 @@ export const cavity: Preset = {
     },
     {
       name: 'sampleSteps',
+      label: 'Sampled steps',
       kind: 'count',
       unitShown: '',
       default: null,
       min: 1,
       description: 'sampled steps; default chosen by the planner',
     },
-    { name: 'seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
+    {
+      name: 'seed',
+      label: 'Random seed',
+      kind: 'count',
+      unitShown: '',
+      default: 1,
+      min: 0,
+      description: 'random seed',
+    },
   ],
-  build(v) {
-    const side = v.side as number;
-    const t = v.temperature as number;
+  build(input, given) {
+    const side = input.side as number;
+    const t = input.temperature as number;
+    const { values: v, pressureNote } = gapValues(input, given, t, side);
     const u = v.lidSpeed as number;
-    const model = modelFromSpecies(v.gas as SpeciesId, v.model as CollisionModelKind);
     const numerics: NonNullable<CaseInput['numerics']> = {};
     if (v.cells !== undefined) {
       numerics.cellsX = v.cells as number;
@@ -146,10 +165,10 @@ export const cavity: Preset = {
     const sampling = presetSampling(v);
     return {
       schemaVersion: CASE_SCHEMA_VERSION,
-      name: `cavity ${v.gas} Kn ${v.knudsen}`,
-      description: `Lid-driven square cavity of ${v.gas} (${v.model}), Kn = ${v.knudsen} on the side ${formatQuantity(side, 'mm')}, lid (top wall) at ${u} m/s along +x, walls at ${t} K (${v.wallModel}${v.wallModel === 'maxwell' ? `, accommodation ${v.accommodation}` : ''})`,
+      name: `cavity ${v.gas} Kn ${knudsenText(v)}`,
+      description: `Lid-driven square cavity of ${v.gas} (${v.model}), Kn = ${knudsenText(v)}${pressureNote} on the side ${formatQuantity(side, 'mm')}, lid (top wall) at ${u} m/s along +x, walls at ${t} K (${v.wallModel}${v.wallModel === 'maxwell' ? `, accommodation ${v.accommodation}` : ''})`,
       gas: { species: v.gas as SpeciesId, model: v.model as CollisionModelKind },
-      initial: { pressurePa: pressureForKnudsenPa(model, t, v.knudsen as number, side), temperatureK: t },
+      initial: { pressurePa: v.pressure as number, temperatureK: t },
       domain: { lengthXM: side, lengthYM: side, characteristicLengthM: side },
       boundaries: {
         left: wallOf(v, 0),

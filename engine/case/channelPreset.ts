@@ -11,6 +11,7 @@ import {
   temperatureParameter,
 } from './ductPresetParts';
 import { ductBetweenVessels } from './ductBetweenVessels';
+import { vesselPressureParameters } from './pressurePresetParameters';
 
 export const channel: Preset = {
   name: 'channel',
@@ -22,6 +23,7 @@ export const channel: Preset = {
     { ...knudsenParameter, default: 0.5, description: 'Knudsen number λ/H at the mean of the two vessel pressures' },
     {
       name: 'gap',
+      label: 'Channel gap',
       kind: 'length',
       unitShown: 'µm',
       default: 1e-6,
@@ -30,28 +32,34 @@ export const channel: Preset = {
       description: 'channel gap H',
     },
     pressureRatioParameter,
-    lengthParameter('lengthToGap', 'gap', 5, 'channel length L'),
+    ...vesselPressureParameters,
+    lengthParameter('lengthToGap', 'gap', 5, 'channel length L', 'Channel length / gap'),
     lengthParameter(
       'vesselLengthToGap',
       'gap',
       2,
       'length of each vessel region; 0 puts the vessels right at the channel ends',
+      'Vessel length / gap',
     ),
-    lengthParameter('vesselHeightToGap', 'gap', 3, 'height of the vessel regions'),
+    lengthParameter('vesselHeightToGap', 'gap', 3, 'height of the vessel regions', 'Vessel height / gap'),
     temperatureParameter,
     accommodationParameter,
     ...ductNumerics,
   ],
-  build(v) {
+  build(v, given) {
     const h = v.gap as number;
     const vessel = (v.vesselLengthToGap as number) * h;
-    return ductBetweenVessels(v, {
-      planar: true,
-      size: h,
-      length: (v.lengthToGap as number) * h,
-      vessel,
-      vesselSize: vessel > 0 ? Math.max(1, v.vesselHeightToGap as number) * h : h,
-      blocks: 'channel',
-    });
+    return ductBetweenVessels(
+      v,
+      {
+        planar: true,
+        size: h,
+        length: (v.lengthToGap as number) * h,
+        vessel,
+        vesselSize: vessel > 0 ? Math.max(1, v.vesselHeightToGap as number) * h : h,
+        blocks: 'channel',
+      },
+      given,
+    );
   },
 };

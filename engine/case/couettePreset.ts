@@ -11,7 +11,8 @@ import {
   gapParameter,
   numericsParameters,
 } from './presetParameters';
-import { gapCase } from './gapCase';
+import { gapCase, gapValues } from './gapCase';
+import { knudsenText, pressureParameter } from './pressurePresetParameters';
 
 export const couette: Preset = {
   name: 'couette',
@@ -21,8 +22,10 @@ export const couette: Preset = {
     modelParameter,
     knudsenParameter,
     gapParameter,
+    pressureParameter,
     {
       name: 'temperature',
+      label: 'Temperature',
       kind: 'temperature',
       unitShown: 'K',
       default: 273,
@@ -32,6 +35,7 @@ export const couette: Preset = {
     },
     {
       name: 'wallSpeed',
+      label: 'Relative wall speed',
       kind: 'speed',
       unitShown: 'm/s',
       default: 100,
@@ -39,12 +43,13 @@ export const couette: Preset = {
     },
     ...numericsParameters,
   ],
-  build(v) {
-    const t = v.temperature as number;
+  build(input, given) {
+    const t = input.temperature as number;
+    const { values: v, pressureNote } = gapValues(input, given, t, input.gap as number);
     const u = v.wallSpeed as number;
     return gapCase({
-      name: `couette ${v.gas} ${v.model} Kn ${v.knudsen}`,
-      description: `Planar Couette flow of ${v.gas} (${v.model}), Kn = ${v.knudsen}, gap ${formatQuantity(v.gap as number, 'mm')}, ${t} K, walls ±${u / 2} m/s`,
+      name: `couette ${v.gas} ${v.model} Kn ${knudsenText(v)}`,
+      description: `Planar Couette flow of ${v.gas} (${v.model}), Kn = ${knudsenText(v)}${pressureNote}, gap ${formatQuantity(v.gap as number, 'mm')}, ${t} K, walls ±${u / 2} m/s`,
       values: v,
       gasTemperatureK: t,
       bottom: { temperatureK: t, velocityXMPerS: -u / 2 },

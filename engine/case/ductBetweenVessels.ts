@@ -1,22 +1,21 @@
 /**
  * The geometry the channel, tube, slit and orifice presets share: a duct (or a plate's opening) between two vessel
  * regions whose far ends are reservoirs at the upstream and downstream pressures, with the flow sections and the
- * flow report that the duct's results are read from (names in ductPresets.ts).
+ * flow report that the duct's results are read from (names in ductPresets.ts). The vessel pressures come from the
+ * Knudsen number or are given (pressurePresetParameters.ts).
  */
 import type { CaseInput } from './schema';
 import type { SpeciesId } from '../gas/species';
 import { modelFromSpecies, type CollisionModelKind } from '../gas/molecularModel';
 import { formatQuantity } from '../units/engineeringUnits';
-import { type PresetValues, pressureForKnudsenPa } from './presetParameters';
+import type { PresetValues } from './presetParameters';
+import { type KnudsenScale, resolveVesselPressures } from './pressurePresetParameters';
 import { ductCommon, wallOf } from './ductPresetParts';
 
-/** Upstream and downstream pressures whose mean gives the Knudsen number asked for on `sizeM`. */
-function vesselPressures(v: PresetValues, sizeM: number): { up: number; down: number; mean: number } {
+/** The scale the Knudsen number is formed on: the preset's gas and temperature, and the duct's size. */
+function scaleOf(v: PresetValues, sizeM: number): KnudsenScale {
   const model = modelFromSpecies(v.gas as SpeciesId, v.model as CollisionModelKind);
-  const mean = pressureForKnudsenPa(model, v.temperature as number, v.knudsen as number, sizeM);
-  const ratio = v.pressureRatio as number;
-  const down = (2 * mean) / (1 + ratio);
-  return { up: ratio * down, down, mean };
+  return { model, temperatureK: v.temperature as number, lengthM: sizeM };
 }
 
 function reservoirs(v: PresetValues, p: { up: number; down: number }) {
@@ -41,8 +40,13 @@ export function ductBetweenVessels(
     vesselSize: number;
     blocks: 'channel' | 'tube' | 'slit' | 'orifice';
   },
+  given?: ReadonlySet<string>,
 ): CaseInput {
-  const p = vesselPressures(v, o.size);
+  const state = resolveVesselPressures(v, given, scaleOf(v, o.size));
+  const p = { up: state.upPa, down: state.downPa, mean: state.meanPa };
+  // Derived numbers are rounded for reading; given ones are shown as given (the default names stay as they were).
+  const kn = state.knudsenDerived ? Number(state.knudsen.toPrecision(4)) : state.knudsen;
+  const ratio = given?.has('upstreamPressure') ? Number(state.ratio.toPrecision(4)) : state.ratio;
   const lx = 2 * o.vessel + o.length;
   const ly = o.planar ? o.vesselSize : o.vesselSize;
   const x0 = o.vessel;
@@ -86,8 +90,8 @@ export function ductBetweenVessels(
   const c = ductCommon(v, p.mean, lx, ly);
   return {
     ...c,
-    name: `${o.blocks} ${v.gas} Kn ${v.knudsen} ratio ${v.pressureRatio}`,
-    description: `${o.blocks} of ${v.gas} (${v.model}) between vessels at ${formatQuantity(p.up, 'Pa')} and ${formatQuantity(p.down, 'Pa')}, Kn = ${v.knudsen} at the mean pressure`,
+    name: `${o.blocks} ${v.gas} Kn ${kn} ratio ${ratio}`,
+    description: `${o.blocks} of ${v.gas} (${v.model}) between vessels at ${formatQuantity(p.up, 'Pa')} and ${formatQuantity(p.down, 'Pa')}, Kn = ${kn} at the mean pressure`,
     domain: {
       lengthXM: lx,
       lengthYM: ly,

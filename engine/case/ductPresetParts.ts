@@ -11,6 +11,7 @@ import { type PresetParameter, type PresetValues, presetSampling } from './prese
 
 export const temperatureParameter: PresetParameter = {
   name: 'temperature',
+  label: 'Temperature',
   kind: 'temperature',
   unitShown: 'K',
   default: 300,
@@ -20,6 +21,7 @@ export const temperatureParameter: PresetParameter = {
 };
 export const accommodationParameter: PresetParameter = {
   name: 'accommodation',
+  label: 'Wall accommodation',
   kind: 'dimensionless',
   unitShown: '',
   default: 1,
@@ -28,6 +30,7 @@ export const accommodationParameter: PresetParameter = {
 };
 export const pressureRatioParameter: PresetParameter = {
   name: 'pressureRatio',
+  label: 'Pressure ratio upstream / downstream',
   kind: 'dimensionless',
   unitShown: '',
   default: 2,
@@ -38,6 +41,7 @@ export const pressureRatioParameter: PresetParameter = {
 export const ductNumerics: readonly PresetParameter[] = [
   {
     name: 'cellsY',
+    label: 'Cells across',
     kind: 'count',
     unitShown: '',
     default: null,
@@ -46,6 +50,7 @@ export const ductNumerics: readonly PresetParameter[] = [
   },
   {
     name: 'particlesPerCell',
+    label: 'Particles per cell',
     kind: 'count',
     unitShown: '',
     default: null,
@@ -54,6 +59,7 @@ export const ductNumerics: readonly PresetParameter[] = [
   },
   {
     name: 'transientSteps',
+    label: 'Steps before sampling',
     kind: 'count',
     unitShown: '',
     default: null,
@@ -62,17 +68,25 @@ export const ductNumerics: readonly PresetParameter[] = [
   },
   {
     name: 'sampleSteps',
+    label: 'Sampled steps',
     kind: 'count',
     unitShown: '',
     default: null,
     min: 1,
     description: 'sampled steps; default chosen by the planner',
   },
-  { name: 'seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
+  { name: 'seed', label: 'Random seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
 ];
 
-export const lengthParameter = (name: string, of: string, def: number, description: string): PresetParameter => ({
+export const lengthParameter = (
+  name: string,
+  of: string,
+  def: number,
+  description: string,
+  label: string,
+): PresetParameter => ({
   name,
+  label,
   kind: 'dimensionless',
   unitShown: '',
   default: def,

@@ -11,7 +11,8 @@ import {
   gapParameter,
   numericsParameters,
 } from './presetParameters';
-import { gapCase } from './gapCase';
+import { gapCase, gapValues } from './gapCase';
+import { knudsenText, pressureParameter } from './pressurePresetParameters';
 
 export const fourier: Preset = {
   name: 'fourier',
@@ -21,8 +22,10 @@ export const fourier: Preset = {
     modelParameter,
     { ...knudsenParameter, description: `${knudsenParameter.description}, at the mean wall temperature` },
     gapParameter,
+    pressureParameter,
     {
       name: 'hotTemperature',
+      label: 'Hot (top) wall temperature',
       kind: 'temperature',
       unitShown: 'K',
       default: 283,
@@ -32,6 +35,7 @@ export const fourier: Preset = {
     },
     {
       name: 'coldTemperature',
+      label: 'Cold (bottom) wall temperature',
       kind: 'temperature',
       unitShown: 'K',
       default: 263,
@@ -41,13 +45,14 @@ export const fourier: Preset = {
     },
     ...numericsParameters,
   ],
-  build(v) {
-    const hot = v.hotTemperature as number;
-    const cold = v.coldTemperature as number;
+  build(input, given) {
+    const hot = input.hotTemperature as number;
+    const cold = input.coldTemperature as number;
     const mean = (hot + cold) / 2;
+    const { values: v, pressureNote } = gapValues(input, given, mean, input.gap as number);
     return gapCase({
-      name: `fourier ${v.gas} ${v.model} Kn ${v.knudsen}`,
-      description: `Planar Fourier heat conduction in ${v.gas} (${v.model}), Kn = ${v.knudsen} at ${mean} K, gap ${formatQuantity(v.gap as number, 'mm')}, walls ${cold} K (bottom) and ${hot} K (top)`,
+      name: `fourier ${v.gas} ${v.model} Kn ${knudsenText(v)}`,
+      description: `Planar Fourier heat conduction in ${v.gas} (${v.model}), Kn = ${knudsenText(v)}${pressureNote} at ${mean} K, gap ${formatQuantity(v.gap as number, 'mm')}, walls ${cold} K (bottom) and ${hot} K (top)`,
       values: v,
       gasTemperatureK: mean,
       bottom: { temperatureK: cold, velocityXMPerS: 0 },

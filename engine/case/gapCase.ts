@@ -2,13 +2,32 @@
  * The case the gap presets (couette, fourier) share: a planar 1D problem across a gap H between two diffuse walls
  * (bottom y = 0, top y = H), one cell wide in x with periodic left/right sides. The gas state is set from the Knudsen
  * number Kn = λ/H with the viscosity-based mean free path λ = (μ/p)·sqrt(πkT/(2m)) (engine/gas/molecularModel.ts),
- * i.e. p = μ(T)·sqrt(πkT/(2m)) / (Kn·H).
+ * i.e. p = μ(T)·sqrt(πkT/(2m)) / (Kn·H), or the other way round when the pressure is given (gapValues).
  */
 import type { CaseInput } from './schema';
 import { CASE_SCHEMA_VERSION } from './caseConstants';
 import type { SpeciesId } from '../gas/species';
 import { modelFromSpecies, type CollisionModelKind } from '../gas/molecularModel';
 import { type PresetValues, pressureForKnudsenPa, defaultGapNumerics } from './presetParameters';
+import { resolveGapPressure } from './pressurePresetParameters';
+import { formatQuantity } from '../units/engineeringUnits';
+
+/**
+ * A gap preset's values with the Knudsen number and the pressure both resolved, at the gas temperature on the gap,
+ * and the words its description ends with when the Knudsen number came from a given pressure ('' otherwise, so the
+ * default cases' descriptions stay as they were).
+ */
+export function gapValues(
+  v: PresetValues,
+  given: ReadonlySet<string> | undefined,
+  temperatureK: number,
+  lengthM: number,
+): { values: PresetValues; pressureNote: string } {
+  const model = modelFromSpecies(v.gas as SpeciesId, v.model as CollisionModelKind);
+  const values = resolveGapPressure(v, given, { model, temperatureK, lengthM });
+  const pressureNote = values.knudsenDerived ? `, from the pressure ${formatQuantity(values.pressure, 'Pa')}` : '';
+  return { values, pressureNote };
+}
 
 export interface GapSetup {
   name: string;
@@ -27,6 +46,9 @@ export function gapCase(s: GapSetup): CaseInput {
   const knudsen = v.knudsen as number;
   const gapM = v.gap as number;
   const model = modelFromSpecies(species, kind);
+  // Resolved by gapValues (given or from the Knudsen number); recomputed only when build() was called without it.
+  const pressurePa =
+    (v.pressure as number | undefined) ?? pressureForKnudsenPa(model, s.gasTemperatureK, knudsen, gapM);
   const auto = defaultGapNumerics(knudsen);
   const cellsY = (v.cellsY as number | undefined) ?? auto.cellsY;
   const wall = (w: GapSetup['bottom']) => ({
@@ -45,7 +67,7 @@ export function gapCase(s: GapSetup): CaseInput {
     description: s.description,
     gas: { species, model: kind },
     initial: {
-      pressurePa: pressureForKnudsenPa(model, s.gasTemperatureK, knudsen, gapM),
+      pressurePa,
       temperatureK: s.gasTemperatureK,
       velocityMPerS: [0, 0, 0],
     },

@@ -11,6 +11,7 @@ import {
   temperatureParameter,
 } from './ductPresetParts';
 import { ductBetweenVessels } from './ductBetweenVessels';
+import { vesselPressureParameters } from './pressurePresetParameters';
 
 export const orifice: Preset = {
   name: 'orifice',
@@ -25,6 +26,7 @@ export const orifice: Preset = {
     },
     {
       name: 'radius',
+      label: 'Orifice radius',
       kind: 'length',
       unitShown: 'mm',
       default: 0.5e-3,
@@ -33,22 +35,39 @@ export const orifice: Preset = {
       description: 'orifice radius R',
     },
     pressureRatioParameter,
-    lengthParameter('thicknessToRadius', 'radius', 0.1, 'plate thickness'),
-    lengthParameter('vesselLengthToRadius', 'radius', 3, 'length of each vessel region'),
-    lengthParameter('vesselRadiusToRadius', 'radius', 4, 'radius of the vessel regions'),
+    ...vesselPressureParameters,
+    lengthParameter('thicknessToRadius', 'radius', 0.1, 'plate thickness', 'Plate thickness / orifice radius'),
+    lengthParameter(
+      'vesselLengthToRadius',
+      'radius',
+      3,
+      'length of each vessel region',
+      'Vessel length / orifice radius',
+    ),
+    lengthParameter(
+      'vesselRadiusToRadius',
+      'radius',
+      4,
+      'radius of the vessel regions',
+      'Vessel radius / orifice radius',
+    ),
     temperatureParameter,
     accommodationParameter,
     ...ductNumerics,
   ],
-  build(v) {
+  build(v, given) {
     const r = v.radius as number;
-    return ductBetweenVessels(v, {
-      planar: false,
-      size: r,
-      length: Math.max(1e-3, v.thicknessToRadius as number) * r,
-      vessel: Math.max(0.5, v.vesselLengthToRadius as number) * r,
-      vesselSize: Math.max(1.5, v.vesselRadiusToRadius as number) * r,
-      blocks: 'orifice',
-    });
+    return ductBetweenVessels(
+      v,
+      {
+        planar: false,
+        size: r,
+        length: Math.max(1e-3, v.thicknessToRadius as number) * r,
+        vessel: Math.max(0.5, v.vesselLengthToRadius as number) * r,
+        vesselSize: Math.max(1.5, v.vesselRadiusToRadius as number) * r,
+        blocks: 'orifice',
+      },
+      given,
+    );
   },
 };

@@ -6,14 +6,9 @@
 import type { SpeciesId } from '../gas/species';
 import { modelFromSpecies, mostProbableSpeedMPerS, type CollisionModelKind } from '../gas/molecularModel';
 import { formatQuantity } from '../units/engineeringUnits';
-import {
-  type Preset,
-  gasParameter,
-  modelParameter,
-  knudsenParameter,
-  pressureForKnudsenPa,
-  defaultGapNumerics,
-} from './presetParameters';
+import { type Preset, gasParameter, modelParameter, knudsenParameter, defaultGapNumerics } from './presetParameters';
+import { gapValues } from './gapCase';
+import { knudsenText, pressureParameter } from './pressurePresetParameters';
 import { accommodationParameter, ductCommon, ductNumerics, temperatureParameter, wallOf } from './ductPresetParts';
 
 export const poiseuille: Preset = {
@@ -24,8 +19,10 @@ export const poiseuille: Preset = {
     gasParameter,
     modelParameter,
     knudsenParameter,
+    pressureParameter,
     {
       name: 'gap',
+      label: 'Gap',
       kind: 'length',
       unitShown: 'µm',
       default: 1e-6,
@@ -35,6 +32,7 @@ export const poiseuille: Preset = {
     },
     {
       name: 'acceleration',
+      label: 'Body acceleration',
       kind: 'acceleration',
       unitShown: 'm/s²',
       default: null,
@@ -46,10 +44,11 @@ export const poiseuille: Preset = {
     accommodationParameter,
     ...ductNumerics,
   ],
-  build(v) {
-    const h = v.gap as number;
-    const model = modelFromSpecies(v.gas as SpeciesId, v.model as CollisionModelKind);
-    const p = pressureForKnudsenPa(model, v.temperature as number, v.knudsen as number, h);
+  build(input, given) {
+    const h = input.gap as number;
+    const model = modelFromSpecies(input.gas as SpeciesId, input.model as CollisionModelKind);
+    const { values: v, pressureNote } = gapValues(input, given, input.temperature as number, h);
+    const p = v.pressure as number;
     const v0 = mostProbableSpeedMPerS(model.massKg, v.temperature as number);
     const delta = Math.sqrt(Math.PI) / (2 * (v.knudsen as number));
     // Mean speed ≈ H a G_P / v0 with G_P ≈ δ/6 + 1.5 across the range (Sharipov & Seleznev 1998): aim at 0.05 v0.
@@ -60,8 +59,8 @@ export const poiseuille: Preset = {
     const c = ductCommon({ ...v, cellsY, sampleSteps: v.sampleSteps ?? auto.sampleSteps }, p, lx, h);
     return {
       ...c,
-      name: `poiseuille ${v.gas} Kn ${v.knudsen}`,
-      description: `Force-driven planar channel of ${v.gas} (${v.model}), Kn = ${v.knudsen}, gap ${formatQuantity(h, 'µm')}, acceleration ${a.toPrecision(3)} m/s²`,
+      name: `poiseuille ${v.gas} Kn ${knudsenText(v)}`,
+      description: `Force-driven planar channel of ${v.gas} (${v.model}), Kn = ${knudsenText(v)}${pressureNote}, gap ${formatQuantity(h, 'µm')}, acceleration ${a.toPrecision(3)} m/s²`,
       domain: { lengthXM: lx, lengthYM: h, characteristicLengthM: h },
       boundaries: { left: { type: 'periodic' }, right: { type: 'periodic' }, bottom: wallOf(v), top: wallOf(v) },
       bodyAccelerationXMPerS2: a,

@@ -15,6 +15,8 @@ export type ParameterKind = QuantityKind | 'count' | 'choice';
 export interface PresetParameter {
   /** Key used in `--set name=value` and in build()'s values. */
   readonly name: string;
+  /** Label in words for forms, e.g. 'Upstream pressure', 'Tube length / radius' (the unit is the unit selector's). */
+  readonly label?: string;
   readonly kind: ParameterKind;
   /** Unit in which help and forms show the value ('' for counts and choices). */
   readonly unitShown: string;
@@ -34,12 +36,17 @@ export interface Preset {
   readonly name: string;
   readonly description: string;
   readonly parameters: readonly PresetParameter[];
-  /** Builds the case from SI values; every parameter with a non-null default is present. */
-  build(values: PresetValues): CaseInput;
+  /**
+   * Builds the case from SI values; every parameter with a non-null default is present. `given` names the parameters
+   * the user set (defaults left out): a preset whose gas state may be given as a Knudsen number or as pressures
+   * (pressurePresetParameters.ts) needs it to tell which one was given; without it the Knudsen number is used.
+   */
+  build(values: PresetValues, given?: ReadonlySet<string>): CaseInput;
 }
 
 export const gasParameter: PresetParameter = {
   name: 'gas',
+  label: 'Gas',
   kind: 'choice',
   unitShown: '',
   default: 'Ar',
@@ -48,6 +55,7 @@ export const gasParameter: PresetParameter = {
 };
 export const modelParameter: PresetParameter = {
   name: 'model',
+  label: 'Collision model',
   kind: 'choice',
   unitShown: '',
   default: 'VHS',
@@ -56,6 +64,7 @@ export const modelParameter: PresetParameter = {
 };
 export const knudsenParameter: PresetParameter = {
   name: 'knudsen',
+  label: 'Knudsen number',
   kind: 'dimensionless',
   unitShown: '',
   default: 0.1,
@@ -65,6 +74,7 @@ export const knudsenParameter: PresetParameter = {
 };
 export const gapParameter: PresetParameter = {
   name: 'gap',
+  label: 'Gap',
   kind: 'length',
   unitShown: 'mm',
   default: 1e-3,
@@ -75,6 +85,7 @@ export const gapParameter: PresetParameter = {
 export const numericsParameters: readonly PresetParameter[] = [
   {
     name: 'cellsY',
+    label: 'Cells across the gap',
     kind: 'count',
     unitShown: '',
     default: null,
@@ -83,6 +94,7 @@ export const numericsParameters: readonly PresetParameter[] = [
   },
   {
     name: 'particlesPerCell',
+    label: 'Particles per cell',
     kind: 'count',
     unitShown: '',
     default: null,
@@ -91,6 +103,7 @@ export const numericsParameters: readonly PresetParameter[] = [
   },
   {
     name: 'transientSteps',
+    label: 'Steps before sampling',
     kind: 'count',
     unitShown: '',
     default: null,
@@ -99,6 +112,7 @@ export const numericsParameters: readonly PresetParameter[] = [
   },
   {
     name: 'sampleSteps',
+    label: 'Sampled steps',
     kind: 'count',
     unitShown: '',
     default: null,
@@ -106,7 +120,7 @@ export const numericsParameters: readonly PresetParameter[] = [
     description:
       'sampled steps; default about 8e8 particle-steps of sampling (8e8 / (cellsY × particlesPerCell)), between 20000 and 400000',
   },
-  { name: 'seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
+  { name: 'seed', label: 'Random seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
 ];
 
 /** p = μ(T)·sqrt(πkT/(2m)) / (Kn·H), Pa: the pressure at which λ (viscosity-based) equals Kn·H. */

@@ -13,9 +13,11 @@ import { couette } from './couettePreset';
 import { fourier } from './fourierPreset';
 import { DUCT_PRESETS } from './ductPresets';
 import { cavity } from './cavityPreset';
+import { gasStateOfPresetCase, gasStateWays } from './pressurePresetParameters';
 
 export type { ParameterKind, Preset, PresetParameter, PresetValues } from './presetParameters';
 export { pressureForKnudsenPa, defaultGapNumerics as defaultNumerics } from './presetParameters';
+export { gasStateOfPresetCase, gasStateWays, type GasState } from './pressurePresetParameters';
 
 /** All presets by name. */
 export const PRESETS = Object.freeze({ couette, fourier, ...DUCT_PRESETS, cavity } as const satisfies Record<
@@ -64,7 +66,46 @@ export function presetHelp(name: string): string {
     '',
     'Parameters (name=default; a number without a unit is SI):',
     ...rows.map((r) => `  ${r.head.padEnd(width)}  ${r.tail}`),
+    ...gasStateHelp(preset),
   ].join('\n');
+}
+
+const shownPa = (pa: number) => formatQuantity(Number(pa.toPrecision(4)), 'Pa');
+
+/** The ways the gas state may be given, and what the default Knudsen number gives in pressures. */
+function gasStateHelp(preset: Preset): string[] {
+  const ways = gasStateWays(preset.parameters);
+  if (!ways) return [];
+  const state = gasStateOfPresetCase(preset.build(defaultValues(preset)));
+  const kn = preset.parameters.find((p) => p.name === 'knudsen')?.default;
+  const lines =
+    ways === 'gap'
+      ? ['  knudsen           the Knudsen number (the default), or', '  pressure          the gas pressure']
+      : [
+          '  knudsen (with pressureRatio)             the Knudsen number at the mean pressure (the default), or',
+          '  meanPressure (with pressureRatio)        the mean of the two vessel pressures, or',
+          '  upstreamPressure and downstreamPressure  the two vessel pressures (then no pressureRatio)',
+        ];
+  const derived = !state
+    ? []
+    : ways === 'gap'
+      ? [`At the defaults, knudsen=${kn} gives pressure=${shownPa(state.pressurePa)}.`]
+      : [
+          `At the defaults, knudsen=${kn} gives upstreamPressure=${shownPa(state.upstreamPressurePa!)}, downstreamPressure=${shownPa(state.downstreamPressurePa!)} (meanPressure=${shownPa(state.pressurePa)}).`,
+        ];
+  return [
+    '',
+    'The gas state is given one way only (giving two is refused); pressures take Pa, kPa, mbar, Torr, mTorr, …:',
+    ...lines,
+    ...derived,
+    `The built case's description names the other one (the pressures or the Knudsen number).`,
+  ];
+}
+
+function defaultValues(preset: Preset): Record<string, number | string | undefined> {
+  const values: Record<string, number | string | undefined> = {};
+  for (const p of preset.parameters) values[p.name] = p.default ?? undefined;
+  return values;
 }
 
 function parseParameter(preset: Preset, p: PresetParameter, text: string): number | string {
@@ -92,13 +133,24 @@ function parseParameter(preset: Preset, p: PresetParameter, text: string): numbe
 }
 
 /**
+ * Parses one parameter's text as buildPreset does, without building: the message of a value that is wrong by itself
+ * (unknown unit, below its minimum …), apart from the messages about parameters given together.
+ */
+export function checkPresetParameter(name: string, key: string, text: string): void {
+  const preset = presetOrThrow(name);
+  const p = preset.parameters.find((q) => q.name === key);
+  if (!p) throw new Error(`preset ${preset.name} has no parameter "${key}"`);
+  parseParameter(preset, p, text);
+}
+
+/**
  * Builds a preset's case from text overrides such as { gap: '2mm', temperature: '25C', knudsen: '0.5' }.
  * Throws an Error naming the valid presets, parameters, units or choices when something is not understood.
  */
 export function buildPreset(name: string, overrides: Readonly<Record<string, string>> = {}): CaseInput {
   const preset = presetOrThrow(name);
-  const values: Record<string, number | string | undefined> = {};
-  for (const p of preset.parameters) values[p.name] = p.default ?? undefined;
+  const values = defaultValues(preset);
+  const given = new Set<string>();
   for (const [key, text] of Object.entries(overrides)) {
     const p = preset.parameters.find((q) => q.name === key);
     if (!p)
@@ -106,9 +158,10 @@ export function buildPreset(name: string, overrides: Readonly<Record<string, str
         `preset ${preset.name} has no parameter "${key}"; its parameters are ${preset.parameters.map((q) => q.name).join(', ')}`,
       );
     values[key] = parseParameter(preset, p, text);
+    given.add(key);
   }
   try {
-    return preset.build(values);
+    return preset.build(values, given);
   } catch (e) {
     throw new Error(`preset ${preset.name}: ${(e as Error).message}`, { cause: e });
   }

@@ -11,6 +11,7 @@ import {
   temperatureParameter,
 } from './ductPresetParts';
 import { ductBetweenVessels } from './ductBetweenVessels';
+import { vesselPressureParameters } from './pressurePresetParameters';
 
 export const slit: Preset = {
   name: 'slit',
@@ -25,6 +26,7 @@ export const slit: Preset = {
     },
     {
       name: 'gap',
+      label: 'Slit width',
       kind: 'length',
       unitShown: 'µm',
       default: 10e-6,
@@ -33,22 +35,27 @@ export const slit: Preset = {
       description: 'slit width H',
     },
     pressureRatioParameter,
-    lengthParameter('thicknessToGap', 'slit width', 0.1, 'plate thickness'),
-    lengthParameter('vesselLengthToGap', 'slit width', 3, 'length of each vessel region'),
-    lengthParameter('vesselHeightToGap', 'slit width', 4, 'height of the vessel regions'),
+    ...vesselPressureParameters,
+    lengthParameter('thicknessToGap', 'slit width', 0.1, 'plate thickness', 'Plate thickness / slit width'),
+    lengthParameter('vesselLengthToGap', 'slit width', 3, 'length of each vessel region', 'Vessel length / slit width'),
+    lengthParameter('vesselHeightToGap', 'slit width', 4, 'height of the vessel regions', 'Vessel height / slit width'),
     temperatureParameter,
     accommodationParameter,
     ...ductNumerics,
   ],
-  build(v) {
+  build(v, given) {
     const h = v.gap as number;
-    return ductBetweenVessels(v, {
-      planar: true,
-      size: h,
-      length: Math.max(1e-3, v.thicknessToGap as number) * h,
-      vessel: Math.max(0.5, v.vesselLengthToGap as number) * h,
-      vesselSize: Math.max(1.5, v.vesselHeightToGap as number) * h,
-      blocks: 'slit',
-    });
+    return ductBetweenVessels(
+      v,
+      {
+        planar: true,
+        size: h,
+        length: Math.max(1e-3, v.thicknessToGap as number) * h,
+        vessel: Math.max(0.5, v.vesselLengthToGap as number) * h,
+        vesselSize: Math.max(1.5, v.vesselHeightToGap as number) * h,
+        blocks: 'slit',
+      },
+      given,
+    );
   },
 };

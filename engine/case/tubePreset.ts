@@ -11,6 +11,7 @@ import {
   temperatureParameter,
 } from './ductPresetParts';
 import { ductBetweenVessels } from './ductBetweenVessels';
+import { vesselPressureParameters } from './pressurePresetParameters';
 
 export const tube: Preset = {
   name: 'tube',
@@ -26,6 +27,7 @@ export const tube: Preset = {
     },
     {
       name: 'radius',
+      label: 'Tube radius',
       kind: 'length',
       unitShown: 'mm',
       default: 1e-3,
@@ -34,28 +36,34 @@ export const tube: Preset = {
       description: 'tube radius R',
     },
     pressureRatioParameter,
-    lengthParameter('lengthToRadius', 'radius', 5, 'tube length L'),
+    ...vesselPressureParameters,
+    lengthParameter('lengthToRadius', 'radius', 5, 'tube length L', 'Tube length / radius'),
     lengthParameter(
       'vesselLengthToRadius',
       'radius',
       2,
       'length of each vessel region; 0 puts the vessels right at the tube ends',
+      'Vessel length / radius',
     ),
-    lengthParameter('vesselRadiusToRadius', 'radius', 3, 'radius of the vessel regions'),
+    lengthParameter('vesselRadiusToRadius', 'radius', 3, 'radius of the vessel regions', 'Vessel radius / tube radius'),
     temperatureParameter,
     accommodationParameter,
     ...ductNumerics,
   ],
-  build(v) {
+  build(v, given) {
     const r = v.radius as number;
     const vessel = (v.vesselLengthToRadius as number) * r;
-    return ductBetweenVessels(v, {
-      planar: false,
-      size: r,
-      length: (v.lengthToRadius as number) * r,
-      vessel,
-      vesselSize: vessel > 0 ? Math.max(1, v.vesselRadiusToRadius as number) * r : r,
-      blocks: 'tube',
-    });
+    return ductBetweenVessels(
+      v,
+      {
+        planar: false,
+        size: r,
+        length: (v.lengthToRadius as number) * r,
+        vessel,
+        vesselSize: vessel > 0 ? Math.max(1, v.vesselRadiusToRadius as number) * r : r,
+        blocks: 'tube',
+      },
+      given,
+    );
   },
 };

@@ -120,3 +120,27 @@ test('a block drawn on the domain preview appears in the table and the case; one
   await expect(page.locator('#block-0-xMin')).toBeDisabled();
   await expect(page.locator('#gas-model')).toBeDisabled();
 });
+
+test('tube given by its vessel pressures in mbar: the case holds them, the Knudsen number and the flow Mach number are shown', async ({
+  workbench: w,
+  page,
+}) => {
+  await w.open();
+  await page.locator('#preset-select').selectOption('tube');
+  await expect(w.runButton()).toBeEnabled();
+  await expect(page.getByTestId('gas-state-derived')).toContainText('gives upstream');
+  await page.getByRole('radio', { name: 'Upstream and downstream pressures' }).check();
+  await expect(w.param('knudsen')).toHaveCount(0);
+  await page.getByRole('combobox', { name: 'upstreamPressure unit' }).selectOption('mbar');
+  await page.getByRole('combobox', { name: 'downstreamPressure unit' }).selectOption('mbar');
+  await w.setParam('upstreamPressure', '0.03');
+  await w.setParam('downstreamPressure', '0.01');
+  await expect.poll(async () => (await caseJson(page)).boundaries.left.pressurePa).toBe(3);
+  expect((await caseJson(page)).boundaries.right.pressurePa).toBe(1);
+  await expect(page.getByTestId('gas-state-derived')).toContainText('gives Kn = 3.576 at the mean pressure 0.02 mbar');
+  // Labels in words, the case-file name beside.
+  await expect(page.locator('label[for="param-upstreamPressure"]')).toContainText('Upstream pressureupstreamPressure');
+  await expect(page.locator('label[for="param-lengthToRadius"]')).toContainText('Tube length / radius');
+  // The check panel's Mach number is the flow's (free-molecular estimate at Kn 3.6), not 0.
+  await expect(page.getByTestId('plan-review').getByLabel('reference state')).toContainText('free-molecular');
+});
