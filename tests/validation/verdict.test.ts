@@ -22,7 +22,8 @@
  *   with a jump has a single maximum on the axis; kinetic theory and DSMC give a dip there between two maxima
  *   (Mansour, Baras & Garcia 1997, Physica A 240:255; Tij & Santos 1994; from memory) and a larger rise, so the
  *   temperature profile must not be judged adequate.
- * Run time: about 2.5 minutes of one core for the file (measured on a shared machine).
+ * Run time: the four tests took 35 s, 144 s, 116 s and 309 s on a two-core machine shared at a load of about 12
+ * (measured); about a third of that on an idle core.
  */
 import { describe, expect, it } from 'vitest';
 import { buildPreset } from '../../engine/case/presets';
@@ -133,10 +134,13 @@ describe('verdict on DSMC runs (hard-sphere argon)', () => {
       sampleSteps: '200000',
       seed: '5',
     });
-    const flow = c.verdict['flow.reducedFlowRate'];
-    expect(statusOf(flow, 'noSlip')).toBe('notAdequate');
-    expect(statusOf(flow, 'firstOrder')).not.toBe('notAdequate');
-    expect(c.verdict['flow.massFlowRate'].bestModel).not.toBe('noSlip');
+    // Measured (seed 5): DSMC ±0.89 %, first-order −1.06 % (interval of |d| up to 1.95 %, inside ±2 %), no-slip −41 %.
+    for (const key of ['flow.reducedFlowRate', 'flow.massFlowRate']) {
+      const flow = c.verdict[key];
+      expect(statusOf(flow, 'noSlip'), key).toBe('notAdequate');
+      expect(statusOf(flow, 'firstOrder'), key).toBe('adequate');
+      expect(flow.bestModel, key).toBe('firstOrder');
+    }
     const t = c.verdict['profile.temperature'];
     for (const model of ['noSlip', 'firstOrder', 'secondOrder']) expect(statusOf(t, model), model).not.toBe('adequate');
     expect(t.status).not.toBe('adequate');
