@@ -2,6 +2,8 @@
 import type { Plan } from '../engine/plan/plan';
 import type { SimulationResult } from '../engine/results/summarize';
 import type { Performance } from '../engine/report/summaryJson';
+import type { ContinuumComparisonResult } from '../engine/report/comparison';
+import { extraTimeText, sampledWallSeconds, verdictHeadline } from '../engine/report/headline';
 import { sig, plusMinus, duration, bytes, table } from './format';
 import {
   independentSamples,
@@ -94,9 +96,28 @@ export function planReport(p: Plan): string {
   ].join('\n');
 }
 
-/** Wall shear stress and heat flux with 95 % half-widths, and the run's speed. */
-export function runSummary(result: SimulationResult, performance: Performance, outDir: string): string {
+/**
+ * The verdict's one sentence (engine/report/headline.ts, as summary.json's `verdict.headline`) and the expected time
+ * to decide at this run's speed; none when no continuum model is compared.
+ */
+function verdictLines(result: SimulationResult, performance: Performance, c?: ContinuumComparisonResult): string[] {
+  if (!c) return [];
+  if (!c.recognised) return [`no continuum model compared: ${c.reason}`];
+  const h = verdictHeadline(c);
+  const n = result.numerics;
+  const time = extraTimeText(h, sampledWallSeconds(performance.wallSeconds, n.sampleSteps, n.steps));
+  return [h.text, ...(time ? [time] : [])];
+}
+
+/** The verdict first, then wall shear stress and heat flux with 95 % half-widths, and the run's speed. */
+export function runSummary(
+  result: SimulationResult,
+  performance: Performance,
+  outDir: string,
+  comparison?: ContinuumComparisonResult,
+): string {
   const lines = [
+    ...verdictLines(result, performance, comparison),
     `finished in ${duration(performance.wallSeconds)}: ${sig(performance.particleSteps, 3)} particle steps, ${sig(performance.particleStepsPerSecond, 3)} per second`,
   ];
   for (const [wall, e] of Object.entries(result.walls)) {

@@ -27,6 +27,8 @@ export type { ReplicaView, RunProgressView, TargetView, ReplicaEnd, FinishedRun,
 
 export { profilesCsv, fieldsCsv, surfacesCsv } from '../../engine/report/resultCsv';
 export { summaryJsonText } from '../../engine/report/summaryJson';
+export { verdictCsv } from '../../engine/report/verdictCsv';
+export { verdictHeadline, extraTimeText, sampledWallSeconds } from '../../engine/report/headline';
 export { defaultReplicaCount };
 export { flowQuantityUnits } from '../../engine/results/flowQuantities';
 export { MODEL_LABELS } from '../../engine/continuum/caseModelTypes';

@@ -19,10 +19,11 @@ import type { SweepPointRun } from '../../engine/report/sweepRow';
 import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
 import type { SpeciesData, SpeciesId } from '../../engine/gas/species';
 import type { ConversionContext, QuantityKind } from '../../engine/units/engineeringUnits';
-import type { ContinuumComparisonResult } from '../../engine/report/comparison';
+import type { ContinuumComparison, ContinuumComparisonResult } from '../../engine/report/comparison';
 import type { ContinuumModelName } from '../../engine/continuum/caseModelTypes';
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { SummaryExtra } from '../../engine/report/summaryJson';
+import type { Headline } from '../../engine/report/headline';
 import type { FlowQuantityName } from '../../engine/results/flowQuantities';
 import type { CutPrediction, CutProfileTable } from '../../engine/report/cutProfileCsv';
 import type { FormState } from '../setup/formModel';
@@ -118,5 +119,11 @@ export interface RunApi extends SweepApi {
   fieldsCsv(result: SimulationResult): string;
   surfacesCsv(result: SimulationResult): string;
   summaryJsonText(result: SimulationResult, extra: SummaryExtra): string;
+  /** verdict.csv of a recognised comparison (engine/report/verdictCsv.ts). */
+  verdictCsv(comparison: ContinuumComparison): string;
+  /** The one-sentence answer and its time to decide (engine/report/headline.ts). */
+  verdictHeadline(comparison: ContinuumComparison): Headline;
+  extraTimeText(headline: Headline, sampledSeconds: number): string;
+  sampledWallSeconds(wallSeconds: number, sampleSteps: number, steps: number): number;
   cutProfileCsv(cut: CutProfileTable, predictions?: readonly CutPrediction[]): string;
 }

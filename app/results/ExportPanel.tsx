@@ -31,6 +31,10 @@ export function ExportPanel({ entry }: { entry: CachedResult }) {
       'application/json',
     );
   };
+  const verdict = async () => {
+    const api = await loadRunApi();
+    if (entry.comparison?.recognised) downloadText(`${base}-verdict.csv`, api.verdictCsv(entry.comparison), CSV);
+  };
   return (
     <section className="panel" aria-labelledby="export-title">
       <h2 id="export-title">Export</h2>
@@ -47,6 +51,11 @@ export function ExportPanel({ entry }: { entry: CachedResult }) {
         <button type="button" onClick={() => void summary()}>
           Summary (JSON)
         </button>
+        {entry.comparison?.recognised && (
+          <button type="button" onClick={() => void verdict()}>
+            Verdict (CSV)
+          </button>
+        )}
         <button
           type="button"
           onClick={() =>

@@ -23,10 +23,15 @@ export function ResultPanels() {
     if (!entry) return null;
     return flowNumbersOf(entry.result, runApiIfLoaded()?.flowQuantityUnits(!entry.result.axisymmetric) ?? {});
   }, [entry?.result]);
-  const comparison = useMemo(
-    () => comparisonView(entry?.comparison, runApiIfLoaded()?.MODEL_LABELS ?? {}),
-    [entry?.comparison],
-  );
+  const comparison = useMemo(() => {
+    const api = runApiIfLoaded();
+    const n = entry?.result.numerics;
+    const sampled =
+      api && n && entry?.performance
+        ? api.sampledWallSeconds(entry.performance.wallSeconds, n.sampleSteps, n.steps)
+        : NaN;
+    return comparisonView(entry?.comparison, api, sampled);
+  }, [entry?.comparison, entry?.performance]);
   const curves = useMemo(() => comparison?.curves ?? [], [comparison]);
   // Walls, blocks, no-gas cells and gas constants from the case's plan (null if the run API is not loaded).
   const geometry = useMemo(
@@ -61,9 +66,9 @@ export function ResultPanels() {
         </p>
         <CompareSelect />
       </section>
+      <ComparisonCard view={comparison} />
       <FlowNumbersCard flow={flow} />
       <WallNumbersCard result={r} />
-      <ComparisonCard view={comparison} />
       <WarningsList warnings={r.warnings} />
       <ProfilePanel
         result={r}

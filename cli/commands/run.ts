@@ -17,6 +17,7 @@ import { writeBinaryAtomically } from '../writeResults';
 import { CliError, EXIT_OK, EXIT_INTERRUPTED, type UsageError } from '../errors';
 import type { Performance } from '../../engine/report/summaryJson';
 import { resultFiles } from '../../engine/report/resultFiles';
+import { continuumComparisonOf } from '../../engine/report/comparison';
 import { loadCase, parseSeedOption } from '../readCase';
 import { checkOutputDir, writeResultsAtomically } from '../writeResults';
 import { createProgress } from '../progress';
@@ -219,8 +220,9 @@ export const runCommand = defineCommand({
       particleSteps,
       particleStepsPerSecond: wallSeconds > 0 ? particleSteps / wallSeconds : NaN,
     };
+    const comparison = continuumComparisonOf(samples.plan, result);
     const files = {
-      ...resultFiles(result, { performance, caseName: caseData.name, plan: samples.plan }),
+      ...resultFiles(result, { performance, caseName: caseData.name, comparison }),
       'case.json': `${prettyJson(caseData)}\n`,
       ...extraFiles,
     };
@@ -228,7 +230,7 @@ export const runCommand = defineCommand({
     if (savePath) writeBinaryAtomically(savePath, encodeSampleSet(samples));
     for (const w of result.warnings) if (!plan.warnings.includes(w)) io.stderr.write(`warning: ${w}\n`);
     if (stopNote && !quiet) io.stderr.write(`${stopNote}\n`);
-    if (!quiet) io.stderr.write(`${runSummary(result, performance, outDir)}\n`);
+    if (!quiet) io.stderr.write(`${runSummary(result, performance, outDir, comparison)}\n`);
     if (interrupted) return EXIT_INTERRUPTED;
     return EXIT_OK;
   },

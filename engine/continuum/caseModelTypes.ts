@@ -81,6 +81,16 @@ export interface CaseModels {
   readonly models: Partial<Record<ContinuumModelName, string>>;
   readonly quantities: readonly PredictedQuantity[];
   readonly profiles: readonly PredictedProfile[];
+  /**
+   * The key (of `quantities` or `profiles`) of the quantity an engineer asks about first: the flow rate of a duct,
+   * the wall shear of Couette flow, the heat flux of Fourier conduction, the vertical centreline of the cavity (its
+   * no-slip lid force is infinite: the corner singularity, Taylor's scraper, makes the lid shear ∝ 1/r).
+   */
+  readonly headline: string;
+  /** Where each model holds here, in words (caseApplicability.ts). */
+  readonly validity: Partial<Record<ContinuumModelName, string>>;
+  /** Models whose predictions are given but do not hold for this case, each with the reason (caseApplicability.ts). */
+  readonly notApplicable: Partial<Record<ContinuumModelName, string>>;
 }
 
 export interface UnrecognisedCase {

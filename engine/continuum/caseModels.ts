@@ -21,6 +21,7 @@
  */
 import type { Plan } from '../plan/plan';
 import { gasStateFromModel } from './gasState';
+import { forceDrivenApplicability } from './caseApplicability';
 import { meanFreePathOfKind } from './meanFreePath';
 import {
   HADJICONSTANTINOU_SECOND_ORDER,
@@ -35,6 +36,7 @@ import {
   cavityCaseModels,
   commonAccommodation,
   ductCaseModels,
+  fastestNoSlip,
   gapCaseModels,
   isWall,
   unrecognised,
@@ -83,7 +85,7 @@ export function caseModelsOf(plan: Plan, options: CaseModelOptions = {}): CaseMo
     gas: gasStateFromModel(plan.gas.model, ref.pressurePa, ref.temperatureK),
     slip,
     models,
-    result: (problem, description, p, present) => ({
+    result: (problem, description, p, present, applicability) => ({
       recognised: true,
       problem,
       description,
@@ -94,6 +96,7 @@ export function caseModelsOf(plan: Plan, options: CaseModelOptions = {}): CaseMo
       >,
       quantities: p.quantities,
       profiles: p.profiles,
+      ...applicability,
     }),
   };
   const report = c.flowReport;
@@ -118,11 +121,14 @@ export function caseModelsOf(plan: Plan, options: CaseModelOptions = {}): CaseMo
       );
     const sigma = commonAccommodation([[top, 'top']]);
     if (typeof sigma === 'string') return unrecognised(sigma);
+    const p = forceDrivenTubePredictions(plan, x.gas, top.temperatureK, sigma, slip);
+    const present: ContinuumModelName[] = ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular'];
     return x.result(
       'forceDrivenTube',
       'force-driven Poiseuille flow in a round tube (linearized, fully developed)',
-      forceDrivenTubePredictions(plan, x.gas, top.temperatureK, sigma, slip),
-      ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular'],
+      p,
+      present,
+      forceDrivenApplicability(x.gas, fastestNoSlip(p.profiles), present),
     );
   }
   if (periodicX) return gapCaseModels(x);

@@ -13,6 +13,14 @@ import { couettePredictions, fourierPredictions, type SlipChoice } from './caseM
 import { forceDrivenChannelPredictions } from './caseModelsForceDriven';
 import { pressureDrivenPredictions } from './caseModelsDuct';
 import { cavityPredictions } from './caseModelsCavity';
+import {
+  couetteApplicability,
+  cavityApplicability,
+  ductApplicability,
+  forceDrivenApplicability,
+  fourierApplicability,
+  type Applicability,
+} from './caseApplicability';
 import type {
   CaseModels,
   CaseModelsResult,
@@ -62,7 +70,16 @@ export interface RecogniserContext {
     description: string,
     p: { quantities: PredictedQuantity[]; profiles: PredictedProfile[] },
     present: ContinuumModelName[],
+    applicability: Applicability,
   ) => CaseModels;
+}
+
+/** The largest |speed| of the no-slip velocity profile (for the Mach number of a force-driven flow). */
+export function fastestNoSlip(profiles: readonly PredictedProfile[]): number {
+  const u = profiles.find((p) => p.field === 'velocityX')?.values.noSlip;
+  let max = 0;
+  if (u) for (const v of u) max = Math.max(max, Math.abs(v));
+  return max;
 }
 
 /** Long pressure-driven channel or tube between vessels (flowReport with lengthM). */
@@ -95,13 +112,15 @@ export function ductCaseModels(x: RecogniserContext, report: FlowReportSpec & { 
   };
   const quantities = pressureDrivenPredictions(plan, report, state, sigma, x.slip);
   const tube = report.duct === 'tube';
+  const present: ContinuumModelName[] = tube
+    ? ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular']
+    : ['noSlip', 'firstOrder', 'secondOrder', 'unified'];
   return x.result(
     tube ? 'pressureDrivenTube' : 'pressureDrivenChannel',
     `long pressure-driven ${report.duct} (isothermal, locally fully developed; entrance effects of a short duct are not modelled), p_in/p_out = ${(up / down).toPrecision(4)}`,
     { quantities, profiles: [] },
-    tube
-      ? ['noSlip', 'firstOrder', 'secondOrder', 'unified', 'freeMolecular']
-      : ['noSlip', 'firstOrder', 'secondOrder', 'unified'],
+    present,
+    ductApplicability(report.duct === 'tube' ? 'tube' : 'channel', report.lengthM, report.sizeM, present),
   );
 }
 
@@ -122,11 +141,14 @@ export function gapCaseModels(x: RecogniserContext): CaseModelsResult {
   if (plan.bodyAccelerationXMPerS2 !== 0) {
     if (!(atRest(bottom) && atRest(top) && same))
       return unrecognised('a body-force-driven channel is compared only with both walls at rest at one temperature');
+    const p = forceDrivenChannelPredictions(plan, gas, bottom.temperatureK, sigma, slip);
+    const present: ContinuumModelName[] = ['noSlip', 'firstOrder', 'secondOrder', 'unified'];
     return x.result(
       'forceDrivenChannel',
       'force-driven Poiseuille flow in a planar channel (linearized, fully developed)',
-      forceDrivenChannelPredictions(plan, gas, bottom.temperatureK, sigma, slip),
-      ['noSlip', 'firstOrder', 'secondOrder', 'unified'],
+      p,
+      present,
+      forceDrivenApplicability(gas, fastestNoSlip(p.profiles), present),
     );
   }
   const du = top.velocityMPerS[0] - bottom.velocityMPerS[0];
@@ -136,6 +158,7 @@ export function gapCaseModels(x: RecogniserContext): CaseModelsResult {
       'planar Couette flow (linearized: constant μ and κ; viscous heating to first order)',
       couettePredictions(plan, gas, bottom, top, sigma, slip),
       ['noSlip', 'firstOrder', 'secondOrder', 'freeMolecular'],
+      couetteApplicability(gas, du),
     );
   }
   if (du === 0 && atRest(bottom) && atRest(top) && !same) {
@@ -146,6 +169,7 @@ export function gapCaseModels(x: RecogniserContext): CaseModelsResult {
       'planar Fourier heat conduction (linearized: constant κ)',
       fourierPredictions(plan, gas, bottom, top, sigma),
       ['noSlip', 'firstOrder', 'freeMolecular'],
+      fourierApplicability(bottom.temperatureK, top.temperatureK, plan.reference.temperatureK),
     );
   }
   if (du === 0 && same)
@@ -197,5 +221,6 @@ export function cavityCaseModels(
     `lid-driven square cavity (incompressible, Re = ${p.reynolds.toPrecision(4)}; centreline profiles)`,
     { quantities: [], profiles: p.profiles },
     ['noSlip', 'firstOrder'],
+    cavityApplicability(p.reynolds),
   );
 }

@@ -111,7 +111,7 @@ export function continuumComparisonOf(
     for (const [model, value] of Object.entries(q.values) as [ContinuumModelName, number][])
       (continuum[model] ??= {})[q.key] = value;
     const dsmc = dsmcIntegral(result, q.key);
-    if (dsmc) verdict[q.key] = integralVerdict(q.key, q.unit, dsmc, q.values, options);
+    if (dsmc) verdict[q.key] = integralVerdict(q.key, q.unit, dsmc, q.values, options, predictions.notApplicable);
   }
   for (const p of predictions.profiles) {
     units[p.key] = p.unit;
@@ -119,7 +119,16 @@ export function continuumComparisonOf(
       (profiles[model] ??= {})[p.key] = values;
     const dsmc = dsmcProfile(result, p.line, p.field);
     if (dsmc.mean.length !== p.positionsM.length) continue;
-    verdict[p.key] = profileVerdict(p.key, p.unit, dsmc.mean, dsmc.ci95, scaleOf(p, dsmc.mean), p.values, options);
+    verdict[p.key] = profileVerdict(
+      p.key,
+      p.unit,
+      dsmc.mean,
+      dsmc.ci95,
+      scaleOf(p, dsmc.mean),
+      p.values,
+      options,
+      predictions.notApplicable,
+    );
   }
   return { recognised: true, predictions, continuum, units, verdict, profiles };
 }

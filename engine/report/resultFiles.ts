@@ -8,10 +8,12 @@ import { continuumComparisonOf } from './comparison';
 import { flowCsv } from './flowCsv';
 import { fieldsCsv, profilesCsv, surfacesCsv } from './resultCsv';
 import { summaryJsonText, type SummaryExtra } from './summaryJson';
+import { verdictCsv } from './verdictCsv';
 
 /**
- * The four result files of a run by file name, in the order they are written. Given the run's plan (or a comparison
- * already made), summary.json and profiles.csv carry the continuum comparison.
+ * The result files of a run by file name, in the order they are written: summary.json, profiles.csv, fields.csv,
+ * surfaces.csv, flow.csv with flow numbers, and verdict.csv when a continuum comparison applies. Given the run's plan
+ * (or a comparison already made), summary.json and profiles.csv carry the continuum comparison.
  */
 export function resultFiles(result: SimulationResult, extra: SummaryExtra & { plan?: Plan }): Record<string, string> {
   const comparison = extra.comparison ?? (extra.plan ? continuumComparisonOf(extra.plan, result) : undefined);
@@ -26,5 +28,6 @@ export function resultFiles(result: SimulationResult, extra: SummaryExtra & { pl
     'fields.csv': fieldsCsv(result),
     'surfaces.csv': surfacesCsv(result),
     ...(result.flow ? { 'flow.csv': flowCsv(result.flow, !result.axisymmetric) } : {}),
+    ...(comparison?.recognised ? { 'verdict.csv': verdictCsv(comparison) } : {}),
   };
 }

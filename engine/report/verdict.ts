@@ -1,37 +1,38 @@
 /**
  * Which continuum model is good enough: for each quantity a DSMC run measured and the models predicted
- * (continuum/caseModels.ts), the deviation of every model from DSMC and a plain-language verdict with the numbers
- * behind it. Pure; in report/ beside the comparison that applies it. The thresholds (also in README.md, "Which model is good enough"):
+ * (continuum/caseModels.ts), the deviation of every model from DSMC and a verdict by an equivalence test
+ * (equivalence.ts: two one-sided tests on the DSMC 95 % interval, Schuirmann 1987), in words and numbers. Pure. The
+ * rules (also in README.md, "Which model is good enough"):
  *
  * - Relative deviation of a model: (model − DSMC)/scale. Integral quantities: scale = |DSMC mean|. Profiles: the
  *   profile's scale (continuum/caseModelTypes.ts ProfileScale: e.g. the wall speed difference of Couette flow, the
  *   centre speed of a channel, the lid speed of a cavity) — a point-wise ratio would blow up where the profile
- *   crosses 0.
- * - DSMC error: the 95 % half-width over the same scale. Profiles use profile-wide measures over the N points where
- *   both DSMC and the model have a value:
- *     deviation = RMS_i of (m_i − d_i)/scale,   max = max_i |m_i − d_i|/scale,
- *     DSMC error = RMS_i of h_i/scale,          normalized = RMS_i of (m_i − d_i)/h_i,
- *   h_i the local 95 % half-width. A model exact but for DSMC noise has an RMS deviation near RMS_i h_i/(1.96·scale),
- *   below the DSMC error, so the rule below does not reject a correct model because of noise.
- * - Adequate: |deviation| ≤ max(DSMC error, tolerance); tolerance 2 % by default (the issue's "user tolerance").
- *   "Within DSMC error": |deviation| ≤ DSMC error.
- * - Best model: the simplest adequate one in the order no-slip, first-order, second-order, unified, free-molecular
- *   (an engineer wants the cheapest model that will do); when none is adequate, the one with the smallest |deviation|.
- * - Kinetic: no model adequate and every continuum model (all but the free-molecular limit) off by more than 10 %:
- *   "continuum models off by more than 10 %: kinetic effects dominate".
- * - Otherwise, no model adequate: "no model within tolerance", naming the closest.
+ *   crosses 0. Profiles use the RMS over the N points where DSMC and every model have a value; the DSMC error is the
+ *   RMS of the point half-widths h_i/scale.
+ * - Per model, with tolerance ε (2 % by default): adequate when the whole 95 % interval of the deviation lies inside
+ *   ±ε, not adequate when it lies wholly outside, undecided otherwise (equivalence.ts). A model the case lies outside
+ *   of (caseApplicability.ts) is "not applicable here", with the reason, and is not judged.
+ * - Per quantity: adequate when some model is adequate — the best model is then the simplest adequate one in the
+ *   order no-slip, first-order, second-order, unified, free-molecular (the cheapest that will do); not adequate when
+ *   every applicable model is not adequate (only the kinetic, DSMC, result holds); undecided otherwise; not
+ *   applicable when no model applies. Noise never reads as agreement: a wide DSMC interval gives "undecided".
+ * - Undecided (and "adequate" with a simpler model still undecided): the relative half-width that would decide the
+ *   undecided models that matter (the smallest of theirs) and the factor on the sampling so far, (h/h_needed)²
+ *   (error ∝ 1/√samples).
  */
 import { CONTINUUM_MODELS, MODEL_LABELS, type ContinuumModelName } from '../continuum/caseModelTypes';
+import { integralEquivalence, profileEquivalence, type EquivalenceStatus } from './equivalence';
 
 /** The default tolerance: 2 % of the quantity's scale. */
 export const DEFAULT_TOLERANCE = 0.02;
-/** Continuum models all off by more than this (relative) means kinetic effects dominate. */
-export const KINETIC_THRESHOLD = 0.1;
 
 export interface VerdictOptions {
-  /** Relative deviation accepted even when the DSMC error bar is smaller; default DEFAULT_TOLERANCE. */
+  /** Relative deviation a model may have and still be adequate; default DEFAULT_TOLERANCE. */
   readonly tolerance?: number;
 }
+
+export type ModelStatus = EquivalenceStatus | 'notApplicable';
+export type QuantityStatus = EquivalenceStatus | 'notApplicable' | 'noData';
 
 export interface ModelDeviation {
   readonly model: ContinuumModelName;
@@ -41,10 +42,15 @@ export interface ModelDeviation {
   readonly maxDeviation: number;
   /** (model − DSMC)/half-width; profiles: the RMS over the points. NaN without a half-width. */
   readonly normalizedDeviation: number;
-  readonly adequate: boolean;
+  /** The 95 % interval of |deviation| (profiles: of the RMS deviation). */
+  readonly lowerAbs: number;
+  readonly upperAbs: number;
+  readonly status: ModelStatus;
+  /** Relative half-width that would decide this model (0 when decided; Infinity when none can). */
+  readonly halfWidthToDecide: number;
+  /** Why the model does not apply here (status notApplicable). */
+  readonly reason?: string;
 }
-
-export type VerdictCategory = 'withinError' | 'adequate' | 'noneAdequate' | 'kinetic' | 'noData';
 
 export interface QuantityVerdict {
   readonly quantity: string;
@@ -54,19 +60,23 @@ export interface QuantityVerdict {
   readonly scale: number;
   /** DSMC 95 % half-width over the scale (profiles: RMS over the points); NaN when DSMC gave none. */
   readonly relativeHalfWidth: number;
-  /** max(relativeHalfWidth, tolerance): the largest |deviation| that is adequate. */
-  readonly threshold: number;
+  readonly tolerance: number;
   /** Profile points compared. */
   readonly points: number;
   readonly models: readonly ModelDeviation[];
+  readonly status: QuantityStatus;
+  /** The simplest adequate model; null when none is adequate. */
   readonly bestModel: ContinuumModelName | null;
   /** The best model's deviation (NaN without one). */
   readonly deviation: number;
-  readonly category: VerdictCategory;
+  /** Relative half-width that would settle the verdict (0 when settled; Infinity when no precision can). */
+  readonly halfWidthToDecide: number;
+  /** Factor on the sampling so far that reaches halfWidthToDecide (1 when settled; Infinity when none can). */
+  readonly samplingFactor: number;
   readonly text: string;
 }
 
-const percent = (x: number): string => {
+export const percent = (x: number): string => {
   const p = Math.abs(100 * x);
   return `${p < 9.95 ? p.toFixed(1) : p.toFixed(0)} %`;
 };
@@ -75,75 +85,106 @@ function ordered<T>(values: Partial<Record<ContinuumModelName, T>>): [ContinuumM
   return CONTINUUM_MODELS.filter((m) => values[m] !== undefined).map((m) => [m, values[m] as T]);
 }
 
+const label = (m: ContinuumModelName) => MODEL_LABELS[m];
+
 function joinWords(words: string[]): string {
   return words.length <= 1 ? words.join('') : `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`;
 }
 
-/** Category, best model and text from the per-model deviations (rules in the file header). */
+/** "no-slip and first-order slip (reason); unified model (other reason)": models sharing a reason named once. */
+export function groupedReasons(models: readonly ModelDeviation[]): string {
+  const by = new Map<string, string[]>();
+  for (const d of models) by.set(d.reason ?? '', [...(by.get(d.reason ?? '') ?? []), label(d.model)]);
+  return [...by].map(([reason, names]) => `${joinWords(names)} (${reason})`).join('; ');
+}
+
+/** "about 4× the sampling so far", or that no precision decides. */
+export function samplingText(factor: number): string {
+  if (!Number.isFinite(factor)) return 'no precision decides (a deviation sits on the tolerance)';
+  return `about ${factor < 10 ? factor.toFixed(1) : String(Math.round(factor))} times the sampling so far`;
+}
+
+/** Status, best model, what would decide and the text, from the per-model results (rules in the file header). */
 function decide(
-  quantity: string,
-  kind: 'integral' | 'profile',
-  unit: string,
-  scale: number,
-  relativeHalfWidth: number,
-  tolerance: number,
-  points: number,
-  models: ModelDeviation[],
+  base: Omit<QuantityVerdict, 'status' | 'bestModel' | 'deviation' | 'halfWidthToDecide' | 'samplingFactor' | 'text'>,
+  difference: (a: ContinuumModelName, b: ContinuumModelName) => number,
 ): QuantityVerdict {
-  const threshold = Number.isFinite(relativeHalfWidth) ? Math.max(relativeHalfWidth, tolerance) : tolerance;
-  const base = { quantity, kind, unit, scale, relativeHalfWidth, threshold, points, models };
-  if (models.length === 0) {
+  const { models, relativeHalfWidth: h, tolerance } = base;
+  const nothing = { bestModel: null, deviation: NaN, halfWidthToDecide: 0, samplingFactor: 1 };
+  if (models.length === 0)
+    return { ...base, ...nothing, status: 'noData', text: 'no comparison: DSMC or the models give no value here' };
+  const rms = base.kind === 'profile' ? ' RMS' : '';
+  const error = Number.isFinite(h) ? `DSMC ±${percent(h)}${rms}` : 'DSMC error not available';
+  const tol = `±${percent(tolerance)}`;
+  const off = (d: ModelDeviation) => `${label(d.model)} off by ${percent(d.deviation)}${rms}`;
+  const inapplicable = models.filter((d) => d.status === 'notApplicable');
+  const na = inapplicable.length ? `; not applicable here: ${groupedReasons(inapplicable)}` : '';
+  const applicable = models.filter((d) => d.status !== 'notApplicable');
+  if (applicable.length === 0)
     return {
       ...base,
+      ...nothing,
+      status: 'notApplicable',
+      text: `no model applies here: ${groupedReasons(inapplicable)}; only the kinetic (DSMC) result holds`,
+    };
+  const best = applicable.find((d) => d.status === 'adequate');
+  const simpler = best ? applicable.slice(0, applicable.indexOf(best)) : applicable;
+  const open = simpler.filter((d) => d.status === 'undecided');
+  const needed = open.reduce((a, d) => Math.min(a, d.halfWidthToDecide), Infinity);
+  const toDecide = open.length === 0 ? 0 : needed;
+  const samplingFactor =
+    toDecide === 0 ? 1 : Number.isFinite(toDecide) && Number.isFinite(h) ? Math.max(1, (h / toDecide) ** 2) : Infinity;
+  const decideText =
+    open.length === 0
+      ? ''
+      : Number.isFinite(toDecide)
+        ? `; DSMC ±${percent(toDecide)}${rms} would decide (${samplingText(samplingFactor)})`
+        : `; ${samplingText(Infinity)}`;
+  // "Cannot tell A from B" only when A and B differ by more than the tolerance, so that telling them apart matters.
+  const cannotTell = (): string => {
+    const gap = open.length >= 2 ? difference(open[0].model, open[1].model) : 0;
+    if (gap > tolerance)
+      return `${error} cannot tell ${label(open[0].model)} from ${label(open[1].model)}, which differ by ${percent(gap)}${rms}`;
+    return `${error} cannot tell whether ${label(open[0].model)} (off by ${percent(open[0].deviation)}${rms}) is within ${tol}`;
+  };
+  const decided = { halfWidthToDecide: toDecide, samplingFactor };
+  const failedSimpler = simpler.filter((d) => d.status === 'notAdequate');
+  const failedText = failedSimpler.length ? `; not adequate: ${failedSimpler.map(off).join(', ')}` : '';
+  if (best) {
+    const head = `${label(best.model)} adequate (within ${tol}: deviation ${percent(best.deviation)}${rms}, ${error})`;
+    const not = failedText;
+    const still = open.length ? `; whether a simpler model would do is undecided: ${cannotTell()}${decideText}` : '';
+    return {
+      ...base,
+      ...decided,
+      status: 'adequate',
+      bestModel: best.model,
+      deviation: best.deviation,
+      text: `${head}${not}${still}${na}`,
+    };
+  }
+  if (open.length > 0)
+    return {
+      ...base,
+      ...decided,
       bestModel: null,
       deviation: NaN,
-      category: 'noData',
-      text: 'no comparison: DSMC or the models give no value here',
+      status: 'undecided',
+      text: `undecided: ${cannotTell()} (tolerance ${tol})${decideText}${failedText}${na}`,
     };
-  }
-  const rms = kind === 'profile' ? ' RMS' : '';
-  const error = Number.isFinite(relativeHalfWidth)
-    ? `DSMC ±${percent(relativeHalfWidth)}${rms}`
-    : 'DSMC error not available';
-  const off = (d: ModelDeviation) =>
-    `${MODEL_LABELS[d.model]} off by ${percent(d.deviation)}${rms}${kind === 'profile' ? `, max ${percent(d.maxDeviation)}` : ''}`;
-  const best = models.find((d) => d.adequate);
-  if (best) {
-    const simpler = models.slice(0, models.indexOf(best));
-    const label = MODEL_LABELS[best.model];
-    let text: string;
-    let category: VerdictCategory = 'adequate';
-    if (simpler.length === 0) {
-      const inside = Number.isFinite(relativeHalfWidth) && Math.abs(best.deviation) <= relativeHalfWidth;
-      category = inside ? 'withinError' : 'adequate';
-      text = inside
-        ? `${label} within DSMC error (deviation ${percent(best.deviation)}${rms}, ${error})`
-        : `${label} adequate (deviation ${percent(best.deviation)}${rms}, within the ${percent(tolerance)} tolerance; ${error})`;
-    } else {
-      const failed = [...simpler].reverse();
-      text = `${label} adequate, ${joinWords(failed.map((d) => MODEL_LABELS[d.model]))} not (${failed.map(off).join('; ')}; ${label} ${percent(best.deviation)}${rms}, ${error})`;
-    }
-    return { ...base, bestModel: best.model, deviation: best.deviation, category, text };
-  }
-  const closest = models.reduce((a, d) => (Math.abs(d.deviation) < Math.abs(a.deviation) ? d : a));
-  const continuum = models.filter((d) => d.model !== 'freeMolecular');
-  if (continuum.length > 0 && continuum.every((d) => Math.abs(d.deviation) > KINETIC_THRESHOLD)) {
-    return {
-      ...base,
-      bestModel: closest.model,
-      deviation: closest.deviation,
-      category: 'kinetic',
-      text: `continuum models off by more than ${percent(KINETIC_THRESHOLD)}: kinetic effects dominate (closest: ${off(closest)}; ${error})`,
-    };
-  }
+  const closest = applicable.reduce((a, d) => (Math.abs(d.deviation) < Math.abs(a.deviation) ? d : a));
   return {
     ...base,
-    bestModel: closest.model,
-    deviation: closest.deviation,
-    category: 'noneAdequate',
-    text: `no model within tolerance: closest is ${off(closest)} (tolerance ${percent(tolerance)}, ${error})`,
+    ...decided,
+    bestModel: null,
+    deviation: NaN,
+    status: 'notAdequate',
+    text: `not adequate: every model applicable here is off by more than ${tol} (closest: ${off(closest)}; ${error}); only the kinetic (DSMC) result holds${na}`,
   };
 }
+
+/** Models that do not apply here (continuum/caseApplicability.ts), each with its reason. */
+export type NotApplicable = Partial<Record<ContinuumModelName, string>>;
 
 /**
  * Verdict on one integral quantity: DSMC {mean, ci95} (ci95 the 95 % half-width, NaN if unknown) against each model's
@@ -155,32 +196,40 @@ export function integralVerdict(
   dsmc: { readonly mean: number; readonly ci95: number },
   predictions: Partial<Record<ContinuumModelName, number>>,
   options: VerdictOptions = {},
+  notApplicable: NotApplicable = {},
 ): QuantityVerdict {
   const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
   const scale = Math.abs(dsmc.mean);
   const relativeHalfWidth = dsmc.ci95 / scale;
-  const threshold = Number.isFinite(relativeHalfWidth) ? Math.max(relativeHalfWidth, tolerance) : tolerance;
-  const usable = Number.isFinite(dsmc.mean) && scale > 0;
   const models: ModelDeviation[] = [];
-  if (usable) {
+  if (Number.isFinite(dsmc.mean) && scale > 0) {
     for (const [model, value] of ordered(predictions)) {
       if (!Number.isFinite(value)) continue;
       const deviation = (value - dsmc.mean) / scale;
+      const e = integralEquivalence(deviation, relativeHalfWidth, tolerance);
+      const reason = notApplicable[model];
       models.push({
         model,
         deviation,
         maxDeviation: Math.abs(deviation),
         normalizedDeviation: (value - dsmc.mean) / dsmc.ci95,
-        adequate: Math.abs(deviation) <= threshold,
+        lowerAbs: e.lowerAbs,
+        upperAbs: e.upperAbs,
+        status: reason ? 'notApplicable' : e.status,
+        halfWidthToDecide: reason ? 0 : e.halfWidthToDecide,
+        ...(reason ? { reason } : {}),
       });
     }
   }
-  return decide(quantity, 'integral', unit, scale, relativeHalfWidth, tolerance, 1, models);
+  const difference = (a: ContinuumModelName, b: ContinuumModelName) =>
+    Math.abs(predictions[a]! - predictions[b]!) / scale;
+  const base = { quantity, kind: 'integral' as const, unit, scale, relativeHalfWidth, tolerance, points: 1, models };
+  return decide(base, difference);
 }
 
 /**
  * Verdict on one profile: DSMC means and 95 % half-widths at the profile's points against each model's values at the
- * same points, all in `unit`; `scale` (> 0, same unit) divides the deviations. Profile-wide measures in the file header.
+ * same points, all in `unit`; `scale` (> 0, same unit) divides the deviations.
  */
 export function profileVerdict(
   quantity: string,
@@ -190,6 +239,7 @@ export function profileVerdict(
   scale: number,
   predictions: Partial<Record<ContinuumModelName, ArrayLike<number>>>,
   options: VerdictOptions = {},
+  notApplicable: NotApplicable = {},
 ): QuantityVerdict {
   const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
   const entries = ordered(predictions);
@@ -199,36 +249,44 @@ export function profileVerdict(
     if (Number.isFinite(dsmcMean[i]) && entries.every(([, v]) => Number.isFinite(v[i]))) at.push(i);
   }
   const n = at.length;
-  let hw2 = 0;
-  let hwKnown = 0;
-  for (const i of at)
-    if (Number.isFinite(dsmcCi95[i]) && dsmcCi95[i] > 0) {
-      hw2 += (dsmcCi95[i] / scale) ** 2;
-      hwKnown++;
-    }
-  const relativeHalfWidth = hwKnown === n && n > 0 ? Math.sqrt(hw2 / n) : NaN;
-  const threshold = Number.isFinite(relativeHalfWidth) ? Math.max(relativeHalfWidth, tolerance) : tolerance;
+  const halfWidths = at.map((i) => dsmcCi95[i] / scale);
+  const known = halfWidths.every((x) => Number.isFinite(x) && x > 0);
+  const relativeHalfWidth = known && n > 0 ? Math.sqrt(halfWidths.reduce((a, x) => a + x * x, 0) / n) : NaN;
   const models: ModelDeviation[] = [];
   if (n >= 2 && scale > 0 && Number.isFinite(scale)) {
     for (const [model, values] of entries) {
-      let sum2 = 0;
-      let max = 0;
+      const d = at.map((i) => (values[i] - dsmcMean[i]) / scale);
+      const e = profileEquivalence(d, known ? halfWidths : d.map(() => NaN), tolerance);
+      const reason = notApplicable[model];
       let z2 = 0;
-      for (const i of at) {
-        const d = (values[i] - dsmcMean[i]) / scale;
-        sum2 += d * d;
-        max = Math.max(max, Math.abs(d));
-        z2 += ((values[i] - dsmcMean[i]) / dsmcCi95[i]) ** 2;
-      }
-      const deviation = Math.sqrt(sum2 / n);
+      for (const i of at) z2 += ((values[i] - dsmcMean[i]) / dsmcCi95[i]) ** 2;
       models.push({
         model,
-        deviation,
-        maxDeviation: max,
+        deviation: Math.sqrt(d.reduce((a, x) => a + x * x, 0) / n),
+        maxDeviation: d.reduce((a, x) => Math.max(a, Math.abs(x)), 0),
         normalizedDeviation: Math.sqrt(z2 / n),
-        adequate: deviation <= threshold,
+        lowerAbs: e.lowerAbs,
+        upperAbs: e.upperAbs,
+        status: reason ? 'notApplicable' : e.status,
+        halfWidthToDecide: reason ? 0 : e.halfWidthToDecide,
+        ...(reason ? { reason } : {}),
       });
     }
   }
-  return decide(quantity, 'profile', unit, scale, relativeHalfWidth, tolerance, models.length ? n : 0, models);
+  const difference = (a: ContinuumModelName, b: ContinuumModelName) => {
+    const va = predictions[a]!;
+    const vb = predictions[b]!;
+    return Math.sqrt(at.reduce((s, i) => s + ((va[i] - vb[i]) / scale) ** 2, 0) / n);
+  };
+  const base = {
+    quantity,
+    kind: 'profile' as const,
+    unit,
+    scale,
+    relativeHalfWidth,
+    tolerance,
+    points: models.length ? n : 0,
+    models,
+  };
+  return decide(base, difference);
 }

@@ -70,7 +70,11 @@ test('a user picks the MEMS damping example, sets Kn, runs it in Web Workers and
   expect(bottom.mean).toBeGreaterThan(0);
   await expect(page.getByTestId('wall-numbers')).toContainText('shear stress [Pa]');
   await expect(page.getByTestId('result-facts')).toContainText('2 replicas');
-  // Profiles with error bars drawn by plotly.
+  // One answer first: the "Which model is good enough" card, with its sentence on the headline quantity.
+  await expect(page.getByTestId('comparison')).toBeVisible();
+  await expect(page.getByTestId('verdict-headline')).toContainText('the wall shear stress');
+  // Profiles with error bars drawn by plotly (plots draw once visible; the verdict card above moves this one down).
+  await page.getByTestId('profile-plot').scrollIntoViewIfNeeded();
   await expect(page.getByTestId('profile-plot')).toHaveAttribute('data-drawn', 'yes');
   expect(await page.locator('[data-testid="profile-plot"] g.errorbar').count()).toBeGreaterThan(0);
   await w.showAllPlots();

@@ -65,13 +65,30 @@ describe('comparisonView()', () => {
           quantity: 'walls.top.shearStress',
           kind: 'integral',
           unit: 'Pa',
-          category: 'adequate',
+          status: 'adequate',
           text: 'no-slip adequate',
+          models: [{ model: 'noSlip', status: 'adequate' }],
         },
       },
       profiles: {},
     } as unknown as ContinuumComparisonResult;
-    const v = comparisonView(c, { noSlip: 'no-slip' })!;
+    const api = {
+      MODEL_LABELS: { noSlip: 'no-slip' },
+      verdictHeadline: () => ({
+        quantity: 'walls.top.shearStress',
+        text: 'For the wall shear stress, no-slip is the simplest adequate model.',
+        halfWidthToDecide: 0,
+        samplingFactor: 1,
+        relativeHalfWidth: 0.01,
+      }),
+      extraTimeText: () => '',
+    };
+    const v = comparisonView(c, api)!;
+    expect(v.headline).toEqual({
+      text: 'For the wall shear stress, no-slip is the simplest adequate model.',
+      status: 'adequate',
+      time: '',
+    });
     expect(v.curves).toEqual([
       { model: 'no-slip', quantity: 'velocityX', values: [-1, 1], y: [1, 2] },
       { model: 'no-slip', quantity: 'velocityX', values: [0], y: [1], line: { kind: 'column', atM: 0.5 } },
@@ -80,16 +97,18 @@ describe('comparisonView()', () => {
       {
         quantity: 'walls.top.shearStress',
         unit: 'Pa',
-        category: 'adequate',
+        status: 'adequate',
         text: 'no-slip adequate',
         values: [{ label: 'no-slip', value: -1.5 }],
+        models: [{ label: 'no-slip', status: 'adequate' }],
       },
     ]);
-    expect(comparisonView({ recognised: false, reason: 'not a known problem' }, {})).toEqual({
+    expect(comparisonView({ recognised: false, reason: 'not a known problem' }, null)).toEqual({
       recognised: false,
       description: 'not a known problem',
       curves: [],
       verdicts: [],
+      headline: null,
     });
   });
 });

@@ -122,6 +122,7 @@ describe('tenuis sweep', () => {
         'profiles.csv',
         'summary.json',
         'surfaces.csv',
+        'verdict.csv',
       ]);
       const s = json(join(folder, 'summary.json'));
       expect(sweep.points[k].summary).toEqual(s);

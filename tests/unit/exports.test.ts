@@ -317,9 +317,13 @@ describe('result exports with a continuum comparison', () => {
         'profile.temperature',
       ]),
     );
-    for (const v of Object.values(s.verdict!)) {
+    const { headline, headlineQuantity, ...quantities } = s.verdict!;
+    expect(headline).toMatch(/the wall shear stress/);
+    expect(headlineQuantity).toBe('walls.bottom.shearStress');
+    for (const v of Object.values(quantities)) {
+      if (typeof v === 'string') throw new Error('a quantity verdict is an object');
       expect(typeof v.text).toBe('string');
-      expect(Object.keys(v)).toEqual(expect.arrayContaining(['bestModel', 'deviation', 'text']));
+      expect(Object.keys(v)).toEqual(expect.arrayContaining(['status', 'bestModel', 'deviation', 'text']));
     }
     expect(s.continuumModels!.problem).toBe('couette');
     expect(s.continuumModels!.meanFreePath.kind).toBe('viscosity');
@@ -334,9 +338,12 @@ describe('result exports with a continuum comparison', () => {
       comparison.verdict['walls.top.shearStress'].text,
     );
     expect(withPlan['profiles.csv']).toContain('velocityX noSlip [m/s]');
+    expect(Object.keys(withPlan)).toContain('verdict.csv');
+    expect(withPlan['verdict.csv']).toMatch(/^quantity,unit,model,status,/);
     const plain = resultFiles(result, { performance, caseName: 'x' });
     expect(plain['summary.json']).not.toContain('"verdict"');
     expect(plain['profiles.csv']).toBe(profilesCsv(result));
+    expect(Object.keys(plain)).not.toContain('verdict.csv');
   });
 
   it('summaryJson() says why when no continuum model applies', () => {
