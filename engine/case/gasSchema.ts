@@ -18,12 +18,10 @@ export function speciesIdOf(text: string): SpeciesId | undefined {
   return SPECIES_IDS.find((id) => squeezed(id) === key || squeezed(SPECIES[id].name) === key);
 }
 
-/** Both forms of every table gas, for messages: "Ar (argon), N2 (nitrogen), …". */
-export const SPECIES_CHOICES = SPECIES_IDS.map((id) =>
-  SPECIES[id].name.toLowerCase() === id.toLowerCase() ? id : `${id} (${SPECIES[id].name})`,
-).join(', ');
+/** Both forms of every table gas, for messages: "H2, He, … (or by name: hydrogen, helium, …)". */
+export const SPECIES_CHOICES = `${SPECIES_IDS.join(', ')} (or by name, in any case: ${SPECIES_IDS.map((id) => SPECIES[id].name).join(', ')})`;
 
-const speciesMessage = `gas.species must be one of ${SPECIES_CHOICES} (formula or name, any case), or give gas.custom instead`;
+const speciesMessage = `gas.species must be one of ${SPECIES_CHOICES}, or give gas.custom instead`;
 const species = z.string({ error: speciesMessage }).transform((text, ctx): SpeciesId => {
   const id = speciesIdOf(text);
   if (id === undefined) {
@@ -38,8 +36,16 @@ const customGas = z.strictObject({
   massKg: bounded('molecular mass (kg per molecule, e.g. 6.63e-26 for argon)', { min: 1e-28, max: 1e-22, unit: 'kg' }),
   referenceDiameterM: bounded('reference diameter (m, e.g. 4.17e-10)', { min: 1e-11, max: 1e-8, unit: 'm' }),
   referenceTemperatureK: bounded('reference temperature (K)', { min: 1, max: 1e5, unit: 'K' }).default(273),
-  viscosityIndex: bounded('viscosity index ω (0.5 hard sphere, 1 Maxwell molecules)', { min: 0.5, max: 1 }),
-  scatteringExponent: bounded('VSS scattering exponent α (1 isotropic)', { min: 1, max: 2 }).default(1),
+  viscosityIndex: bounded('viscosity index ω', {
+    min: 0.5,
+    max: 1,
+    message: 'viscosity index ω must be between 0.5 (hard sphere) and 1 (Maxwell molecules)',
+  }),
+  scatteringExponent: bounded('VSS scattering exponent α', {
+    min: 1,
+    max: 2,
+    message: 'VSS scattering exponent α must be between 1 (isotropic) and 2',
+  }).default(1),
   rotationalDof: z.union([z.literal(0), z.literal(2), z.literal(3)], {
     error: 'rotational degrees of freedom must be 0 (monatomic), 2 (linear) or 3 (non-linear)',
   }),

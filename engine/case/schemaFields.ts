@@ -8,12 +8,13 @@
 import { z } from 'zod';
 
 /** A finite number in (0, max] (or [min, max] when min is given), with one message naming the range and unit. */
-export const bounded = (what: string, range: { min?: number; max: number; unit?: string }) => {
+export const bounded = (what: string, range: { min?: number; max: number; unit?: string; message?: string }) => {
   const unit = range.unit ? ` ${range.unit}` : '';
   const message =
-    range.min === undefined
+    range.message ??
+    (range.min === undefined
       ? `${what} must be greater than zero and at most ${range.max}${unit}`
-      : `${what} must be a number between ${range.min} and ${range.max}${unit}`;
+      : `${what} must be a number between ${range.min} and ${range.max}${unit}`);
   const n = z.number({ error: message }).finite({ error: message });
   return (range.min === undefined ? n.positive({ error: message }) : n.min(range.min, { error: message })).max(
     range.max,
@@ -72,5 +73,9 @@ export const LIMITS = {
   lengthM: { min: 1e-9, max: 1e3, unit: 'm' },
 } as const;
 export const pressure = (what: string) => bounded(what, LIMITS.pressurePa);
-export const temperature = (what: string) => bounded(what, LIMITS.temperatureK);
+export const temperature = (what: string) =>
+  bounded(what, {
+    ...LIMITS.temperatureK,
+    message: `${what} must be greater than zero: an absolute temperature from ${LIMITS.temperatureK.min} to ${LIMITS.temperatureK.max} K`,
+  });
 export const length = (what: string) => bounded(what, LIMITS.lengthM);

@@ -203,7 +203,9 @@ export function plan(c: Case, options: PlanOptions = {}): PlanResult {
     requestedParticlesPerCell *
     cellGeometry.gasCellEquivalent *
     Math.max(1, highest.numberDensityPerM3 / ref.numberDensityPerM3);
-  const weightScale = Math.max(1, reachableAtInitialWeight / c.numerics.maxParticles);
+  // Only the growth beyond the fill is absorbed so: a fill that alone passes maxParticles is refused below, as before.
+  const fillsWithinBudget = requestedParticlesPerCell * cellGeometry.gasCellEquivalent <= c.numerics.maxParticles;
+  const weightScale = fillsWithinBudget ? Math.max(1, reachableAtInitialWeight / c.numerics.maxParticles) : 1;
   const particlesPerCell = weightScale > 1 ? requestedParticlesPerCell / weightScale : requestedParticlesPerCell;
   if (weightScale > 1)
     warnings.push(
