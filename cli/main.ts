@@ -6,6 +6,7 @@
 import { CliError, UsageError, EXIT_BAD_INPUT, EXIT_USAGE } from './errors';
 import type { CommandIO } from './commands/io';
 import { COMMANDS, MAIN_USAGE, helpCommand } from './commands';
+import { printable } from './printable';
 
 export async function main(argv: string[], io: CommandIO): Promise<number> {
   const [name, ...rest] = argv;
@@ -22,7 +23,8 @@ export async function main(argv: string[], io: CommandIO): Promise<number> {
       return EXIT_USAGE;
     }
     if (e instanceof CliError) {
-      io.stderr.write(`tenuis: ${e.message}\n`);
+      // Messages quote user text (names, file contents): print it safely.
+      io.stderr.write(`tenuis: ${printable(e.message)}\n`);
       return e.exitCode;
     }
     io.stderr.write(`tenuis: internal error (please report it): ${(e as Error)?.stack ?? e}\n`);

@@ -1,10 +1,14 @@
-/** Human-readable reports: a plan (for `check` and before `run`) and the short summary after a run. */
+/**
+ * Human-readable reports: a plan (for `check` and before `run`) and the short summary after a run. User text in them
+ * (names) goes through printable.ts, so a name holding escape sequences cannot drive the terminal.
+ */
 import type { Plan } from '../engine/plan/plan';
 import type { SimulationResult } from '../engine/results/summarize';
 import type { Performance } from '../engine/report/summaryJson';
 import type { ContinuumComparisonResult } from '../engine/report/comparison';
 import { extraTimeText, sampledWallSeconds, verdictHeadline } from '../engine/report/headline';
 import { sig, plusMinus, duration, bytes, table } from './format';
+import { printableLine } from './printable';
 import {
   independentSamples,
   densityRelativeError,
@@ -52,8 +56,8 @@ export function planReport(p: Plan): string {
   const a = p.ratios;
   const total = p.transientSteps + p.sampleSteps;
   return [
-    `case "${p.caseData.name}": valid`,
-    `gas: ${p.gas.name}`,
+    `case "${printableLine(p.caseData.name)}": valid`,
+    `gas: ${printableLine(p.gas.name)}`,
     'reference state:',
     table([
       ['pressure', `${sig(r.pressurePa)} Pa`],

@@ -3,6 +3,7 @@ import { EXIT_OK } from '../errors';
 import { loadCase } from '../readCase';
 import { planReport } from '../report';
 import { defineCommand } from '../command';
+import { printable } from '../printable';
 
 export const CHECK_USAGE = `Usage:
   tenuis check CASE.json
@@ -19,7 +20,8 @@ export const checkCommand = defineCommand({
     if (positionals.length !== 1) throw usageError('check needs exactly one case file');
     const { plan } = loadCase(positionals[0]);
     io.stdout.write(`${planReport(plan)}\n`);
-    if (plan.warnings.length) io.stdout.write(`warnings:\n${plan.warnings.map((w) => `  ${w}`).join('\n')}\n`);
+    if (plan.warnings.length)
+      io.stdout.write(`warnings:\n${plan.warnings.map((w) => `  ${printable(w)}`).join('\n')}\n`);
     else io.stdout.write('warnings: none\n');
     return EXIT_OK;
   },

@@ -24,6 +24,7 @@ import { createProgress } from '../progress';
 import { runSummary } from '../report';
 import { prettyJson } from '../prettyJson';
 import { defineCommand } from '../command';
+import { printable } from '../printable';
 
 export const RUN_USAGE = `Usage:
   tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE]
@@ -146,7 +147,7 @@ export const runCommand = defineCommand({
       ? { caseData: resumed.sim.plan.caseData, plan: resumed.sim.plan }
       : loadCase(positionals[0], { seed });
     checkOutputDir(outDir);
-    for (const w of plan.warnings) io.stderr.write(`warning: ${w}\n`);
+    for (const w of plan.warnings) io.stderr.write(`warning: ${printable(w)}\n`);
 
     const replicas = values.replicas === undefined ? 1 : parseReplicasOption(values.replicas, usage);
     const stopping = stoppingRules(values, plan, usage);
@@ -228,7 +229,7 @@ export const runCommand = defineCommand({
     };
     writeResultsAtomically(outDir, files);
     if (savePath) writeBinaryAtomically(savePath, encodeSampleSet(samples));
-    for (const w of result.warnings) if (!plan.warnings.includes(w)) io.stderr.write(`warning: ${w}\n`);
+    for (const w of result.warnings) if (!plan.warnings.includes(w)) io.stderr.write(`warning: ${printable(w)}\n`);
     if (stopNote && !quiet) io.stderr.write(`${stopNote}\n`);
     if (!quiet) io.stderr.write(`${runSummary(result, performance, outDir, comparison)}\n`);
     if (interrupted) return EXIT_INTERRUPTED;

@@ -4,7 +4,7 @@
  */
 import { z } from 'zod';
 import { WALL_MODELS } from './caseConstants';
-import { RESULT_NAME, fraction, positive, velocity } from './schemaFields';
+import { LIMITS, RESULT_NAME, fraction, pressure, temperature, velocity } from './schemaFields';
 
 export const wallSchema = z
   .strictObject({
@@ -15,7 +15,7 @@ export const wallSchema = z
       .regex(RESULT_NAME, { error: 'a wall name must start with a letter and hold only letters, digits, _ and -' })
       .optional(),
     model: z.enum(WALL_MODELS, { error: `wall model must be one of ${WALL_MODELS.join(', ')}` }).default('diffuse'),
-    temperatureK: positive('wall temperature (K)'),
+    temperatureK: temperature('wall temperature (K)'),
     velocityMPerS: velocity,
     accommodation: fraction('accommodation coefficient').optional(),
     normalAccommodation: fraction('normal energy accommodation').optional(),
@@ -44,6 +44,8 @@ export const wallSchema = z
     }
   });
 
+const reservoirPressureMessage = `reservoir pressure must be 0 (vacuum) or more, at most ${LIMITS.pressurePa.max} Pa`;
+
 /**
  * A side open to a large vessel held at a given state: molecules leave freely and enter with the exact Maxwellian
  * influx of that state (drift velocity optional, e.g. a measured approach flow).
@@ -52,10 +54,11 @@ const reservoir = z.strictObject({
   type: z.literal('reservoir'),
   /** 0 is a vacuum: molecules leave, none enter. */
   pressurePa: z
-    .number({ error: 'reservoir pressure must be a number (Pa)' })
-    .finite()
-    .min(0, { error: 'reservoir pressure must be 0 (vacuum) or more (Pa)' }),
-  temperatureK: positive('reservoir temperature (K)'),
+    .number({ error: reservoirPressureMessage })
+    .finite({ error: reservoirPressureMessage })
+    .min(0, { error: reservoirPressureMessage })
+    .max(LIMITS.pressurePa.max, { error: reservoirPressureMessage }),
+  temperatureK: temperature('reservoir temperature (K)'),
   velocityMPerS: velocity,
 });
 
@@ -73,7 +76,7 @@ export const boundarySchema = z.discriminatedUnion(
      * Maxwellian whose density, speed and temperature follow from the gas next to the end by the characteristic
      * relations of Wang & Li 2004 (kernel/pressureOutlet.ts).
      */
-    z.strictObject({ type: z.literal('pressureOutlet'), pressurePa: positive('outlet pressure (Pa)') }),
+    z.strictObject({ type: z.literal('pressureOutlet'), pressurePa: pressure('outlet pressure (Pa)') }),
   ],
   { error: 'boundary type must be wall, periodic, symmetry, reservoir, axis or pressureOutlet' },
 );

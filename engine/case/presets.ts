@@ -14,6 +14,7 @@ import { fourier } from './fourierPreset';
 import { DUCT_PRESETS } from './ductPresets';
 import { cavity } from './cavityPreset';
 import { gasStateOfPresetCase, gasStateWays } from './pressurePresetParameters';
+import { SPECIES_CHOICES, speciesIdOf } from './gasSchema';
 
 export type { ParameterKind, Preset, PresetParameter, PresetValues } from './presetParameters';
 export { pressureForKnudsenPa, defaultGapNumerics as defaultNumerics } from './presetParameters';
@@ -113,9 +114,12 @@ function parseParameter(preset: Preset, p: PresetParameter, text: string): numbe
   if (p.kind === 'choice') {
     const choice =
       p.choices!.find((c) => c === text.trim()) ??
-      p.choices!.find((c) => c.toLowerCase() === text.trim().toLowerCase());
+      p.choices!.find((c) => c.toLowerCase() === text.trim().toLowerCase()) ??
+      (p.name === 'gas' ? speciesIdOf(text) : undefined);
     if (choice === undefined)
-      throw new Error(`${where}: "${text}" is not allowed; choose one of ${p.choices!.join(', ')}`);
+      throw new Error(
+        `${where}: "${text}" is not allowed; choose one of ${p.name === 'gas' ? SPECIES_CHOICES : p.choices!.join(', ')}`,
+      );
     return choice;
   }
   let value: number;

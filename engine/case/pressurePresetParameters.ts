@@ -12,6 +12,7 @@
 import { modelFromSpecies, type MolecularModel } from '../gas/molecularModel';
 import type { CaseInput } from './schema';
 import { type PresetParameter, type PresetValues, pressureForKnudsenPa } from './presetParameters';
+import { speciesIdOf } from './gasSchema';
 
 const pressure = (name: string, label: string, description: string): PresetParameter => ({
   name,
@@ -175,7 +176,7 @@ export interface GasState {
  * vessels' pressures are the left and right reservoirs'. Null for a custom gas or a case without a length scale.
  */
 export function gasStateOfPresetCase(c: CaseInput): GasState | null {
-  const species = c.gas.species;
+  const species = c.gas.species === undefined ? undefined : speciesIdOf(c.gas.species);
   const lengthM = c.domain.characteristicLengthM;
   if (!species || lengthM === undefined) return null;
   const model = modelFromSpecies(species, c.gas.model ?? 'VHS');

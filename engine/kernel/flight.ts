@@ -146,7 +146,10 @@ export function flyParticle(st: SimState, i: number, dt: number, weight: number)
       }
     }
     if (axi) {
-      const t = timeToCylinderOutward(py, vyi, a, ly);
+      // On (or, by rounding, just beyond) r = R and not moving inward: out through the outer side now. The root
+      // below can round to a tiny negative time there (√(p²v²) < p·v), which read as "never", and a molecule that
+      // had just reflected off a block face on r = R flew on outside the domain (issue 12, fuzz case 02).
+      const t = py >= ly && vyi >= 0 && a > 0 ? 0 : timeToCylinderOutward(py, vyi, a, ly);
       if (t < tHit) {
         tHit = t;
         row = SIDE_TOP;

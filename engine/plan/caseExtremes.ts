@@ -38,3 +38,34 @@ export function densestState(c: Case): { pressurePa: number; temperatureK: numbe
   }
   return best;
 }
+
+/**
+ * The highest number density (m⁻³) the gas can reach anywhere in the domain: the initial fill, every reservoir, and
+ * every pressure outlet (at the coldest temperature of the case, the densest it can be held at). The particle
+ * weight and the memory check are sized from it, so that a domain started nearly empty next to a full vessel cannot
+ * flood memory as it fills (issue 12).
+ */
+export function highestNumberDensityPerM3(
+  c: Case,
+  boltzmannJPerK: number,
+): { numberDensityPerM3: number; where: string } {
+  let best = { numberDensityPerM3: c.initial.pressurePa / (boltzmannJPerK * c.initial.temperatureK), where: 'initial' };
+  const coldest = coldestTemperature(c);
+  for (const side of SIDE_NAMES) {
+    const b = c.boundaries[side];
+    const n =
+      b.type === 'reservoir'
+        ? b.pressurePa / (boltzmannJPerK * b.temperatureK)
+        : b.type === 'pressureOutlet'
+          ? b.pressurePa / (boltzmannJPerK * coldest)
+          : 0;
+    if (n > best.numberDensityPerM3) best = { numberDensityPerM3: n, where: `boundaries.${side}` };
+  }
+  return best;
+}
+
+function coldestTemperature(c: Case): number {
+  let t = c.initial.temperatureK;
+  for (const b of boundaryStates(c)) t = Math.min(t, b.temperatureK);
+  return t;
+}

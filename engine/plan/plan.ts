@@ -1,7 +1,8 @@
 /**
  * plan(): turns a validated case into the numbers the kernels need — reference state, grid, time step, particle
  * weight, sampling schedule — and the numerics advisor's ratios and warnings. Pure and cheap, so a form can call it
- * on every keystroke.
+ * on every keystroke. Every number it derives is guarded (planGuards.ts): a case whose numbers no simulation can use
+ * is refused here with the field to change, never left to crash or hang the kernels.
  */
 import type { Case, BoundarySpec } from '../case/schema';
 import type { SideName } from '../case/caseConstants';
@@ -14,9 +15,13 @@ import {
   type CellGeometry,
 } from '../geometry/cellGeometry';
 import { surfacesOf, type SurfacePlan } from '../geometry/surfaces';
+import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { mostProbableSpeedMPerS } from '../gas/molecularModel';
 import { gasModelOf, referenceStateOf, type GasPlan, type ReferenceState } from './referenceState';
-import { densestState, fastestFlowSpeed, hottestTemperature } from './caseExtremes';
+import { densestState, fastestFlowSpeed, hottestTemperature, highestNumberDensityPerM3 } from './caseExtremes';
+import { MAX_CELLS, MAX_STEP_RATIO, MIN_STEP_RATIO, gigabytes, nonFiniteErrors } from './planGuards';
+
+export { gasModelOf, referenceStateOf, type GasPlan, type ReferenceState };
 
 export interface GridPlan {
   readonly cellsX: number;
@@ -89,7 +94,15 @@ function resolved(cells: number, a: BoundarySpec, b: BoundarySpec): boolean {
   return cells > 1 || a.type !== 'periodic' || b.type !== 'periodic';
 }
 
-export function plan(c: Case): PlanResult {
+/** What the planner may use beyond the case: the memory the machine has (bytes), when the caller knows it. */
+export interface PlanOptions {
+  readonly memoryBudgetBytes?: number;
+}
+
+/** Bytes per cell of the sampling arrays: raw cell sums, double-buffered field batches (see memoryBytesEstimate). */
+const BYTES_PER_CELL = RAW_CELL_SUMS * 8 * (FIELD_BATCH_CAPACITY + 3);
+
+export function plan(c: Case, options: PlanOptions = {}): PlanResult {
   const errors: string[] = [];
   const warnings: string[] = [];
   let gas: GasPlan;
@@ -104,12 +117,36 @@ export function plan(c: Case): PlanResult {
   const { lengthXM: lx, lengthYM: ly } = c.domain;
   const b = c.boundaries;
   const axisymmetric = c.domain.geometry === 'axisymmetric';
+  const stateErrors = nonFiniteErrors([
+    { value: ref.numberDensityPerM3, what: 'number density', field: 'initial.pressurePa' },
+    { value: ref.viscosityPaS, what: 'viscosity', field: 'initial.temperatureK' },
+    { value: ref.mostProbableSpeedMPerS, what: 'most probable speed', field: 'initial.temperatureK' },
+    { value: ref.meanFreePathM, what: 'mean free path', field: 'initial.pressurePa' },
+    { value: ref.meanCollisionTimeS, what: 'mean collision time', field: 'initial.pressurePa' },
+    { value: denseRef.meanFreePathM, what: 'mean free path at the densest state', field: 'boundaries' },
+    { value: denseRef.meanCollisionTimeS, what: 'mean collision time at the densest state', field: 'boundaries' },
+    { value: boxVolumeM3(0, lx, 0, ly, axisymmetric), what: 'box volume', field: 'domain.lengthYM' },
+  ]);
+  if (stateErrors.length) return { ok: false, errors: stateErrors };
 
   // Cells: at most λ/3 (at the densest state held) and at least 20 across the larger side, unless the user chose
   // (common practice, Bird 1994).
   const autoCell = Math.min(denseRef.meanFreePathM / 3, Math.max(lx, ly) / 20);
   const cellsX = c.numerics.cellsX ?? Math.max(1, Math.ceil(lx / autoCell - 1e-9));
   const cellsY = c.numerics.cellsY ?? Math.max(1, Math.ceil(ly / autoCell - 1e-9));
+  // Refuse a grid too large to build before building it cell by cell (millions of cells take seconds).
+  if (!(cellsX * cellsY <= MAX_CELLS)) {
+    const why =
+      c.numerics.cellsX !== undefined && c.numerics.cellsY !== undefined
+        ? 'set numerics.cellsX/cellsY lower'
+        : `the mean free path (${denseRef.meanFreePathM.toPrecision(3)} m${dense === c.initial ? '' : ' at the densest reservoir'}) sets cells of λ/3: lower the pressure (raise the Knudsen number), shorten the domain, or set numerics.cellsX/cellsY`;
+    return {
+      ok: false,
+      errors: [
+        `numerics.cellsX/cellsY: ${cellsX} × ${cellsY} cells, more than the limit of ${MAX_CELLS} cells; ${why}`,
+      ],
+    };
+  }
   const dx = lx / cellsX;
   const dy = ly / cellsY;
   const resolvedSizes: number[] = [];
@@ -117,7 +154,7 @@ export function plan(c: Case): PlanResult {
   if (resolved(cellsY, b.bottom, b.top)) resolvedSizes.push(dy);
   const largestCell = resolvedSizes.length ? Math.max(...resolvedSizes) : Math.max(dx, dy);
   const blocks: BlockRectangle[] = c.blocks.map((k) => ({ x0: k.xMinM, x1: k.xMaxM, y0: k.yMinM, y1: k.yMaxM }));
-  // Refuse a grid far beyond the particle budget before building it cell by cell (millions of cells take seconds).
+  // Refuse a grid far beyond the particle budget or the memory before building it.
   const gasShare = gasVolumeOfBoxM3(0, lx, 0, ly, blocks, axisymmetric) / boxVolumeM3(0, lx, 0, ly, axisymmetric);
   const roughParticles = cellsX * cellsY * (c.numerics.particlesPerCell ?? 30) * gasShare;
   if (roughParticles > 2 * c.numerics.maxParticles) {
@@ -129,6 +166,15 @@ export function plan(c: Case): PlanResult {
       ],
     };
   }
+  const budget = options.memoryBudgetBytes;
+  const cellBytes = cellsX * cellsY * BYTES_PER_CELL;
+  if (budget !== undefined && cellBytes > budget)
+    return {
+      ok: false,
+      errors: [
+        `numerics.cellsX/cellsY: ${cellsX} × ${cellsY} cells need about ${gigabytes(cellBytes)} for their samples alone, more than this machine's memory (${gigabytes(budget)}); use fewer or larger cells`,
+      ],
+    };
   const cellGeometry = cellGeometryOf(cellsX, cellsY, lx, ly, blocks, axisymmetric);
   const surfaces = surfacesOf(c, dx, dy);
   const smallestCell = resolvedSizes.length ? Math.min(...resolvedSizes) : Math.min(dx, dy);
@@ -136,10 +182,36 @@ export function plan(c: Case): PlanResult {
   const vHot = mostProbableSpeedMPerS(gas.model.massKg, hottestTemperature(c));
   const transitSpeed = vHot + fastestFlowSpeed(c);
   const transitTime = smallestCell / transitSpeed;
-  const timeStepS = c.numerics.timeStepS ?? 0.25 * Math.min(denseRef.meanCollisionTimeS, transitTime);
+  const advisorStepS = Math.min(denseRef.meanCollisionTimeS, transitTime);
+  const timeStepS = c.numerics.timeStepS ?? 0.25 * advisorStepS;
+  if (c.numerics.timeStepS !== undefined && timeStepS > MAX_STEP_RATIO * advisorStepS)
+    errors.push(
+      `numerics.timeStepS: ${timeStepS} s is more than ${MAX_STEP_RATIO} × the shorter of the mean collision time and the cell transit time (${advisorStepS.toPrecision(3)} s); the advisor wants at most 1/4 of it, ${(0.25 * advisorStepS).toPrecision(3)} s`,
+    );
+  if (c.numerics.timeStepS !== undefined && timeStepS < MIN_STEP_RATIO * advisorStepS)
+    errors.push(
+      `numerics.timeStepS: ${timeStepS} s is below ${MIN_STEP_RATIO} × the shorter of the mean collision time and the cell transit time (${advisorStepS.toPrecision(3)} s): molecules would hardly move; leave timeStepS out for the advisor's ${(0.25 * advisorStepS).toPrecision(3)} s`,
+    );
 
   const cells = cellsX * cellsY;
-  const particlesPerCell = c.numerics.particlesPerCell ?? 30;
+  const requestedParticlesPerCell = c.numerics.particlesPerCell ?? 30;
+  // The densest state the gas can reach (a reservoir or outlet may be far denser than the initial fill): with the
+  // initial weight the domain could fill to this many particles. When that passes numerics.maxParticles the weight
+  // is raised so it fits, and the initial fill gets fewer particles per cell.
+  const highest = highestNumberDensityPerM3(c, K_B);
+  const reachableAtInitialWeight =
+    requestedParticlesPerCell *
+    cellGeometry.gasCellEquivalent *
+    Math.max(1, highest.numberDensityPerM3 / ref.numberDensityPerM3);
+  // Only the growth beyond the fill is absorbed so: a fill that alone passes maxParticles is refused below, as before.
+  const fillsWithinBudget = requestedParticlesPerCell * cellGeometry.gasCellEquivalent <= c.numerics.maxParticles;
+  const weightScale = fillsWithinBudget ? Math.max(1, reachableAtInitialWeight / c.numerics.maxParticles) : 1;
+  const particlesPerCell = weightScale > 1 ? requestedParticlesPerCell / weightScale : requestedParticlesPerCell;
+  if (weightScale > 1)
+    warnings.push(
+      `${highest.where} holds gas ${(highest.numberDensityPerM3 / ref.numberDensityPerM3).toPrecision(3)} times denser than the initial fill: particles are weighted so that the densest state fits numerics.maxParticles, and the initial fill gets ${particlesPerCell.toPrecision(3)} particles per cell instead of ${requestedParticlesPerCell}`,
+    );
+  const reachableParticles = Math.min(c.numerics.maxParticles, reachableAtInitialWeight);
   // particlesPerCell refers to a whole cell of weight 1 at the initial state; cells cut by blocks hold fewer.
   const initialParticles = Math.round(particlesPerCell * cellGeometry.gasCellEquivalent);
   const moleculesPerParticle = (ref.numberDensityPerM3 * cellGeometry.referenceVolumeM3) / particlesPerCell;
@@ -152,7 +224,18 @@ export function plan(c: Case): PlanResult {
     );
   }
   if (initialParticles < 2)
-    errors.push('numerics.particlesPerCell: the domain must hold at least 2 simulated particles');
+    errors.push(
+      weightScale > 1
+        ? `initial.pressurePa: the initial fill is ${(highest.numberDensityPerM3 / ref.numberDensityPerM3).toPrecision(3)} times less dense than ${highest.where}; with particles weighted so that the densest state fits numerics.maxParticles (${c.numerics.maxParticles}), it would hold ${initialParticles} particles (at least 2 are needed): start the gas nearer the reservoirs' state`
+        : 'numerics.particlesPerCell: the domain must hold at least 2 simulated particles',
+    );
+  errors.push(
+    ...nonFiniteErrors([
+      { value: cellGeometry.referenceVolumeM3, what: 'cell volume', field: 'domain.lengthYM' },
+      { value: moleculesPerParticle, what: 'number of molecules per simulated particle', field: 'domain.lengthXM' },
+      { value: timeStepS, what: 'time step', field: 'numerics.timeStepS' },
+    ]),
+  );
 
   // Transient: ballistic crossings and viscous diffusion across the domain; ~7 e-folds of the slowest shear mode
   // (time constant L²ρ/(π²μ)) — common practice, no source. A user can set it, and the parallel-runs work detects it.
@@ -198,11 +281,23 @@ export function plan(c: Case): PlanResult {
     warnings.push(`${particlesPerCell} particles per cell; at least about 20 are advised (numerics.particlesPerCell)`);
 
   const wallBinTotal = surfaces.reduce((s, f) => s + f.bins, 0);
+  // Sized from the largest state the case can reach (every reservoir and outlet filling the domain), not the fill.
   const memoryBytesEstimate =
-    initialParticles * 1.25 * BYTES_PER_PARTICLE +
+    Math.max(initialParticles, reachableParticles) * 1.25 * BYTES_PER_PARTICLE +
     cells * RAW_CELL_SUMS * 8 * (FIELD_BATCH_CAPACITY + 3) +
     wallBinTotal * 5 * 8 * (FIELD_BATCH_CAPACITY + 3);
 
+  if (budget !== undefined && memoryBytesEstimate > budget)
+    errors.push(
+      `numerics.maxParticles: the case needs about ${gigabytes(memoryBytesEstimate)} (${Math.round(Math.max(initialParticles, reachableParticles))} particles at its densest state, ${cells} cells), more than this machine's memory (${gigabytes(budget)}); lower numerics.maxParticles or particlesPerCell, or use fewer cells`,
+    );
+  errors.push(
+    ...nonFiniteErrors([
+      { value: transientSteps + 1, what: 'number of transient steps', field: 'numerics.timeStepS' },
+      { value: sampleSteps, what: 'number of sampling steps', field: 'numerics.timeStepS' },
+      { value: memoryBytesEstimate, what: 'memory estimate', field: 'numerics' },
+    ]),
+  );
   if (errors.length) return { ok: false, errors };
   return {
     ok: true,
@@ -244,7 +339,7 @@ export function plan(c: Case): PlanResult {
 }
 
 /** Validates untrusted case JSON and plans it in one go: the errors of whichever stage refused it. */
-export function planFromInput(input: unknown): PlanResult {
+export function planFromInput(input: unknown, options: PlanOptions = {}): PlanResult {
   const parsed = parseCase(input);
-  return parsed.ok ? plan(parsed.value) : { ok: false, errors: parsed.errors };
+  return parsed.ok ? plan(parsed.value, options) : { ok: false, errors: parsed.errors };
 }

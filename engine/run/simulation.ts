@@ -62,6 +62,11 @@ export interface Simulation {
   readonly phaseMs: PhaseTimes;
   readonly clock: Clock;
   timePhases: boolean;
+  /**
+   * Why the run stopped early, or null: set when the particle count passes numerics.maxParticles (a flood the plan
+   * did not foresee). The run then ends as finished, keeping what was sampled, with this as a warning.
+   */
+  stopReason: string | null;
 }
 
 export interface CreateOptions {
@@ -91,6 +96,7 @@ export function createSimulation(plan: Plan, options: CreateOptions = {}): Simul
     phaseMs: { move: 0, index: 0, collide: 0, sample: 0 },
     clock: options.clock ?? Date.now,
     timePhases: options.timePhases ?? false,
+    stopReason: null,
   };
 }
 
@@ -117,6 +123,10 @@ export function advance(sim: Simulation, steps: number): void {
       lap(sim, 'sample', t0);
     }
     st.step++;
+    if (st.count > sim.plan.caseData.numerics.maxParticles) {
+      sim.stopReason = `stopped at step ${st.step}: ${st.count} simulated particles, more than numerics.maxParticles (${sim.plan.caseData.numerics.maxParticles}); the gas became far denser than the plan foresaw — the result holds what was sampled until then`;
+      return;
+    }
   }
 }
 
@@ -188,7 +198,7 @@ export function isSampling(sim: Simulation): boolean {
 
 /** True when the transient is over and the plan's sampling steps are done. */
 export function isFinished(sim: Simulation): boolean {
-  return sim.sampledSteps >= sim.plan.sampleSteps;
+  return sim.stopReason !== null || sim.sampledSteps >= sim.plan.sampleSteps;
 }
 
 /**
@@ -197,6 +207,7 @@ export function isFinished(sim: Simulation): boolean {
  */
 export function stepsRemaining(sim: Simulation): number {
   const st = sim.state;
+  if (sim.stopReason !== null) return 0;
   if (Number.isFinite(sim.transientEndStep)) {
     return Math.max(0, sim.transientEndStep - st.step) + Math.max(0, sim.plan.sampleSteps - sim.sampledSteps);
   }

@@ -19,8 +19,10 @@ export function sampleSetOf(sim: Simulation): SampleSet {
   const st = sim.state;
   const series = new Map<string, Float64Array[]>();
   for (const [key, s] of sim.series) series.set(key, [seriesView(s).slice()]);
+  // A run stopped early carries the reason as one more warning of its plan, so every summary of it says so.
+  const plan = sim.stopReason === null ? sim.plan : { ...sim.plan, warnings: [...sim.plan.warnings, sim.stopReason] };
   return {
-    plan: sim.plan,
+    plan,
     geometry: copyGeometry(st),
     wallNames: [...sim.wallNames],
     cellStore: batchListOf(sim.cellStore),

@@ -25,6 +25,7 @@ function boxWithBlocks(
   xSides: 'wall' | 'periodic' | 'reservoir',
   crossings: number,
   seed: number,
+  topSide: 'symmetry' | 'reservoir' = 'symmetry',
 ): CaseInput {
   const lx = 1e-3;
   const ly = 0.6e-3;
@@ -41,7 +42,12 @@ function boxWithBlocks(
     gas: { species: 'Ar', model: 'HS' },
     initial: { pressurePa: 2, temperatureK: T },
     domain: { lengthXM: lx, lengthYM: ly, geometry: axisymmetric ? 'axisymmetric' : 'planar' },
-    boundaries: { left: side, right: side, bottom: axisymmetric ? { type: 'axis' } : wall, top: { type: 'symmetry' } },
+    boundaries: {
+      left: side,
+      right: side,
+      bottom: axisymmetric ? { type: 'axis' } : wall,
+      top: topSide === 'symmetry' ? { type: 'symmetry' } : { type: 'reservoir', pressurePa: 2, temperatureK: T },
+    },
     blocks: blocks.map((b, k) => ({
       name: `b${k}`,
       xMinM: b.x0 * lx,
@@ -74,8 +80,13 @@ describe('blocks', () => {
         // Mean flight per step from 0.02 to 20 cells: thin blocks get jumped over unless the move catches it.
         fc.double({ min: 0.02, max: 20, noNaN: true }),
         fc.nat(1000),
-        (blocks, axisymmetric, xSides, crossings, seed) => {
-          const sim = createSimulation(planOrThrow(boxWithBlocks(blocks, axisymmetric, xSides, crossings, seed)));
+        // A reservoir on the outer side with a block whose top face lies on it (issue 12, fuzz case 02) once let
+        // molecules out through r = R, flying on outside the domain.
+        fc.constantFrom('symmetry' as const, 'reservoir' as const),
+        (blocks, axisymmetric, xSides, crossings, seed, topSide) => {
+          const sim = createSimulation(
+            planOrThrow(boxWithBlocks(blocks, axisymmetric, xSides, crossings, seed, topSide)),
+          );
           const st = sim.state;
           const rects = sim.plan.grid.blocks;
           for (let step = 0; step < 8; step++) {
@@ -100,6 +111,22 @@ describe('blocks', () => {
         endOnFailure: true,
       },
     );
+  });
+
+  it('no molecule leaves through r = R unremoved: axisymmetric, top side a reservoir, a block up to r = R', () => {
+    // Fuzz case 02 of issue 12, made small: a plate from the axis side up to the outer reservoir side.
+    const plate: BlockDraw[] = [{ x0: 0.5, w: 0.05, y0: 0.3, h: 0.7 }];
+    const sim = createSimulation(planOrThrow(boxWithBlocks(plate, true, 'reservoir', 0.5, 7, 'reservoir')));
+    const st = sim.state;
+    expect(sim.plan.grid.blocks[0].y1).toBe(st.lengthY);
+    let outside = 0;
+    for (let step = 0; step < 200; step++) {
+      advance(sim, 1);
+      for (let i = 0; i < st.count; i++)
+        if (!(st.y[i] <= st.lengthY && st.x[i] >= 0 && st.x[i] <= st.lengthX)) outside++;
+    }
+    expect(outside).toBe(0);
+    expect(st.leaks).toBe(0);
   });
 
   it('a thin plate is never jumped, however fast the molecules (long run, many blocks)', () => {
