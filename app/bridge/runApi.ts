@@ -29,6 +29,8 @@ export { profilesCsv, fieldsCsv, surfacesCsv } from '../../engine/report/resultC
 export { summaryJsonText } from '../../engine/report/summaryJson';
 export { defaultReplicaCount };
 export { flowQuantityUnits } from '../../engine/results/flowQuantities';
+export { FLOW_UNIT_CHOICES } from '../../engine/units/flowUnits';
+export { flowCsv } from '../../engine/report/flowCsv';
 export { MODEL_LABELS } from '../../engine/continuum/caseModelTypes';
 export * from './sweepApi';
 export { cutProfileCsv } from '../../engine/report/cutProfileCsv';

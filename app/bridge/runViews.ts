@@ -6,7 +6,7 @@
 import type { ReplicaReport } from '../../workers/replicaPool';
 import type { RunCaseProgress, TargetState } from '../../workers/runCase';
 import type { SimulationResult } from '../../engine/results/summarize';
-import { type Performance } from '../../engine/report/summaryJson';
+import type { Performance } from '../../engine/report/summaryJson';
 import type { ContinuumComparisonResult } from '../../engine/report/comparison';
 
 export interface ReplicaView {

@@ -61,7 +61,7 @@ export function ResultPanels() {
         </p>
         <CompareSelect />
       </section>
-      <FlowNumbersCard flow={flow} />
+      <FlowNumbersCard flow={flow} choices={runApiIfLoaded()?.FLOW_UNIT_CHOICES ?? null} />
       <WallNumbersCard result={r} />
       <ComparisonCard view={comparison} />
       <WarningsList warnings={r.warnings} />

@@ -5,7 +5,7 @@
  */
 import { useRef, useState, type PointerEvent } from 'react';
 import type { CaseInput } from '../../engine/case/schema';
-import { type SideName } from '../../engine/case/caseConstants';
+import type { SideName } from '../../engine/case/caseConstants';
 import { setupApi } from '../bridge/loadEngine';
 import { sig } from '../format';
 import { lengthLabel, snapToGrid, type RectSI } from './blockEdits';

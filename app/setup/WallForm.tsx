@@ -4,7 +4,7 @@
  */
 import { setupApi } from '../bridge/loadEngine';
 import type { WallSpec } from '../../engine/case/schema';
-import { type SideName } from '../../engine/case/caseConstants';
+import type { SideName } from '../../engine/case/caseConstants';
 import { QuantityField } from '../fields/QuantityField';
 import { convertEntry, entryOfSI, numberText, fromSI, unitChoices, type ParamEntry } from './formModel';
 import { appStore, useApp } from '../store/appStore';

@@ -51,12 +51,15 @@ export const createResultsSlice: StateCreator<AppState, [], [], ResultsSlice> = 
   setCompare: (id) => set({ compareId: id }),
 });
 
-export const createUiSlice: StateCreator<AppState, [], [], UiSlice> = (set) => ({
+export const createUiSlice: StateCreator<AppState, [], [], UiSlice> = (set, get) => ({
   view: 'setup',
   engineReady: false,
   profileQuantity: 'velocityX',
   fieldQuantity: 'numberDensity',
   wallQuantity: 'shearStress',
+  flowUnits: {},
+  setFlowUnit: (quantity, unit) => set({ flowUnits: { ...get().flowUnits, [quantity]: unit } }),
+  restoreFlowUnits: (units) => set({ flowUnits: { ...units, ...get().flowUnits } }),
   setView: (view) => set({ view }),
   setEngineReady: (engineReady) => set({ engineReady }),
   select: (patch) => set(patch),

@@ -9,9 +9,9 @@
  */
 import type { CaseDerivation, PlanView, RunProgressView, SweepRequest } from '../bridge/types';
 import type { FormState, ParamEntry, WallEdit, CaseSource, GasEdit, BlockTable } from '../setup/formModel';
-import { type SideName } from '../../engine/case/caseConstants';
-import { type SweepRow } from '../../engine/report/sweepRow';
-import { type SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import type { SideName } from '../../engine/case/caseConstants';
+import type { SweepRow } from '../../engine/report/sweepRow';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
 import type { SavedRunMeta } from '../saved/savedRun';
 import type { ExampleEntry } from '../io/examples';
 import type { SavedSweepMeta, SweepPlanOutline } from '../sweep/savedSweep';
@@ -98,7 +98,12 @@ export interface UiSlice {
   readonly profileQuantity: string;
   readonly fieldQuantity: string;
   readonly wallQuantity: string;
+  /** The unit each flow number is shown in (by flow quantity name), kept in the saved settings; absent = SI. */
+  readonly flowUnits: Readonly<Record<string, string>>;
   setView(v: ViewName): void;
+  setFlowUnit(quantity: string, unit: string): void;
+  /** The saved choices at start-up. */
+  restoreFlowUnits(units: Readonly<Record<string, string>>): void;
   setEngineReady(ready: boolean): void;
   select(patch: Partial<Pick<UiSlice, 'profileQuantity' | 'fieldQuantity' | 'wallQuantity'>>): void;
 }

@@ -6,8 +6,8 @@
  * running was interrupted (by a reload or a closed tab) after its `pointsDone` points.
  */
 import type { SweepParameter } from '../../engine/case/sweep';
-import { type SweepRow } from '../../engine/report/sweepRow';
-import { type SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import type { SweepRow } from '../../engine/report/sweepRow';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
 import type { SweepQuantity, SweepRequest } from '../bridge/types';
 import type { SweepFormState } from './sweepForm';
 

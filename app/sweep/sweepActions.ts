@@ -7,7 +7,7 @@
  */
 import { loadRunApi } from '../bridge/loadEngine';
 import type { RunProgressView } from '../bridge/runApi';
-import { type SweepContinuumCurves } from '../../engine/report/sweepCurves';
+import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
 import { runSweepPoints, type SweepHandle } from './sweepController';
 import { readTestHooks } from '../testing/testHooks';
 import { appStore } from '../store/appStore';

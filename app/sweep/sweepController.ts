@@ -6,8 +6,8 @@
  * run chunk's, the unit tests a fake pool. Single runs (runController.ts) are untouched by it.
  */
 import type { RunCallbacks, RunHandle, RunProgressView, RunRequest } from '../bridge/runApi';
-import { type SweepRow } from '../../engine/report/sweepRow';
-import { type SweepPointRun } from '../../engine/report/sweepRow';
+import type { SweepRow } from '../../engine/report/sweepRow';
+import type { SweepPointRun } from '../../engine/report/sweepRow';
 import type { Plan } from '../../engine/plan/plan';
 
 export interface SweepRunDeps {

@@ -3,7 +3,7 @@
  * as its points end, and what the view shows when a saved sweep is reopened — the same rows, curves and form, and
  * `interrupted` for a sweep that a reload ended.
  */
-import { type SweepRow } from '../../engine/report/sweepRow';
+import type { SweepRow } from '../../engine/report/sweepRow';
 import type { SweepRequest } from '../bridge/types';
 import { sweepCounts, sweepStanding, type SavedSweepRecord, type SweepPlanOutline } from './savedSweep';
 import type { SweepRunState } from '../store/types';
