@@ -163,13 +163,21 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     } finally {
       summary.close();
     }
-    return finishedRunOf(outcome, finished);
+    return finishedRunOf(outcome, finished, planned.plan.timeStepS);
   });
   return { done, pause: run.pause, resume: run.resume, cancel: run.cancel };
 }
 
 /** A run's end as the page keeps it: the summary worker's result with the run's own warnings, or why there is none. */
-export function finishedRunOf(outcome: RunCaseOutcome, finished: FinishedSummary | null): RunEnd {
+export function finishedRunOf(outcome: RunCaseOutcome, finished: FinishedSummary | null, timeStepS = NaN): RunEnd {
+  if (!finished && outcome.cancelled && outcome.replicas.every((r) => r.status !== 'lost')) {
+    const stepsDone = Math.max(0, ...outcome.replicas.map((r) => r.stepsDone));
+    return {
+      ok: false,
+      message: 'stopped before sampling',
+      stoppedBeforeSampling: { stepsDone, simulatedTimeS: stepsDone * timeStepS },
+    };
+  }
   if (!finished) {
     return {
       ok: false,

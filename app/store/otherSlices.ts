@@ -20,6 +20,7 @@ export function createRunSlice(deps: StoreDeps, cores: number): StateCreator<App
       progress: null,
       notices: [],
       runError: null,
+      endNotice: null,
       target: { path: '', goalPercent: '2', stopWhenReached: false },
       setTarget: (patch) => set({ target: { ...get().target, ...patch } }),
       setReplicas: (n) => {

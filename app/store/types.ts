@@ -59,6 +59,13 @@ export interface TargetSetting {
   readonly stopWhenReached: boolean;
 }
 
+/** A run's end told to a user who is elsewhere (the set-up, the Sweep view): what happened, and its result if any. */
+export interface RunEndNotice {
+  readonly text: string;
+  /** The result to open from the notice, or null when the run kept none. */
+  readonly resultId: string | null;
+}
+
 export interface RunSlice {
   readonly replicas: number;
   readonly cores: number;
@@ -68,11 +75,12 @@ export interface RunSlice {
   readonly progress: RunProgressView | null;
   readonly notices: readonly string[];
   readonly runError: string | null;
+  readonly endNotice: RunEndNotice | null;
   readonly target: TargetSetting;
   setReplicas(n: number): void;
   setTarget(patch: Partial<TargetSetting>): void;
   setSpeed(particleStepsPerSecond: number): void;
-  setRunState(patch: Partial<Pick<RunSlice, 'status' | 'progress' | 'notices' | 'runError'>>): void;
+  setRunState(patch: Partial<Pick<RunSlice, 'status' | 'progress' | 'notices' | 'runError' | 'endNotice'>>): void;
   addNotice(text: string): void;
 }
 
