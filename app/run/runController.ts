@@ -14,6 +14,7 @@ import type { SavedRunRecord } from '../saved/savedRun';
 import type { AppStore } from '../store/store';
 import type { CaseInput } from '../../engine/case/schema';
 import { countText } from '../format';
+import { runNameOf } from '../saved/runName';
 
 const PROGRESS_EVERY_MS = 200;
 
@@ -143,7 +144,8 @@ async function keepRun(
       endNotice: { text: `The run of ${caseName} ${run.cancelled ? 'was stopped' : 'finished'}.`, resultId: id },
     });
   const lost = run.replicas.filter((r) => r.status === 'lost').length;
-  const title = st.exampleTitle ?? caseName;
+  // Named for the case as run, not for the example it may have started from (it may have been edited since).
+  const title = runNameOf(caseInput, run.result.reference.knudsen, st.source.kind === 'form' ? st.presetName : '');
   const record: SavedRunRecord = {
     id,
     name: `${title} — ${new Date().toLocaleString()}`,

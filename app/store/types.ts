@@ -30,7 +30,7 @@ export interface CaseSlice extends FormState {
   readonly plan: PlanView | null;
   readonly planErrors: readonly string[];
   readonly fileMessage: FileMessage | null;
-  /** The example the set-up started from, if any (for the title of saved runs). */
+  /** The example the set-up started from, if any (shown by the example picker; saved runs are named for the case). */
   readonly exampleTitle: string | null;
   selectPreset(name: string): void;
   applyExample(example: ExampleEntry, caseText: string | null): void;
