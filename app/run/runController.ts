@@ -34,7 +34,14 @@ function newRunId(): string {
 export async function startRun(store: AppStore): Promise<void> {
   const s = store.getState();
   const caseInput = s.derived?.caseInput;
-  if (!caseInput || !s.plan || active || ['starting', 'running', 'paused', 'stopping'].includes(s.status)) return;
+  if (
+    !caseInput ||
+    !s.plan ||
+    s.planPending ||
+    active ||
+    ['starting', 'running', 'paused', 'stopping'].includes(s.status)
+  )
+    return;
   const target = targetRequestOf(s.target, s.plan.targetPaths);
   if (!target.ok || ['planning', 'running', 'stopping'].includes(sweepStore.getState().status)) return;
   const id = newRunId();

@@ -29,6 +29,8 @@ export interface CaseSlice extends FormState {
   readonly derived: CaseDerivation | null;
   readonly plan: PlanView | null;
   readonly planErrors: readonly string[];
+  /** A change is being derived and planned off the page's thread: derived and plan are the previous change's. */
+  readonly planPending: boolean;
   readonly fileMessage: FileMessage | null;
   /** The example the set-up started from, if any (shown by the example picker; saved runs are named for the case). */
   readonly exampleTitle: string | null;
