@@ -46,7 +46,8 @@ function FlowRow({
     <tr>
       <th scope="row">
         {row.label}
-        {!options && row.unit ? ` [${row.unit}]` : ''}
+        {/* The unit shown in brackets as everywhere (SI in the engine's spelling), the selector beside it. */}
+        {isEngineUnit ? (row.unit ? ` [${row.unit}]` : '') : ` [${choice.unit}${per}]`}
         {options && choice && (
           <>
             {' '}

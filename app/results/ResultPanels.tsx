@@ -42,7 +42,7 @@ export function ResultPanels() {
         <p className="note">
           The run is still going: these are live estimates. Plots, field maps and exports appear when it ends.
         </p>
-        <LiveProfilePanel result={r} />
+        <LiveProfilePanel result={r} geometry={geometry} />
         <WallNumbersCard result={r} />
       </div>
     );

@@ -12,6 +12,8 @@ import type { FormState } from './formModel';
 
 /** Quiet time after a keystroke before planning starts, ms: below what a typist notices, above a key repeat. */
 export const DEBOUNCE_MS = 150;
+/** A plan still being worked out after this long (ms) is ended when a newer change comes: it may take a minute. */
+const REPLACE_AFTER_MS = 1000;
 
 interface Pending {
   readonly form: FormState;
@@ -24,6 +26,7 @@ export function createWorkerPlanner(): (form: FormState, settings: DeriveSetting
   let worker: Worker | null = null;
   let remote: Remote<SetupWorkerApi> | null = null;
   let busy = false;
+  let busySinceMs = 0;
   let waiting: Pending | null = null;
   let timer: ReturnType<typeof setTimeout> | null = null;
 
@@ -42,9 +45,16 @@ export function createWorkerPlanner(): (form: FormState, settings: DeriveSetting
     const job = waiting;
     waiting = null;
     if (!job) return;
+    if (busy && performance.now() - busySinceMs < REPLACE_AFTER_MS) {
+      // A young plan is let finish (a fresh worker costs loading the set-up chunk again); this job follows it.
+      waiting = job;
+      timer = setTimeout(run, DEBOUNCE_MS);
+      return;
+    }
     if (busy) stop();
     if (!remote) start();
     busy = true;
+    busySinceMs = performance.now();
     const mine = worker;
     remote!.derive(job.form, job.settings).then(
       (d) => {

@@ -51,29 +51,37 @@ export function derive(api: SetupApi, form: FormState, s: DeriveSettings): Deriv
  * Applies a change of the form or the run settings: derived on the spot, or (with deps.deriveAsync) marked as being
  * planned and derived off the page's thread, the answer taken only if no later change came meanwhile.
  */
+let generation = 0;
+
 export function rederive(
   deps: StoreDeps,
   set: (patch: Partial<AppState>) => void,
   get: () => AppState,
   patch: Partial<AppState>,
+  sync = false,
 ): void {
-  if (!deps.deriveAsync) {
+  const mine = ++generation;
+  // Set-up actions that are not typing (a preset, an example, a restored form) are small cases: derived on the spot.
+  if (!deps.deriveAsync || sync) {
     const next = { ...formOf(get()), ...(patch as Partial<FormState>) };
-    set({ ...patch, ...derive(deps.setup(), next, { ...get(), ...patch }) });
+    set({ ...patch, ...derive(deps.setup(), next, { ...get(), ...patch }), planPending: false });
     return;
   }
   set({ ...patch, planPending: true });
   const s = get();
   void deps.deriveAsync(formOf(s), { replicas: s.replicas, cores: s.cores, speed: s.speed }).then(
-    (d) => d && set({ ...d, planPending: false }),
-    (e: Error) => set({ planPending: false, plan: null, planErrors: [`the case could not be planned: ${e.message}`] }),
+    (d) => d && mine === generation && set({ ...d, planPending: false }),
+    (e: Error) =>
+      mine === generation &&
+      set({ planPending: false, plan: null, planErrors: [`the case could not be planned: ${e.message}`] }),
   );
 }
 
 export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [], CaseSlice> {
   return (set, get) => {
-    const update = (patch: Partial<FormState> & Partial<Pick<CaseSlice, 'fileMessage' | 'exampleTitle'>>) =>
-      rederive(deps, set, get, patch);
+    type Patch = Partial<FormState> & Partial<Pick<CaseSlice, 'fileMessage' | 'exampleTitle'>>;
+    const update = (patch: Patch) => rederive(deps, set, get, patch);
+    const updateNow = (patch: Patch) => rederive(deps, set, get, patch, true);
     return {
       presetName: '',
       params: {},
@@ -89,7 +97,7 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
       fileMessage: null,
       exampleTitle: null,
       selectPreset: (name) =>
-        update({
+        updateNow({
           presetName: name,
           params: entriesFor(name, deps.setup()),
           walls: {},
@@ -102,7 +110,7 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
       applyExample: (example, caseText) => {
         const api = deps.setup();
         if (example.preset && Object.hasOwn(api.PRESETS, example.preset)) {
-          update({
+          updateNow({
             presetName: example.preset,
             params: entriesFor(example.preset, api, example.parameters ?? {}),
             walls: {},
@@ -113,7 +121,7 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
             exampleTitle: example.title,
           });
         } else if (caseText !== null) {
-          update({
+          updateNow({
             source: { kind: 'json', label: `example ${example.file}` },
             caseText,
             fileMessage: null,
@@ -153,7 +161,7 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
       },
       rebuildFromForm: () => update({ source: { kind: 'form' }, fileMessage: null }),
       // Forms saved before the gas and block edits existed have neither: the preset's gas and blocks then stand.
-      restoreForm: (form) => update({ gas: undefined, blocks: null, ...form }),
+      restoreForm: (form) => updateNow({ gas: undefined, blocks: null, ...form }),
       setFileMessage: (m) => set({ fileMessage: m }),
     };
   };
