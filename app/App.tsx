@@ -41,6 +41,36 @@ function RunBadge() {
   );
 }
 
+/** A run's end while the user was elsewhere: said here, with a link to its result, instead of switching views. */
+function RunEndNotice() {
+  const notice = useApp((s) => s.endNotice);
+  const view = useApp((s) => s.view);
+  if (!notice || view === 'run') return null;
+  const close = () => appStore.getState().setRunState({ endNotice: null });
+  return (
+    <p className="message run-end-notice" role="status" data-testid="run-end-notice">
+      {notice.text}{' '}
+      {notice.resultId && (
+        <a
+          href="#results"
+          onClick={(e) => {
+            e.preventDefault();
+            const st = appStore.getState();
+            st.showResult(notice.resultId, false);
+            st.setView('results');
+            close();
+          }}
+        >
+          Show the results
+        </a>
+      )}{' '}
+      <button type="button" className="link" aria-label="dismiss the notice" onClick={close}>
+        ×
+      </button>
+    </p>
+  );
+}
+
 function ViewTabs() {
   const view = useApp((s) => s.view);
   const saved = useApp((s) => s.savedRuns.length);
@@ -109,6 +139,7 @@ export function App() {
           </p>
         )}
         {!ready && !failure && <p role="status">Loading the engine…</p>}
+        {ready && <RunEndNotice />}
         {ready && view === 'setup' && <SetupView examples={examples} />}
         {ready && view === 'run' && (
           <div className="columns">

@@ -1,12 +1,12 @@
 /**
- * Start-up: load the set-up part of the engine, restore the set-up and saved runs from IndexedDB (or open the first
+ * Start-up: load the set-up part of the engine, restore the set-up, the chosen flow units and saved runs from IndexedDB (or open the first
  * example on a first visit), keep the set-up saved as it changes, and warm the run and plot chunks while idle so
  * they are not parsed in the middle of a run.
  */
 import { loadRunApi, loadSetupApi } from './bridge/loadEngine';
 import { warmPlotly } from './charts/plotly';
 import { fetchExampleCase, fetchExamples, type ExampleEntry } from './io/examples';
-import { listRuns, loadForm, loadSpeed, saveForm } from './io/db';
+import { listRuns, loadFlowUnits, loadForm, loadSpeed, saveFlowUnits, saveForm } from './io/db';
 import { formOf } from './store/caseSlice';
 import type { AppStore } from './store/store';
 
@@ -33,13 +33,15 @@ export function bootstrap(store: AppStore): Promise<ExampleEntry[]> {
 
 async function start(store: AppStore): Promise<ExampleEntry[]> {
   const api = await loadSetupApi();
-  const [saved, speed, runs, examples] = await Promise.all([
+  const [saved, speed, runs, examples, flowUnits] = await Promise.all([
     loadForm().catch(() => undefined),
     loadSpeed().catch(() => undefined),
     listRuns().catch(() => []),
     fetchExamples().catch(() => [] as ExampleEntry[]),
+    loadFlowUnits().catch(() => ({})),
   ]);
   const st = store.getState();
+  st.restoreFlowUnits(flowUnits);
   if (speed) st.setSpeed(speed);
   st.setSavedRuns(runs);
   const usable = saved && (saved.source.kind === 'json' || Object.hasOwn(api.PRESETS, saved.presetName));
@@ -65,6 +67,12 @@ async function start(store: AppStore): Promise<ExampleEntry[]> {
     last = form;
     if (timer) clearTimeout(timer);
     timer = setTimeout(() => void saveForm(form).catch(() => undefined), 300);
+  });
+  let lastUnits = store.getState().flowUnits;
+  store.subscribe((s) => {
+    if (s.flowUnits === lastUnits) return;
+    lastUnits = s.flowUnits;
+    void saveFlowUnits(s.flowUnits).catch(() => undefined);
   });
   const warm = () => void warmChunks(store);
   if ('requestIdleCallback' in window) window.requestIdleCallback(warm, { timeout: 2000 });

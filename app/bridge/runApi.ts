@@ -31,6 +31,8 @@ export { verdictCsv } from '../../engine/report/verdictCsv';
 export { verdictHeadline, extraTimeText, sampledWallSeconds } from '../../engine/report/headline';
 export { defaultReplicaCount };
 export { flowQuantityUnits } from '../../engine/results/flowQuantities';
+export { FLOW_UNIT_CHOICES } from '../../engine/units/flowUnits';
+export { flowCsv } from '../../engine/report/flowCsv';
 export { MODEL_LABELS } from '../../engine/continuum/caseModelTypes';
 export * from './sweepApi';
 export { cutProfileCsv } from '../../engine/report/cutProfileCsv';
@@ -163,13 +165,21 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
     } finally {
       summary.close();
     }
-    return finishedRunOf(outcome, finished);
+    return finishedRunOf(outcome, finished, planned.plan.timeStepS);
   });
   return { done, pause: run.pause, resume: run.resume, cancel: run.cancel };
 }
 
 /** A run's end as the page keeps it: the summary worker's result with the run's own warnings, or why there is none. */
-export function finishedRunOf(outcome: RunCaseOutcome, finished: FinishedSummary | null): RunEnd {
+export function finishedRunOf(outcome: RunCaseOutcome, finished: FinishedSummary | null, timeStepS = NaN): RunEnd {
+  if (!finished && outcome.cancelled && outcome.replicas.every((r) => r.status !== 'lost')) {
+    const stepsDone = Math.max(0, ...outcome.replicas.map((r) => r.stepsDone));
+    return {
+      ok: false,
+      message: 'stopped before sampling',
+      stoppedBeforeSampling: { stepsDone, simulatedTimeS: stepsDone * timeStepS },
+    };
+  }
   if (!finished) {
     return {
       ok: false,

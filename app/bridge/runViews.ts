@@ -88,7 +88,19 @@ export interface FinishedRun {
   readonly stoppedBy: string | null;
 }
 
-export type RunEnd = { ok: true; run: FinishedRun } | { ok: false; message: string };
+/** Where a run stopped by the user before any replica sampled had got to (the most advanced replica). */
+export interface StoppedBeforeSampling {
+  readonly stepsDone: number;
+  /** stepsDone × the time step, s (NaN when the time step is not known). */
+  readonly simulatedTimeS: number;
+}
+
+/**
+ * How a run ended: a result, or none — because the user stopped it in the transient (not a failure: nothing was
+ * to be sampled yet), or because it failed.
+ */
+export type RunEnd =
+  { ok: true; run: FinishedRun } | { ok: false; message: string; stoppedBeforeSampling?: StoppedBeforeSampling };
 
 /** The target's view after a live summary. */
 export function targetViewOf(view: TargetView, t: TargetState): TargetView {

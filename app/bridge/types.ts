@@ -24,7 +24,9 @@ import type { ContinuumModelName } from '../../engine/continuum/caseModelTypes';
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { SummaryExtra } from '../../engine/report/summaryJson';
 import type { Headline } from '../../engine/report/headline';
-import type { FlowQuantityName } from '../../engine/results/flowQuantities';
+import type { FlowQuantityName, FlowResult } from '../../engine/results/flowQuantities';
+import type { FlowUnitChoice, FlowUnitQuantity } from '../../engine/units/flowUnits';
+import type { FlowCsvOptions } from '../../engine/report/flowCsv';
 import type { CutPrediction, CutProfileTable } from '../../engine/report/cutProfileCsv';
 import type { FormState } from '../setup/formModel';
 import type { ResultGeometry } from '../results/resultGeometry';
@@ -114,6 +116,10 @@ export interface RunApi extends SweepApi {
   /** Cells, walls, blocks and gas constants of the case's plan, for the result plots; null if it does not plan. */
   resultGeometryOf(caseInput: unknown): ResultGeometry | null;
   flowQuantityUnits(planar: boolean): Record<FlowQuantityName, string>;
+  /** The units each flow number can be shown in, the engine's own first. */
+  readonly FLOW_UNIT_CHOICES: Readonly<Record<FlowUnitQuantity, readonly FlowUnitChoice[]>>;
+  /** flow.csv as the command line writes it, with the chosen units as extra columns when given. */
+  flowCsv(flow: FlowResult, planar: boolean, options?: FlowCsvOptions): string;
   readonly MODEL_LABELS: { readonly [M in ContinuumModelName]: string };
   profilesCsv(result: SimulationResult, comparison?: ContinuumComparisonResult): string;
   fieldsCsv(result: SimulationResult): string;

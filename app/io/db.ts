@@ -1,5 +1,5 @@
 /**
- * Work kept in the browser's IndexedDB (through idb): the set-up as last edited, finished and stopped runs, sweeps
+ * Work kept in the browser's IndexedDB (through idb): the set-up as last edited, the units chosen for flow numbers, finished and stopped runs, sweeps
  * (saved as each point ends), and the measured speed of a replica worker. A reload restores all of it. The stores
  * and the upgrade from older versions are in dbUpgrade.ts.
  */
@@ -48,6 +48,18 @@ export async function saveSpeed(particleStepsPerSecond: number): Promise<void> {
 export async function loadSpeed(): Promise<number | undefined> {
   const v = await (await db()).get('settings', 'speed');
   return typeof v === 'number' ? v : undefined;
+}
+
+/** The unit chosen for each flow number in the results card (settings key 'flowUnits'). */
+export async function saveFlowUnits(units: Readonly<Record<string, string>>): Promise<void> {
+  await (await db()).put('settings', { ...units }, 'flowUnits');
+}
+
+/** The saved flow units; anything but a record of strings (an older or damaged entry) counts as none. */
+export async function loadFlowUnits(): Promise<Record<string, string>> {
+  const v = await (await db()).get('settings', 'flowUnits');
+  if (!v || typeof v !== 'object') return {};
+  return Object.fromEntries(Object.entries(v).filter((e): e is [string, string] => typeof e[1] === 'string'));
 }
 
 export async function putRun(record: SavedRunRecord): Promise<void> {

@@ -1,4 +1,7 @@
-/** Chooses the cut a profile is read along: the row average, or one column or row of cells at a snapped position. */
+/**
+ * Chooses the cut a profile is read along: the row average, or one column or row of cells at a snapped position; a
+ * newly chosen kind starts where the case suggests (mid-duct, the axis), not at a middle row that may lie in a wall.
+ */
 import { useEffect, useState } from 'react';
 import type { CutKind, CutSpec } from './profileCut';
 import { nearestCentre } from './profileCut';
@@ -13,9 +16,11 @@ export interface CutControlsProps {
   /** 'r' in an axisymmetric domain. */
   readonly radial: string;
   readonly onChange: (spec: CutSpec) => void;
+  /** Where a newly chosen kind of cut starts (profileCut.ts defaultCutIndex): the axis, mid-duct … */
+  readonly startOf: (kind: CutKind) => number;
 }
 
-export function CutControls({ spec, columnsM, rowsM, lengthUnit, radial, onChange }: CutControlsProps) {
+export function CutControls({ spec, columnsM, rowsM, lengthUnit, radial, onChange, startOf }: CutControlsProps) {
   const centres = spec.kind === 'vertical' ? columnsM : rowsM;
   const coordinate = spec.kind === 'vertical' ? 'x' : radial;
   const at = centres[spec.index] ?? NaN;
@@ -23,10 +28,7 @@ export function CutControls({ spec, columnsM, rowsM, lengthUnit, radial, onChang
   // The typed text is kept until the field is left, so typing "12" does not snap at "1" first.
   const [text, setText] = useState(shown(at));
   useEffect(() => setText(shown(at)), [at, lengthUnit.factor]);
-  const kindChange = (kind: CutKind) => {
-    const n = kind === 'vertical' ? columnsM.length : rowsM.length;
-    onChange({ kind, index: Math.floor(n / 2) });
-  };
+  const kindChange = (kind: CutKind) => onChange({ kind, index: startOf(kind) });
   const typed = (value: string) => {
     setText(value);
     const v = Number(value);

@@ -1,5 +1,6 @@
 /**
- * Downloads of a finished result: the CSV files and summary.json the command line writes (the engine's own export
+ * Downloads of a finished result: the CSV files and summary.json the command line writes (flow.csv with the units
+ * chosen in the results card as extra columns) (the engine's own export
  * code: RFC 4180 fields, units in every header, ci95 columns next to values, formula-like text escaped), the case,
  * and the merged samples as a sample file for `tenuis merge`.
  */
@@ -7,6 +8,7 @@ import { loadRunApi } from '../bridge/loadEngine';
 import type { CachedResult } from './resultCache';
 import { downloadBlob, downloadText } from '../io/download';
 import { slug } from '../format';
+import { appStore } from '../store/appStore';
 
 const CSV = 'text/csv;charset=utf-8';
 
@@ -21,6 +23,21 @@ export function ExportPanel({ entry }: { entry: CachedResult }) {
           ? api.fieldsCsv(entry.result)
           : api.surfacesCsv(entry.result);
     downloadText(`${base}-${kind}.csv`, text, CSV);
+  };
+  // The command line's flow.csv, plus the units the results card shows as extra columns beside SI.
+  const flow = async () => {
+    const api = await loadRunApi();
+    const f = entry.result.flow;
+    if (!f) return;
+    const chosen = appStore.getState().flowUnits;
+    // A saved choice the table does not know (an older workbench's) falls back to the engine's unit, as the card does.
+    const chosenUnits = Object.fromEntries(
+      Object.entries(api.FLOW_UNIT_CHOICES).map(([q, options]) => [
+        q,
+        (options.find((c) => c.unit === chosen[q]) ?? options[0]).unit,
+      ]),
+    );
+    downloadText(`${base}-flow.csv`, api.flowCsv(f, !entry.result.axisymmetric, { chosenUnits }), CSV);
   };
   const summary = async () => {
     const api = await loadRunApi();
@@ -48,6 +65,11 @@ export function ExportPanel({ entry }: { entry: CachedResult }) {
         <button type="button" onClick={() => void csv('surfaces')}>
           Wall distributions (CSV)
         </button>
+        {entry.result.flow && (
+          <button type="button" onClick={() => void flow()}>
+            Flow numbers (CSV)
+          </button>
+        )}
         <button type="button" onClick={() => void summary()}>
           Summary (JSON)
         </button>

@@ -17,6 +17,9 @@ import {
   GAP_SOLID,
   type CutSource,
   type CutSpec,
+  type CutDefaultsInput,
+  defaultCut,
+  defaultCutIndex,
   type ProfileCut,
 } from './profileCut';
 import { solidCellsFor, type ResultGeometry } from './resultGeometry';
@@ -89,7 +92,8 @@ export function ProfilePanel({
   exportName,
 }: ProfilePanelProps) {
   const chosen = useApp((s) => s.profileQuantity);
-  const [chosenSpec, setSpec] = useState<CutSpec>({ kind: 'average', index: 0 });
+  // null until the user picks a cut: the default follows the case's geometry (defaultCut).
+  const [pickedSpec, setSpec] = useState<CutSpec | null>(null);
   const [hidden, setHidden] = useState<ReadonlySet<string>>(new Set());
   const len = lengthUnitFor(result.reference.lengthScaleM);
   const radial = result.axisymmetric ? 'r' : 'y';
@@ -97,6 +101,18 @@ export function ProfilePanel({
   const solid = solidCellsFor(geometry, result.numerics) ?? undefined;
   const columnsM = useMemo(() => cellCentres(source, 'x'), [source]);
   const rowsM = useMemo(() => cellCentres(source, 'y'), [source]);
+  const defaults = useMemo(
+    (): CutDefaultsInput => ({
+      columnsM,
+      rowsM,
+      blocks: geometry?.blocks ?? [],
+      solidCells: solid,
+      axisymmetric: result.axisymmetric,
+      ductFlow: result.flow !== undefined,
+    }),
+    [columnsM, rowsM, geometry, solid, result.axisymmetric, result.flow],
+  );
+  const chosenSpec = pickedSpec ?? defaultCut(defaults);
   // A cut chosen on another result may lie beyond this grid: kept, but clamped to its last column or row.
   const last = (chosenSpec.kind === 'vertical' ? columnsM.length : rowsM.length) - 1;
   const spec = useMemo(
@@ -210,6 +226,7 @@ export function ProfilePanel({
           lengthUnit={len}
           radial={radial}
           onChange={setSpec}
+          startOf={(kind) => defaultCutIndex(kind, defaults)}
         />
       </div>
       <Plot

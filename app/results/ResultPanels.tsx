@@ -47,7 +47,7 @@ export function ResultPanels() {
         <p className="note">
           The run is still going: these are live estimates. Plots, field maps and exports appear when it ends.
         </p>
-        <LiveProfilePanel result={r} />
+        <LiveProfilePanel result={r} geometry={geometry} />
         <WallNumbersCard result={r} />
       </div>
     );
@@ -67,7 +67,7 @@ export function ResultPanels() {
         <CompareSelect />
       </section>
       <ComparisonCard view={comparison} />
-      <FlowNumbersCard flow={flow} />
+      <FlowNumbersCard flow={flow} choices={runApiIfLoaded()?.FLOW_UNIT_CHOICES ?? null} />
       <WallNumbersCard result={r} />
       <WarningsList warnings={r.warnings} />
       <ProfilePanel

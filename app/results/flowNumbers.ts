@@ -6,6 +6,10 @@
  */
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { FlowQuantityName, FlowResult } from '../../engine/results/flowQuantities';
+import type { FlowUnitChoice, FlowUnitQuantity } from '../../engine/units/flowUnits';
+
+/** The run API's FLOW_UNIT_CHOICES: the units each flow number with a unit can be shown in. */
+export type FlowUnitChoices = Readonly<Record<FlowUnitQuantity, readonly FlowUnitChoice[]>>;
 
 export interface FlowEstimate {
   readonly name: FlowQuantityName;
@@ -19,6 +23,8 @@ export interface FlowNumbers {
   /** In the engine's order; numbers the case cannot define are left out, as the engine leaves them out. */
   readonly rows: readonly FlowEstimate[];
   readonly context: string | null;
+  /** Per metre of depth (a planar case): every unit is followed by /m. */
+  readonly planar: boolean;
 }
 
 const FLOW_LABELS: Readonly<Record<FlowQuantityName, string>> = {
@@ -45,10 +51,10 @@ export function flowNumbersOf(
   units: Readonly<Partial<Record<FlowQuantityName, string>>> = {},
 ): FlowNumbers {
   const f = result.flow;
-  if (!f) return { rows: [], context: null };
+  if (!f) return { rows: [], context: null, planar: !result.axisymmetric };
   const rows: FlowEstimate[] = [];
   for (const [name, e] of Object.entries(f.values) as [FlowQuantityName, FlowResult['values'][FlowQuantityName]][]) {
     if (e) rows.push({ name, label: FLOW_LABELS[name], mean: e.mean, ci95: e.ci95, unit: units[name] ?? '' });
   }
-  return { rows, context: contextOf(f) };
+  return { rows, context: contextOf(f), planar: !result.axisymmetric };
 }

@@ -145,3 +145,52 @@ export function cutColumn(cut: ProfileCut, name: string): { mean: number[]; ci95
     ci95: Array.from({ length: n }, (_, k) => cut.ci95[k * w + f]),
   };
 }
+
+/** What the default cut needs of the case: its blocks (the walls of a duct or the plates of a slit or orifice). */
+export interface CutDefaultsInput {
+  readonly columnsM: ArrayLike<number>;
+  readonly rowsM: ArrayLike<number>;
+  readonly blocks: readonly { readonly x0: number; readonly x1: number }[];
+  /** 1 = no gas, cell ix + cellsX·iy (ResultGeometry's solidCells), if known. */
+  readonly solidCells?: ArrayLike<number>;
+  readonly axisymmetric: boolean;
+  /** A flow between vessels through a duct or an opening (the result has flow numbers). */
+  readonly ductFlow: boolean;
+}
+
+/** The column at mid-length of the duct: the middle of the x range its blocks span (null without blocks). */
+function ductMidColumn(d: CutDefaultsInput): number | null {
+  if (!d.ductFlow || d.blocks.length === 0) return null;
+  const x0 = Math.min(...d.blocks.map((b) => b.x0));
+  const x1 = Math.max(...d.blocks.map((b) => b.x1));
+  return nearestCentre(d.columnsM, (x0 + x1) / 2);
+}
+
+/**
+ * Where a cut of `kind` starts. Across a duct (vertical): at mid-length of the duct, where the flow is developed and
+ * neither vessel enters; else the middle column. Along x (horizontal): the axis in an axisymmetric case, else the
+ * middle of the gas rows of the duct's mid column (a slit's opening, not a plate); else the middle row.
+ */
+export function defaultCutIndex(kind: CutKind, d: CutDefaultsInput): number {
+  if (kind === 'average') return 0;
+  const mid = ductMidColumn(d);
+  if (kind === 'vertical') return mid ?? Math.floor(d.columnsM.length / 2);
+  if (d.axisymmetric) return 0;
+  if (mid !== null && d.solidCells) {
+    const cellsX = d.columnsM.length;
+    const gasRows: number[] = [];
+    for (let iy = 0; iy < d.rowsM.length; iy++) if (d.solidCells[mid + cellsX * iy] !== 1) gasRows.push(iy);
+    if (gasRows.length) return gasRows[Math.floor((gasRows.length - 1) / 2)];
+  }
+  return Math.floor(d.rowsM.length / 2);
+}
+
+/**
+ * The cut shown first: across the middle of the duct for a flow between vessels (the row average would mix the
+ * vessels with the duct), the row average otherwise (a gap between plates: uniform along x).
+ */
+export function defaultCut(d: CutDefaultsInput): CutSpec {
+  return ductMidColumn(d) !== null
+    ? { kind: 'vertical', index: defaultCutIndex('vertical', d) }
+    : { kind: 'average', index: 0 };
+}

@@ -13,6 +13,8 @@ export function RunLauncher() {
   const replicas = useApp((s) => s.replicas);
   const cores = useApp((s) => s.cores);
   const ready = useApp((s) => s.plan !== null && s.derived?.caseInput != null);
+  // The plan shown is the previous change's until the new one is worked out: never run a case not yet checked.
+  const pending = useApp((s) => s.planPending);
   const problems = useApp(
     (s) => Object.keys(s.derived?.fieldErrors ?? {}).length + (s.derived?.caseErrors.length ?? 0) + s.planErrors.length,
   );
@@ -27,11 +29,13 @@ export function RunLauncher() {
     ? 'a run is going on'
     : sweeping
       ? 'a sweep is going on (Sweep view)'
-      : !ready
-        ? `fix the ${problems || ''} marked problem${problems === 1 ? '' : 's'} first`
-        : targetError
-          ? 'fix the precision target first'
-          : null;
+      : pending
+        ? 'the changed case is being checked'
+        : !ready
+          ? `fix the ${problems || ''} marked problem${problems === 1 ? '' : 's'} first`
+          : targetError
+            ? 'fix the precision target first'
+            : null;
   const st = appStore.getState();
   return (
     <section className="panel run-launcher" aria-labelledby="launch-title">

@@ -1,6 +1,7 @@
 /**
  * Starts, pauses, resumes and stops runs, outside React: loads the run chunk, feeds progress and live results into
- * the store (progress at most five times a second), and keeps every finished or stopped run in IndexedDB.
+ * the store (progress at most five times a second), and keeps every finished or stopped run in IndexedDB. A run
+ * takes the user to its result only when they are watching it (the Run view); otherwise its end is a notice.
  */
 import { loadRunApi } from '../bridge/loadEngine';
 import type { RunHandle, FinishedRun } from '../bridge/runApi';
@@ -12,6 +13,8 @@ import { putRun, listRuns, saveSpeed } from '../io/db';
 import type { SavedRunRecord } from '../saved/savedRun';
 import type { AppStore } from '../store/store';
 import type { CaseInput } from '../../engine/case/schema';
+import { countText } from '../format';
+import { runNameOf } from '../saved/runName';
 
 const PROGRESS_EVERY_MS = 200;
 
@@ -31,12 +34,19 @@ function newRunId(): string {
 export async function startRun(store: AppStore): Promise<void> {
   const s = store.getState();
   const caseInput = s.derived?.caseInput;
-  if (!caseInput || !s.plan || active || ['starting', 'running', 'paused', 'stopping'].includes(s.status)) return;
+  if (
+    !caseInput ||
+    !s.plan ||
+    s.planPending ||
+    active ||
+    ['starting', 'running', 'paused', 'stopping'].includes(s.status)
+  )
+    return;
   const target = targetRequestOf(s.target, s.plan.targetPaths);
   if (!target.ok || ['planning', 'running', 'stopping'].includes(sweepStore.getState().status)) return;
   const id = newRunId();
   const caseName = String((caseInput as CaseInput).name);
-  s.setRunState({ status: 'starting', progress: null, notices: [], runError: null });
+  s.setRunState({ status: 'starting', progress: null, notices: [], runError: null, endNotice: null });
   s.setView('run');
   const replicas = s.replicas;
   let lastProgress = 0;
@@ -91,8 +101,19 @@ export async function startRun(store: AppStore): Promise<void> {
     if (pendingTimer) clearTimeout(pendingTimer);
     // Showing the result is a task of its own, after the run's (so the mark closes the run's work exactly).
     await new Promise((resolve) => setTimeout(resolve, 0));
+    if (!end.ok && end.stoppedBeforeSampling) {
+      // Stopped by the user in the transient: nothing to keep, and nothing went wrong.
+      const { stepsDone, simulatedTimeS } = end.stoppedBeforeSampling;
+      const time = Number.isFinite(simulatedTimeS) ? `, ${simulatedTimeS.toPrecision(3)} s of simulated time` : '';
+      const text = `Stopped before sampling: the transient had reached ${countText(stepsDone)} steps${time}. Nothing was sampled, so no result is kept.`;
+      store.getState().setRunState({ status: 'stopped', notices: [...store.getState().notices, text] });
+      if (store.getState().view !== 'run') store.getState().setRunState({ endNotice: { text, resultId: null } });
+      return;
+    }
     if (!end.ok) {
       store.getState().setRunState({ status: 'failed', runError: end.message });
+      if (store.getState().view !== 'run')
+        store.getState().setRunState({ endNotice: { text: `The run failed: ${end.message}`, resultId: null } });
       return;
     }
     await keepRun(store, id, caseInput as CaseInput, caseName, end.run, replicas);
@@ -123,9 +144,15 @@ async function keepRun(
   const st = store.getState();
   st.setRunState({ status: run.cancelled ? 'stopped' : 'finished' });
   st.showResult(id, false);
-  st.setView('results');
+  // Only a user watching the run is taken to its result; one editing the set-up (or elsewhere) gets a notice.
+  if (st.view === 'run') st.setView('results');
+  else
+    st.setRunState({
+      endNotice: { text: `The run of ${caseName} ${run.cancelled ? 'was stopped' : 'finished'}.`, resultId: id },
+    });
   const lost = run.replicas.filter((r) => r.status === 'lost').length;
-  const title = st.exampleTitle ?? caseName;
+  // Named for the case as run, not for the example it may have started from (it may have been edited since).
+  const title = runNameOf(caseInput, run.result.reference.knudsen, st.source.kind === 'form' ? st.presetName : '');
   const record: SavedRunRecord = {
     id,
     name: `${title} — ${new Date().toLocaleString()}`,

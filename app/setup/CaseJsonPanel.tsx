@@ -12,9 +12,12 @@ export async function openCaseFile(file: File): Promise<void> {
   else appStore.getState().openCaseText(read.text, file.name);
 }
 
+/** One empty list for every render while nothing is derived yet (a new [] each time would re-render forever). */
+const NO_ERRORS: readonly string[] = [];
+
 export function CaseJsonPanel() {
   const caseText = useApp((s) => s.caseText);
-  const errors = useApp((s) => s.derived?.caseErrors ?? []);
+  const errors = useApp((s) => s.derived?.caseErrors ?? NO_ERRORS);
   const source = useApp((s) => s.source);
   const name = useApp((s) => (s.derived?.draft as { name?: string } | null)?.name ?? 'case');
   const fieldProblems = useApp((s) => Object.keys(s.derived?.fieldErrors ?? {}).length);

@@ -70,6 +70,20 @@ export function PlanReview() {
   const speed = useApp((s) => s.speed);
   const replicas = useApp((s) => s.replicas);
   const errors = useApp((s) => s.planErrors);
+  const pending = useApp((s) => s.planPending);
+  const planning = pending && (
+    <p className="hint" role="status" data-testid="plan-pending">
+      Planning the changed case…
+    </p>
+  );
+  if (!v && pending) {
+    return (
+      <section className="panel" aria-labelledby="review-title">
+        <h2 id="review-title">Check before running</h2>
+        {planning}
+      </section>
+    );
+  }
   if (!v) {
     return (
       <section className="panel" aria-labelledby="review-title">
@@ -89,6 +103,7 @@ export function PlanReview() {
   return (
     <section className="panel" aria-labelledby="review-title" data-testid="plan-review">
       <h2 id="review-title">Check before running</h2>
+      {planning}
       <h3>Reference state</h3>
       <ReferenceTable v={v} />
       <h3>Numerics advisor</h3>

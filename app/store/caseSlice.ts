@@ -7,7 +7,16 @@ import type { AppState, CaseSlice } from './types';
 export interface StoreDeps {
   /** The loaded set-up API (presets, validation, planner). */
   readonly setup: () => SetupApi;
+  /**
+   * Derives and plans off the page's thread (app/setup/planInWorker.ts); without it (unit tests) every change is
+   * derived on the spot. Resolves with null when a later change made this one's answer stale.
+   */
+  readonly deriveAsync?: (form: FormState, settings: DeriveSettings) => Promise<Derived | null>;
 }
+
+/** The run settings the plan view depends on. */
+export type DeriveSettings = Pick<AppState, 'replicas' | 'cores' | 'speed'>;
+export type Derived = Pick<CaseSlice, 'derived' | 'plan' | 'planErrors' | 'caseText'>;
 
 export function formOf(s: FormState): FormState {
   return {
@@ -22,11 +31,7 @@ export function formOf(s: FormState): FormState {
 }
 
 /** Derives case, messages and plan from a form and the run settings. */
-export function derive(
-  api: SetupApi,
-  form: FormState,
-  s: Pick<AppState, 'replicas' | 'cores' | 'speed'>,
-): Pick<CaseSlice, 'derived' | 'plan' | 'planErrors' | 'caseText'> {
+export function derive(api: SetupApi, form: FormState, s: DeriveSettings): Derived {
   const derived = api.deriveCase(form);
   let plan = null;
   let planErrors: string[] = [];
@@ -42,12 +47,41 @@ export function derive(
   return { derived, plan, planErrors, caseText: derived.caseText };
 }
 
+/**
+ * Applies a change of the form or the run settings: derived on the spot, or (with deps.deriveAsync) marked as being
+ * planned and derived off the page's thread, the answer taken only if no later change came meanwhile.
+ */
+let generation = 0;
+
+export function rederive(
+  deps: StoreDeps,
+  set: (patch: Partial<AppState>) => void,
+  get: () => AppState,
+  patch: Partial<AppState>,
+  sync = false,
+): void {
+  const mine = ++generation;
+  // Set-up actions that are not typing (a preset, an example, a restored form) are small cases: derived on the spot.
+  if (!deps.deriveAsync || sync) {
+    const next = { ...formOf(get()), ...(patch as Partial<FormState>) };
+    set({ ...patch, ...derive(deps.setup(), next, { ...get(), ...patch }), planPending: false });
+    return;
+  }
+  set({ ...patch, planPending: true });
+  const s = get();
+  void deps.deriveAsync(formOf(s), { replicas: s.replicas, cores: s.cores, speed: s.speed }).then(
+    (d) => d && mine === generation && set({ ...d, planPending: false }),
+    (e: Error) =>
+      mine === generation &&
+      set({ planPending: false, plan: null, planErrors: [`the case could not be planned: ${e.message}`] }),
+  );
+}
+
 export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [], CaseSlice> {
   return (set, get) => {
-    const update = (patch: Partial<FormState> & Partial<Pick<CaseSlice, 'fileMessage' | 'exampleTitle'>>) => {
-      const next = { ...formOf(get()), ...patch };
-      set({ ...patch, ...derive(deps.setup(), next, get()) });
-    };
+    type Patch = Partial<FormState> & Partial<Pick<CaseSlice, 'fileMessage' | 'exampleTitle'>>;
+    const update = (patch: Patch) => rederive(deps, set, get, patch);
+    const updateNow = (patch: Patch) => rederive(deps, set, get, patch, true);
     return {
       presetName: '',
       params: {},
@@ -59,10 +93,11 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
       derived: null,
       plan: null,
       planErrors: [],
+      planPending: false,
       fileMessage: null,
       exampleTitle: null,
       selectPreset: (name) =>
-        update({
+        updateNow({
           presetName: name,
           params: entriesFor(name, deps.setup()),
           walls: {},
@@ -75,7 +110,7 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
       applyExample: (example, caseText) => {
         const api = deps.setup();
         if (example.preset && Object.hasOwn(api.PRESETS, example.preset)) {
-          update({
+          updateNow({
             presetName: example.preset,
             params: entriesFor(example.preset, api, example.parameters ?? {}),
             walls: {},
@@ -86,7 +121,7 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
             exampleTitle: example.title,
           });
         } else if (caseText !== null) {
-          update({
+          updateNow({
             source: { kind: 'json', label: `example ${example.file}` },
             caseText,
             fileMessage: null,
@@ -126,7 +161,7 @@ export function createCaseSlice(deps: StoreDeps): StateCreator<AppState, [], [],
       },
       rebuildFromForm: () => update({ source: { kind: 'form' }, fileMessage: null }),
       // Forms saved before the gas and block edits existed have neither: the preset's gas and blocks then stand.
-      restoreForm: (form) => update({ gas: undefined, blocks: null, ...form }),
+      restoreForm: (form) => updateNow({ gas: undefined, blocks: null, ...form }),
       setFileMessage: (m) => set({ fileMessage: m }),
     };
   };

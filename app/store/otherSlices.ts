@@ -2,7 +2,7 @@
 import type { StateCreator } from 'zustand/vanilla';
 import type { AppState, ResultsSlice, RunSlice, UiSlice } from './types';
 import type { StoreDeps } from './caseSlice';
-import { derive, formOf } from './caseSlice';
+import { rederive } from './caseSlice';
 
 /** Assumed speed of one replica worker before any run was measured, particle-steps/s (a cautious guess). */
 export const DEFAULT_PARTICLE_STEPS_PER_SECOND = 1.5e7;
@@ -10,7 +10,7 @@ export const DEFAULT_PARTICLE_STEPS_PER_SECOND = 1.5e7;
 export function createRunSlice(deps: StoreDeps, cores: number): StateCreator<AppState, [], [], RunSlice> {
   return (set, get) => {
     const replan = () => {
-      if (get().presetName || get().source.kind === 'json') set(derive(deps.setup(), formOf(get()), get()));
+      if (get().presetName || get().source.kind === 'json') rederive(deps, set, get, {});
     };
     return {
       replicas: Math.max(1, cores),
@@ -20,6 +20,7 @@ export function createRunSlice(deps: StoreDeps, cores: number): StateCreator<App
       progress: null,
       notices: [],
       runError: null,
+      endNotice: null,
       target: { path: '', goalPercent: '2', stopWhenReached: false },
       setTarget: (patch) => set({ target: { ...get().target, ...patch } }),
       setReplicas: (n) => {
@@ -51,12 +52,15 @@ export const createResultsSlice: StateCreator<AppState, [], [], ResultsSlice> = 
   setCompare: (id) => set({ compareId: id }),
 });
 
-export const createUiSlice: StateCreator<AppState, [], [], UiSlice> = (set) => ({
+export const createUiSlice: StateCreator<AppState, [], [], UiSlice> = (set, get) => ({
   view: 'setup',
   engineReady: false,
   profileQuantity: 'velocityX',
   fieldQuantity: 'numberDensity',
   wallQuantity: 'shearStress',
+  flowUnits: {},
+  setFlowUnit: (quantity, unit) => set({ flowUnits: { ...get().flowUnits, [quantity]: unit } }),
+  restoreFlowUnits: (units) => set({ flowUnits: { ...units, ...get().flowUnits } }),
   setView: (view) => set({ view }),
   setEngineReady: (engineReady) => set({ engineReady }),
   select: (patch) => set(patch),

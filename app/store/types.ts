@@ -29,8 +29,10 @@ export interface CaseSlice extends FormState {
   readonly derived: CaseDerivation | null;
   readonly plan: PlanView | null;
   readonly planErrors: readonly string[];
+  /** A change is being derived and planned off the page's thread: derived and plan are the previous change's. */
+  readonly planPending: boolean;
   readonly fileMessage: FileMessage | null;
-  /** The example the set-up started from, if any (for the title of saved runs). */
+  /** The example the set-up started from, if any (shown by the example picker; saved runs are named for the case). */
   readonly exampleTitle: string | null;
   selectPreset(name: string): void;
   applyExample(example: ExampleEntry, caseText: string | null): void;
@@ -59,6 +61,13 @@ export interface TargetSetting {
   readonly stopWhenReached: boolean;
 }
 
+/** A run's end told to a user who is elsewhere (the set-up, the Sweep view): what happened, and its result if any. */
+export interface RunEndNotice {
+  readonly text: string;
+  /** The result to open from the notice, or null when the run kept none. */
+  readonly resultId: string | null;
+}
+
 export interface RunSlice {
   readonly replicas: number;
   readonly cores: number;
@@ -68,11 +77,12 @@ export interface RunSlice {
   readonly progress: RunProgressView | null;
   readonly notices: readonly string[];
   readonly runError: string | null;
+  readonly endNotice: RunEndNotice | null;
   readonly target: TargetSetting;
   setReplicas(n: number): void;
   setTarget(patch: Partial<TargetSetting>): void;
   setSpeed(particleStepsPerSecond: number): void;
-  setRunState(patch: Partial<Pick<RunSlice, 'status' | 'progress' | 'notices' | 'runError'>>): void;
+  setRunState(patch: Partial<Pick<RunSlice, 'status' | 'progress' | 'notices' | 'runError' | 'endNotice'>>): void;
   addNotice(text: string): void;
 }
 
@@ -98,7 +108,12 @@ export interface UiSlice {
   readonly profileQuantity: string;
   readonly fieldQuantity: string;
   readonly wallQuantity: string;
+  /** The unit each flow number is shown in (by flow quantity name), kept in the saved settings; absent = SI. */
+  readonly flowUnits: Readonly<Record<string, string>>;
   setView(v: ViewName): void;
+  setFlowUnit(quantity: string, unit: string): void;
+  /** The saved choices at start-up. */
+  restoreFlowUnits(units: Readonly<Record<string, string>>): void;
   setEngineReady(ready: boolean): void;
   select(patch: Partial<Pick<UiSlice, 'profileQuantity' | 'fieldQuantity' | 'wallQuantity'>>): void;
 }

@@ -22,6 +22,16 @@ export interface SweepPlotProps {
 
 const DASHES = ['dash', 'dot', 'dashdot', 'longdash', 'solid'] as const;
 
+/**
+ * A log axis people read: 1, 2, 5 × each decade while the range spans few decades (plotly's 'D2'), decades alone
+ * beyond; numbers as powers of ten, never SI prefixes ("100n"), since the axis title carries the unit already.
+ */
+export function logAxisTicks(values: readonly number[]): { dtick?: string; exponentformat: 'power' } {
+  const v = values.filter((x) => Number.isFinite(x) && x > 0);
+  const decades = v.length ? Math.log10(Math.max(...v) / Math.min(...v)) : 0;
+  return decades <= 4 ? { dtick: 'D2', exponentformat: 'power' } : { exponentformat: 'power' };
+}
+
 export function SweepPlot({ points, curves, quantityKey, quantityLabel, unit, xTitle, xOf }: SweepPlotProps) {
   const lines = useMemo(() => modelLines(points, curves, quantityKey), [points, curves, quantityKey]);
   const data = useMemo((): Data[] => {
@@ -50,12 +60,22 @@ export function SweepPlot({ points, curves, quantityKey, quantityLabel, unit, xT
   const logY = allPositive([...points.map((p) => p.mean), ...lines.flatMap((l) => l.y)]);
   const layout = useMemo(
     (): Partial<Layout> => ({
-      xaxis: { title: { text: xTitle }, type: 'log' },
-      yaxis: { title: { text: `${quantityLabel} [${unit}]` }, type: logY ? 'log' : 'linear' },
+      xaxis: {
+        title: { text: xTitle },
+        type: 'log',
+        ...logAxisTicks(data.flatMap((d) => (d as { x?: number[] }).x ?? [])),
+      },
+      yaxis: {
+        title: { text: `${quantityLabel} [${unit}]` },
+        type: logY ? 'log' : 'linear',
+        ...(logY
+          ? logAxisTicks(data.flatMap((d) => (d as { y?: number[] }).y ?? []))
+          : { exponentformat: 'power' as const }),
+      },
       legend: { orientation: 'h', y: -0.22 },
       height: 420,
     }),
-    [xTitle, quantityLabel, unit, logY],
+    [xTitle, quantityLabel, unit, logY, data],
   );
   return (
     <Plot

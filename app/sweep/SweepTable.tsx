@@ -15,7 +15,7 @@ export function SweepTable({ points, quantityLabel, unit, xHeader, xOf, failures
   const models = [...new Set(points.flatMap((p) => Object.keys(p.predictions)))];
   return (
     // Scrolls sideways rather than widen the column: one column per continuum model.
-    <div style={{ overflowX: 'auto' }}>
+    <div style={{ overflowX: 'auto', maxWidth: '100%' }}>
       <table className="grid" data-testid="sweep-values">
         <thead>
           <tr>

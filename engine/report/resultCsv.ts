@@ -36,7 +36,8 @@ export function profilesCsv(result: SimulationResult, comparison?: ContinuumComp
       .filter(([, p]) => p?.[key]?.length === t.rows)
       .map(([model, p]) => [model, p![key]] as [string, Float64Array]);
   });
-  const header = ['y [m]'];
+  // The profile runs across the gap (y) or, in an axisymmetric case, along the radius.
+  const header = [result.axisymmetric ? 'r [m]' : 'y [m]'];
   t.names.forEach((name, f) =>
     header.push(
       ...estimateHeaders(name, t.units[f]),

@@ -60,6 +60,8 @@ export const PA_PER_BAR = 1e5;
 export const M3_PER_LITRE = 1e-3;
 /** Molecules per second in 1 sccm: p₀ · 1 cm³ / (k T₀) / 60 s (ideal gas at the sccm reference state). */
 export const MOLECULES_PER_S_PER_SCCM = (SCCM_REFERENCE_PRESSURE_PA * 1e-6) / (K_B * SCCM_REFERENCE_TEMPERATURE_K) / 60;
+/** 1 h = 3600 s exactly (SI brochure, 9th ed., Table 8: non-SI units accepted for use with the SI). */
+export const SECONDS_PER_HOUR = 3600;
 /** T/K = t/°C + 273.15 exactly (SI brochure, 9th ed.). */
 export const KELVIN_AT_ZERO_CELSIUS = 273.15;
 
@@ -83,12 +85,16 @@ const UNITS: readonly UnitRow[] = [
   { kind: 'speed', symbol: 'm/s', aliases: [], factor: 1 },
   { kind: 'acceleration', symbol: 'm/s²', aliases: ['m/s^2', 'm/s2'], factor: 1 },
   { kind: 'massFlow', symbol: 'kg/s', aliases: [], factor: 1 },
+  { kind: 'massFlow', symbol: 'mg/s', aliases: [], factor: 1e-6 },
+  { kind: 'massFlow', symbol: 'g/h', aliases: [], factor: 1e-3 / SECONDS_PER_HOUR },
   { kind: 'massFlow', symbol: 'sccm', aliases: [], factor: MOLECULES_PER_S_PER_SCCM, perMolecule: true },
   { kind: 'throughput', symbol: 'Pa·m³/s', aliases: [], factor: 1 },
   { kind: 'throughput', symbol: 'mbar·L/s', aliases: [], factor: PA_PER_BAR * 1e-3 * M3_PER_LITRE },
   { kind: 'throughput', symbol: 'Torr·L/s', aliases: [], factor: PA_PER_TORR * M3_PER_LITRE },
+  { kind: 'throughput', symbol: 'Pa·L/s', aliases: [], factor: M3_PER_LITRE },
   { kind: 'conductance', symbol: 'm³/s', aliases: [], factor: 1 },
   { kind: 'conductance', symbol: 'L/s', aliases: [], factor: M3_PER_LITRE },
+  { kind: 'conductance', symbol: 'm³/h', aliases: [], factor: 1 / SECONDS_PER_HOUR },
 ];
 
 /** The SI unit of each kind, as written in exports. */

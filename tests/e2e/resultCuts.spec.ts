@@ -51,7 +51,7 @@ test('a slit with thick plates: the field map draws both plates, a horizontal cu
   await expect(page.locator('#field-quantity')).toHaveValue('machNumber');
   await w.screenshot('view-results-fieldmap');
 
-  // The default cut: row averages along y, one point per row.
+  // The default cut: across the middle of the slit (the column at mid-length of the plates), one point per row.
   const panel = page.getByTestId('profile-panel');
   await panel.scrollIntoViewIfNeeded();
   await page.getByText(/^Profile values/).click();

@@ -12,6 +12,8 @@ async function caseJson(page: Page): Promise<{
   blocks: Record<string, unknown>[];
   initial: { pressurePa: number };
 }> {
+  // The case is derived off the page's thread: read it once the last change is worked out.
+  await expect(page.getByTestId('plan-pending')).toHaveCount(0);
   return JSON.parse(await page.getByLabel('case JSON').inputValue());
 }
 

@@ -27,7 +27,7 @@ describe('flowNumbersOf()', () => {
   });
 
   it('shows nothing when the result has no flow sections (no made-up content)', () => {
-    expect(flowNumbersOf({} as SimulationResult)).toEqual({ rows: [], context: null });
+    expect(flowNumbersOf({} as SimulationResult)).toMatchObject({ rows: [], context: null });
   });
 });
 
