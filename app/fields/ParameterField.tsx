@@ -13,6 +13,14 @@ function allowedText(p: PresetParameter): string {
   return p.exclusiveMin ? `greater than ${p.min}` : `at least ${p.min}`;
 }
 
+/**
+ * True when a message already says what is allowed ("must be between 0 and 1"), so the field's own hint is not added:
+ * a hint from the parameter's lower bound alone ("at least 0") would contradict a message that names both bounds.
+ */
+function statesWhatIsAllowed(message: string): boolean {
+  return /\b(must be|between|at least|at most|greater than|less than|one of)\b/.test(message);
+}
+
 export function ParameterField({ p }: { p: PresetParameter }) {
   const entry = useApp((s) => s.params[p.name]);
   const error = useApp((s) => s.derived?.fieldErrors[`param:${p.name}`]);
@@ -67,7 +75,7 @@ export function ParameterField({ p }: { p: PresetParameter }) {
       {error && (
         <p className="field-error" id={`${id}-error`} role="alert">
           {error}
-          {hint && !error.includes(hint) ? ` (allowed: ${hint})` : ''}
+          {hint && !statesWhatIsAllowed(error) ? ` (allowed: ${hint})` : ''}
         </p>
       )}
     </div>

@@ -134,6 +134,15 @@ export function plan(c: Case, options: PlanOptions = {}): PlanResult {
   const autoCell = Math.min(denseRef.meanFreePathM / 3, Math.max(lx, ly) / 20);
   const cellsX = c.numerics.cellsX ?? Math.max(1, Math.ceil(lx / autoCell - 1e-9));
   const cellsY = c.numerics.cellsY ?? Math.max(1, Math.ceil(ly / autoCell - 1e-9));
+  // Where the planner sized the cells, the cause of a grid too large is the domain against the mean free path (the
+  // Knudsen number or a length the user typed), so the message names that field, not the particles per cell.
+  const gridCause =
+    c.numerics.cellsX !== undefined && c.numerics.cellsY !== undefined
+      ? `numerics.cellsX/cellsY: ${cellsX} × ${cellsY} cells`
+      : `${lx >= ly ? 'domain.lengthXM' : 'domain.lengthYM'}: a domain of ${lx.toPrecision(3)} m × ${ly.toPrecision(3)} m ` +
+        `in cells of λ/3 (mean free path ${denseRef.meanFreePathM.toPrecision(3)} m, Knudsen number ${ref.knudsen.toPrecision(3)}) needs ${cellsX} × ${cellsY} cells`;
+  const gridFix =
+    'shorten the domain, lower the pressure (raise the Knudsen number), use fewer particles per cell, or raise numerics.maxParticles if the machine has the memory';
   // Refuse a grid too large to build before building it cell by cell (millions of cells take seconds).
   if (!(cellsX * cellsY <= MAX_CELLS)) {
     const why =
@@ -142,9 +151,7 @@ export function plan(c: Case, options: PlanOptions = {}): PlanResult {
         : `the mean free path (${denseRef.meanFreePathM.toPrecision(3)} m${dense === c.initial ? '' : ' at the densest reservoir'}) sets cells of λ/3: lower the pressure (raise the Knudsen number), shorten the domain, or set numerics.cellsX/cellsY`;
     return {
       ok: false,
-      errors: [
-        `numerics.cellsX/cellsY: ${cellsX} × ${cellsY} cells, more than the limit of ${MAX_CELLS} cells; ${why}`,
-      ],
+      errors: [`${gridCause}, more than the limit of ${MAX_CELLS} cells; ${why}`],
     };
   }
   const dx = lx / cellsX;
@@ -161,8 +168,8 @@ export function plan(c: Case, options: PlanOptions = {}): PlanResult {
     return {
       ok: false,
       errors: [
-        `numerics.particlesPerCell: ${cellsX} × ${cellsY} cells at about ${c.numerics.particlesPerCell ?? 30} particles each need about ${Math.round(roughParticles)} particles, ` +
-          `far more than numerics.maxParticles (${c.numerics.maxParticles}); use fewer or larger cells (numerics.cellsX/cellsY), fewer particles per cell, a higher Knudsen number or a smaller domain`,
+        `${gridCause}; at about ${c.numerics.particlesPerCell ?? 30} particles per cell that is about ${Math.round(roughParticles)} particles, ` +
+          `far more than numerics.maxParticles (${c.numerics.maxParticles}): ${gridFix}`,
       ],
     };
   }
@@ -219,8 +226,8 @@ export function plan(c: Case, options: PlanOptions = {}): PlanResult {
 
   if (initialParticles > c.numerics.maxParticles) {
     errors.push(
-      `numerics.particlesPerCell: ${cells} cells × ${particlesPerCell} particles per cell = ${initialParticles} particles, ` +
-        `more than numerics.maxParticles (${c.numerics.maxParticles}); use fewer or larger cells, fewer particles per cell, or raise maxParticles if the machine has the memory`,
+      `${gridCause}; × ${particlesPerCell} particles per cell that is ${initialParticles} particles, ` +
+        `more than numerics.maxParticles (${c.numerics.maxParticles}): ${gridFix}`,
     );
   }
   if (initialParticles < 2)

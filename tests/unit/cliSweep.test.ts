@@ -234,7 +234,7 @@ describe('tenuis sweep', () => {
     const r = tenuis('sweep', path, '--param', 'knudsen', '--from', '1', '--to', '0.01', '--points', '2', '--out', out);
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(
-      /point 2 of 2 \(knudsen = 0\.01\) cannot run as set up:\n {2}numerics\.particlesPerCell: .*more than numerics\.maxParticles \(1000\)/,
+      /point 2 of 2 \(knudsen = 0\.01\) cannot run as set up:\n {2}(domain\.length[XY]M|numerics\.cellsX\/cellsY): .*Knudsen number .*more than numerics\.maxParticles \(1000\)/,
     );
     expect(existsSync(out)).toBe(false);
   });

@@ -186,3 +186,19 @@ describe('finding 10: gas names and messages', () => {
     expect(high).toBe(low);
   });
 });
+
+describe('a case too large for the planner names its cause, not the particles per cell (issue 12)', () => {
+  it('a tube 50 000 radii long: the domain length and the Knudsen number, with the cell limit', () => {
+    // The issue's example: lengthToRadius 50000 froze the page and was refused as "numerics.particlesPerCell".
+    const r = planFromInput(buildPreset('tube', { lengthToRadius: '50000' }));
+    expect(errorsOf(r)).toMatch(
+      /^domain\.lengthXM: a domain of .* m × .* m in cells of λ\/3 \(mean free path .* m, Knudsen number 0\.500\) needs \d+ × \d+ cells, more than the limit of 2000000 cells/,
+    );
+    expect(errorsOf(r)).not.toMatch(/particlesPerCell:/);
+  });
+  it('a grid within the cell limit but beyond the particle budget: the same cause and numerics.maxParticles', () => {
+    const c = buildPreset('tube', { lengthToRadius: '2000' });
+    const r = planFromInput({ ...c, numerics: { ...c.numerics, maxParticles: 100_000 } });
+    expect(errorsOf(r)).toMatch(/^domain\.lengthXM: .*Knudsen number .*more than numerics\.maxParticles \(100000\)/);
+  });
+});
