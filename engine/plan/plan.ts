@@ -136,11 +136,13 @@ export function plan(c: Case, options: PlanOptions = {}): PlanResult {
   const cellsY = c.numerics.cellsY ?? Math.max(1, Math.ceil(ly / autoCell - 1e-9));
   // Where the planner sized the cells, the cause of a grid too large is the domain against the mean free path (the
   // Knudsen number or a length the user typed), so the message names that field, not the particles per cell.
-  const gridCause =
-    c.numerics.cellsX !== undefined && c.numerics.cellsY !== undefined
-      ? `numerics.cellsX/cellsY: ${cellsX} × ${cellsY} cells`
-      : `${lx >= ly ? 'domain.lengthXM' : 'domain.lengthYM'}: a domain of ${lx.toPrecision(3)} m × ${ly.toPrecision(3)} m ` +
-        `in cells of λ/3 (mean free path ${denseRef.meanFreePathM.toPrecision(3)} m, Knudsen number ${ref.knudsen.toPrecision(3)}) needs ${cellsX} × ${cellsY} cells`;
+  const autoSized = c.numerics.cellsX === undefined || c.numerics.cellsY === undefined;
+  const domainCause =
+    `${lx >= ly ? 'domain.lengthXM' : 'domain.lengthYM'}: a domain of ${lx.toPrecision(3)} m × ${ly.toPrecision(3)} m ` +
+    `in cells of λ/3 (mean free path ${denseRef.meanFreePathM.toPrecision(3)} m, Knudsen number ${ref.knudsen.toPrecision(3)}) needs ${cellsX} × ${cellsY} cells`;
+  // A grid the user set is the user's choice: then the cells themselves, or the particles per cell, are the cause.
+  const cellsCause = autoSized ? domainCause : `numerics.cellsX/cellsY: ${cellsX} × ${cellsY} cells`;
+  const gridCause = autoSized ? domainCause : `numerics.particlesPerCell: ${cellsX} × ${cellsY} cells`;
   const gridFix =
     'shorten the domain, lower the pressure (raise the Knudsen number), use fewer particles per cell, or raise numerics.maxParticles if the machine has the memory';
   // Refuse a grid too large to build before building it cell by cell (millions of cells take seconds).
@@ -151,7 +153,7 @@ export function plan(c: Case, options: PlanOptions = {}): PlanResult {
         : `the mean free path (${denseRef.meanFreePathM.toPrecision(3)} m${dense === c.initial ? '' : ' at the densest reservoir'}) sets cells of λ/3: lower the pressure (raise the Knudsen number), shorten the domain, or set numerics.cellsX/cellsY`;
     return {
       ok: false,
-      errors: [`${gridCause}, more than the limit of ${MAX_CELLS} cells; ${why}`],
+      errors: [`${cellsCause}, more than the limit of ${MAX_CELLS} cells; ${why}`],
     };
   }
   const dx = lx / cellsX;
