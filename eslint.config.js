@@ -26,6 +26,7 @@ export const ENGINE_LAYERS = [
   ['run'],
   ['io'],
   ['continuum'],
+  ['sizing'],
   ['report'],
 ];
 

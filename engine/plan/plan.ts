@@ -102,6 +102,24 @@ export interface PlanOptions {
 /** Bytes per cell of the sampling arrays: raw cell sums, double-buffered field batches (see memoryBytesEstimate). */
 const BYTES_PER_CELL = RAW_CELL_SUMS * 8 * (FIELD_BATCH_CAPACITY + 3);
 
+/**
+ * The base batch length and the sampled steps, whole batches only, for a requested number of sampling steps. At
+ * least 10 steps per base batch: closing a batch touches every cell, and consecutive steps are strongly correlated
+ * anyway, so finer batches add cost but no information to the blocking analysis. Whole batches, so every sampled
+ * step reaches the integral-quantity series.
+ */
+export function batchesOf(requestedSampleSteps: number): { batchSteps: number; sampleSteps: number } {
+  const batchSteps = Math.max(10, Math.ceil(requestedSampleSteps / 8192));
+  return { batchSteps, sampleSteps: Math.ceil(requestedSampleSteps / batchSteps) * batchSteps };
+}
+
+/** Sampling steps that plan to themselves (a fixed point of batchesOf), at least `requested`. */
+export function stableSampleSteps(requested: number): number {
+  let steps = Math.ceil(requested);
+  for (let next = batchesOf(steps).sampleSteps; next !== steps; next = batchesOf(steps).sampleSteps) steps = next;
+  return steps;
+}
+
 export function plan(c: Case, options: PlanOptions = {}): PlanResult {
   const errors: string[] = [];
   const warnings: string[] = [];
@@ -259,11 +277,7 @@ export function plan(c: Case, options: PlanOptions = {}): PlanResult {
   );
   const transientSteps = c.sampling.transientSteps ?? Math.ceil(relaxTime / timeStepS);
   const requestedSampleSteps = c.sampling.sampleSteps ?? Math.max(2000, 4 * transientSteps);
-  // At least 10 steps per base batch: closing a batch touches every cell, and consecutive steps are strongly
-  // correlated anyway, so finer batches add cost but no information to the blocking analysis.
-  const batchSteps = Math.max(10, Math.ceil(requestedSampleSteps / 8192));
-  // Whole batches only, so every sampled step reaches the integral-quantity series.
-  const sampleSteps = Math.ceil(requestedSampleSteps / batchSteps) * batchSteps;
+  const { batchSteps, sampleSteps } = batchesOf(requestedSampleSteps);
   const wallBins = { left: surfaces[0].bins, right: surfaces[1].bins, bottom: surfaces[2].bins, top: surfaces[3].bins };
 
   const ratios: AdvisorRatios = {
