@@ -38,6 +38,11 @@ export interface StoppingRules {
   readonly maxSeconds?: number;
   /** Sampling steps per replica (the step budget), overriding the plan's. */
   readonly maxSampleSteps?: number;
+  /**
+   * Stop "when decided": called on each live summary, returns the reason to stop (e.g. every verdict of the
+   * headline quantity is adequate or not adequate) or null to go on.
+   */
+  readonly decided?: (result: SimulationResult) => string | null;
 }
 
 /** A checkpoint of the calling thread's replica every `everySteps` steps and when the run is cancelled. */
@@ -180,7 +185,8 @@ export function runCase(input: CaseToRun, options: RunCaseOptions, hooks: RunCas
       });
     }
     const stops = decision.stop && (decision.rule !== 'target' || stopAtTarget);
-    return stops ? decision.reason : null;
+    if (stops) return decision.reason;
+    return result && stopping?.decided ? stopping.decided(result) : null;
   };
   const stopFor = (reason: string | null) => {
     if (reason === null || stoppedBy !== null || cancelled) return;
@@ -218,10 +224,10 @@ export function runCase(input: CaseToRun, options: RunCaseOptions, hooks: RunCas
       snapshotEveryMs: options.snapshotEveryMs,
       chunkMilliseconds: options.chunkMilliseconds,
       decodeOnThisThread,
-      // Summarised only for a target: a time budget alone needs no summary of the samples.
+      // Summarised only for a target or a decision: a time budget alone needs no summary of the samples.
       check: needsSummaries
         ? (merged, elapsed) => {
-            const result = target ? summarizeSamples(merged) : null;
+            const result = target || stopping?.decided ? summarizeSamples(merged) : null;
             const reason = judge(result, elapsed);
             if (result) hooks.onLive?.(result);
             return reason;

@@ -6,6 +6,7 @@
 import { planFromInput, type Plan } from '../../engine/plan/plan';
 import type { ReferenceState } from '../../engine/plan/referenceState';
 import { caseModelsOf } from '../../engine/continuum/caseModels';
+import { sizeRun, sizedCase, sizingLines, type NotSized, type RunSizing } from '../../engine/sizing/runSizing';
 import { BOLTZMANN_J_PER_K as K_B } from '../../engine/physics/constants';
 import { SIDE_NAMES } from '../../engine/case/caseConstants';
 import { targetPathsOf } from '../../engine/results/targetQuantities';
@@ -62,6 +63,9 @@ export interface PlanView {
   readonly warnings: readonly string[];
   /** Quantities a precision target may name (paths as in summary.json, e.g. flow.massFlowRate). */
   readonly targetPaths: readonly string[];
+  /** The run sizing in lines (engine/sizing/runSizing.ts sizingLines), and whether it set the sampling shown. */
+  readonly sizing: readonly string[];
+  readonly sizingApplied: boolean;
 }
 
 /** A driven flow's mean speed through its duct, estimated before the run from a continuum or free-molecular model. */
@@ -169,9 +173,10 @@ export interface PlanOptions {
 export type PlanViewResult = { ok: true; view: PlanView } | { ok: false; errors: string[] };
 
 export function describePlan(caseInput: unknown, o: PlanOptions): PlanViewResult {
-  const planned = planFromInput(caseInput);
-  if (!planned.ok) return { ok: false, errors: planned.errors };
-  const p = planned.plan;
+  const first = planFromInput(caseInput);
+  if (!first.ok) return { ok: false, errors: first.errors };
+  // The plan shown is the one the run will take: sized to decide where the case leaves its sampling open.
+  const { plan: p, sizing } = sizedPlanOf(first.plan, o.replicas);
   const r = p.ratios;
   const row = (label: string, value: number, limit: number, bound: 'max' | 'min'): AdvisorRow => ({
     label,
@@ -232,6 +237,23 @@ export function describePlan(caseInput: unknown, o: PlanOptions): PlanViewResult
       estimatedSeconds: (steps * p.initialParticles) / (o.particleStepsPerSecond * share),
       warnings: p.warnings,
       targetPaths: targetPathsOf(p),
+      sizing: sizingLines(sizing),
+      sizingApplied: sizing.sized && sizing.applied,
     },
   };
+}
+
+/**
+ * The plan sized for its headline quantity (engine/sizing/runSizing.ts) when the case leaves sampling.sampleSteps
+ * unset and the run sets no budget of its own, with the sizing; else the plan as it is.
+ */
+export function sizedPlanOf(
+  plan: Plan,
+  replicas: number,
+  keepSamplingBecause?: string,
+): { plan: Plan; sizing: RunSizing | NotSized } {
+  const sizing = sizeRun(plan, caseModelsOf(plan), { replicas, keepSamplingBecause });
+  if (!sizing.sized || !sizing.applied) return { plan, sizing };
+  const sized = planFromInput(sizedCase(plan.caseData, sizing));
+  return sized.ok ? { plan: sized.plan, sizing } : { plan, sizing: { sized: false, reason: sized.errors.join('; ') } };
 }

@@ -17,6 +17,7 @@ import { observedFactory, openSummaryWorker, startLiveViews, type LiveReplicas, 
 import type { FinishedSummary } from '../../workers/liveSummary.worker';
 import { transfer } from 'comlink';
 import { planFromInput, type Plan } from '../../engine/plan/plan';
+import { sizedPlanOf } from './planView';
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { TenuisTestHooks } from '../testing/testHooks';
 import type { ContinuumComparisonResult } from '../../engine/report/comparison';
@@ -81,7 +82,12 @@ export interface RunHandle {
 
 export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandle {
   // The page's case enters the run here: validated and planned once, then handed along as data and plan.
-  const planned = request.plan ? { ok: true as const, plan: request.plan } : planFromInput(request.caseInput);
+  const first = request.plan ? { ok: true as const, plan: request.plan } : planFromInput(request.caseInput);
+  // Sized to decide where the case leaves its sampling open and the run has no target of its own (planView.ts).
+  const planned =
+    first.ok && request.target?.stopWhenReached !== true
+      ? { ok: true as const, plan: sizedPlanOf(first.plan, request.replicas).plan }
+      : first;
   if (!planned.ok)
     return {
       done: Promise.resolve({ ok: false, message: planned.errors.join('\n') }),

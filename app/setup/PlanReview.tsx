@@ -138,7 +138,10 @@ export function PlanReview() {
           </tr>
           <tr>
             <th scope="row">sampled steps per replica</th>
-            <td>{countText(v.sampleSteps)}</td>
+            <td>
+              {countText(v.sampleSteps)}
+              {v.sizingApplied ? ' (sized for the headline quantity, see Run sizing)' : ''}
+            </td>
           </tr>
           <tr>
             <th scope="row">expected error of one cell, {replicas} replicas</th>
@@ -158,6 +161,12 @@ export function PlanReview() {
           </tr>
         </tbody>
       </table>
+      <h3>Run sizing</h3>
+      <ul className="hint" aria-label="run sizing" data-testid="run-sizing">
+        {v.sizing.map((line) => (
+          <li key={line}>{line}</li>
+        ))}
+      </ul>
       {v.warnings.length > 0 && (
         <ul className="warnings" aria-label="advisor warnings">
           {v.warnings.map((w) => (

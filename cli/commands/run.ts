@@ -25,15 +25,24 @@ import { runSummary } from '../report';
 import { prettyJson } from '../prettyJson';
 import { defineCommand } from '../command';
 import { printable } from '../printable';
+import { parseTimeCap, sizedRunOf } from '../sizedRun';
+import { sizingLines } from '../../engine/sizing/runSizing';
+import { verdictHeadline } from '../../engine/report/headline';
+import type { SimulationResult } from '../../engine/results/summarize';
 
 export const RUN_USAGE = `Usage:
   tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE]
-             [--target Q=F] [--max-steps N] [--max-seconds S] [--checkpoint FILE] [--quiet]
+             [--target Q=F | --target decide] [--max-steps N] [--max-seconds S] [--time-cap S]
+             [--checkpoint FILE] [--quiet]
   tenuis run --resume FILE --out DIR [--checkpoint FILE] [--quiet]
 
 Runs the case and writes summary.json, profiles.csv, fields.csv, surfaces.csv and case.json (the case as run,
 complete and explicit) into DIR. The files appear only when the run has ended: an error leaves DIR as it was;
 Ctrl-C stops the run and writes what was sampled so far (exit code 130).
+A case that leaves sampling.sampleSteps unset is sized to decide: its sampling steps are chosen so that the
+headline quantity (a duct's flow rate, a wall's shear or heat flux) reaches ±1 % (95 %) within the time cap, and
+case.json records them (tenuis check shows the sizing first). --target Q=F, --max-steps and --max-seconds run
+exactly what they say instead.
   --out, -o DIR         output folder (created if needed; files of the same names in it are replaced)
   --seed N              random seed, overriding the case's
   --replicas, -r N      N independent replicas on N worker threads (one per core), merged into one result;
@@ -43,6 +52,9 @@ Ctrl-C stops the run and writes what was sampled so far (exit code 130).
                         walls.top.shearStress=0.01 (or =1%); the progress line shows the precision reached and the
                         estimated time to the target. Without --max-steps, sampling may run to 50 × the case's
                         sampleSteps per replica.
+  --target decide       stop when decided: when every model's verdict on the headline quantity is adequate or not
+                        adequate (none undecided); at most the sized sampling and the time cap
+  --time-cap S          wall-clock cap of the sizing, seconds (default 300)
   --max-steps N         sampling steps per replica (overrides the case's sampleSteps)
   --max-seconds S       stop sampling after S seconds of wall time
   --checkpoint FILE     keep a checkpoint of the whole run in FILE (every --checkpoint-every N steps, by default
@@ -59,6 +71,7 @@ const RUN_OPTIONS = {
   target: { type: 'string' },
   'max-steps': { type: 'string' },
   'max-seconds': { type: 'string' },
+  'time-cap': { type: 'string' },
   checkpoint: { type: 'string' },
   'checkpoint-every': { type: 'string' },
   resume: { type: 'string' },
@@ -72,15 +85,17 @@ function stoppingRules(
   values: { target?: string; 'max-steps'?: string; 'max-seconds'?: string },
   plan: Plan,
   usage: UsageErrorOf,
+  decide: DecideRule | undefined,
 ): StoppingRules | undefined {
   if (values.target === undefined && values['max-steps'] === undefined && values['max-seconds'] === undefined)
     return undefined;
   const knownPaths = targetPathsOf(plan);
   let target;
   try {
-    target = values.target === undefined ? undefined : parseTarget(values.target, knownPaths);
+    target =
+      values.target === undefined || values.target === 'decide' ? undefined : parseTarget(values.target, knownPaths);
   } catch (e) {
-    throw usage(`--target: ${(e as Error).message}`);
+    throw usage(`--target: ${(e as Error).message} (or --target decide)`);
   }
   const positive = (name: string, text: string | undefined, integer: boolean): number | undefined => {
     if (text === undefined) return undefined;
@@ -90,9 +105,37 @@ function stoppingRules(
     return v;
   };
   const maxSteps = positive('max-steps', values['max-steps'], true);
+  const maxSeconds = positive('max-seconds', values['max-seconds'], false);
+  if (decide)
+    return {
+      decided: decide.decided,
+      maxSampleSteps: maxSteps ?? decide.maxSampleSteps,
+      maxSeconds: maxSeconds ?? decide.capSeconds,
+    };
   // With a target and no step budget, allow up to 50 times the planned sampling (a safety cap, documented in --help).
   const maxSampleSteps = maxSteps ?? (target ? 50 * plan.sampleSteps : undefined);
-  return { target, maxSeconds: positive('max-seconds', values['max-seconds'], false), maxSampleSteps };
+  return { target, maxSeconds, maxSampleSteps };
+}
+
+interface DecideRule {
+  readonly decided: (result: SimulationResult) => string | null;
+  readonly maxSampleSteps: number;
+  readonly capSeconds: number;
+}
+
+/** `--target decide`: stop once no model's verdict on the headline quantity is undecided. */
+function decideRule(plan: Plan, maxSampleSteps: number, capSeconds: number): DecideRule {
+  return {
+    maxSampleSteps,
+    capSeconds,
+    decided: (result) => {
+      const c = continuumComparisonOf(plan, result);
+      if (!c.recognised) return null;
+      const v = c.verdict[c.predictions.headline];
+      if (!v || v.status === 'noData' || v.models.some((m) => m.status === 'undecided')) return null;
+      return `decided: ${verdictHeadline(c).text}`;
+    },
+  };
 }
 
 function parseCheckpointEvery(text: string, usage: UsageErrorOf): number {
@@ -143,14 +186,35 @@ export const runCommand = defineCommand({
       throw usage('--seed cannot change a resumed run: its random stream is in the checkpoint');
 
     const seed = values.seed === undefined ? undefined : parseSeedOption(values.seed);
-    const { caseData, plan } = resumed
+    const replicas = values.replicas === undefined ? 1 : parseReplicasOption(values.replicas, usage);
+    const capSeconds = parseTimeCap(values['time-cap'], usage);
+    const loaded = resumed
       ? { caseData: resumed.sim.plan.caseData, plan: resumed.sim.plan }
       : loadCase(positionals[0], { seed });
+    const decide = values.target === 'decide';
+    const ownBudget =
+      (values.target !== undefined && !decide) ||
+      values['max-steps'] !== undefined ||
+      values['max-seconds'] !== undefined;
+    // A resumed run keeps the sampling its checkpoint holds; a run with a budget of its own runs exactly that.
+    const { caseData, plan, sizing } = resumed
+      ? { ...loaded, sizing: null }
+      : sizedRunOf(loaded.caseData, loaded.plan, { replicas, capSeconds, apply: !ownBudget });
     checkOutputDir(outDir);
     for (const w of plan.warnings) io.stderr.write(`warning: ${printable(w)}\n`);
+    if (sizing?.sized && sizing.applied && !quiet)
+      io.stderr.write(
+        `run sizing:\n${sizingLines(sizing)
+          .map((l) => `  ${l}`)
+          .join('\n')}\n`,
+      );
 
-    const replicas = values.replicas === undefined ? 1 : parseReplicasOption(values.replicas, usage);
-    const stopping = stoppingRules(values, plan, usage);
+    const stopping = stoppingRules(
+      values,
+      plan,
+      usage,
+      decide ? decideRule(plan, plan.sampleSteps, capSeconds) : undefined,
+    );
     const checkpointPath = values.checkpoint;
     if ((checkpointPath || resumed) && (replicas > 1 || stopping)) {
       throw usage(

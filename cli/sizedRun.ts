@@ -1,0 +1,44 @@
+/**
+ * The run sizing on the command line (engine/sizing/runSizing.ts): `tenuis check` shows it, `tenuis run` applies
+ * it when the case leaves sampling.sampleSteps unset and no --target, --max-steps or --max-seconds is given.
+ */
+import { totalmem } from 'node:os';
+import type { Case } from '../engine/case/schema';
+import { plan as planCase, type Plan } from '../engine/plan/plan';
+import { caseModelsOf } from '../engine/continuum/caseModels';
+import { DEFAULT_CAP_SECONDS, sizeRun, sizedCase, type NotSized, type RunSizing } from '../engine/sizing/runSizing';
+import { CliError, type UsageError } from './errors';
+
+export interface SizedRun {
+  readonly caseData: Case;
+  readonly plan: Plan;
+  readonly sizing: RunSizing | NotSized;
+}
+
+/** --time-cap S: the sizing's wall-clock cap, seconds (default 300). */
+export function parseTimeCap(text: string | undefined, usage: (m: string) => UsageError): number {
+  if (text === undefined) return DEFAULT_CAP_SECONDS;
+  const v = Number(text);
+  if (!Number.isFinite(v) || v <= 0) throw usage(`--time-cap ${text}: give the cap in seconds, a number above 0`);
+  return v;
+}
+
+/** The case sized for its headline (applied when `apply` and the case leaves its sampling open). */
+export function sizedRunOf(
+  caseData: Case,
+  plan: Plan,
+  options: { readonly replicas: number; readonly capSeconds: number; readonly apply: boolean },
+): SizedRun {
+  const sizing = sizeRun(plan, caseModelsOf(plan), {
+    replicas: options.replicas,
+    capSeconds: options.capSeconds,
+    keepSamplingBecause: options.apply
+      ? undefined
+      : 'the run sets its own budget (--target, --max-steps or --max-seconds)',
+  });
+  if (!sizing.sized || !sizing.applied) return { caseData, plan, sizing };
+  const sized = sizedCase(caseData, sizing);
+  const planned = planCase(sized, { memoryBudgetBytes: 0.8 * totalmem() });
+  if (!planned.ok) throw new CliError(`the sized case cannot run:\n${planned.errors.map((m) => `  ${m}`).join('\n')}`);
+  return { caseData: sized, plan: planned.plan, sizing };
+}
