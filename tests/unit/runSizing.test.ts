@@ -65,7 +65,7 @@ describe('run sizing', () => {
     const s = sized(tube, { capSeconds: 5 });
     expect(s.capAllows).toBe(false);
     expect(s.sampleSteps).toBeLessThan(s.stepsForTarget);
-    expect(s.expectedSeconds).toBeLessThanOrEqual(5 * 1.01 + (tube.batchSteps * tube.initialParticles) / 1.3e7);
+    expect(s.expectedSeconds).toBeLessThanOrEqual(5 * 1.01 + (tube.batchSteps * tube.initialParticles) / 1e7);
     expect(s.expectedRelativeHalfWidth).toBeGreaterThan(0.01);
     expect(sizingLines(s).join('\n')).toMatch(/cap does not allow the target: it needs \d+ steps/);
   });
