@@ -57,9 +57,8 @@ export function gapCase(s: GapSetup): CaseInput {
     temperatureK: w.temperatureK,
     velocityMPerS: [w.velocityXMPerS, 0, 0] as [number, number, number],
   });
-  const sampling: NonNullable<CaseInput['sampling']> = {
-    sampleSteps: (v.sampleSteps as number | undefined) ?? auto.sampleSteps,
-  };
+  const sampling: NonNullable<CaseInput['sampling']> = {};
+  if (v.sampleSteps !== undefined) sampling.sampleSteps = v.sampleSteps as number;
   if (v.transientSteps !== undefined) sampling.transientSteps = v.transientSteps as number;
   return {
     schemaVersion: CASE_SCHEMA_VERSION,

@@ -56,7 +56,7 @@ export const poiseuille: Preset = {
     const auto = defaultGapNumerics(v.knudsen as number);
     const cellsY = (v.cellsY as number | undefined) ?? auto.cellsY;
     const lx = h / cellsY;
-    const c = ductCommon({ ...v, cellsY, sampleSteps: v.sampleSteps ?? auto.sampleSteps }, p, lx, h);
+    const c = ductCommon({ ...v, cellsY }, p, lx, h);
     return {
       ...c,
       name: `poiseuille ${v.gas} Kn ${knudsenText(v)}`,

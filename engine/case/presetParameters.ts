@@ -118,7 +118,7 @@ export const numericsParameters: readonly PresetParameter[] = [
     default: null,
     min: 1,
     description:
-      'sampled steps; default about 8e8 particle-steps of sampling (8e8 / (cellsY × particlesPerCell)), between 20000 and 400000',
+      'sampled steps; default: sized before the run so that the headline quantity reaches ±1 % (95 %) within the time cap (tenuis check shows the sizing)',
   },
   { name: 'seed', label: 'Random seed', kind: 'count', unitShown: '', default: 1, min: 0, description: 'random seed' },
 ];
@@ -140,15 +140,12 @@ export function pressureForKnudsenPa(
 /**
  * Default numerics of the gap presets for a Knudsen number (λ/H).
  * cellsY: at least 20 cells, and cells no larger than λ/3 (3/Kn cells across the gap; with 2×2 sub-cells the mean
- * collision separation stays near 0.1 λ). 100 particles per cell, and about 8·10^8 particle-steps of sampling: on the
- * 2-core reference machine that is under a minute and gives wall shear and heat flux to a few per cent (the
- * validation tests record what each Knudsen number reaches).
+ * collision separation stays near 0.1 λ). 100 particles per cell. The sampling is left to the run sizing
+ * (engine/sizing/runSizing.ts: steps for ±1 % on the headline quantity within the time cap) unless sampleSteps is given.
  */
-export function defaultGapNumerics(knudsen: number): { cellsY: number; particlesPerCell: number; sampleSteps: number } {
+export function defaultGapNumerics(knudsen: number): { cellsY: number; particlesPerCell: number } {
   const cellsY = Math.max(20, Math.ceil(3 / knudsen - 1e-9));
-  const particlesPerCell = 100;
-  const sampleSteps = Math.min(400_000, Math.max(20_000, Math.round(8e8 / (cellsY * particlesPerCell) / 1000) * 1000));
-  return { cellsY, particlesPerCell, sampleSteps };
+  return { cellsY, particlesPerCell: 100 };
 }
 // ────────────────────────────────────────────────────────────────────────────────────────────────────────────────
 

@@ -116,9 +116,10 @@ describe('case slice', () => {
 });
 
 describe('run slice', () => {
-  it('more replicas lower the expected error of the plan; the measured speed changes the time estimate', () => {
+  it('more replicas lower the expected error of a fixed sampling; the measured speed changes the time estimate', () => {
     const store = newStore(4);
     store.getState().selectPreset('couette');
+    store.getState().setParamText('sampleSteps', '20000');
     store.getState().setReplicas(1);
     const one = store.getState().plan!;
     store.getState().setReplicas(4);
@@ -128,6 +129,19 @@ describe('run slice', () => {
     store.getState().setSpeed(2 * store.getState().speed.particleStepsPerSecond);
     expect(store.getState().plan!.estimatedSeconds).toBeCloseTo(four.estimatedSeconds / 2, 9);
     expect(store.getState().speed.measured).toBe(true);
+  });
+
+  it('a sized run shares its sampling among the replicas: each samples about a quarter with four', () => {
+    const store = newStore(4);
+    store.getState().selectPreset('couette');
+    store.getState().setReplicas(1);
+    const one = store.getState().plan!;
+    store.getState().setReplicas(4);
+    const four = store.getState().plan!;
+    expect(one.sizingApplied && four.sizingApplied).toBe(true);
+    expect(four.sampleSteps / one.sampleSteps).toBeGreaterThan(0.24);
+    expect(four.sampleSteps / one.sampleSteps).toBeLessThan(0.26);
+    expect(four.sizing.join(' ')).toMatch(/on 4 replicas/);
   });
 
   it('setReplicas() ignores values that are not whole numbers from 1 to 64', () => {
