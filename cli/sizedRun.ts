@@ -23,6 +23,27 @@ export function parseTimeCap(text: string | undefined, usage: (m: string) => Usa
   return v;
 }
 
+/** --tolerance T: the verdict's tolerance, a fraction (0.05) or a percentage (5%), above 0 and at most 100 %. */
+export function parseTolerance(text: string, usage: (m: string) => UsageError): number {
+  const percent = text.trim().endsWith('%');
+  const v = Number((percent ? text.trim().slice(0, -1) : text).trim());
+  const value = percent ? v / 100 : v;
+  if (!(Number.isFinite(value) && value > 0 && value <= 1))
+    throw usage(
+      `--tolerance ${text}: give the relative deviation a model may have, e.g. 0.05 or 5% (above 0, at most 100 %)`,
+    );
+  return value;
+}
+
+/** The case and its plan with the verdict tolerance set (comparison.tolerance), so the case as run records it. */
+export function withTolerance(
+  loaded: { caseData: Case; plan: Plan },
+  tolerance: number,
+): { caseData: Case; plan: Plan } {
+  const caseData = { ...loaded.caseData, comparison: { ...loaded.caseData.comparison, tolerance } };
+  return { caseData, plan: { ...loaded.plan, caseData } };
+}
+
 /** The case sized for its headline (applied when `apply` and the case leaves its sampling open). */
 export function sizedRunOf(
   caseData: Case,

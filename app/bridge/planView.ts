@@ -6,7 +6,14 @@
 import { planFromInput, type Plan } from '../../engine/plan/plan';
 import type { ReferenceState } from '../../engine/plan/referenceState';
 import { caseModelsOf } from '../../engine/continuum/caseModels';
-import { sizeRun, sizedCase, sizingLines, type NotSized, type RunSizing } from '../../engine/sizing/runSizing';
+import {
+  DEFAULT_CAP_SECONDS,
+  sizeRun,
+  sizedCase,
+  sizingLines,
+  type NotSized,
+  type RunSizing,
+} from '../../engine/sizing/runSizing';
 import { BOLTZMANN_J_PER_K as K_B } from '../../engine/physics/constants';
 import { SIDE_NAMES } from '../../engine/case/caseConstants';
 import { targetPathsOf } from '../../engine/results/targetQuantities';
@@ -245,14 +252,11 @@ export function describePlan(caseInput: unknown, o: PlanOptions): PlanViewResult
 
 /**
  * The plan sized for its headline quantity (engine/sizing/runSizing.ts) when the case leaves sampling.sampleSteps
- * unset and the run sets no budget of its own, with the sizing; else the plan as it is.
+ * unset and the run sets no budget of its own, with the sizing; else the plan as it is. capShare: the share of the
+ * default time cap this run may take (a sweep point's 1/points).
  */
-export function sizedPlanOf(
-  plan: Plan,
-  replicas: number,
-  keepSamplingBecause?: string,
-): { plan: Plan; sizing: RunSizing | NotSized } {
-  const sizing = sizeRun(plan, caseModelsOf(plan), { replicas, keepSamplingBecause });
+export function sizedPlanOf(plan: Plan, replicas: number, capShare = 1): { plan: Plan; sizing: RunSizing | NotSized } {
+  const sizing = sizeRun(plan, caseModelsOf(plan), { replicas, capSeconds: DEFAULT_CAP_SECONDS * capShare });
   if (!sizing.sized || !sizing.applied) return { plan, sizing };
   const sized = planFromInput(sizedCase(plan.caseData, sizing));
   return sized.ok ? { plan: sized.plan, sizing } : { plan, sizing: { sized: false, reason: sized.errors.join('; ') } };

@@ -65,6 +65,8 @@ export interface RunRequest {
   readonly liveEveryMs: number;
   readonly target?: TargetRequest;
   readonly hooks?: TenuisTestHooks;
+  /** Share of the run sizing's default time cap this run may take (a sweep point: 1/points); default 1. */
+  readonly capShare?: number;
 }
 
 export interface RunCallbacks {
@@ -86,7 +88,7 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
   // Sized to decide where the case leaves its sampling open and the run has no target of its own (planView.ts).
   const planned =
     first.ok && request.target?.stopWhenReached !== true
-      ? { ok: true as const, plan: sizedPlanOf(first.plan, request.replicas).plan }
+      ? { ok: true as const, plan: sizedPlanOf(first.plan, request.replicas, request.capShare).plan }
       : first;
   if (!planned.ok)
     return {

@@ -69,6 +69,8 @@ export function runSweepPoints(
           replicas: options.replicas,
           liveEveryMs: options.liveEveryMs,
           hooks: options.hooks,
+          // The sweep as a whole keeps to one run's time cap: each point sizes itself within its share.
+          capShare: 1 / points.length,
         },
         {
           onProgress: (v) => events.onPointProgress(v),

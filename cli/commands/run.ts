@@ -25,7 +25,7 @@ import { runSummary } from '../report';
 import { prettyJson } from '../prettyJson';
 import { defineCommand } from '../command';
 import { printable } from '../printable';
-import { parseTimeCap, sizedRunOf } from '../sizedRun';
+import { parseTimeCap, parseTolerance, sizedRunOf, withTolerance } from '../sizedRun';
 import { sizingLines } from '../../engine/sizing/runSizing';
 import { verdictHeadline } from '../../engine/report/headline';
 import type { SimulationResult } from '../../engine/results/summarize';
@@ -33,7 +33,7 @@ import type { SimulationResult } from '../../engine/results/summarize';
 export const RUN_USAGE = `Usage:
   tenuis run CASE.json --out DIR [--seed N] [--replicas N] [--save-samples FILE]
              [--target Q=F | --target decide] [--max-steps N] [--max-seconds S] [--time-cap S]
-             [--checkpoint FILE] [--quiet]
+             [--tolerance T] [--checkpoint FILE] [--quiet]
   tenuis run --resume FILE --out DIR [--checkpoint FILE] [--quiet]
 
 Runs the case and writes summary.json, profiles.csv, fields.csv, surfaces.csv and case.json (the case as run,
@@ -55,6 +55,8 @@ exactly what they say instead.
   --target decide       stop when decided: when every model's verdict on the headline quantity is adequate or not
                         adequate (none undecided); at most the sized sampling and the time cap
   --time-cap S          wall-clock cap of the sizing, seconds (default 300)
+  --tolerance T         relative deviation a continuum model may have and still be adequate in the verdict, e.g.
+                        0.05 or 5% (default the case's comparison.tolerance, else 2 %)
   --max-steps N         sampling steps per replica (overrides the case's sampleSteps)
   --max-seconds S       stop sampling after S seconds of wall time
   --checkpoint FILE     keep a checkpoint of the whole run in FILE (every --checkpoint-every N steps, by default
@@ -72,6 +74,7 @@ const RUN_OPTIONS = {
   'max-steps': { type: 'string' },
   'max-seconds': { type: 'string' },
   'time-cap': { type: 'string' },
+  tolerance: { type: 'string' },
   checkpoint: { type: 'string' },
   'checkpoint-every': { type: 'string' },
   resume: { type: 'string' },
@@ -188,9 +191,12 @@ export const runCommand = defineCommand({
     const seed = values.seed === undefined ? undefined : parseSeedOption(values.seed);
     const replicas = values.replicas === undefined ? 1 : parseReplicasOption(values.replicas, usage);
     const capSeconds = parseTimeCap(values['time-cap'], usage);
-    const loaded = resumed
+    if (resumed && values.tolerance !== undefined)
+      throw usage('--tolerance cannot change a resumed run: its case is in the checkpoint');
+    const read = resumed
       ? { caseData: resumed.sim.plan.caseData, plan: resumed.sim.plan }
       : loadCase(positionals[0], { seed });
+    const loaded = values.tolerance === undefined ? read : withTolerance(read, parseTolerance(values.tolerance, usage));
     const decide = values.target === 'decide';
     const ownBudget =
       (values.target !== undefined && !decide) ||

@@ -40,10 +40,11 @@ import { createProgress, type Progress } from '../progress';
 import { sig, duration } from '../format';
 import { prettyJson } from '../prettyJson';
 import { defineCommand, type Interrupt, type ParsedArgs } from '../command';
+import { parseTimeCap, sizedRunOf } from '../sizedRun';
 
 export const SWEEP_USAGE = `Usage:
   tenuis sweep CASE.json --param knudsen|pressure --from A --to B --points N [--log] --out DIR
-               [--replicas R] [--seed S] [--quiet]
+               [--replicas R] [--seed S] [--time-cap S] [--quiet]
 
 Runs the case at N values of a parameter from A to B and writes DIR/sweep.csv (per point: the swept value, the
 reference Knudsen number, rarefaction δ and pressure, and every flow quantity with its 95 % half-width — or, for
@@ -60,6 +61,9 @@ runs; Ctrl-C stops the running point, keeps what it sampled and writes the table
   --out, -o DIR             output folder (created if needed; files of the same names in it are replaced)
   --replicas, -r R          R replicas per point on R worker threads, merged (as tenuis run --replicas)
   --seed S                  random seed of every point, overriding the case's
+  --time-cap S              wall-clock cap of the whole sweep's sizing, seconds (default 300), shared equally by
+                            the points: a case that leaves sampling.sampleSteps unset is sized point by point for
+                            ±1 % on its headline quantity within its share (as tenuis run sizes one run)
   --quiet, -q               no progress lines (warnings and errors are still printed)`;
 
 const SWEEP_OPTIONS = {
@@ -71,6 +75,7 @@ const SWEEP_OPTIONS = {
   out: { type: 'string', short: 'o' },
   replicas: { type: 'string', short: 'r' },
   seed: { type: 'string' },
+  'time-cap': { type: 'string' },
   quiet: { type: 'boolean', short: 'q' },
 } as const;
 
@@ -84,6 +89,7 @@ interface SweepOptions {
   readonly outDir: string;
   readonly replicas: number;
   readonly seed: number | undefined;
+  readonly capSeconds: number;
   readonly quiet: boolean;
 }
 
@@ -152,6 +158,7 @@ function sweepOptionsOf(parsed: ParsedArgs<typeof SWEEP_OPTIONS>): SweepOptions 
     outDir: v.out,
     replicas,
     seed,
+    capSeconds: parseTimeCap(v['time-cap'], usage),
     quiet: v.quiet === true,
   };
 }
@@ -183,7 +190,12 @@ function planPoints(o: SweepOptions): { caseName: string; points: PlannedPoint[]
       `point ${planned.point} of ${o.points} (${o.parameter} = ${shown(o.parameter, planned.value)}) cannot run as set up:\n${planned.errors.map((m) => `  ${m}`).join('\n')}`,
     );
   }
-  const { points } = planned;
+  // Each point sized for its headline within an equal share of the sweep's cap (cli/sizedRun.ts).
+  const capSeconds = o.capSeconds / planned.points.length;
+  const points = planned.points.map((p) => {
+    const sized = sizedRunOf(p.caseData, p.plan, { replicas: o.replicas, capSeconds, apply: true });
+    return { ...p, caseData: sized.caseData, plan: sized.plan };
+  });
   return { caseName: parsed.value.name, points };
 }
 

@@ -52,6 +52,14 @@ export const caseShape = z.strictObject({
     0,
   ),
   flowReport: flowReportSchema.optional(),
+  /** How DSMC is compared with the continuum models: the relative deviation a model may have and be adequate. */
+  comparison: z
+    .strictObject({
+      tolerance: bounded('comparison.tolerance (relative deviation a model may have, e.g. 0.02 for 2 %)', {
+        max: 1,
+      }).optional(),
+    })
+    .optional(),
   numerics: z
     .strictObject({
       cellsX: integer('numerics.cellsX', 1, MAX_CELLS_PER_SIDE).optional(),

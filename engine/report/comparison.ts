@@ -102,6 +102,8 @@ export function continuumComparisonOf(
 ): ContinuumComparisonResult {
   const predictions = caseModelsOf(plan, options);
   if (!predictions.recognised) return predictions;
+  // The case's own tolerance (comparison.tolerance) unless the caller gives one.
+  options = { ...options, tolerance: options.tolerance ?? plan.caseData.comparison?.tolerance };
   const continuum: ContinuumComparison['continuum'] = {};
   const profiles: ContinuumComparison['profiles'] = {};
   const units: Record<string, string> = {};

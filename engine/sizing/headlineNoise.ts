@@ -23,7 +23,7 @@
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import type { Plan } from '../plan/plan';
 import type { CaseModelsResult, ContinuumModelName } from '../continuum/caseModelTypes';
-import { NOISE_CORRELATION_FACTOR, wallShearFactor, type NoiseKind } from './noiseCalibration';
+import { NOISE_CORRELATION_FACTOR, wallFactor, type NoiseKind } from './noiseCalibration';
 
 export type { NoiseKind };
 
@@ -154,8 +154,7 @@ export function headlineNoiseOf(plan: Plan, models: CaseModelsResult): HeadlineN
       kind,
       expectedMean: model.value,
       expectedFrom: `the ${model.model} model`,
-      varianceTimesSeconds:
-        ((shear ? wallShearFactor(plan.reference.knudsen) : NOISE_CORRELATION_FACTOR[kind]) * perHit * w * j) / area,
+      varianceTimesSeconds: (wallFactor(kind, plan.reference.knudsen) * perHit * w * j) / area,
     };
   }
   return { sized: false, reason: `${path} is a profile: the run keeps the planned sampling` };
