@@ -112,6 +112,7 @@ const NUMERICS = new Set([
   'sampleSteps',
   'seed',
   'timeStep',
+  'verdictTolerance',
 ]);
 const IN_GAS_PANEL = new Set(['gas', 'model']);
 

@@ -55,7 +55,7 @@ export const caseShape = z.strictObject({
   /** How DSMC is compared with the continuum models: the relative deviation a model may have and be adequate. */
   comparison: z
     .strictObject({
-      tolerance: bounded('comparison.tolerance (relative deviation a model may have, e.g. 0.02 for 2 %)', {
+      tolerance: bounded('the verdict tolerance (relative deviation a model may have, e.g. 0.02 for 2 %)', {
         max: 1,
       }).optional(),
     })

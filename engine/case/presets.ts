@@ -20,11 +20,42 @@ export type { ParameterKind, Preset, PresetParameter, PresetValues } from './pre
 export { pressureForKnudsenPa, defaultGapNumerics as defaultNumerics } from './presetParameters';
 export { gasStateOfPresetCase, gasStateWays, type GasState } from './pressurePresetParameters';
 
+/**
+ * The verdict's tolerance, a parameter of every preset: the relative deviation a continuum model may have and still
+ * be adequate (the case's comparison.tolerance); left out of the case when unset, and the verdict then uses 2 %.
+ */
+const verdictToleranceParameter: PresetParameter = {
+  name: 'verdictTolerance',
+  label: 'Verdict tolerance (fraction, 0.02 = 2 %)',
+  kind: 'dimensionless',
+  unitShown: '',
+  default: null,
+  min: 0,
+  exclusiveMin: true,
+  description: 'relative deviation a continuum model may have and still be adequate in the verdict; default 0.02 (2 %)',
+};
+
+function withVerdictTolerance<P extends Preset>(p: P): P {
+  return {
+    ...p,
+    parameters: [...p.parameters, verdictToleranceParameter],
+    build(v, given) {
+      const c = p.build(v, given);
+      const tolerance = v.verdictTolerance as number | null | undefined;
+      return tolerance === null || tolerance === undefined ? c : { ...c, comparison: { tolerance } };
+    },
+  };
+}
+
 /** All presets by name. */
-export const PRESETS = Object.freeze({ couette, fourier, ...DUCT_PRESETS, cavity } as const satisfies Record<
-  string,
-  Preset
->);
+export const PRESETS = Object.freeze({
+  couette: withVerdictTolerance(couette),
+  fourier: withVerdictTolerance(fourier),
+  ...(Object.fromEntries(
+    Object.entries(DUCT_PRESETS).map(([name, p]) => [name, withVerdictTolerance(p)]),
+  ) as typeof DUCT_PRESETS),
+  cavity: withVerdictTolerance(cavity),
+} as const satisfies Record<string, Preset>);
 export type PresetName = keyof typeof PRESETS;
 
 export function presetNames(): PresetName[] {
