@@ -18,7 +18,7 @@ interface ModelVerdict {
   readonly deviation: number | null;
 }
 interface Summary {
-  readonly flow: { values: Record<string, { mean: number; ci95: number }> };
+  readonly flow: Record<string, { mean: number; ci95: number }>;
   readonly walls: Record<string, Record<string, { mean: number; ci95: number }>>;
   readonly verdict: Record<string, { status: string; relativeHalfWidth: number; models: Record<string, ModelVerdict> }>;
 }
@@ -46,7 +46,7 @@ describe('default runs sized to decide', () => {
     // Clausing factor of a tube of L/R = 5: 0.31053 from the Clausing integral equation (issue 13 quotes it; Berman
     // 1965's closed form agrees to 0.1 %). The target is the sizing's ±1 %.
     const s = runPreset('tube', ['knudsen=100']);
-    const w = s.flow.values.transmissionProbability;
+    const w = s.flow.transmissionProbability;
     expect(w.ci95 / w.mean).toBeLessThanOrEqual(0.01);
     expect(Math.abs(w.mean / 0.31053 - 1)).toBeLessThan(0.015);
   });
@@ -60,10 +60,20 @@ describe('default runs sized to decide', () => {
     expect(v.models.firstOrder.status).toBe('adequate');
   });
 
-  it('force-driven channel, Kn = 0.1: first-order slip adequate for the flow rate, not for the temperature', () => {
+  it('force-driven channel, Kn = 0.1: no-slip not adequate; first-order slip never called adequate (it is ~3 % low)', () => {
+    // Linearized BGK G_P (../shared/reference REFERENCES.md §2, computed): 1.53868 at δ = 1, 2.76864 at δ = 10; the
+    // first-order slip value δ/6 + σ_P (σ_P = 1.0162) is 2.683 at δ = 10, 3.1 % below the kinetic one. At Kn = 0.1
+    // (δ = √π/(2·0.1) = 8.862) G_P − δ/6 interpolated linearly in ln δ between δ = 1 and 10 gives 2.593 (the
+    // interpolation's error is a fraction of the 0.27 change of G_P − δ/6 over the decade, well under 1 % of G_P).
+    // Hard-sphere/VHS DSMC is expected within 3–4 % of BGK for Poiseuille in the transition regime (same section).
     const s = runPreset('poiseuille', ['knudsen=0.1']);
     const q = s.verdict['flow.massFlowRate'];
-    expect(q.models.firstOrder.status).toBe('adequate');
-    expect(s.verdict['profile.temperature'].models.firstOrder.status).toBe('notAdequate');
+    expect(q.models.noSlip.status).toBe('notAdequate');
+    expect(q.models.firstOrder.status).not.toBe('adequate');
+    const delta = Math.sqrt(Math.PI) / (2 * 0.1);
+    const w = Math.log(delta) / Math.log(10);
+    const bgk = delta / 6 + (1.53868 - 1 / 6) + w * (2.76864 - 10 / 6 - (1.53868 - 1 / 6));
+    const g = s.flow.reducedFlowRate;
+    expect(Math.abs(g.mean / bgk - 1)).toBeLessThan(0.04 + g.ci95 / g.mean);
   });
 });
