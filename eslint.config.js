@@ -26,6 +26,7 @@ export const ENGINE_LAYERS = [
   ['run'],
   ['io'],
   ['continuum'],
+  ['longDuct'],
   ['sizing'],
   ['report'],
 ];
