@@ -40,6 +40,8 @@ export function slipSlope(shape: DuctShapeKind): number {
 
 /** Free-molecular G_P of a long tube, 8/(3√π) (Knudsen 1909; Sharipov & Seleznev 1998). */
 export const FREE_MOLECULAR_TUBE_GP = 8 / (3 * Math.sqrt(Math.PI));
+/** Free-molecular G_T of a long tube, 4/(3√π) = G_P/2 (Sharipov & Seleznev 1998): Knudsen's √(T1/T2) at zero flow. */
+export const FREE_MOLECULAR_TUBE_GT = 4 / (3 * Math.sqrt(Math.PI));
 
 export interface InterpolatedCoefficient {
   readonly value: number;
@@ -134,5 +136,51 @@ export function interpolator(t: CoefficientTable): (rarefaction: number) => Inte
     while (k < n - 2 && at > x[k + 1]) k++;
     const f = (at - x[k]) / (x[k + 1] - x[k]);
     return { value: slope * delta + hermite(x, r, m, at), ci95: ci[k] + f * (ci[k + 1] - ci[k]), extrapolatedBy: 0 };
+  };
+}
+
+/**
+ * G_T of a table at rarefaction δ, or null when the table has no thermal-creep column. Interpolated on log–log axes
+ * (ln G_T against ln δ, monotone cubic), where both limits are straight lines: G_T tends to a constant in the
+ * free-molecular limit and falls like 1/δ in the slip regime (thermal creep; Sharipov & Seleznev 1998). Outside the
+ * table G_T ∝ 1/δ above it, and G_T is held below it (a channel's G_T grows like ln(1/δ)/(2√π) there, half its
+ * G_P's growth). G_T must be above 0 at every point.
+ */
+export function thermalCreepInterpolator(
+  t: CoefficientTable,
+): ((rarefaction: number) => InterpolatedCoefficient) | null {
+  const problem = tableProblem(t);
+  if (problem) throw new Error(problem);
+  if (!t.points.every((p) => p.thermalCreep !== undefined)) return null;
+  const bad = t.points.findIndex((p) => !(Number.isFinite(p.thermalCreep) && p.thermalCreep! > 0));
+  if (bad >= 0)
+    throw new Error(
+      `coefficient table "${t.source}": point ${bad + 1} has G_T = ${t.points[bad].thermalCreep}; it must be a number above 0`,
+    );
+  const x = t.points.map((p) => Math.log(p.rarefaction));
+  const y = t.points.map((p) => Math.log(p.thermalCreep!));
+  const ci = t.points.map((p) => p.thermalCreepCi95 ?? 0);
+  const m = monotoneSlopes(x, y);
+  const n = t.points.length;
+  const lo = t.points[0];
+  const hi = t.points[n - 1];
+  return (delta: number) => {
+    if (!(delta > 0 && Number.isFinite(delta)))
+      throw new Error(`rarefaction ${delta}: must be a finite number above 0`);
+    if (delta < lo.rarefaction) {
+      const grow = t.shape === 'channel' ? Math.log(lo.rarefaction / delta) / (2 * Math.sqrt(Math.PI)) : 0;
+      return { value: lo.thermalCreep! + grow, ci95: ci[0], extrapolatedBy: lo.rarefaction / delta };
+    }
+    if (delta > hi.rarefaction)
+      return {
+        value: (hi.rarefaction * hi.thermalCreep!) / delta,
+        ci95: (ci[n - 1] * hi.rarefaction) / delta,
+        extrapolatedBy: delta / hi.rarefaction,
+      };
+    const at = Math.log(delta);
+    let k = 0;
+    while (k < n - 2 && at > x[k + 1]) k++;
+    const f = (at - x[k]) / (x[k + 1] - x[k]);
+    return { value: Math.exp(hermite(x, y, m, at)), ci95: ci[k] + f * (ci[k + 1] - ci[k]), extrapolatedBy: 0 };
   };
 }

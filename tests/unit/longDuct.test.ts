@@ -6,6 +6,7 @@ import { BOLTZMANN_J_PER_K as K_B } from '../../engine/physics/constants';
 import {
   FREE_MOLECULAR_TUBE_GP,
   reducedFlowRateAt,
+  thermalCreepInterpolator,
   type CoefficientTable,
 } from '../../engine/longDuct/coefficientTable';
 import { solveIsothermalDuct } from '../../engine/longDuct/isothermalDuct';
@@ -63,6 +64,18 @@ describe('coefficient interpolation', () => {
     expect(best.delta).toBeLessThan(2);
     // Interpolating between the decades δ = 0.1, 1, 10 the minimum sits at or just below the node value 1.53868.
     expect(Math.abs(best.value / 1.538 - 1)).toBeLessThan(0.005);
+  });
+
+  it('thermal creep G_T on log–log axes: its limits (constant, ∝ 1/δ) are reproduced between and beyond the points', () => {
+    const points = [0.001, 0.1, 10, 1000].map((d) => ({
+      rarefaction: d,
+      reducedFlowRate: 1,
+      reducedFlowRateCi95: 0,
+      thermalCreep: 0.7 / d,
+    }));
+    const creep = thermalCreepInterpolator({ shape: 'tube', source: 'power law', gasAndWall: 'test', points })!;
+    for (const d of [0.003, 0.5, 42, 5000]) expect(creep(d).value / (0.7 / d)).toBeCloseTo(1, 12);
+    expect(thermalCreepInterpolator(BGK_CHANNEL)).toBeNull();
   });
 
   it('refuses a malformed table, naming the point', () => {
