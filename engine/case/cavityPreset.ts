@@ -139,7 +139,7 @@ export const cavity: Preset = {
       unitShown: '',
       default: null,
       min: 1,
-      description: 'sampled steps; default chosen by the planner',
+      description: 'sampled steps; default chosen by the planner (the headline is a profile, so no run sizing)',
     },
     {
       name: 'seed',
