@@ -10,6 +10,8 @@ import { mergeCommand } from './merge';
 import { sweepCommand } from './sweep';
 import { schemaCommand } from './schema';
 import { continuumCommand } from './continuum';
+import { coefficientsCommand } from './coefficients';
+import { ductCommand } from './duct';
 import { helpCommandOf, mainUsageOf } from './help';
 
 const LISTED: readonly Command[] = [
@@ -20,6 +22,8 @@ const LISTED: readonly Command[] = [
   sweepCommand,
   schemaCommand,
   continuumCommand,
+  coefficientsCommand,
+  ductCommand,
 ];
 
 export const helpCommand = helpCommandOf(LISTED);

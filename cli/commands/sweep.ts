@@ -79,7 +79,7 @@ const SWEEP_OPTIONS = {
   quiet: { type: 'boolean', short: 'q' },
 } as const;
 
-interface SweepOptions {
+export interface SweepOptions {
   readonly casePath: string;
   readonly parameter: SweepParameter;
   readonly from: number;
@@ -264,7 +264,8 @@ function writePoint(
 /** Planned work of a point (particles × steps), to share the sweep's remaining time out among the points left. */
 const plannedWork = (p: Plan) => p.initialParticles * (p.transientSteps + p.sampleSteps);
 
-async function sweep(o: SweepOptions, io: CommandIO, interruptWatch: () => Interrupt): Promise<number> {
+/** Runs a sweep and writes its folder (see SWEEP_USAGE); also the engine of `tenuis coefficients`. */
+export async function sweep(o: SweepOptions, io: CommandIO, interruptWatch: () => Interrupt): Promise<number> {
   const { caseName, points } = planPoints(o);
   checkOutputDir(o.outDir);
   const base = points[0].caseData;

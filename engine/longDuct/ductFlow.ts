@@ -231,7 +231,7 @@ export function solveDuctFlow(input: DuctFlowInput): DuctFlowResult {
   const dMax = Math.max(...rarefaction);
   if (dMin < lo || dMax > hi)
     warnings.push(
-      `rarefaction ${dMin.toPrecision(3)}–${dMax.toPrecision(3)} reaches beyond the table's ${lo}–${hi}: its limits are used there`,
+      `rarefaction ${dMin.toPrecision(3)}–${dMax.toPrecision(3)} reaches beyond the table's ${lo.toPrecision(3)}–${hi.toPrecision(3)}: its limits are used there`,
     );
   // Mach number of the mean speed at the outlet, where the gas is thinnest.
   const kt = K_B * input.downstreamTemperatureK;

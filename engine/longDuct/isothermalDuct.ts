@@ -172,7 +172,7 @@ export function solveIsothermalDuct(input: IsothermalDuctInput): IsothermalDuctR
   const hi = table.points[table.points.length - 1].rarefaction;
   if (deltaDown < lo || deltaUp > hi)
     warnings.push(
-      `rarefaction ${deltaDown.toPrecision(3)}–${deltaUp.toPrecision(3)} reaches beyond the table's ${lo}–${hi}: its limits (slip or free-molecular) are used there`,
+      `rarefaction ${deltaDown.toPrecision(3)}–${deltaUp.toPrecision(3)} reaches beyond the table's ${lo.toPrecision(3)}–${hi.toPrecision(3)}: its limits (slip or free-molecular) are used there`,
     );
 
   const entrance = d.areaM2 * (up - down) * Math.sqrt(m / (2 * Math.PI * kt));

@@ -2,7 +2,7 @@
 // `tenuis preset NAME --set …`, then `tenuis run CASE --replicas 2`. Minutes each, so outside npm test:
 // `npm run validate:extended`. Seeds are the presets' (1); each run's sizing is recorded in its case.json.
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -10,8 +10,12 @@ import { afterAll, describe, expect, it } from 'vitest';
 
 const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 const cli = join(repoRoot, 'dist-cli', 'tenuis.mjs');
-const work = mkdtempSync(join(tmpdir(), 'tenuis-extended-'));
-afterAll(() => rmSync(work, { recursive: true, force: true }));
+// TENUIS_EXTENDED_OUT=DIR keeps every run's files there (for the figures of a closing note); else a temporary folder.
+const keep = process.env.TENUIS_EXTENDED_OUT;
+const work = keep ?? mkdtempSync(join(tmpdir(), 'tenuis-extended-'));
+afterAll(() => {
+  if (!keep) rmSync(work, { recursive: true, force: true });
+});
 
 interface ModelVerdict {
   readonly status: string;
@@ -28,6 +32,7 @@ function runPreset(name: string, sets: string[]): Summary {
     encoding: 'utf8',
   });
   if (preset.status !== 0) throw new Error(preset.stderr);
+  mkdirSync(work, { recursive: true });
   const file = join(work, `${name}.json`);
   writeFileSync(file, preset.stdout);
   const out = join(work, name);

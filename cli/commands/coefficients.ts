@@ -1,0 +1,150 @@
+/**
+ * `tenuis coefficients CASE.json --from D1 --to D2 --points N --out FILE`: a long duct's reduced flow rate G_P(δ) from
+ * Tenuis's own DSMC, as a coefficient table for the long-duct solver (engine/longDuct/coefficientTable.ts). The case
+ * is a force-driven channel or tube (a body acceleration along a periodic duct, e.g. the poiseuille preset); it is
+ * swept over the rarefaction δ = √π/(2 Kn) from D1 to D2 in equal ratios (tenuis sweep with --param knudsen --log,
+ * each point sized within its share of the time cap), and every point's G_P with its 95 % half-width goes into FILE
+ * with the case, gas, wall and version that made it. The sweep's own folder (every point's full result) is kept
+ * beside FILE, in FILE.points/.
+ */
+import { readFileSync, writeFileSync } from 'node:fs';
+import { parseCase, type Case } from '../../engine/case/schema';
+import type { CoefficientPoint, CoefficientTable } from '../../engine/longDuct/coefficientTable';
+import { tableProblem } from '../../engine/longDuct/coefficientTable';
+import { CliError, EXIT_OK, UsageError } from '../errors';
+import { readJsonFile } from '../readCase';
+import { prettyJson } from '../prettyJson';
+import { defineCommand } from '../command';
+import { parseTimeCap } from '../sizedRun';
+import { sweep } from './sweep';
+
+export const COEFFICIENTS_USAGE = `Usage:
+  tenuis coefficients CASE.json --from D1 --to D2 --points N --out FILE [--replicas R] [--time-cap S] [--quiet]
+
+Computes a long duct's reduced flow rate G_P(δ) by DSMC and writes it as a coefficient table (JSON) for tenuis
+duct --coefficients FILE. CASE is a force-driven channel or tube (body acceleration along a periodic duct, e.g.
+tenuis preset poiseuille, with its gas, collision model and wall accommodation); it is swept over the rarefaction
+δ = √π/(2 Kn) from D1 to D2 with equal ratios. Every point's full result stays in FILE.points/ (as tenuis sweep
+writes it). G_T (thermal creep) is not computed yet: the table holds G_P, and tenuis duct then needs equal end
+temperatures.
+  --from D1, --to D2   the rarefaction range, above 0 (e.g. 0.01 and 50)
+  --points N           how many rarefactions, at least 2
+  --out FILE           the table to write (JSON)
+  --replicas, -r R     replicas per point (as tenuis run --replicas)
+  --time-cap S         wall-clock cap of the whole table, seconds (default 300), shared by the points
+  --quiet, -q          no progress lines`;
+
+const usage = (m: string) => new UsageError(m, COEFFICIENTS_USAGE);
+
+function positiveOption(name: string, text: string | undefined): number {
+  if (text === undefined) throw usage(`coefficients needs --${name}`);
+  const v = Number(text);
+  if (!(Number.isFinite(v) && v > 0)) throw usage(`--${name} ${text}: give a number above 0`);
+  return v;
+}
+
+interface PointSummary {
+  readonly reference?: { readonly rarefaction?: number };
+  readonly flow?: { readonly reducedFlowRate?: { readonly mean: number; readonly ci95: number } };
+}
+
+export const coefficientsCommand = defineCommand({
+  name: 'coefficients',
+  summary: `  tenuis coefficients CASE.json --from D1 --to D2 --points N --out FILE
+                                             a long duct's G_P(δ) by DSMC, as a coefficient table`,
+  usage: COEFFICIENTS_USAGE,
+  options: {
+    from: { type: 'string' },
+    to: { type: 'string' },
+    points: { type: 'string' },
+    out: { type: 'string', short: 'o' },
+    replicas: { type: 'string', short: 'r' },
+    'time-cap': { type: 'string' },
+    quiet: { type: 'boolean', short: 'q' },
+  },
+  async run({ values, positionals }, { io, watchInterrupt }) {
+    if (positionals.length !== 1) throw usage('coefficients needs exactly one case file');
+    const from = positiveOption('from', values.from);
+    const to = positiveOption('to', values.to);
+    const points = Number(values.points);
+    if (!Number.isInteger(points) || points < 2 || points > 200)
+      throw usage(`--points ${values.points}: give a whole number from 2 to 200`);
+    if (from === to) throw usage('--from and --to are the same: give a range of rarefactions');
+    if (!values.out) throw usage('coefficients needs --out FILE');
+    const replicas = values.replicas === undefined ? 1 : Number(values.replicas);
+    if (!Number.isInteger(replicas) || replicas < 1 || replicas > 256)
+      throw usage(`--replicas ${values.replicas}: give a whole number from 1 to 256`);
+    const parsed = parseCase(readJsonFile(positionals[0]));
+    if (!parsed.ok)
+      throw new CliError(`${positionals[0]} is not a valid case:\n${parsed.errors.map((m) => `  ${m}`).join('\n')}`);
+    const c = parsed.value;
+    const duct = c.flowReport?.duct;
+    if (c.bodyAccelerationXMPerS2 === 0 || (duct !== 'channel' && duct !== 'tube'))
+      throw new CliError(
+        `${positionals[0]}: a coefficient table comes from a force-driven channel or tube (a body acceleration along a periodic duct with flowReport.duct channel or tube), e.g. tenuis preset poiseuille`,
+      );
+    // Knudsen ↔ rarefaction: δ = √π/(2 Kn) (viscosity-based mean free path; Sharipov & Seleznev 1998).
+    const knudsenOf = (delta: number) => Math.sqrt(Math.PI) / (2 * delta);
+    const dir = `${values.out}.points`;
+    const code = await sweep(
+      {
+        casePath: positionals[0],
+        parameter: 'knudsen',
+        from: knudsenOf(Math.max(from, to)),
+        to: knudsenOf(Math.min(from, to)),
+        points,
+        spacing: 'log',
+        outDir: dir,
+        replicas,
+        seed: undefined,
+        capSeconds: parseTimeCap(values['time-cap'], usage),
+        quiet: values.quiet === true,
+      },
+      io,
+      watchInterrupt,
+    );
+    if (code !== EXIT_OK) return code;
+    const table = tableFromSweep(dir, c.name, duct, gasAndWallOf(c));
+    const problem = tableProblem(table);
+    if (problem) throw new CliError(problem);
+    writeFileSync(values.out, `${prettyJson(table)}\n`);
+    if (values.quiet !== true)
+      io.stderr.write(`coefficient table of ${table.points.length} points written to ${values.out}\n`);
+    return EXIT_OK;
+  },
+});
+
+function gasAndWallOf(c: Case): string {
+  const walls = [c.boundaries.bottom, c.boundaries.top].filter((b) => b.type === 'wall');
+  const accommodation = walls
+    .map((w) => ('accommodation' in w ? (w as { accommodation?: number }).accommodation : undefined))
+    .find((a) => a !== undefined);
+  const wallModel = walls.length ? (walls[0] as { model: string }).model : 'unknown';
+  return `${c.gas.species ?? 'custom gas'} (${c.gas.model}), ${wallModel} walls${accommodation !== undefined ? `, accommodation ${accommodation}` : ''}`;
+}
+
+/** The table from a finished sweep folder: each point's rarefaction and G_P from its summary.json. */
+function tableFromSweep(
+  dir: string,
+  caseName: string,
+  shape: 'channel' | 'tube',
+  gasAndWall: string,
+): CoefficientTable {
+  const sweepJson = JSON.parse(readFileSync(`${dir}/sweep.json`, 'utf8')) as {
+    points: { point: number; summary?: PointSummary }[];
+  };
+  const points: CoefficientPoint[] = [];
+  for (const p of sweepJson.points) {
+    const delta = p.summary?.reference?.rarefaction;
+    const gp = p.summary?.flow?.reducedFlowRate;
+    if (delta === undefined || gp === undefined) continue;
+    points.push({ rarefaction: delta, reducedFlowRate: gp.mean, reducedFlowRateCi95: gp.ci95 });
+  }
+  points.sort((a, b) => a.rarefaction - b.rarefaction);
+  return {
+    shape,
+    source: `Tenuis DSMC, tenuis coefficients on case "${caseName}" (every point in ${dir}/)`,
+    gasAndWall,
+    points,
+  };
+}
