@@ -12,6 +12,7 @@ import { speciesIdOf } from '../../engine/case/gasSchema';
 import { tableProblem, type CoefficientTable } from '../../engine/longDuct/coefficientTable';
 import { solveDuctFlow, type DuctFlowResult } from '../../engine/longDuct/ductFlow';
 import type { DuctGeometry } from '../../engine/longDuct/isothermalDuct';
+import { conductanceCurve } from '../../engine/longDuct/conductanceCurve';
 import { BOLTZMANN_J_PER_K as K_B } from '../../engine/physics/constants';
 import { csvDocument } from '../../engine/report/csv';
 import { CliError, EXIT_OK, UsageError } from '../errors';
@@ -68,6 +69,10 @@ and pressurised parts.
   --set NAME=VALUE      a parameter (units accepted, e.g. radius=20mm, upstreamPressure=0.01mbar, temperature=20C)
   --coefficients FILE   the coefficient table (JSON, from tenuis coefficients)
   --out, -o DIR         output folder for summary.json and duct.csv
+  --sweep upstreamPressure --from A --to B --points N [--log]
+                        instead: the conductance over upstream pressures A to B at the pressure ratio the two set
+                        pressures give, beside the no-slip, first-order slip and (tube) free-molecular lines, written
+                        to DIR/conductance.csv
 
 Parameters:
 ${PARAMETERS.map((p) => `  ${p.name.padEnd(22)}${p.description}${p.choices ? ` [one of ${p.choices.join(', ')}]` : ` [${p.kind}${p.unitShown ? `, shown in ${p.unitShown}` : ''}]`}`).join('\n')}`;
@@ -129,6 +134,11 @@ export const ductCommand = defineCommand({
     set: { type: 'string', multiple: true },
     coefficients: { type: 'string' },
     out: { type: 'string', short: 'o' },
+    sweep: { type: 'string' },
+    from: { type: 'string' },
+    to: { type: 'string' },
+    points: { type: 'string' },
+    log: { type: 'boolean' },
   },
   run({ values: o, positionals }, { io }) {
     if (positionals.length) throw usage(`duct takes no file argument (${positionals[0]}); give --set NAME=VALUE`);
@@ -169,6 +179,11 @@ export const ductCommand = defineCommand({
     const t = (v.temperature as number | undefined) ?? 293.15;
     const tUp = (v.upstreamTemperature as number | undefined) ?? t;
     const tDown = (v.downstreamTemperature as number | undefined) ?? t;
+    if (o.sweep !== undefined) {
+      writeConductanceCurve(o, v, { geometry, gas, table, tUp, tDown });
+      io.stdout.write(`conductance curve written to ${o.out}/conductance.csv\n`);
+      return EXIT_OK;
+    }
     let result: DuctFlowResult;
     try {
       result = solveDuctFlow({
@@ -262,6 +277,81 @@ function summaryOf(r: DuctFlowResult, c: SummaryContext) {
     units: { pressure: 'Pa', temperature: 'K', massFlowRate: 'kg/s', throughput: 'Pa m^3/s', conductance: 'm^3/s' },
     warnings: r.warnings,
   };
+}
+
+interface CurveContext {
+  readonly geometry: DuctGeometry;
+  readonly gas: ReturnType<typeof modelFromSpecies>;
+  readonly table: CoefficientTable;
+  readonly tUp: number;
+  readonly tDown: number;
+}
+
+function writeConductanceCurve(
+  o: { sweep?: string; from?: string; to?: string; points?: string; log?: boolean; out?: string },
+  v: Values,
+  c: CurveContext,
+): void {
+  if (o.sweep !== 'upstreamPressure') throw usage(`--sweep ${o.sweep}: only --sweep upstreamPressure is offered`);
+  if (!o.out) throw usage('--sweep needs --out DIR for conductance.csv');
+  if (c.tUp !== c.tDown) throw usage('--sweep: the conductance curve is for one temperature along the duct');
+  const up = v.upstreamPressure;
+  const down = v.downstreamPressure;
+  if (typeof up !== 'number' || typeof down !== 'number' || !(down < up))
+    throw usage('--sweep needs --set upstreamPressure and --set downstreamPressure (below it): they set the ratio');
+  const pressure = (name: string, text: string | undefined) => {
+    if (text === undefined) throw usage(`--sweep needs --${name}`);
+    try {
+      return parseQuantity(text, 'pressure');
+    } catch (e) {
+      throw usage(`--${name} ${text}: ${(e as Error).message}`);
+    }
+  };
+  const from = pressure('from', o.from);
+  const to = pressure('to', o.to);
+  const n = Number(o.points);
+  if (!Number.isInteger(n) || n < 2 || n > 1000)
+    throw usage(`--points ${o.points}: give a whole number from 2 to 1000`);
+  const pressures = Array.from({ length: n }, (_, k) =>
+    o.log ? from * (to / from) ** (k / (n - 1)) : from + ((to - from) * k) / (n - 1),
+  );
+  let curve;
+  try {
+    curve = conductanceCurve({
+      geometry: c.geometry,
+      gas: c.gas,
+      temperatureK: c.tUp,
+      table: c.table,
+      upstreamPressuresPa: pressures,
+      ratio: down / up,
+    });
+  } catch (e) {
+    throw new CliError(`duct --sweep: ${(e as Error).message}`);
+  }
+  checkOutputDir(o.out);
+  const csv = csvDocument(
+    [
+      'upstream pressure (Pa)',
+      'mean pressure (Pa)',
+      'mean Knudsen number (1)',
+      'conductance (m^3/s)',
+      'conductance ci95 (m^3/s)',
+      'no-slip (m^3/s)',
+      'first-order slip (m^3/s)',
+      'free-molecular (m^3/s)',
+    ],
+    curve.map((p) => [
+      p.upstreamPressurePa,
+      p.meanPressurePa,
+      p.meanKnudsen,
+      p.conductanceM3PerS.mean,
+      p.conductanceM3PerS.ci95,
+      p.noSlipM3PerS,
+      p.firstOrderSlipM3PerS,
+      Number.isFinite(p.freeMolecularM3PerS) ? p.freeMolecularM3PerS : '',
+    ]),
+  );
+  writeResultsAtomically(o.out, { 'conductance.csv': csv });
 }
 
 function ductCsv(r: DuctFlowResult): string {

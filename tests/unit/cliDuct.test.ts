@@ -78,6 +78,34 @@ describe('tenuis duct', () => {
     expect(csv[0]).toBe('x (m),pressure (Pa),temperature (K),rarefaction δ (1),Knudsen number (1)');
   });
 
+  it('--sweep upstreamPressure writes the conductance curve with units in every column', () => {
+    const out = join(work, 'curve');
+    const r = tenuis(
+      'duct',
+      ...[
+        'shape=channel',
+        'gap=1um',
+        'length=1mm',
+        'gas=N2',
+        'upstreamPressure=2bar',
+        'downstreamPressure=1bar',
+      ].flatMap((s) => ['--set', s]),
+      ...['--coefficients', slipTable, '--sweep', 'upstreamPressure', '--from', '1kPa', '--to', '10bar'],
+      ...['--points', '7', '--log', '--out', out],
+    );
+    expect(r.code, r.stderr).toBe(0);
+    const lines = readFileSync(join(out, 'conductance.csv'), 'utf8').trim().split(/\r?\n/);
+    expect(lines[0]).toBe(
+      'upstream pressure (Pa),mean pressure (Pa),mean Knudsen number (1),conductance (m^3/s),conductance ci95 (m^3/s),no-slip (m^3/s),first-order slip (m^3/s),free-molecular (m^3/s)',
+    );
+    expect(lines).toHaveLength(8);
+    // The table is first-order slip itself: its column equals the first-order line.
+    for (const line of lines.slice(1)) {
+      const [, , , c, , , slip] = line.split(',').map(Number);
+      expect(c / slip - 1).toBeCloseTo(0, 6);
+    }
+  });
+
   it('refuses what it cannot use, naming the parameter or file', () => {
     const bad = (args: string[], pattern: RegExp) => {
       const r = tenuis('duct', ...args);

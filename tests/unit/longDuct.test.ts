@@ -10,6 +10,7 @@ import {
   type CoefficientTable,
 } from '../../engine/longDuct/coefficientTable';
 import { solveIsothermalDuct } from '../../engine/longDuct/isothermalDuct';
+import { conductanceCurve } from '../../engine/longDuct/conductanceCurve';
 
 const N2 = modelFromSpecies('N2', 'VHS');
 const T = 293.15;
@@ -200,5 +201,49 @@ describe('isothermal long duct', () => {
     expect(solveIsothermalDuct(base).warnings.join('\n')).toMatch(/10\.0 radii long, less than about 20/);
     expect(() => solveIsothermalDuct({ ...base, downstreamPressurePa: 1e-2 })).toThrow(/downstream pressure/);
     expect(() => solveIsothermalDuct({ ...base, table: { ...table, shape: 'channel' } })).toThrow(/not a tube/);
+  });
+});
+
+describe('conductance over the pressure range', () => {
+  it('tube: the no-slip line is πR⁴p̄/(8μL) (Poiseuille); a free-molecular table meets the 8R/(3L) line', () => {
+    const geometry = { shape: 'tube' as const, radiusM: 0.01, lengthM: 1 };
+    const table = tableOf('tube', () => FREE_MOLECULAR_TUBE_GP, 0, [-7, -1]);
+    const curve = conductanceCurve({
+      geometry,
+      gas: N2,
+      temperatureK: T,
+      table,
+      upstreamPressuresPa: [1e-3, 1e-2],
+      ratio: 0.5,
+    });
+    const mu = viscosityPaS(N2, T);
+    for (const p of curve) {
+      expect(p.noSlipM3PerS / ((Math.PI * 1e-8 * p.meanPressurePa) / (8 * mu * 1)) - 1).toBeCloseTo(0, 9);
+      expect(Math.abs(p.conductanceM3PerS.mean / p.freeMolecularM3PerS - 1)).toBeLessThan(1e-5);
+      expect(p.firstOrderSlipM3PerS).toBeGreaterThan(p.noSlipM3PerS);
+    }
+  });
+
+  it('channel: the BGK table gives the Knudsen minimum inside the range, the slip lines do not', () => {
+    const mu = viscosityPaS(N2, T);
+    const v0 = mostProbableSpeedMPerS(N2.massKg, T);
+    const gap = 1e-6;
+    // Mean rarefaction from about 0.02 to 50 (ratio 0.9, so the curve follows G_P at the mean δ).
+    const pressures = Array.from({ length: 40 }, (_, k) => ((0.02 * 2500 ** (k / 39) * mu * v0) / gap) * (2 / 1.9));
+    const curve = conductanceCurve({
+      geometry: { shape: 'channel', gapM: gap, widthM: 1, lengthM: 1e-3 },
+      gas: N2,
+      temperatureK: T,
+      table: BGK_CHANNEL,
+      upstreamPressuresPa: pressures,
+      ratio: 0.9,
+    });
+    const c = curve.map((p) => p.conductanceM3PerS.mean);
+    const k = c.indexOf(Math.min(...c));
+    expect(k).toBeGreaterThan(3);
+    expect(k).toBeLessThan(36);
+    const slip = curve.map((p) => p.firstOrderSlipM3PerS);
+    for (let i = 1; i < slip.length; i++) expect(slip[i]).toBeGreaterThan(slip[i - 1]);
+    expect(curve.every((p) => Number.isNaN(p.freeMolecularM3PerS))).toBe(true);
   });
 });
