@@ -13,6 +13,7 @@ import { tableProblem, type CoefficientTable } from '../../engine/longDuct/coeff
 import { solveDuctFlow, type DuctFlowResult } from '../../engine/longDuct/ductFlow';
 import type { DuctGeometry } from '../../engine/longDuct/isothermalDuct';
 import { conductanceCurve } from '../../engine/longDuct/conductanceCurve';
+import { solvePumpedDuct } from '../../engine/longDuct/pumpedDuct';
 import { BOLTZMANN_J_PER_K as K_B } from '../../engine/physics/constants';
 import { csvDocument } from '../../engine/report/csv';
 import { CliError, EXIT_OK, UsageError } from '../errors';
@@ -52,6 +53,18 @@ const PARAMETERS: readonly DuctParameter[] = [
     unitShown: 'kg/s',
     description: 'mass flow (kg/s, sccm …), instead of one pressure',
   },
+  {
+    name: 'pumpSpeed',
+    kind: 'conductance',
+    unitShown: 'L/s',
+    description: 'speed of a pump at the outlet (with gasLoad)',
+  },
+  {
+    name: 'gasLoad',
+    kind: 'throughput',
+    unitShown: 'mbar·L/s',
+    description: 'gas load into the chamber at the inlet (with pumpSpeed)',
+  },
 ];
 
 export const DUCT_USAGE = `Usage:
@@ -60,7 +73,8 @@ export const DUCT_USAGE = `Usage:
 
 A long duct (length well above its radius or gap) at any pressure ratio, from a table of its reduced flow rate
 G_P(δ) (and thermal-creep coefficient G_T, where the table has it), made by tenuis coefficients. Give two of
-upstreamPressure, downstreamPressure and massFlowRate; the third is solved for. With different upstream and
+upstreamPressure, downstreamPressure and massFlowRate; the third is solved for. Or give pumpSpeed and gasLoad: a
+pump at the outlet, the chamber at the inlet, and the chamber pressure and effective pumping speed are solved for. With different upstream and
 downstream temperatures (a linear wall temperature between them) the table needs G_T. Prints the flow, throughput,
 conductance and transmission probability with their 95 % half-widths from the table's; with --out writes
 summary.json and duct.csv (pressure, temperature, rarefaction and Knudsen number along the duct).
@@ -179,6 +193,37 @@ export const ductCommand = defineCommand({
     const t = (v.temperature as number | undefined) ?? 293.15;
     const tUp = (v.upstreamTemperature as number | undefined) ?? t;
     const tDown = (v.downstreamTemperature as number | undefined) ?? t;
+    if (v.pumpSpeed !== undefined || v.gasLoad !== undefined) {
+      if (typeof v.pumpSpeed !== 'number' || typeof v.gasLoad !== 'number')
+        throw usage('a pumped duct needs both --set pumpSpeed=… and --set gasLoad=…');
+      let pumped;
+      try {
+        pumped = solvePumpedDuct({
+          geometry,
+          gas,
+          temperatureK: tUp,
+          table,
+          pumpSpeed: v.pumpSpeed,
+          gasLoadPaM3PerS: v.gasLoad,
+        });
+      } catch (e) {
+        throw new CliError(`duct: ${(e as Error).message}`);
+      }
+      const e = (x: { mean: number; ci95: number }, unit: string) =>
+        `${formatQuantity(x.mean, unit, 4)} ± ${formatQuantity(x.ci95, unit, 2)}`;
+      io.stdout.write(
+        [
+          `pump of ${formatQuantity(v.pumpSpeed, 'L/s', 4)} at the outlet of a long ${geometry.shape}, gas load ${formatQuantity(v.gasLoad, 'mbar·L/s', 4)}; coefficients: ${table.source}`,
+          `  pump inlet pressure       ${formatQuantity(pumped.pumpInletPressurePa, 'Pa', 4)}`,
+          `  chamber pressure          ${e(pumped.chamberPressurePa, 'Pa')}`,
+          `  effective pumping speed   ${e(pumped.effectiveSpeedM3PerS, 'L/s')}`,
+          `  duct conductance          ${formatQuantity(pumped.ductConductanceM3PerS, 'L/s', 4)} (at the pressures it has)`,
+          ...pumped.warnings.map((w) => `warning: ${w}`),
+          'Results are model estimates; defer to local codes, standards and licensed engineering practice.',
+        ].join('\n') + '\n',
+      );
+      return EXIT_OK;
+    }
     if (o.sweep !== undefined) {
       writeConductanceCurve(o, v, { geometry, gas, table, tUp, tDown });
       io.stdout.write(`conductance curve written to ${o.out}/conductance.csv\n`);

@@ -106,6 +106,24 @@ describe('tenuis duct', () => {
     }
   });
 
+  it('a pump at the outlet: chamber pressure and effective speed, 1/S_eff = 1/S_pump + 1/C at the pressures the duct has', () => {
+    const r = tenuis(
+      'duct',
+      ...['shape=channel', 'gap=1um', 'length=1mm', 'gas=N2', 'pumpSpeed=0.001L/s', 'gasLoad=1e-3mbar·L/s'].flatMap(
+        (s) => ['--set', s],
+      ),
+      '--coefficients',
+      slipTable,
+    );
+    expect(r.code, r.stderr).toBe(0);
+    const num = (label: string) => Number(new RegExp(`${label} +([\\d.e+-]+)`).exec(r.stdout)?.[1]);
+    // 1e-3 mbar·L/s = 1e-4 Pa·m³/s over 1e-6 m³/s: 100 Pa at the pump.
+    expect(num('pump inlet pressure')).toBeCloseTo(100, 6);
+    const speed = num('effective pumping speed');
+    const c = num('duct conductance');
+    expect(1 / speed / (1 / 0.001 + 1 / c) - 1).toBeCloseTo(0, 3);
+  });
+
   it('refuses what it cannot use, naming the parameter or file', () => {
     const bad = (args: string[], pattern: RegExp) => {
       const r = tenuis('duct', ...args);

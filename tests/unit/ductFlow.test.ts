@@ -1,7 +1,7 @@
 // The long-duct solver with thermal creep (engine/longDuct/ductFlow.ts): the isothermal integral, any two of the
 // three end conditions, and thermal transpiration in the free-molecular limit (Knudsen's law).
 import { describe, expect, it } from 'vitest';
-import { modelFromSpecies } from '../../engine/gas/molecularModel';
+import { meanSpeedMPerS, modelFromSpecies, viscosityPaS } from '../../engine/gas/molecularModel';
 import {
   FREE_MOLECULAR_TUBE_GP,
   FREE_MOLECULAR_TUBE_GT,
@@ -9,6 +9,7 @@ import {
 } from '../../engine/longDuct/coefficientTable';
 import { solveIsothermalDuct } from '../../engine/longDuct/isothermalDuct';
 import { solveDuctFlow } from '../../engine/longDuct/ductFlow';
+import { solvePumpedDuct } from '../../engine/longDuct/pumpedDuct';
 
 const N2 = modelFromSpecies('N2', 'VHS');
 
@@ -31,7 +32,7 @@ const FM_TUBE: CoefficientTable = {
   shape: 'tube',
   source: 'free-molecular limit',
   gasAndWall: 'any gas, diffuse walls',
-  points: [-7, -5, -3, -1].map((e) => ({
+  points: [-7, -6.5, -6, -5.5, -5, -4.5, -4, -3.5, -3, -2.5, -2, -1.5, -1].map((e) => ({
     rarefaction: 10 ** e,
     reducedFlowRate: FREE_MOLECULAR_TUBE_GP,
     reducedFlowRateCi95: 0,
@@ -141,5 +142,51 @@ describe('long duct with thermal creep', () => {
         downstreamPressurePa: 1e5,
       }),
     ).toThrow(/no thermal-creep coefficient G_T/);
+  });
+});
+
+describe('a pump at the end of a long duct', () => {
+  it('molecular limit: 1/S_eff = 1/S_pump + 1/C with C = (8R/3L)·πR²·c̄/4 (Knudsen 1909)', () => {
+    const geometry = { shape: 'tube' as const, radiusM: 0.02, lengthM: 1 };
+    const r = solvePumpedDuct({
+      geometry,
+      gas: N2,
+      temperatureK: 293.15,
+      table: FM_TUBE,
+      pumpSpeed: 0.1,
+      gasLoadPaM3PerS: 1e-6,
+    });
+    const c = ((8 * 0.02) / 3) * Math.PI * 0.02 ** 2 * (meanSpeedMPerS(N2.massKg, 293.15) / 4);
+    expect(r.effectiveSpeedM3PerS.mean * (1 / 0.1 + 1 / c) - 1).toBeCloseTo(0, 5);
+    expect(r.pumpInletPressurePa).toBeCloseTo(1e-5, 15);
+  });
+
+  it('viscous limit: p_chamber² = p_pump² + 16μLQ/(πR⁴) (Poiseuille, no slip)', () => {
+    const table: CoefficientTable = {
+      shape: 'tube',
+      source: 'no slip',
+      gasAndWall: 'continuum',
+      points: [1, 10, 100, 1000, 10000, 100000].map((d) => ({
+        rarefaction: d,
+        reducedFlowRate: d / 4,
+        reducedFlowRateCi95: 0,
+      })),
+    };
+    const q = 10; // Pa·m³/s
+    const r = solvePumpedDuct({
+      geometry: { shape: 'tube', radiusM: 0.02, lengthM: 2 },
+      gas: N2,
+      temperatureK: 293.15,
+      table,
+      pumpSpeed: { pressurePa: [10, 1000, 100000], speedM3PerS: [0.01, 0.02, 0.02] },
+      gasLoadPaM3PerS: q,
+    });
+    const mu = viscosityPaS(N2, 293.15);
+    const exact = Math.sqrt(r.pumpInletPressurePa ** 2 + (16 * mu * 2 * q) / (Math.PI * 0.02 ** 4));
+    expect(r.chamberPressurePa.mean / exact - 1).toBeCloseTo(0, 6);
+    // The pump table, interpolated on log–log axes between 10 Pa (0.01 m³/s) and 1000 Pa (0.02 m³/s): p·S(p) = Q.
+    const p = r.pumpInletPressurePa;
+    const s = 0.01 * (p / 10) ** (Math.log(2) / Math.log(100));
+    expect((p * s) / q - 1).toBeCloseTo(0, 9);
   });
 });
