@@ -11,10 +11,13 @@
  * is reported next to the figures (item 9), everything is written to bench-results.json at the repository root, and
  * the process ends explicitly (item 10).
  *
+ * Then the long-duct solver's timings (longDuctBench.ts).
+ *
  * Options: --sizes 1e5,1e6   --steps 300,40 (one per size)   --repeats 3   --out <file>   --scaling no (skip replicas)
  */
 import { writeFileSync } from 'node:fs';
 import { measureReplicaScaling } from './replicaScaling';
+import { measureLongDuct } from './longDuctBench';
 import os from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { couetteBenchCase } from './couetteBenchCase';
@@ -151,6 +154,10 @@ async function main(): Promise<void> {
       `replicas on worker threads: 1 → ${one.mParticleStepsPerS.toFixed(1)} M p-steps/s, ${many.replicas} → ${many.mParticleStepsPerS.toFixed(1)} M p-steps/s in total: ${scaling.speedup.toFixed(2)}× (wall time includes worker start-up)`,
     );
   }
+  const longDuct = measureLongDuct();
+  console.log(
+    `long duct (BGK channel table): isothermal solve ${longDuct.isothermalSolveMs.toFixed(2)} ms, thermal-creep ODE solve ${longDuct.odeSolveMs.toFixed(1)} ms, 50-point conductance curve ${longDuct.conductanceCurve50Ms.toFixed(0)} ms (medians)`,
+  );
   const report = {
     benchmark: 'hard-sphere argon Couette, ~20 particles per cell, one thread',
     date: new Date().toISOString(),
@@ -158,6 +165,7 @@ async function main(): Promise<void> {
     loadAvgAfter: os.loadavg(),
     results,
     replicaScaling: scaling,
+    longDuct,
   };
   writeFileSync(out, JSON.stringify(report, null, 2) + '\n');
   console.log(`written ${out}`);
