@@ -18,6 +18,7 @@ import type { FinishedSummary } from '../../workers/liveSummary.worker';
 import { transfer } from 'comlink';
 import { planFromInput, type Plan } from '../../engine/plan/plan';
 import { sizedPlanOf } from './planView';
+import { headlineDecision } from '../../engine/report/decision';
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { TenuisTestHooks } from '../testing/testHooks';
 import type { ContinuumComparisonResult } from '../../engine/report/comparison';
@@ -67,6 +68,8 @@ export interface RunRequest {
   readonly hooks?: TenuisTestHooks;
   /** Share of the run sizing's default time cap this run may take (a sweep point: 1/points); default 1. */
   readonly capShare?: number;
+  /** End the run as soon as no model's verdict on the headline quantity is undecided (report/decision.ts). */
+  readonly stopWhenDecided?: boolean;
 }
 
 export interface RunCallbacks {
@@ -138,11 +141,16 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
       replicas: request.replicas,
       // The final samples stay sample files: the summary worker decodes and merges them, not the page's thread.
       place: { kind: 'workers', createReplica: observedFactory(kills, liveReplicas), decodeOnThisThread: false },
-      stopping: target && {
-        target,
-        stopAtTarget: stopsAtTarget,
-        ...(stopsAtTarget ? { maxSampleSteps: plannedSampleSteps } : {}),
-      },
+      stopping:
+        target || request.stopWhenDecided
+          ? {
+              ...(target ? { target, stopAtTarget: stopsAtTarget } : {}),
+              ...(stopsAtTarget ? { maxSampleSteps: plannedSampleSteps } : {}),
+              ...(request.stopWhenDecided
+                ? { decided: (result: SimulationResult) => headlineDecision(planned.plan, result) }
+                : {}),
+            }
+          : undefined,
       // Safety snapshots for lost workers; the stopping rule is judged on the live views, summarised off this thread.
       snapshotEveryMs: Math.max(1000, request.liveEveryMs),
       liveSummaries: (deliver) => (views = startLiveViews(liveReplicas, request.liveEveryMs, deliver)),

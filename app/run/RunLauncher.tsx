@@ -11,6 +11,7 @@ const BUSY = ['starting', 'running', 'paused', 'stopping'];
 
 export function RunLauncher() {
   const replicas = useApp((s) => s.replicas);
+  const stopWhenDecided = useApp((s) => s.stopWhenDecided);
   const cores = useApp((s) => s.cores);
   const ready = useApp((s) => s.plan !== null && s.derived?.caseInput != null);
   // The plan shown is the previous change's until the new one is worked out: never run a case not yet checked.
@@ -106,6 +107,17 @@ export function RunLauncher() {
           )}
         </fieldset>
       )}
+      <div className="field">
+        <label htmlFor="stop-when-decided">
+          <input
+            id="stop-when-decided"
+            type="checkbox"
+            checked={stopWhenDecided}
+            onChange={(e) => appStore.getState().setStopWhenDecided(e.target.checked)}
+          />{' '}
+          stop when decided: as soon as no model&apos;s verdict on the headline quantity is undecided
+        </label>
+      </div>
       <button type="button" className="primary" disabled={reason !== null} onClick={() => void startRun(appStore)}>
         Run the case
       </button>

@@ -60,6 +60,7 @@ export async function startRun(store: AppStore): Promise<void> {
         replicas,
         liveEveryMs: liveIntervalMs(s.plan.cellsX * s.plan.cellsY),
         target: target.request,
+        stopWhenDecided: s.stopWhenDecided,
         hooks: readTestHooks(),
       },
       {

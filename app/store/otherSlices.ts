@@ -23,6 +23,8 @@ export function createRunSlice(deps: StoreDeps, cores: number): StateCreator<App
       endNotice: null,
       target: { path: '', goalPercent: '2', stopWhenReached: false },
       setTarget: (patch) => set({ target: { ...get().target, ...patch } }),
+      stopWhenDecided: false,
+      setStopWhenDecided: (on) => set({ stopWhenDecided: on }),
       setReplicas: (n) => {
         if (!Number.isInteger(n) || n < 1 || n > 64) return;
         set({ replicas: n });

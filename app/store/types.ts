@@ -79,8 +79,11 @@ export interface RunSlice {
   readonly runError: string | null;
   readonly endNotice: RunEndNotice | null;
   readonly target: TargetSetting;
+  /** End a run as soon as no model's verdict on the headline quantity is undecided. */
+  readonly stopWhenDecided: boolean;
   setReplicas(n: number): void;
   setTarget(patch: Partial<TargetSetting>): void;
+  setStopWhenDecided(on: boolean): void;
   setSpeed(particleStepsPerSecond: number): void;
   setRunState(patch: Partial<Pick<RunSlice, 'status' | 'progress' | 'notices' | 'runError' | 'endNotice'>>): void;
   addNotice(text: string): void;

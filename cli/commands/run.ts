@@ -27,7 +27,7 @@ import { defineCommand } from '../command';
 import { printable } from '../printable';
 import { parseTimeCap, parseTolerance, sizedRunOf, withTolerance } from '../sizedRun';
 import { sizingLines } from '../../engine/sizing/runSizing';
-import { verdictHeadline } from '../../engine/report/headline';
+import { headlineDecision } from '../../engine/report/decision';
 import type { SimulationResult } from '../../engine/results/summarize';
 
 export const RUN_USAGE = `Usage:
@@ -126,19 +126,9 @@ interface DecideRule {
   readonly capSeconds: number;
 }
 
-/** `--target decide`: stop once no model's verdict on the headline quantity is undecided. */
+/** `--target decide`: stop once no model's verdict on the headline quantity is undecided (report/decision.ts). */
 function decideRule(plan: Plan, maxSampleSteps: number, capSeconds: number): DecideRule {
-  return {
-    maxSampleSteps,
-    capSeconds,
-    decided: (result) => {
-      const c = continuumComparisonOf(plan, result);
-      if (!c.recognised) return null;
-      const v = c.verdict[c.predictions.headline];
-      if (!v || v.status === 'noData' || v.models.some((m) => m.status === 'undecided')) return null;
-      return `decided: ${verdictHeadline(c).text}`;
-    },
-  };
+  return { maxSampleSteps, capSeconds, decided: (result) => headlineDecision(plan, result) };
 }
 
 function parseCheckpointEvery(text: string, usage: UsageErrorOf): number {

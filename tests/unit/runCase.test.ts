@@ -15,6 +15,7 @@ import { sampleSetOf } from '../../engine/run/simulationSamples';
 import { mergeSampleSets } from '../../engine/results/mergeSamples';
 import { summarizeSamples, type SimulationResult } from '../../engine/results/summarize';
 import { planOrThrow } from '../support/planOrThrow';
+import { headlineDecision } from '../../engine/report/decision';
 
 const couette = (sampleSteps: number) =>
   planOrThrow(
@@ -97,6 +98,46 @@ describe('runCase', () => {
     expect(outcome.cancelled).toBe(false);
     expect(outcome.replicas.map((r) => r.status)).toEqual(['cancelled', 'cancelled']);
     expect(targets).toEqual([true]);
+  });
+
+  it('stops when decided: the headline verdict of a live summary ends the run with its sentence', async () => {
+    // A short Couette run leaves models undecided (no decision). Couette at Kn 1 with a verdict tolerance of 50 %:
+    // no-slip is off by about +200 % and the slip models within a few per cent, so 4000 steps decide every model.
+    const plan = planOrThrow(
+      buildPreset('couette', {
+        knudsen: '1',
+        cellsY: '8',
+        particlesPerCell: '20',
+        transientSteps: '100',
+        sampleSteps: '4000',
+        seed: '5',
+        verdictTolerance: '0.5',
+      }),
+    );
+    const short = localResult(400, [0]);
+    expect(headlineDecision(couette(400), short)).toBeNull();
+    const long = (() => {
+      const sim = createSimulation(plan, { stream: 0 });
+      advance(sim, plan.transientSteps + plan.sampleSteps);
+      return summarizeSamples(sampleSetOf(sim));
+    })();
+    const reason = headlineDecision(plan, long);
+    expect(reason).toMatch(/^decided: /);
+    const handle = runCase(
+      { plan },
+      {
+        replicas: 1,
+        place: { kind: 'workers', createReplica: hereFactory },
+        stopping: { decided: (r) => headlineDecision(plan, r), maxSampleSteps: 5_000_000 },
+        liveSummaries: (deliver) => {
+          const timer = setTimeout(() => deliver(long), 300);
+          return { stop: () => clearTimeout(timer) };
+        },
+      },
+    );
+    const outcome = await handle.done;
+    expect(outcome.stoppedBy).toBe(reason);
+    expect(outcome.replicas.map((r) => r.status)).toEqual(['cancelled']);
   });
 
   it('a target that does not stop the run is followed but the run goes to its end; cancel() is the caller’s', async () => {
