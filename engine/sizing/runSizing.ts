@@ -20,11 +20,13 @@ export const DEFAULT_CAP_SECONDS = 300;
 
 /**
  * Particle-steps per second of one replica on one core, by geometry: measured with `tenuis run` on this project's
- * 2-core development machine (planar Couette 1.9–2.2 × 10⁷; axisymmetric tube between vessels 1.0–1.3 × 10⁷, the default tube at Kn 100 9.8 × 10⁶). Several
+ * 2-core development machine (planar Couette 1.9–2.2 × 10⁷, the sized Couette and Fourier defaults 2.2 and 2.1 × 10⁷;
+ * the force-driven channel's sized default 1.6 × 10⁷; axisymmetric tube between vessels 1.0–1.3 × 10⁷, the default
+ * tube at Kn 100 9.8 × 10⁶). Several
  * replicas on as many cores each run about 0.8 times as fast (`npm run bench`: two replicas 1.77 times one on an idle
  * machine; the sized Couette default on two replicas ran 1.63 times one, 3.3 × 10⁷ particle-steps/s).
  */
-export const PARTICLE_STEPS_PER_SECOND = { planar: 2.0e7, axisymmetric: 1.0e7 } as const;
+export const PARTICLE_STEPS_PER_SECOND = { planar: 2.0e7, forceDriven: 1.6e7, axisymmetric: 1.0e7 } as const;
 const PARALLEL_EFFICIENCY = 0.8;
 
 export interface SizingOptions {
@@ -104,9 +106,12 @@ function sizeFor(
   notAppliedBecause: string | undefined,
 ): RunSizing {
   const applied = notAppliedBecause === undefined;
-  const rate =
-    PARTICLE_STEPS_PER_SECOND[plan.grid.axisymmetric ? 'axisymmetric' : 'planar'] *
-    (replicas > 1 ? PARALLEL_EFFICIENCY : 1);
+  const geometry = plan.grid.axisymmetric
+    ? 'axisymmetric'
+    : plan.bodyAccelerationXMPerS2 !== 0
+      ? 'forceDriven'
+      : 'planar';
+  const rate = PARTICLE_STEPS_PER_SECOND[geometry] * (replicas > 1 ? PARALLEL_EFFICIENCY : 1);
   const particles = Math.max(1, plan.initialParticles);
   const secondsOf = (sampleSteps: number) => ((plan.transientSteps + sampleSteps) * particles) / rate;
   // The replicas' samples are merged: each replica samples its share of the simulated time the target needs.
