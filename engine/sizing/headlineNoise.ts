@@ -70,6 +70,27 @@ function wallAreaM2(plan: Plan, wall: string): number {
   return s.normalIsX ? Math.PI * (s.toM * s.toM - s.fromM * s.fromM) : 2 * Math.PI * s.planeM * length;
 }
 
+/**
+ * The gas area of a flow section (m²; per metre of depth when planar): its span across y (the whole domain unless it
+ * sets yMinM/yMaxM) less the blocks it crosses, as a strip or (axisymmetric) rings.
+ */
+export function sectionAreaM2(plan: Plan, name: string): number {
+  const c = plan.caseData;
+  const s = c.flowSections.find((f) => f.name === name);
+  if (!s) return NaN;
+  let pieces: [number, number][] = [[s.yMinM ?? 0, s.yMaxM ?? c.domain.lengthYM]];
+  for (const b of c.blocks) {
+    if (!(s.xM >= b.xMinM && s.xM <= b.xMaxM)) continue;
+    pieces = pieces.flatMap(([a, z]): [number, number][] => {
+      const out: [number, number][] = [];
+      if (b.yMinM > a) out.push([a, Math.min(z, b.yMinM)]);
+      if (b.yMaxM < z) out.push([Math.max(a, b.yMaxM), z]);
+      return out.filter(([p, q]) => q > p);
+    });
+  }
+  return pieces.reduce((sum, [a, z]) => sum + (plan.grid.axisymmetric ? Math.PI * (z * z - a * a) : z - a), 0);
+}
+
 /** The free-molecular flow through a duct's entrance, kg/s (per metre in planar cases). */
 function entranceFlowKgS(plan: Plan, up: number, down: number): number {
   const r = plan.caseData.flowReport;
@@ -113,8 +134,10 @@ export function headlineNoiseOf(plan: Plan, models: CaseModelsResult): HeadlineN
   if (parts[0] === 'flow' && parts[1] === 'massFlowRate') {
     const r = plan.caseData.flowReport;
     if (!r) return { sized: false, reason: 'the flow rate has no flowReport to give the section size' };
-    const area = r.duct === 'tube' || r.duct === 'orifice' ? Math.PI * r.sizeM * r.sizeM : r.sizeM;
     const c = plan.caseData;
+    // The section the flow numbers are read at (flowResultOf): its own gas area, which may be a vessel's.
+    const area = sectionAreaM2(plan, r.section ?? c.flowSections[0]?.name ?? '');
+    if (!(area > 0)) return { sized: false, reason: 'the flow section has no gas area to size by' };
     const up = c.boundaries.left.type === 'reservoir' ? c.boundaries.left.pressurePa : NaN;
     const down = c.boundaries.right.type === 'reservoir' ? c.boundaries.right.pressurePa : NaN;
     const entrance = entranceFlowKgS(plan, up, down);
@@ -130,8 +153,16 @@ export function headlineNoiseOf(plan: Plan, models: CaseModelsResult): HeadlineN
         ? `the ${model.model} long-duct model in series with the free-molecular entrance flow`
         : 'the free-molecular flow through the opening';
     } else return { sized: false, reason: 'no pressure difference between the vessels to drive a flow' };
+    // A section across a vessel (wider than the duct's opening) is noisier in axisymmetric cases (noiseCalibration.ts).
+    const opening = r.duct === 'tube' || r.duct === 'orifice' ? Math.PI * r.sizeM * r.sizeM : r.sizeM;
     const kind: NoiseKind =
-      c.bodyAccelerationXMPerS2 !== 0 ? 'forceDriven' : plan.grid.axisymmetric ? 'sectionAxisymmetric' : 'section';
+      c.bodyAccelerationXMPerS2 !== 0
+        ? 'forceDriven'
+        : plan.grid.axisymmetric
+          ? area > 1.5 * opening
+            ? 'vesselSectionAxisymmetric'
+            : 'sectionAxisymmetric'
+          : 'section';
     return {
       sized: true,
       path,
