@@ -8,6 +8,7 @@
  * beside FILE, in FILE.points/.
  */
 import { readFileSync, writeFileSync } from 'node:fs';
+import { basename } from 'node:path';
 import { parseCase, type Case } from '../../engine/case/schema';
 import type { CoefficientPoint, CoefficientTable } from '../../engine/longDuct/coefficientTable';
 import { tableProblem } from '../../engine/longDuct/coefficientTable';
@@ -143,8 +144,21 @@ function tableFromSweep(
   points.sort((a, b) => a.rarefaction - b.rarefaction);
   return {
     shape,
-    source: `Tenuis DSMC, tenuis coefficients on case "${caseName}" (every point in ${dir}/)`,
+    source: `Tenuis ${packageVersion()} DSMC, tenuis coefficients on case "${caseName}" (every point in ${basename(dir)}/)`,
     gasAndWall,
     points,
   };
+}
+
+/** Tenuis's version, from the package.json above the command line's bundle (dist-cli/ or dist-cli/chunks/). */
+function packageVersion(): string {
+  for (const up of ['../package.json', '../../package.json']) {
+    try {
+      const pkg = JSON.parse(readFileSync(new URL(up, import.meta.url), 'utf8')) as { name?: string; version?: string };
+      if (pkg.name === 'tenuis' && pkg.version) return pkg.version;
+    } catch {
+      // not there: try the next folder up
+    }
+  }
+  return 'unknown version';
 }

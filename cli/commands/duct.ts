@@ -12,6 +12,7 @@ import { speciesIdOf } from '../../engine/case/gasSchema';
 import { tableProblem, type CoefficientTable } from '../../engine/longDuct/coefficientTable';
 import { solveDuctFlow, type DuctFlowResult } from '../../engine/longDuct/ductFlow';
 import type { DuctGeometry } from '../../engine/longDuct/isothermalDuct';
+import { builtinTableFor } from '../../engine/longDuct/builtinTables';
 import { conductanceCurve } from '../../engine/longDuct/conductanceCurve';
 import { solvePumpedDuct } from '../../engine/longDuct/pumpedDuct';
 import { BOLTZMANN_J_PER_K as K_B } from '../../engine/physics/constants';
@@ -81,7 +82,8 @@ summary.json and duct.csv (pressure, temperature, rarefaction and Knudsen number
 Results are model estimates: defer to local codes, standards and licensed engineering practice for vacuum vessels
 and pressurised parts.
   --set NAME=VALUE      a parameter (units accepted, e.g. radius=20mm, upstreamPressure=0.01mbar, temperature=20C)
-  --coefficients FILE   the coefficient table (JSON, from tenuis coefficients)
+  --coefficients FILE   the coefficient table (JSON, from tenuis coefficients); without it a channel uses the
+                        built-in table (hard-sphere argon, diffuse walls) and says so; a tube needs one
   --out, -o DIR         output folder for summary.json and duct.csv
   --sweep upstreamPressure --from A --to B --points N [--log]
                         instead: the conductance over upstream pressures A to B at the pressure ratio the two set
@@ -168,11 +170,16 @@ export const ductCommand = defineCommand({
         return undefined;
       }
     });
-    if (!o.coefficients)
+    const wantedShape = (v.shape as 'tube' | 'channel' | undefined) ?? 'tube';
+    const builtin = o.coefficients ? null : builtinTableFor(wantedShape);
+    if (!o.coefficients && !builtin)
       throw usage(
-        'duct needs --coefficients FILE: a table of G_P(δ) made by tenuis coefficients for this gas and wall',
+        `duct needs --coefficients FILE for a ${wantedShape}: Tenuis ships no ${wantedShape} table yet; make one with tenuis coefficients for this gas and wall`,
       );
-    const table = readTable(o.coefficients);
+    const table = builtin ?? readTable(o.coefficients!);
+    const builtinNote = builtin
+      ? `built-in table (${builtin.gasAndWall}); for another gas or wall G_P(δ) differs by a few per cent in the transition regime: give --coefficients FILE from tenuis coefficients for the exact one`
+      : null;
     const shape = (v.shape as string | undefined) ?? table.shape;
     const need = (name: string): number => {
       const x = v[name];
@@ -219,6 +226,7 @@ export const ductCommand = defineCommand({
           `  effective pumping speed   ${e(pumped.effectiveSpeedM3PerS, 'L/s')}`,
           `  duct conductance          ${formatQuantity(pumped.ductConductanceM3PerS, 'L/s', 4)} (at the pressures it has)`,
           ...pumped.warnings.map((w) => `warning: ${w}`),
+          ...(builtinNote ? [`note: ${builtinNote}`] : []),
           'Results are model estimates; defer to local codes, standards and licensed engineering practice.',
         ].join('\n') + '\n',
       );
@@ -260,6 +268,7 @@ export const ductCommand = defineCommand({
           ]
         : []),
       ...result.warnings.map((w) => `warning: ${w}`),
+      ...(builtinNote ? [`note: ${builtinNote}`] : []),
       'Results are model estimates; defer to local codes, standards and licensed engineering practice.',
     ];
     io.stdout.write(`${lines.join('\n')}\n`);
