@@ -73,6 +73,11 @@ export function flowReferenceOf(plan: Plan): { up: number; down: number; tempera
   return { up, down, temperatureK };
 }
 
+/** The duct's opening A (m²; per metre of depth for a channel or slit): πR² for a tube or orifice, H otherwise. */
+export function openingAreaM2(r: { readonly duct: string; readonly sizeM: number }): number {
+  return r.duct === 'tube' || r.duct === 'orifice' ? Math.PI * r.sizeM * r.sizeM : r.sizeM;
+}
+
 /** Flow numbers from the mass flow rate estimate of each section; undefined when the case has no sections. */
 export function flowResultOf(plan: Plan, sections: Record<string, IntegralEstimate>): FlowResult | undefined {
   const c = plan.caseData;
@@ -91,7 +96,7 @@ export function flowResultOf(plan: Plan, sections: Record<string, IntegralEstima
   if (dp > 0) values.conductance = scaled((K_B * t) / (m * dp));
   const r = c.flowReport;
   if (r && dp > 0) {
-    const area = r.duct === 'tube' || r.duct === 'orifice' ? Math.PI * r.sizeM * r.sizeM : r.sizeM;
+    const area = openingAreaM2(r);
     values.transmissionProbability = scaled(1 / (area * dp * Math.sqrt(m / (2 * Math.PI * K_B * t))));
   }
   if (r && (r.duct === 'channel' || r.duct === 'tube')) {

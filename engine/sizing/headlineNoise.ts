@@ -22,6 +22,9 @@
  */
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import type { Plan } from '../plan/plan';
+import { meanSpeedMPerS } from '../gas/molecularModel';
+import { surfaceAreaM2 } from '../geometry/surfaces';
+import { flowReferenceOf, openingAreaM2 } from '../results/flowQuantities';
 import type { CaseModelsResult, ContinuumModelName } from '../continuum/caseModelTypes';
 import { NOISE_CORRELATION_FACTOR, wallFactor, type NoiseKind } from './noiseCalibration';
 
@@ -55,19 +58,13 @@ const EXPECTED_FROM: readonly ContinuumModelName[] = [
 
 function oneWayFluxPerM2S(plan: Plan): number {
   const { numberDensityPerM3: n, temperatureK: t } = plan.reference;
-  const m = plan.gas.model.massKg;
-  const meanSpeed = Math.sqrt((8 * K_B * t) / (Math.PI * m));
-  return (n * meanSpeed) / 4;
+  return (n * meanSpeedMPerS(plan.gas.model.massKg, t)) / 4;
 }
 
-/** Area of a wall (m², per metre of depth in planar cases): its length, times 2πr for a wall along the axis. */
+/** Area of a wall (m², per metre of depth in planar cases), as the wall quantities divide by it. */
 function wallAreaM2(plan: Plan, wall: string): number {
   const s = plan.surfaces.find((f) => f.name === wall);
-  if (!s) return NaN;
-  const length = s.toM - s.fromM;
-  if (!plan.grid.axisymmetric) return length;
-  // Axisymmetric: x is the axis, y the radius. A wall normal to y is a cylinder; one normal to x an annulus.
-  return s.normalIsX ? Math.PI * (s.toM * s.toM - s.fromM * s.fromM) : 2 * Math.PI * s.planeM * length;
+  return s ? surfaceAreaM2(s.normalIsX, s.planeM, s.fromM, s.toM, plan.grid.axisymmetric) : NaN;
 }
 
 /**
@@ -95,9 +92,8 @@ export function sectionAreaM2(plan: Plan, name: string): number {
 function entranceFlowKgS(plan: Plan, up: number, down: number): number {
   const r = plan.caseData.flowReport;
   if (!r) return NaN;
-  const area = r.duct === 'tube' || r.duct === 'orifice' ? Math.PI * r.sizeM * r.sizeM : r.sizeM;
   const m = plan.gas.model.massKg;
-  return area * (up - down) * Math.sqrt(m / (2 * Math.PI * K_B * plan.reference.temperatureK));
+  return openingAreaM2(r) * (up - down) * Math.sqrt(m / (2 * Math.PI * K_B * plan.reference.temperatureK));
 }
 
 function modelValue(models: CaseModelsResult, key: string): { value: number; model: ContinuumModelName } | null {
@@ -138,8 +134,7 @@ export function headlineNoiseOf(plan: Plan, models: CaseModelsResult): HeadlineN
     // The section the flow numbers are read at (flowResultOf): its own gas area, which may be a vessel's.
     const area = sectionAreaM2(plan, r.section ?? c.flowSections[0]?.name ?? '');
     if (!(area > 0)) return { sized: false, reason: 'the flow section has no gas area to size by' };
-    const up = c.boundaries.left.type === 'reservoir' ? c.boundaries.left.pressurePa : NaN;
-    const down = c.boundaries.right.type === 'reservoir' ? c.boundaries.right.pressurePa : NaN;
+    const { up, down } = flowReferenceOf(plan);
     const entrance = entranceFlowKgS(plan, up, down);
     let expectedMean: number;
     let expectedFrom: string;
@@ -154,7 +149,7 @@ export function headlineNoiseOf(plan: Plan, models: CaseModelsResult): HeadlineN
         : 'the free-molecular flow through the opening';
     } else return { sized: false, reason: 'no pressure difference between the vessels to drive a flow' };
     // A section across a vessel (wider than the duct's opening) is noisier in axisymmetric cases (noiseCalibration.ts).
-    const opening = r.duct === 'tube' || r.duct === 'orifice' ? Math.PI * r.sizeM * r.sizeM : r.sizeM;
+    const opening = openingAreaM2(r);
     const kind: NoiseKind =
       c.bodyAccelerationXMPerS2 !== 0
         ? 'forceDriven'
