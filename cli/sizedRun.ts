@@ -4,9 +4,8 @@
  */
 import { totalmem } from 'node:os';
 import type { Case } from '../engine/case/schema';
-import { plan as planCase, type Plan } from '../engine/plan/plan';
-import { caseModelsOf } from '../engine/continuum/caseModels';
-import { DEFAULT_CAP_SECONDS, sizeRun, sizedCase, type NotSized, type RunSizing } from '../engine/sizing/runSizing';
+import type { Plan } from '../engine/plan/plan';
+import { DEFAULT_CAP_SECONDS, sizedPlanOf, type NotSized, type RunSizing } from '../engine/sizing/runSizing';
 import { CliError, type UsageError } from './errors';
 
 export interface SizedRun {
@@ -50,16 +49,18 @@ export function sizedRunOf(
   plan: Plan,
   options: { readonly replicas: number; readonly capSeconds: number; readonly apply: boolean },
 ): SizedRun {
-  const sizing = sizeRun(plan, caseModelsOf(plan), {
-    replicas: options.replicas,
-    capSeconds: options.capSeconds,
-    keepSamplingBecause: options.apply
-      ? undefined
-      : 'the run sets its own budget (--target, --max-steps or --max-seconds)',
-  });
-  if (!sizing.sized || !sizing.applied) return { caseData, plan, sizing };
-  const sized = sizedCase(caseData, sizing);
-  const planned = planCase(sized, { memoryBudgetBytes: 0.8 * totalmem() });
-  if (!planned.ok) throw new CliError(`the sized case cannot run:\n${planned.errors.map((m) => `  ${m}`).join('\n')}`);
-  return { caseData: sized, plan: planned.plan, sizing };
+  const sized = sizedPlanOf(
+    plan,
+    {
+      replicas: options.replicas,
+      capSeconds: options.capSeconds,
+      keepSamplingBecause: options.apply
+        ? undefined
+        : 'the run sets its own budget (--target, --max-steps or --max-seconds)',
+    },
+    { memoryBudgetBytes: 0.8 * totalmem() },
+  );
+  if (!sized.sizing.sized && sized.sizing.reason.startsWith('the sized case cannot run'))
+    throw new CliError(sized.sizing.reason);
+  return sized.plan === plan ? { caseData, plan, sizing: sized.sizing } : { caseData: sized.plan.caseData, ...sized };
 }

@@ -8,8 +8,7 @@ import type { ReferenceState } from '../../engine/plan/referenceState';
 import { caseModelsOf } from '../../engine/continuum/caseModels';
 import {
   DEFAULT_CAP_SECONDS,
-  sizeRun,
-  sizedCase,
+  sizedPlanOf,
   sizingLines,
   type NotSized,
   type RunSizing,
@@ -183,7 +182,7 @@ export function describePlan(caseInput: unknown, o: PlanOptions): PlanViewResult
   const first = planFromInput(caseInput);
   if (!first.ok) return { ok: false, errors: first.errors };
   // The plan shown is the one the run will take: sized to decide where the case leaves its sampling open.
-  const { plan: p, sizing } = sizedPlanOf(first.plan, o.replicas);
+  const { plan: p, sizing } = sizedPlanFor(first.plan, o.replicas);
   const r = p.ratios;
   const row = (label: string, value: number, limit: number, bound: 'max' | 'min'): AdvisorRow => ({
     label,
@@ -250,14 +249,7 @@ export function describePlan(caseInput: unknown, o: PlanOptions): PlanViewResult
   };
 }
 
-/**
- * The plan sized for its headline quantity (engine/sizing/runSizing.ts) when the case leaves sampling.sampleSteps
- * unset and the run sets no budget of its own, with the sizing; else the plan as it is. capShare: the share of the
- * default time cap this run may take (a sweep point's 1/points).
- */
-export function sizedPlanOf(plan: Plan, replicas: number, capShare = 1): { plan: Plan; sizing: RunSizing | NotSized } {
-  const sizing = sizeRun(plan, caseModelsOf(plan), { replicas, capSeconds: DEFAULT_CAP_SECONDS * capShare });
-  if (!sizing.sized || !sizing.applied) return { plan, sizing };
-  const sized = planFromInput(sizedCase(plan.caseData, sizing));
-  return sized.ok ? { plan: sized.plan, sizing } : { plan, sizing: { sized: false, reason: sized.errors.join('; ') } };
+/** The plan a page run will take (engine/sizing/runSizing.ts sizedPlanOf); capShare: its share of the default cap. */
+export function sizedPlanFor(plan: Plan, replicas: number, capShare = 1): { plan: Plan; sizing: RunSizing | NotSized } {
+  return sizedPlanOf(plan, { replicas, capSeconds: DEFAULT_CAP_SECONDS * capShare });
 }

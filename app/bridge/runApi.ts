@@ -17,7 +17,7 @@ import { observedFactory, openSummaryWorker, startLiveViews, type LiveReplicas, 
 import type { FinishedSummary } from '../../workers/liveSummary.worker';
 import { transfer } from 'comlink';
 import { planFromInput, type Plan } from '../../engine/plan/plan';
-import { sizedPlanOf } from './planView';
+import { sizedPlanFor } from './planView';
 import { headlineDecision } from '../../engine/report/decision';
 import type { SimulationResult } from '../../engine/results/summarize';
 import type { TenuisTestHooks } from '../testing/testHooks';
@@ -91,7 +91,7 @@ export function startRun(request: RunRequest, callbacks: RunCallbacks): RunHandl
   // Sized to decide where the case leaves its sampling open and the run has no target of its own (planView.ts).
   const planned =
     first.ok && request.target?.stopWhenReached !== true
-      ? { ok: true as const, plan: sizedPlanOf(first.plan, request.replicas, request.capShare).plan }
+      ? { ok: true as const, plan: sizedPlanFor(first.plan, request.replicas, request.capShare).plan }
       : first;
   if (!planned.ok)
     return {

@@ -9,7 +9,8 @@
  * The sizing applies only where the case leaves sampling.sampleSteps unset and the run sets no budget of its own.
  */
 import type { Case } from '../case/schema';
-import { stableSampleSteps, type Plan } from '../plan/plan';
+import { plan as planCase, stableSampleSteps, type Plan, type PlanOptions } from '../plan/plan';
+import { caseModelsOf } from '../continuum/caseModels';
 import type { CaseModelsResult } from '../continuum/caseModelTypes';
 import { expectedRelativeHalfWidth, headlineNoiseOf, sampledSecondsFor, type HeadlineNoise } from './headlineNoise';
 
@@ -138,6 +139,23 @@ function sizeFor(
     capAllows: stepsForTarget <= capSteps,
     particleStepsPerSecond: rate,
   };
+}
+
+/**
+ * The plan the run will take: sized for its headline (the case with the sized sampling written in, planned again)
+ * where the sizing applies, else the plan as it is; with the sizing. Shared by the command line and the page.
+ */
+export function sizedPlanOf(
+  plan: Plan,
+  options: SizingOptions = {},
+  planOptions: PlanOptions = {},
+): { plan: Plan; sizing: RunSizing | NotSized } {
+  const sizing = sizeRun(plan, caseModelsOf(plan), options);
+  if (!sizing.sized || !sizing.applied) return { plan, sizing };
+  const sized = planCase(sizedCase(plan.caseData, sizing), planOptions);
+  return sized.ok
+    ? { plan: sized.plan, sizing }
+    : { plan, sizing: { sized: false, reason: `the sized case cannot run: ${sized.errors.join('; ')}` } };
 }
 
 /** The case with the sized sampling written in, so that the case as run (case.json, checkpoints) says what ran. */
