@@ -11,6 +11,7 @@
  */
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { mostProbableSpeedMPerS, viscosityPaS, type MolecularModel } from '../gas/molecularModel';
+import { speedOfSoundMPerS } from '../stats/expectedNoise';
 import { interpolator, thermalCreepInterpolator, type CoefficientTable } from './coefficientTable';
 import { dimensionsOf, type DuctDimensions, type DuctGeometry, type Estimate } from './isothermalDuct';
 
@@ -236,8 +237,8 @@ export function solveDuctFlow(input: DuctFlowInput): DuctFlowResult {
   // Mach number of the mean speed at the outlet, where the gas is thinnest.
   const kt = K_B * input.downstreamTemperatureK;
   const rho = (solved.down * input.gas.massKg) / kt;
-  const gamma = (5 + input.gas.rotationalDof) / (3 + input.gas.rotationalDof);
-  const mach = Math.abs(solved.flow) / (rho * d.areaM2) / Math.sqrt((gamma * kt) / input.gas.massKg);
+  const sound = speedOfSoundMPerS(input.gas.massKg, input.downstreamTemperatureK, input.gas.rotationalDof);
+  const mach = Math.abs(solved.flow) / (rho * d.areaM2) / sound;
   if (mach > 0.3)
     warnings.push(
       `the mean speed reaches Mach ${mach.toPrecision(2)} at the outlet: the locally fully developed (linear) flow assumed here fails above about 0.3`,

@@ -13,6 +13,7 @@
  */
 import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { mostProbableSpeedMPerS, viscosityPaS, type MolecularModel } from '../gas/molecularModel';
+import { speedOfSoundMPerS } from '../stats/expectedNoise';
 import { interpolator, type CoefficientTable, type DuctShapeKind } from './coefficientTable';
 import { tubeEndConductanceM3PerS } from './endCorrection';
 
@@ -224,8 +225,7 @@ function profileOf(d: DuctDimensions, gp: (delta: number) => { value: number }, 
   const knudsen = new Float64Array(n);
   const meanSpeedMPerS = new Float64Array(n);
   const mach = new Float64Array(n);
-  const gamma = (5 + o.gas.rotationalDof) / (3 + o.gas.rotationalDof);
-  const sound = Math.sqrt((gamma * o.kt) / o.m);
+  const sound = speedOfSoundMPerS(o.m, o.t, o.gas.rotationalDof);
   let j = 0;
   for (let i = 0; i < n; i++) {
     const f = i / (n - 1);
