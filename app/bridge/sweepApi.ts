@@ -5,39 +5,13 @@
  */
 import { parseCase, type Case } from '../../engine/case/schema';
 import { wallNamesOf } from '../../engine/kernel/sideTable';
-import {
-  FLOW_QUANTITIES,
-  flowQuantityUnits,
-  flowReferenceOf,
-  type FlowQuantityName,
-} from '../../engine/results/flowQuantities';
-
+import { FLOW_QUANTITIES, flowQuantityUnits, flowQuantityDefined } from '../../engine/results/flowQuantities';
 import { WALL_QUANTITY_UNITS } from '../../engine/results/wallQuantities';
 import { planSweepPoints } from '../../engine/plan/sweepPoints';
 import { sweepContinuumCurves, type SweepContinuumCurves } from '../../engine/report/sweepCurves';
 import { sweepValues, type SweepParameter, type SweepSpacing } from '../../engine/case/sweep';
 import type { ContinuumModelName } from '../../engine/continuum/caseModelTypes';
 import type { Plan } from '../../engine/plan/plan';
-
-/**
- * Whether the case defines flow number q, by the rules flowResultOf follows (engine/results/flowQuantities.ts): a
- * force-driven duct has no pressure difference, so no conductance or transmission probability to plot.
- */
-function definedFor(plan: Plan, q: FlowQuantityName): boolean {
-  const c = plan.caseData;
-  const { up, down } = flowReferenceOf(plan);
-  const dp = up - down;
-  const r = c.flowReport;
-  if (q === 'conductance') return dp > 0;
-  if (q === 'transmissionProbability') return r !== undefined && dp > 0;
-  if (q === 'reducedFlowRate')
-    return (
-      r !== undefined &&
-      (r.duct === 'channel' || r.duct === 'tube') &&
-      (c.bodyAccelerationXMPerS2 !== 0 || (r.lengthM !== undefined && dp > 0))
-    );
-  return true;
-}
 
 export { sweepCsv, sweepJson } from '../../engine/report/sweepTable';
 export { sweepRowOf } from '../../engine/report/sweepRow';
@@ -109,7 +83,7 @@ export function planSweep(caseInput: unknown, r: SweepRequest): SweepPlanView {
   const hasFlow = c.flowSections.length > 0;
   const flowUnits = flowQuantityUnits(planar);
   const quantities: SweepQuantity[] = hasFlow
-    ? FLOW_QUANTITIES.filter((q) => definedFor(planned.points[0].plan, q)).map((q) => ({
+    ? FLOW_QUANTITIES.filter((q) => flowQuantityDefined(planned.points[0].plan, q)).map((q) => ({
         key: `flow.${q}`,
         label: q,
         unit: flowUnits[q],

@@ -34,6 +34,7 @@ const FLOW_LABELS: Readonly<Record<FlowQuantityName, string>> = {
   conductance: 'conductance',
   transmissionProbability: 'transmission probability',
   reducedFlowRate: 'reduced flow rate G_P',
+  thermalCreepFlowRate: 'thermal-creep coefficient G_T (from the heat flow, by reciprocity)',
 };
 
 /** Where the flow numbers refer to: the section, and the vessel pressures and temperature where they are finite. */

@@ -26,8 +26,8 @@ Computes a long duct's reduced flow rate G_P(δ) by DSMC and writes it as a coef
 duct --coefficients FILE. CASE is a force-driven channel or tube (body acceleration along a periodic duct, e.g.
 tenuis preset poiseuille, with its gas, collision model and wall accommodation); it is swept over the rarefaction
 δ = √π/(2 Kn) from D1 to D2 with equal ratios. Every point's full result stays in FILE.points/ (as tenuis sweep
-writes it). G_T (thermal creep) is not computed yet: the table holds G_P, and tenuis duct then needs equal end
-temperatures.
+writes it). G_T (thermal creep) comes from each point's axial heat flow by Onsager reciprocity, where that run is
+linear in its drive and resolves it; elsewhere the point has G_P only (the run's warnings say why).
   --from D1, --to D2   the rarefaction range, above 0 (e.g. 0.01 and 50)
   --points N           how many rarefactions, at least 2
   --out FILE           the table to write (JSON)
@@ -46,7 +46,11 @@ function positiveOption(name: string, text: string | undefined): number {
 
 interface PointSummary {
   readonly reference?: { readonly rarefaction?: number };
-  readonly flow?: { readonly reducedFlowRate?: { readonly mean: number; readonly ci95: number } };
+  readonly flow?: {
+    readonly reducedFlowRate?: { readonly mean: number; readonly ci95: number };
+    readonly thermalCreepFlowRate?: { readonly mean: number; readonly ci95: number };
+  };
+  readonly warnings?: readonly string[];
 }
 
 export const coefficientsCommand = defineCommand({
@@ -105,12 +109,17 @@ export const coefficientsCommand = defineCommand({
       watchInterrupt,
     );
     if (code !== EXIT_OK) return code;
-    const table = tableFromSweep(dir, c.name, duct, gasAndWallOf(c));
+    const { table, thermalCreepLeftOut } = tableFromSweep(dir, c.name, duct, gasAndWallOf(c));
     const problem = tableProblem(table);
     if (problem) throw new CliError(problem);
     writeFileSync(values.out, `${prettyJson(table)}\n`);
-    if (values.quiet !== true)
+    if (values.quiet !== true) {
       io.stderr.write(`coefficient table of ${table.points.length} points written to ${values.out}\n`);
+      if (thermalCreepLeftOut.length)
+        io.stderr.write(
+          `G_T left out at δ = ${thermalCreepLeftOut.map((d) => d.toPrecision(3)).join(', ')}: there the heat flow was not linear in the drive, or its half-width as large as its value (see each point's warnings in ${dir}/)\n`,
+        );
+    }
     return EXIT_OK;
   },
 });
@@ -130,24 +139,37 @@ function tableFromSweep(
   caseName: string,
   shape: 'channel' | 'tube',
   gasAndWall: string,
-): CoefficientTable {
+): { table: CoefficientTable; thermalCreepLeftOut: number[] } {
   const sweepJson = JSON.parse(readFileSync(`${dir}/sweep.json`, 'utf8')) as {
     points: { point: number; summary?: PointSummary }[];
   };
   const points: CoefficientPoint[] = [];
+  const thermalCreepLeftOut: number[] = [];
   for (const p of sweepJson.points) {
     const delta = p.summary?.reference?.rarefaction;
     const gp = p.summary?.flow?.reducedFlowRate;
     if (delta === undefined || gp === undefined) continue;
-    points.push({ rarefaction: delta, reducedFlowRate: gp.mean, reducedFlowRateCi95: gp.ci95 });
+    // G_T from the heat flow by reciprocity, kept only where the run says it is linear and it is resolved.
+    const gt = p.summary?.flow?.thermalCreepFlowRate;
+    const nonlinear = (p.summary?.warnings ?? []).some((w) => w.startsWith('flow.thermalCreepFlowRate'));
+    const usable = gt !== undefined && !nonlinear && gt.mean > 0 && gt.ci95 < gt.mean;
+    if (!usable) thermalCreepLeftOut.push(delta);
+    points.push({
+      rarefaction: delta,
+      reducedFlowRate: gp.mean,
+      reducedFlowRateCi95: gp.ci95,
+      ...(usable ? { thermalCreep: gt.mean, thermalCreepCi95: gt.ci95 } : {}),
+    });
   }
   points.sort((a, b) => a.rarefaction - b.rarefaction);
-  return {
+  thermalCreepLeftOut.sort((a, b) => a - b);
+  const table: CoefficientTable = {
     shape,
     source: `Tenuis ${packageVersion()} DSMC, tenuis coefficients on case "${caseName}" (every point in ${basename(dir)}/)`,
     gasAndWall,
     points,
   };
+  return { table, thermalCreepLeftOut };
 }
 
 /** Tenuis's version, from the package.json above the command line's bundle (dist-cli/ or dist-cli/chunks/). */

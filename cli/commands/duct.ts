@@ -6,17 +6,21 @@
  */
 import { readFileSync } from 'node:fs';
 import { parseQuantity, formatQuantity, type QuantityKind } from '../../engine/units/engineeringUnits';
-import { modelFromSpecies, viscosityPaS, mostProbableSpeedMPerS } from '../../engine/gas/molecularModel';
-import { SPECIES_IDS } from '../../engine/gas/species';
+import { modelFromSpecies } from '../../engine/gas/molecularModel';
+import { SPECIES_IDS, type SpeciesId } from '../../engine/gas/species';
 import { speciesIdOf } from '../../engine/case/gasSchema';
 import { tableProblem, type CoefficientTable } from '../../engine/longDuct/coefficientTable';
-import { solveDuctFlow, type DuctFlowResult } from '../../engine/longDuct/ductFlow';
 import type { DuctGeometry } from '../../engine/longDuct/isothermalDuct';
 import { builtinTableFor } from '../../engine/longDuct/builtinTables';
-import { conductanceCurve } from '../../engine/longDuct/conductanceCurve';
-import { solvePumpedDuct } from '../../engine/longDuct/pumpedDuct';
-import { BOLTZMANN_J_PER_K as K_B } from '../../engine/physics/constants';
-import { csvDocument } from '../../engine/report/csv';
+import {
+  conductanceCurveCsv,
+  longDuctAnswer,
+  longDuctConductanceCurve,
+  longDuctProfile,
+  longDuctProfileCsv,
+  pressureRange,
+  type LongDuctRequest,
+} from '../../engine/report/longDuctReport';
 import { CliError, EXIT_OK, UsageError } from '../errors';
 import { checkOutputDir, writeResultsAtomically } from '../writeResults';
 import { prettyJson } from '../prettyJson';
@@ -200,27 +204,32 @@ export const ductCommand = defineCommand({
     const t = (v.temperature as number | undefined) ?? 293.15;
     const tUp = (v.upstreamTemperature as number | undefined) ?? t;
     const tDown = (v.downstreamTemperature as number | undefined) ?? t;
+    const species = speciesOf(v);
+    const request: LongDuctRequest = {
+      geometry,
+      species,
+      table,
+      upstreamTemperatureK: tUp,
+      downstreamTemperatureK: tDown,
+      upstreamPressurePa: v.upstreamPressure as number | undefined,
+      downstreamPressurePa: v.downstreamPressure as number | undefined,
+      massFlowRateKgPerS: v.massFlowRate as number | undefined,
+    };
     if (v.pumpSpeed !== undefined || v.gasLoad !== undefined) {
       if (typeof v.pumpSpeed !== 'number' || typeof v.gasLoad !== 'number')
         throw usage('a pumped duct needs both --set pumpSpeed=… and --set gasLoad=…');
-      let pumped;
-      try {
-        pumped = solvePumpedDuct({
-          geometry,
-          gas,
-          temperatureK: tUp,
-          table,
-          pumpSpeed: v.pumpSpeed,
-          gasLoadPaM3PerS: v.gasLoad,
-        });
-      } catch (e) {
-        throw new CliError(`duct: ${(e as Error).message}`);
-      }
+      const pumpSpeed = v.pumpSpeed;
+      const gasLoad = v.gasLoad;
+      const answer = solved(() =>
+        longDuctAnswer({ ...request, pump: { speedM3PerS: pumpSpeed, gasLoadPaM3PerS: gasLoad } }),
+      );
+      if (answer.kind !== 'pumped') throw new Error('a pumped request gives a pumped answer');
+      const pumped = answer.result;
       const e = (x: { mean: number; ci95: number }, unit: string) =>
         `${formatQuantity(x.mean, unit, 4)} ± ${formatQuantity(x.ci95, unit, 2)}`;
       io.stdout.write(
         [
-          `pump of ${formatQuantity(v.pumpSpeed, 'L/s', 4)} at the outlet of a long ${geometry.shape}, gas load ${formatQuantity(v.gasLoad, 'mbar·L/s', 4)}; coefficients: ${table.source}`,
+          `pump of ${formatQuantity(pumpSpeed, 'L/s', 4)} at the outlet of a long ${geometry.shape}, gas load ${formatQuantity(gasLoad, 'mbar·L/s', 4)}; coefficients: ${table.source}`,
           `  pump inlet pressure       ${formatQuantity(pumped.pumpInletPressurePa, 'Pa', 4)}`,
           `  chamber pressure          ${e(pumped.chamberPressurePa, 'Pa')}`,
           `  effective pumping speed   ${e(pumped.effectiveSpeedM3PerS, 'L/s')}`,
@@ -230,29 +239,21 @@ export const ductCommand = defineCommand({
           'Results are model estimates; defer to local codes, standards and licensed engineering practice.',
         ].join('\n') + '\n',
       );
+      if (o.out) {
+        checkOutputDir(o.out);
+        writeResultsAtomically(o.out, { 'summary.json': `${prettyJson(answer.summary)}\n` });
+      }
       return EXIT_OK;
     }
     if (o.sweep !== undefined) {
-      writeConductanceCurve(o, v, { geometry, gas, table, tUp, tDown });
+      writeConductanceCurve(o, v, { geometry, species, table, tUp, tDown });
       io.stdout.write(`conductance curve written to ${o.out}/conductance.csv\n`);
       return EXIT_OK;
     }
-    let result: DuctFlowResult;
-    try {
-      result = solveDuctFlow({
-        geometry,
-        gas,
-        table,
-        upstreamTemperatureK: tUp,
-        downstreamTemperatureK: tDown,
-        upstreamPressurePa: v.upstreamPressure as number | undefined,
-        downstreamPressurePa: v.downstreamPressure as number | undefined,
-        massFlowRateKgPerS: v.massFlowRate as number | undefined,
-      });
-    } catch (e) {
-      throw new CliError(`duct: ${(e as Error).message}`);
-    }
-    const summary = summaryOf(result, { geometry, gasName: String(v.gas ?? 'N2'), table, tUp, tDown, gas });
+    const answer = solved(() => longDuctAnswer(request));
+    if (answer.kind !== 'flow') throw new Error('a request with pressures gives a flow answer');
+    const result = answer.result;
+    const summary = answer.summary;
     const shown = (x: { mean: number; ci95: number }, unit: string) =>
       `${formatQuantity(x.mean, unit, 4, { molecularMassKg: gas.massKg })} ± ${formatQuantity(x.ci95, unit, 2, { molecularMassKg: gas.massKg })}`;
     const lines = [
@@ -276,66 +277,25 @@ export const ductCommand = defineCommand({
       checkOutputDir(o.out);
       writeResultsAtomically(o.out, {
         'summary.json': `${prettyJson(summary)}\n`,
-        'duct.csv': ductCsv(result),
+        'duct.csv': longDuctProfileCsv(longDuctProfile(request, result)),
       });
     }
     return EXIT_OK;
   },
 });
 
-interface SummaryContext {
-  readonly geometry: DuctGeometry;
-  readonly gasName: string;
-  readonly table: CoefficientTable;
-  readonly tUp: number;
-  readonly tDown: number;
-  readonly gas: ReturnType<typeof modelFromSpecies>;
-}
-
-function summaryOf(r: DuctFlowResult, c: SummaryContext) {
-  const m = c.gas.massKg;
-  const up = r.upstreamPressurePa.mean;
-  const down = r.downstreamPressurePa.mean;
-  const ktUp = K_B * c.tUp;
-  const flow = r.massFlowRateKgPerS;
-  const scale = (f: number) => ({ mean: flow.mean * f, ci95: flow.ci95 * Math.abs(f) });
-  const a = c.geometry.shape === 'tube' ? c.geometry.radiusM : c.geometry.gapM;
-  const area = c.geometry.shape === 'tube' ? Math.PI * a * a : c.geometry.gapM * c.geometry.widthM;
-  const end = (p: number, t: number) => {
-    const delta = (p * a) / (viscosityPaS(c.gas, t) * mostProbableSpeedMPerS(m, t));
-    return { pressure: p, temperature: t, rarefaction: delta, knudsen: Math.sqrt(Math.PI) / (2 * delta) };
-  };
-  const dp = up - down;
-  return {
-    format: 'tenuis long duct',
-    gas: c.gasName,
-    reference: {
-      temperature: c.tUp,
-      viscosity: viscosityPaS(c.gas, c.tUp),
-      mostProbableSpeed: mostProbableSpeedMPerS(m, c.tUp),
-      lengthScale: a,
-    },
-    upstream: end(up, c.tUp),
-    downstream: end(down, c.tDown),
-    flow: {
-      massFlowRate: flow,
-      throughput: scale(ktUp / m),
-      ...(dp > 0
-        ? {
-            conductance: scale(ktUp / (m * dp)),
-            transmissionProbability: scale(1 / (area * dp * Math.sqrt(m / (2 * Math.PI * ktUp)))),
-          }
-        : {}),
-    },
-    coefficients: { source: c.table.source, gasAndWall: c.table.gasAndWall, points: c.table.points.length },
-    units: { pressure: 'Pa', temperature: 'K', massFlowRate: 'kg/s', throughput: 'Pa m^3/s', conductance: 'm^3/s' },
-    warnings: r.warnings,
-  };
+/** The solver's messages name the input that is wrong; on the command line they are errors, not crashes. */
+function solved<T>(f: () => T): T {
+  try {
+    return f();
+  } catch (e) {
+    throw new CliError(`duct: ${(e as Error).message}`);
+  }
 }
 
 interface CurveContext {
   readonly geometry: DuctGeometry;
-  readonly gas: ReturnType<typeof modelFromSpecies>;
+  readonly species: SpeciesId;
   readonly table: CoefficientTable;
   readonly tUp: number;
   readonly tDown: number;
@@ -366,14 +326,12 @@ function writeConductanceCurve(
   const n = Number(o.points);
   if (!Number.isInteger(n) || n < 2 || n > 1000)
     throw usage(`--points ${o.points}: give a whole number from 2 to 1000`);
-  const pressures = Array.from({ length: n }, (_, k) =>
-    o.log ? from * (to / from) ** (k / (n - 1)) : from + ((to - from) * k) / (n - 1),
-  );
+  const pressures = pressureRange(from, to, n, o.log === true);
   let curve;
   try {
-    curve = conductanceCurve({
+    curve = longDuctConductanceCurve({
       geometry: c.geometry,
-      gas: c.gas,
+      species: c.species,
       temperatureK: c.tUp,
       table: c.table,
       upstreamPressuresPa: pressures,
@@ -383,41 +341,6 @@ function writeConductanceCurve(
     throw new CliError(`duct --sweep: ${(e as Error).message}`);
   }
   checkOutputDir(o.out);
-  const csv = csvDocument(
-    [
-      'upstream pressure (Pa)',
-      'mean pressure (Pa)',
-      'mean Knudsen number (1)',
-      'conductance (m^3/s)',
-      'conductance ci95 (m^3/s)',
-      'no-slip (m^3/s)',
-      'first-order slip (m^3/s)',
-      'free-molecular (m^3/s)',
-    ],
-    curve.map((p) => [
-      p.upstreamPressurePa,
-      p.meanPressurePa,
-      p.meanKnudsen,
-      p.conductanceM3PerS.mean,
-      p.conductanceM3PerS.ci95,
-      p.noSlipM3PerS,
-      p.firstOrderSlipM3PerS,
-      Number.isFinite(p.freeMolecularM3PerS) ? p.freeMolecularM3PerS : '',
-    ]),
-  );
+  const csv = conductanceCurveCsv(curve);
   writeResultsAtomically(o.out, { 'conductance.csv': csv });
-}
-
-function ductCsv(r: DuctFlowResult): string {
-  const p = r.profile;
-  const rows: (string | number)[][] = [];
-  for (let k = 0; k < p.xM.length; k += Math.max(1, Math.floor(p.xM.length / 200)))
-    rows.push([
-      p.xM[k],
-      p.pressurePa[k],
-      p.temperatureK[k],
-      p.rarefaction[k],
-      Math.sqrt(Math.PI) / (2 * p.rarefaction[k]),
-    ]);
-  return csvDocument(['x (m)', 'pressure (Pa)', 'temperature (K)', 'rarefaction δ (1)', 'Knudsen number (1)'], rows);
 }

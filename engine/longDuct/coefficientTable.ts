@@ -144,26 +144,29 @@ export function interpolator(t: CoefficientTable): (rarefaction: number) => Inte
  * (ln G_T against ln δ, monotone cubic), where both limits are straight lines: G_T tends to a constant in the
  * free-molecular limit and falls like 1/δ in the slip regime (thermal creep; Sharipov & Seleznev 1998). Outside the
  * table G_T ∝ 1/δ above it, and G_T is held below it (a channel's G_T grows like ln(1/δ)/(2√π) there, half its
- * G_P's growth). G_T must be above 0 at every point.
+ * G_P's growth). G_T must be above 0 at every point that has it; points without it are skipped, and with fewer than
+ * two such points the table has no G_T column.
  */
 export function thermalCreepInterpolator(
   t: CoefficientTable,
 ): ((rarefaction: number) => InterpolatedCoefficient) | null {
   const problem = tableProblem(t);
   if (problem) throw new Error(problem);
-  if (!t.points.every((p) => p.thermalCreep !== undefined)) return null;
-  const bad = t.points.findIndex((p) => !(Number.isFinite(p.thermalCreep) && p.thermalCreep! > 0));
+  // Points without G_T (a DSMC point whose heat flow was not linear in its drive) are left out of this column.
+  const points = t.points.filter((p) => p.thermalCreep !== undefined);
+  if (points.length < 2) return null;
+  const bad = points.findIndex((p) => !(Number.isFinite(p.thermalCreep) && p.thermalCreep! > 0));
   if (bad >= 0)
     throw new Error(
-      `coefficient table "${t.source}": point ${bad + 1} has G_T = ${t.points[bad].thermalCreep}; it must be a number above 0`,
+      `coefficient table "${t.source}": the point at δ = ${points[bad].rarefaction} has G_T = ${points[bad].thermalCreep}; it must be a number above 0`,
     );
-  const x = t.points.map((p) => Math.log(p.rarefaction));
-  const y = t.points.map((p) => Math.log(p.thermalCreep!));
-  const ci = t.points.map((p) => p.thermalCreepCi95 ?? 0);
+  const x = points.map((p) => Math.log(p.rarefaction));
+  const y = points.map((p) => Math.log(p.thermalCreep!));
+  const ci = points.map((p) => p.thermalCreepCi95 ?? 0);
   const m = monotoneSlopes(x, y);
-  const n = t.points.length;
-  const lo = t.points[0];
-  const hi = t.points[n - 1];
+  const n = points.length;
+  const lo = points[0];
+  const hi = points[n - 1];
   return (delta: number) => {
     if (!(delta > 0 && Number.isFinite(delta)))
       throw new Error(`rarefaction ${delta}: must be a finite number above 0`);

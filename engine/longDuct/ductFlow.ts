@@ -234,6 +234,15 @@ export function solveDuctFlow(input: DuctFlowInput): DuctFlowResult {
     warnings.push(
       `rarefaction ${dMin.toPrecision(3)}–${dMax.toPrecision(3)} reaches beyond the table's ${lo.toPrecision(3)}–${hi.toPrecision(3)}: its limits are used there`,
     );
+  const withGt = input.table.points.filter((p) => p.thermalCreep !== undefined);
+  if (gtOf && !isothermal && withGt.length) {
+    const gLo = withGt[0].rarefaction;
+    const gHi = withGt[withGt.length - 1].rarefaction;
+    if (dMin < gLo || dMax > gHi)
+      warnings.push(
+        `rarefaction ${dMin.toPrecision(3)}–${dMax.toPrecision(3)} reaches beyond the table's G_T points ${gLo.toPrecision(3)}–${gHi.toPrecision(3)}: G_T is extrapolated there (held below, ∝ 1/δ above)`,
+      );
+  }
   // Mach number of the mean speed at the outlet, where the gas is thinnest.
   const kt = K_B * input.downstreamTemperatureK;
   const rho = (solved.down * input.gas.massKg) / kt;

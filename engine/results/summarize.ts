@@ -11,7 +11,14 @@
  */
 import type { Plan } from '../plan/plan';
 import type { SampleSet } from './sampleSet';
-import { flowResultOf, type FlowResult } from './flowQuantities';
+import {
+  flowResultOf,
+  isForceDrivenDuct,
+  thermalCreepFromHeatFlux,
+  thermalCreepNonlinearity,
+  type FlowResult,
+} from './flowQuantities';
+import { CELL_FIELDS } from './cellFields';
 import { sectionSeriesKey } from './seriesKeys';
 import { replicaIntegralEstimate } from './integralEstimate';
 import type { IntegralEstimate } from '../stats/estimate';
@@ -124,6 +131,19 @@ export function summarizeSamples(set: SampleSet): SimulationResult {
       );
   }
   const flow = flowResultOf(plan, sections);
+  if (flow && isForceDrivenDuct(plan)) {
+    // The whole cross-section as one group: its mean axial heat flux gives G_T by reciprocity (flowQuantities.ts).
+    let volume = 0;
+    for (let c = 0; c < st.cells; c++) volume += st.cellVolumes[c];
+    const whole = groupedFields(set, new Int32Array(st.cells), 1, Float64Array.of(volume));
+    const f = CELL_FIELDS.findIndex((x) => x.name === 'heatFluxX');
+    flow.values.thermalCreepFlowRate = thermalCreepFromHeatFlux(plan, { mean: whole.mean[f], ci95: whole.ci95[f] });
+    const eps = thermalCreepNonlinearity(plan);
+    if (eps > 0.01)
+      warnings.push(
+        `flow.thermalCreepFlowRate: the body acceleration is too strong for the heat flow to be linear here (nonlinearity ${eps.toPrecision(2)}, about the relative bias of G_T); lower it by a factor of ${Math.ceil(Math.sqrt(eps / 0.01))} for G_T to about 1 % (which needs that factor squared more samples), or take G_T from elsewhere`,
+      );
+  }
 
   if (cells.batches > 0 && longestCorrelationSteps > 0 && cells.batchLengthSteps < 10 * longestCorrelationSteps) {
     warnings.push(

@@ -75,7 +75,16 @@ describe('tenuis duct', () => {
     expect(s.downstream.knudsen).toBeCloseTo(knOut, 9);
     expect(s.coefficients.source).toMatch(/first-order slip/);
     const csv = readFileSync(join(out, 'duct.csv'), 'utf8').split(/\r?\n/);
-    expect(csv[0]).toBe('x (m),pressure (Pa),temperature (K),rarefaction δ (1),Knudsen number (1)');
+    expect(csv[0]).toBe(
+      'x (m),pressure (Pa),temperature (K),rarefaction δ (1),Knudsen number (1),mean speed (m/s),Mach number (1)',
+    );
+    // The last row is the outlet: its mean speed carries the mass flow through ρ_out A (ρ = p m/(kT)).
+    const outlet = csv.filter((line) => line.trim() !== '').at(-1)!.split(',').map(Number);
+    expect(outlet[0]).toBeCloseTo(l, 12);
+    expect(outlet[1] / pOut - 1).toBeLessThan(1e-9);
+    const rhoOut = (pOut * he.massKg) / (K_B * 300);
+    expect(Math.abs((outlet[5] * rhoOut * h * w) / s.flow.massFlowRate.mean - 1)).toBeLessThan(1e-6);
+    expect(s.flow.molarFlow.mean).toBeGreaterThan(0);
   });
 
   it('--sweep upstreamPressure writes the conductance curve with units in every column', () => {

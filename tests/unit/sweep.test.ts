@@ -205,7 +205,7 @@ describe('sweepCsv()', () => {
       'massFlowRate ci95 [kg/(s m)]',
     ]);
     expect(header).toContain('reducedFlowRate ci95 [1]');
-    expect(header.split(',')).toHaveLength(6 + 2 * 6);
+    expect(header.split(',')).toHaveLength(6 + 2 * 7);
     const cells = first.split(',');
     expect(cells.slice(0, 8)).toEqual([
       '1',

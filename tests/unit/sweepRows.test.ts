@@ -108,7 +108,7 @@ describe('sweepRowOf()', () => {
       summary: null,
     });
     const csv = sweepCsv([sweepRowOf(2, 1, { kind: 'failed' })], { parameter: 'knudsen', planar: true, hasFlow: true });
-    expect(csv.trimEnd().split('\n')[1]).toBe(`2,1,failed${','.repeat(3 + 12)}`);
+    expect(csv.trimEnd().split('\n')[1]).toBe(`2,1,failed${','.repeat(3 + 14)}`);
   });
 });
 
