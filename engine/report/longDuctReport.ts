@@ -9,12 +9,7 @@ import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { MOLECULES_PER_S_PER_SCCM } from '../units/engineeringUnits';
 import { SPECIES } from '../gas/species';
 import type { SpeciesId } from '../gas/species';
-import {
-  modelFromSpecies,
-  mostProbableSpeedMPerS,
-  viscosityPaS,
-  type MolecularModel,
-} from '../gas/molecularModel';
+import { modelFromSpecies, mostProbableSpeedMPerS, viscosityPaS, type MolecularModel } from '../gas/molecularModel';
 import { speedOfSoundMPerS } from '../stats/expectedNoise';
 import type { CoefficientTable } from '../longDuct/coefficientTable';
 import { solveDuctFlow, type DuctFlowResult } from '../longDuct/ductFlow';

@@ -79,7 +79,11 @@ describe('tenuis duct', () => {
       'x (m),pressure (Pa),temperature (K),rarefaction δ (1),Knudsen number (1),mean speed (m/s),Mach number (1)',
     );
     // The last row is the outlet: its mean speed carries the mass flow through ρ_out A (ρ = p m/(kT)).
-    const outlet = csv.filter((line) => line.trim() !== '').at(-1)!.split(',').map(Number);
+    const outlet = csv
+      .filter((line) => line.trim() !== '')
+      .at(-1)!
+      .split(',')
+      .map(Number);
     expect(outlet[0]).toBeCloseTo(l, 12);
     expect(outlet[1] / pOut - 1).toBeLessThan(1e-9);
     const rhoOut = (pOut * he.massKg) / (K_B * 300);
