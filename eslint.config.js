@@ -71,6 +71,8 @@ export const APP_BRIDGE = [
   'app/bridge/runApi.ts',
   'app/bridge/sweepApi.ts',
   'app/bridge/liveViews.ts',
+  // The long-duct chunk (loadLongDuctApi).
+  'app/bridge/longDuctApi.ts',
 ];
 
 /**

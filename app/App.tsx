@@ -17,6 +17,7 @@ import { ResultPanels } from './results/ResultPanels';
 import { LiveProfile } from './run/LiveProfile';
 import { SavedRunsView } from './saved/SavedRunsView';
 import { SweepView } from './sweep/SweepView';
+import { LongDuctView } from './longDuct/LongDuctView';
 import { DropTarget } from './setup/DropTarget';
 import { Footer } from './Footer';
 
@@ -25,6 +26,7 @@ const VIEWS: readonly { id: ViewName; label: string }[] = [
   { id: 'run', label: '2 Run' },
   { id: 'results', label: '3 Results' },
   { id: 'sweep', label: 'Sweep' },
+  { id: 'longDuct', label: 'Long duct' },
   { id: 'saved', label: 'Saved runs' },
 ];
 
@@ -153,6 +155,7 @@ export function App() {
         )}
         {ready && view === 'results' && <ResultPanels />}
         {ready && view === 'sweep' && <SweepView />}
+        {ready && view === 'longDuct' && <LongDuctView />}
         {ready && view === 'saved' && <SavedRunsView />}
       </main>
       <DropTarget />

@@ -4,7 +4,7 @@
  * promises (types.ts), so the type check fails here if a chunk stops providing a member. Everything else in app/
  * imports the chunks' types only, so the engine never lands in the main bundle.
  */
-import type { RunApi, SetupApi } from './types';
+import type { LongDuctApi, RunApi, SetupApi } from './types';
 
 let setup: SetupApi | null = null;
 let setupLoading: Promise<SetupApi> | null = null;
@@ -31,4 +31,12 @@ export function loadRunApi(): Promise<RunApi> {
 /** The run API if it has been loaded (it always has once a result exists), else null. */
 export function runApiIfLoaded(): RunApi | null {
   return run;
+}
+
+let longDuctLoading: Promise<LongDuctApi> | null = null;
+
+/** The long-duct chunk (the Long duct view loads it when first shown). */
+export function loadLongDuctApi(): Promise<LongDuctApi> {
+  longDuctLoading ??= import('./longDuctApi').then((m: LongDuctApi) => m);
+  return longDuctLoading;
 }

@@ -8,6 +8,6 @@ export { parseCase } from '../../engine/case/schema';
 export { SIDE_NAMES, WALL_MODELS, COLLISION_MODELS } from '../../engine/case/caseConstants';
 export { SPECIES, SPECIES_IDS } from '../../engine/gas/species';
 export { AVOGADRO_PER_MOL } from '../../engine/physics/constants';
-export { unitsOf, convertFromSI, formatQuantity } from '../../engine/units/engineeringUnits';
+export { unitsOf, convertFromSI, convertToSI, formatQuantity } from '../../engine/units/engineeringUnits';
 export { describePlan } from './planView';
 export { deriveCase, checkCaseText } from './deriveCase';

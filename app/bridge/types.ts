@@ -19,6 +19,15 @@ import type { SweepPointRun } from '../../engine/report/sweepRow';
 import type { SweepContinuumCurves } from '../../engine/report/sweepCurves';
 import type { SpeciesData, SpeciesId } from '../../engine/gas/species';
 import type { ConversionContext, QuantityKind } from '../../engine/units/engineeringUnits';
+import type {
+  ConductanceCurveRequest,
+  LongDuctAnswer,
+  LongDuctProfileRows,
+  LongDuctRequest,
+} from '../../engine/report/longDuctReport';
+import type { DuctFlowResult } from '../../engine/longDuct/ductFlow';
+import type { ConductancePoint } from '../../engine/longDuct/conductanceCurve';
+import type { CoefficientTable } from '../../engine/longDuct/coefficientTable';
 import type { ContinuumComparison, ContinuumComparisonResult } from '../../engine/report/comparison';
 import type { ContinuumModelName } from '../../engine/continuum/caseModelTypes';
 import type { SimulationResult } from '../../engine/results/summarize';
@@ -69,6 +78,7 @@ export interface SetupApi {
   readonly AVOGADRO_PER_MOL: number;
   unitsOf(kind: QuantityKind): readonly string[];
   convertFromSI(valueSI: number, unit: string, context?: ConversionContext): number;
+  convertToSI(value: number, unit: string, context?: ConversionContext): number;
   formatQuantity(valueSI: number, unit: string, significantDigits?: number, context?: ConversionContext): string;
   /** The set-up form to a case, its JSON text and the messages at the fields they concern. */
   deriveCase(form: FormState): CaseDerivation;
@@ -132,4 +142,16 @@ export interface RunApi extends SweepApi {
   extraTimeText(headline: Headline, sampledSeconds: number): string;
   sampledWallSeconds(wallSeconds: number, sampleSteps: number, steps: number): number;
   cutProfileCsv(cut: CutProfileTable, predictions?: readonly CutPrediction[]): string;
+}
+
+/** The long-duct chunk: the long-duct answer and its files, the shipped coefficient tables, a table's check. */
+export interface LongDuctApi {
+  longDuctAnswer(request: LongDuctRequest): LongDuctAnswer;
+  longDuctProfile(request: LongDuctRequest, result: DuctFlowResult, points?: number): LongDuctProfileRows;
+  longDuctProfileCsv(rows: LongDuctProfileRows): string;
+  longDuctConductanceCurve(request: ConductanceCurveRequest): ConductancePoint[];
+  conductanceCurveCsv(curve: readonly ConductancePoint[]): string;
+  pressureRange(fromPa: number, toPa: number, n: number, log: boolean): number[];
+  readonly BUILTIN_TABLES: readonly CoefficientTable[];
+  tableProblem(table: CoefficientTable): string | null;
 }

@@ -1,10 +1,13 @@
 /**
- * Work kept in the browser's IndexedDB (through idb): the set-up as last edited, the units chosen for flow numbers, finished and stopped runs, sweeps
+ * Work kept in the browser's IndexedDB (through idb): the set-up as last edited, the units chosen for flow numbers, the
+ * Long duct view's form and the coefficient tables loaded into it, finished and stopped runs, sweeps
  * (saved as each point ends), and the measured speed of a replica worker. A reload restores all of it. The stores
  * and the upgrade from older versions are in dbUpgrade.ts.
  */
 import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
 import type { FormState } from '../setup/formModel';
+import type { LongDuctFormState } from '../longDuct/longDuctForm';
+import type { CoefficientTable } from '../../engine/longDuct/coefficientTable';
 import { metaOf, type SavedRunMeta, type SavedRunRecord } from '../saved/savedRun';
 import { isSavedSweepRecord, sweepMetaOf, type SavedSweepMeta, type SavedSweepRecord } from '../sweep/savedSweep';
 import { upgradeWorkbenchDb, WORKBENCH_DB_NAME, WORKBENCH_DB_VERSION } from './dbUpgrade';
@@ -48,6 +51,25 @@ export async function saveSpeed(particleStepsPerSecond: number): Promise<void> {
 export async function loadSpeed(): Promise<number | undefined> {
   const v = await (await db()).get('settings', 'speed');
   return typeof v === 'number' ? v : undefined;
+}
+
+/** The Long duct view's form as last edited (settings key 'longDuctForm'). */
+export async function saveLongDuctForm(form: LongDuctFormState): Promise<void> {
+  await (await db()).put('settings', form, 'longDuctForm');
+}
+
+export async function loadLongDuctForm(): Promise<LongDuctFormState | undefined> {
+  return (await (await db()).get('settings', 'longDuctForm')) as LongDuctFormState | undefined;
+}
+
+/** Coefficient tables the user loaded (settings key 'coefficientTables'), reused on every visit. */
+export async function saveCoefficientTables(tables: readonly CoefficientTable[]): Promise<void> {
+  await (await db()).put('settings', [...tables], 'coefficientTables');
+}
+
+export async function loadCoefficientTables(): Promise<CoefficientTable[]> {
+  const v = await (await db()).get('settings', 'coefficientTables');
+  return Array.isArray(v) ? (v as CoefficientTable[]) : [];
 }
 
 /** The unit chosen for each flow number in the results card (settings key 'flowUnits'). */

@@ -103,7 +103,7 @@ export interface ResultsSlice {
   setCompare(id: string | null): void;
 }
 
-export type ViewName = 'setup' | 'run' | 'results' | 'sweep' | 'saved';
+export type ViewName = 'setup' | 'run' | 'results' | 'sweep' | 'longDuct' | 'saved';
 
 export interface UiSlice {
   readonly view: ViewName;

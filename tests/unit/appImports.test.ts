@@ -19,6 +19,7 @@ const LAZY = new Set([
   'app/bridge/runApi.ts',
   'app/bridge/sweepApi.ts',
   'app/bridge/liveViews.ts',
+  'app/bridge/longDuctApi.ts',
 ]);
 
 function files(dir: string): string[] {
