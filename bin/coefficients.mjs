@@ -1,5 +1,5 @@
 #!/usr/bin/env node
-// `npm run coefficients [-- --only channel|tube] [--time-cap S]`: computes the built-in coefficient tables of
+// `npm run coefficients [-- --only channel|tube] [--time-cap S] [--replicas R]`: computes the built-in coefficient tables of
 // engine/longDuct/tables/ again with Tenuis's own DSMC (tenuis coefficients: a sweep of force-driven runs over the
 // rarefaction), hard-sphere argon, diffuse walls, δ from 0.01 to 10 at 7 points. Not part of npm test: each table
 // takes a quarter to half an hour on one core. DEVELOPERS.md ("Built-in coefficient tables") says what they hold.
@@ -16,8 +16,11 @@ const TABLES = [
   { shape: 'channel', preset: 'poiseuille', file: 'channel-argon-hard-sphere.json' },
   { shape: 'tube', preset: 'forceDrivenTube', file: 'tube-argon-hard-sphere.json' },
 ];
-const { values } = parseArgs({ options: { only: { type: 'string' }, 'time-cap': { type: 'string' } } });
+const { values } = parseArgs({
+  options: { only: { type: 'string' }, 'time-cap': { type: 'string' }, replicas: { type: 'string' } },
+});
 const cap = values['time-cap'] ?? '1200';
+const replicas = values.replicas ?? '1';
 const wanted = TABLES.filter((t) => !values.only || t.shape === values.only);
 if (!wanted.length) {
   process.stderr.write(`--only ${values.only}: give one of ${TABLES.map((t) => t.shape).join(', ')}\n`);
@@ -63,7 +66,7 @@ for (const t of wanted) {
       { stdio: 'inherit' },
     );
     const table = JSON.parse(readFileSync(out, 'utf8'));
-    table.source = `${table.source.replace(/ \(every point in .*\)$/, '')} (${points} points, δ ${from}–${to}, time cap ${cap} s on one replica; npm run coefficients)`;
+    table.source = `${table.source.replace(/ \(every point in .*\)$/, '')} (${points} points, δ ${from}–${to}, time cap ${cap} s, ${replicas} replica${replicas === '1' ? '' : 's'} per point; npm run coefficients)`;
     writeFileSync(join(root, 'engine', 'longDuct', 'tables', t.file), `${JSON.stringify(table, null, 2)}\n`);
     process.stderr.write(`written engine/longDuct/tables/${t.file}\n`);
   } finally {

@@ -86,8 +86,8 @@ summary.json and duct.csv (pressure, temperature, rarefaction and Knudsen number
 Results are model estimates: defer to local codes, standards and licensed engineering practice for vacuum vessels
 and pressurised parts.
   --set NAME=VALUE      a parameter (units accepted, e.g. radius=20mm, upstreamPressure=0.01mbar, temperature=20C)
-  --coefficients FILE   the coefficient table (JSON, from tenuis coefficients); without it a channel uses the
-                        built-in table (hard-sphere argon, diffuse walls) and says so; a tube needs one
+  --coefficients FILE   the coefficient table (JSON, from tenuis coefficients); without it the built-in table of
+                        the shape (hard-sphere argon, diffuse walls) is used, and the output says so
   --out, -o DIR         output folder for summary.json and duct.csv
   --sweep upstreamPressure --from A --to B --points N [--log]
                         instead: the conductance over upstream pressures A to B at the pressure ratio the two set

@@ -24,9 +24,9 @@ import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import type { Plan } from '../plan/plan';
 import { meanSpeedMPerS } from '../gas/molecularModel';
 import { surfaceAreaM2 } from '../geometry/surfaces';
-import { flowReferenceOf, openingAreaM2 } from '../results/flowQuantities';
+import { flowReferenceOf, isCrossSectionFlow, openingAreaM2 } from '../results/flowQuantities';
 import type { CaseModelsResult, ContinuumModelName } from '../continuum/caseModelTypes';
-import { NOISE_CORRELATION_FACTOR, wallFactor, type NoiseKind } from './noiseCalibration';
+import { NOISE_CORRELATION_FACTOR, forceDrivenTubeFactor, wallFactor, type NoiseKind } from './noiseCalibration';
 
 export type { NoiseKind };
 
@@ -128,6 +128,11 @@ export function headlineNoiseOf(plan: Plan, models: CaseModelsResult): HeadlineN
   const model = modelValue(models, path);
   const parts = path.split('.');
   if (parts[0] === 'flow' && parts[1] === 'massFlowRate') {
+    if (isCrossSectionFlow(plan))
+      return {
+        sized: false,
+        reason: 'the flow along a cross-section (bodyAccelerationZMPerS2) has no noise calibration yet',
+      };
     const r = plan.caseData.flowReport;
     if (!r) return { sized: false, reason: 'the flow rate has no flowReport to give the section size' };
     const c = plan.caseData;
@@ -152,7 +157,9 @@ export function headlineNoiseOf(plan: Plan, models: CaseModelsResult): HeadlineN
     const opening = openingAreaM2(r);
     const kind: NoiseKind =
       c.bodyAccelerationXMPerS2 !== 0
-        ? 'forceDriven'
+        ? plan.grid.axisymmetric
+          ? 'forceDrivenAxisymmetric'
+          : 'forceDriven'
         : plan.grid.axisymmetric
           ? area > 1.5 * opening
             ? 'vesselSectionAxisymmetric'
@@ -164,7 +171,16 @@ export function headlineNoiseOf(plan: Plan, models: CaseModelsResult): HeadlineN
       kind,
       expectedMean,
       expectedFrom,
-      varianceTimesSeconds: NOISE_CORRELATION_FACTOR[kind] * 2 * m * m * w * j * area,
+      varianceTimesSeconds:
+        (kind === 'forceDrivenAxisymmetric'
+          ? forceDrivenTubeFactor(plan.grid.cellsY, plan.reference.rarefaction)
+          : NOISE_CORRELATION_FACTOR[kind]) *
+        2 *
+        m *
+        m *
+        w *
+        j *
+        area,
     };
   }
   if (parts[0] === 'walls' && parts.length === 3 && (parts[2] === 'shearStress' || parts[2] === 'heatFlux')) {
