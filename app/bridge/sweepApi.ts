@@ -5,7 +5,13 @@
  */
 import { parseCase, type Case } from '../../engine/case/schema';
 import { wallNamesOf } from '../../engine/kernel/sideTable';
-import { FLOW_QUANTITIES, flowQuantityUnits, flowQuantityDefined } from '../../engine/results/flowQuantities';
+import {
+  FLOW_QUANTITIES,
+  flowQuantityUnits,
+  flowQuantityDefined,
+  flowPerDepth,
+  hasFlowResult,
+} from '../../engine/results/flowQuantities';
 import { WALL_QUANTITY_UNITS } from '../../engine/results/wallQuantities';
 import { planSweepPoints } from '../../engine/plan/sweepPoints';
 import { sweepContinuumCurves, type SweepContinuumCurves } from '../../engine/report/sweepCurves';
@@ -79,8 +85,8 @@ export function planSweep(caseInput: unknown, r: SweepRequest): SweepPlanView {
       ok: false,
       message: `point ${planned.point} of ${r.points} (${r.parameter} = ${Number(planned.value.toPrecision(6))}) cannot run as set up: ${planned.errors.join('; ')}`,
     };
-  const planar = c.domain.geometry !== 'axisymmetric';
-  const hasFlow = c.flowSections.length > 0;
+  const planar = flowPerDepth(planned.points[0].plan);
+  const hasFlow = hasFlowResult(planned.points[0].plan);
   const flowUnits = flowQuantityUnits(planar);
   const quantities: SweepQuantity[] = hasFlow
     ? FLOW_QUANTITIES.filter((q) => flowQuantityDefined(planned.points[0].plan, q)).map((q) => ({

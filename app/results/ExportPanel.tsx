@@ -37,7 +37,7 @@ export function ExportPanel({ entry }: { entry: CachedResult }) {
         (options.find((c) => c.unit === chosen[q]) ?? options[0]).unit,
       ]),
     );
-    downloadText(`${base}-flow.csv`, api.flowCsv(f, !entry.result.axisymmetric, { chosenUnits }), CSV);
+    downloadText(`${base}-flow.csv`, api.flowCsv(f, f.perDepth ?? !entry.result.axisymmetric, { chosenUnits }), CSV);
   };
   const summary = async () => {
     const api = await loadRunApi();

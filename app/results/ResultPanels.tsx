@@ -21,7 +21,10 @@ export function ResultPanels() {
   const compared = useComparedResult();
   const flow = useMemo(() => {
     if (!entry) return null;
-    return flowNumbersOf(entry.result, runApiIfLoaded()?.flowQuantityUnits(!entry.result.axisymmetric) ?? {});
+    return flowNumbersOf(
+      entry.result,
+      runApiIfLoaded()?.flowQuantityUnits(entry.result.flow?.perDepth ?? !entry.result.axisymmetric) ?? {},
+    );
   }, [entry?.result]);
   const comparison = useMemo(() => {
     const api = runApiIfLoaded();

@@ -24,6 +24,7 @@ import { sweepCsv } from '../../engine/report/sweepTable';
 import type { SweepRow } from '../../engine/report/sweepRow';
 import type { PlannedSweepPoint } from '../../engine/plan/sweepPoints';
 import { planSweepPoints } from '../../engine/plan/sweepPoints';
+import { flowPerDepth, hasFlowResult } from '../../engine/results/flowQuantities';
 import { caseValueOf } from '../../engine/plan/sweepPoints';
 import { parseQuantity } from '../../engine/units/engineeringUnits';
 import type { SampleSet } from '../../engine/results/sampleSet';
@@ -268,11 +269,10 @@ const plannedWork = (p: Plan) => p.initialParticles * (p.transientSteps + p.samp
 export async function sweep(o: SweepOptions, io: CommandIO, interruptWatch: () => Interrupt): Promise<number> {
   const { caseName, points } = planPoints(o);
   checkOutputDir(o.outDir);
-  const base = points[0].caseData;
   const table = {
     parameter: o.parameter,
-    planar: base.domain.geometry !== 'axisymmetric',
-    hasFlow: base.flowSections.length > 0,
+    planar: flowPerDepth(points[0].plan),
+    hasFlow: hasFlowResult(points[0].plan),
   };
   const rows: SweepRow[] = [];
   const writeTable = (interrupted: boolean) =>

@@ -51,6 +51,15 @@ export const caseShape = z.strictObject({
   bodyAccelerationXMPerS2: bounded('bodyAccelerationXMPerS2 (m/s²)', { min: -1e15, max: 1e15, unit: 'm/s²' }).default(
     0,
   ),
+  /**
+   * Uniform body acceleration along z (m/s²), out of the plane of a planar domain: the domain is then a duct's
+   * cross-section and the gas is driven along the duct (the cross-section mode). Left out: 0.
+   */
+  bodyAccelerationZMPerS2: bounded('bodyAccelerationZMPerS2 (m/s²)', {
+    min: -1e15,
+    max: 1e15,
+    unit: 'm/s²',
+  }).optional(),
   flowReport: flowReportSchema.optional(),
   /** How DSMC is compared with the continuum models: the relative deviation a model may have and be adequate. */
   comparison: z

@@ -82,6 +82,11 @@ export function checkGeometry(c: CaseDraft, report: Report): void {
     if (b[side].type === 'pressureOutlet' && side !== 'left' && side !== 'right')
       report('a pressureOutlet ends a duct along x: use it on the left or right side', ['boundaries', side, 'type']);
   }
+  if (axisymmetric && (c.bodyAccelerationZMPerS2 ?? 0) !== 0)
+    report(
+      'bodyAccelerationZMPerS2: z is the swirl direction of an axisymmetric domain; a cross-section driven along the duct needs a planar domain',
+      ['bodyAccelerationZMPerS2'],
+    );
   if (axisymmetric) {
     if (b.bottom.type !== 'axis')
       report(

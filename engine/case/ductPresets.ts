@@ -1,6 +1,6 @@
 /**
  * The presets for sizing flows through ducts, one module each: a force-driven periodic channel (poiseuillePreset.ts)
- * and round tube (forceDrivenTubePreset.ts),
+ * and round tube (forceDrivenTubePreset.ts), the cross-section of a rectangular duct (rectangularDuctPreset.ts),
  * a planar channel and a round tube between two vessels (channelPreset.ts, tubePreset.ts), a thin plate with a slit
  * (planar, slitPreset.ts) and with a circular orifice (axisymmetric, orificePreset.ts); what they share is in
  * ductPresetParts.ts and ductBetweenVessels.ts.
@@ -17,9 +17,10 @@
  */
 import { poiseuille } from './poiseuillePreset';
 import { forceDrivenTube } from './forceDrivenTubePreset';
+import { rectangularDuct } from './rectangularDuctPreset';
 import { channel } from './channelPreset';
 import { tube } from './tubePreset';
 import { slit } from './slitPreset';
 import { orifice } from './orificePreset';
 
-export const DUCT_PRESETS = { poiseuille, forceDrivenTube, channel, tube, slit, orifice } as const;
+export const DUCT_PRESETS = { poiseuille, forceDrivenTube, rectangularDuct, channel, tube, slit, orifice } as const;

@@ -25,6 +25,7 @@ export type CaseProblem =
   | 'forceDrivenTube'
   | 'pressureDrivenChannel'
   | 'pressureDrivenTube'
+  | 'rectangularDuct'
   | 'cavity';
 
 /**

@@ -10,6 +10,8 @@
  *   acceleration ≠ 0, walls at rest at one temperature (caseModelsForceDriven.ts);
  * - Couette: planar, periodic in x, bottom and top walls at one temperature moving along x at different speeds;
  * - Fourier: planar, periodic in x, bottom and top walls at rest at different temperatures (caseModelsGap.ts);
+ * - the cross-section of a rectangular duct driven along it: planar, walls at rest on all four sides at one
+ *   temperature, body acceleration along z, no blocks (caseModelsCrossSection.ts; the preset `rectangularDuct`);
  * - lid-driven cavity: planar square with walls on all four sides at one temperature, only the top side moving,
  *   along x (caseModelsCavity.ts; the preset `cavity`).
  * Walls must be diffuse or Maxwell walls with the same accommodation σ everywhere (σ is the tangential momentum and
@@ -31,6 +33,8 @@ import {
 } from './slipCoefficients';
 import type { SlipChoice } from './caseModelsGap';
 import { forceDrivenTubePredictions } from './caseModelsForceDriven';
+import { crossSectionPredictions } from './caseModelsCrossSection';
+import { isCrossSectionFlow } from '../results/flowQuantities';
 import {
   atRest,
   cavityCaseModels,
@@ -99,6 +103,7 @@ export function caseModelsOf(plan: Plan, options: CaseModelOptions = {}): CaseMo
       ...applicability,
     }),
   };
+  if (isCrossSectionFlow(plan)) return crossSectionCaseModels(x);
   const report = c.flowReport;
   if (
     report &&
@@ -136,5 +141,38 @@ export function caseModelsOf(plan: Plan, options: CaseModelOptions = {}): CaseMo
     return cavityCaseModels(x, left, right, bottom, top);
   return unrecognised(
     'not one of the analytic problems (Couette, Fourier, force-driven channel or tube, long pressure-driven channel or tube, lid-driven cavity)',
+  );
+}
+
+/** The cross-section of a rectangular duct driven along it (see the file header). */
+function crossSectionCaseModels(x: RecogniserContext): CaseModelsResult {
+  const { plan } = x;
+  const c = plan.caseData;
+  if (c.blocks.length > 0)
+    return unrecognised('the cross-section has solid blocks: no series solution applies to its shape (DSMC only)');
+  const b = plan.boundaries;
+  const sides = [
+    [b.left, 'left'],
+    [b.right, 'right'],
+    [b.bottom, 'bottom'],
+    [b.top, 'top'],
+  ] as const;
+  const walls = sides.filter(([s]) => isWall(s));
+  if (walls.length !== 4 || !walls.every(([s]) => isWall(s) && atRest(s)))
+    return unrecognised('a cross-section is compared as a rectangular duct only with walls at rest on all four sides');
+  const wallSpecs = walls.map(([s, n]) => [s, n] as [Extract<typeof s, { type: 'wall' }>, string]);
+  if (new Set(wallSpecs.map(([s]) => s.temperatureK)).size > 1)
+    return unrecognised('the walls of the cross-section are at different temperatures: no isothermal series applies');
+  const sigma = commonAccommodation(wallSpecs);
+  if (typeof sigma === 'string') return unrecognised(sigma);
+  const p = crossSectionPredictions(plan, x.gas, sigma, x.slip);
+  const present: ContinuumModelName[] =
+    sigma === 1 ? ['noSlip', 'firstOrder', 'freeMolecular'] : ['noSlip', 'firstOrder'];
+  return x.result(
+    'rectangularDuct',
+    'fully developed flow along a rectangular duct, driven by a uniform axial acceleration (linearized)',
+    p,
+    present,
+    forceDrivenApplicability(x.gas, p.noSlipCentreSpeedMPerS, present),
   );
 }

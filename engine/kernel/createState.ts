@@ -84,6 +84,7 @@ export function createState(plan: Plan, stream = 0): SimState {
     outletMoments: initialOutletMoments(plan, inflowTable),
     hasPressureOutlets: plan.surfaces.some((f) => f.spec.type === 'pressureOutlet'),
     bodyAccelerationX: plan.bodyAccelerationXMPerS2,
+    bodyAccelerationZ: plan.bodyAccelerationZMPerS2,
     leaks: 0,
     subcellsPerSide: g.subcellsPerCellSide,
     subcellsPerCell,

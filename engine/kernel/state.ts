@@ -78,6 +78,8 @@ export interface SimState extends SamplingGeometry {
   readonly hasPressureOutlets: boolean;
   /** Uniform body acceleration along x, m/s². */
   readonly bodyAccelerationX: number;
+  /** Uniform body acceleration along z (out of the plane), m/s². */
+  readonly bodyAccelerationZ: number;
   /** Particles found inside a solid after a flight (must stay 0; reported so a test can hold it to that). */
   leaks: number;
 

@@ -61,6 +61,8 @@ export interface Plan {
   readonly surfaces: readonly SurfacePlan[];
   /** Uniform body acceleration along x, m/s². */
   readonly bodyAccelerationXMPerS2: number;
+  /** Along z, out of the plane: a duct's cross-section driven along the duct (0 unless the case sets it). */
+  readonly bodyAccelerationZMPerS2: number;
   readonly timeStepS: number;
   readonly particlesPerCell: number;
   readonly moleculesPerParticle: number;
@@ -269,7 +271,8 @@ export function plan(c: Case, options: PlanOptions = {}): PlanResult {
   const length = Math.max(lx, ly);
   // A body force keeps accelerating molecules between collisions: the slowest part of the distribution (grazing
   // molecules) settles over a few collision times, which near free-molecular flow is far longer than the crossings.
-  const forcedRelaxTime = c.bodyAccelerationXMPerS2 !== 0 ? 5 * ref.meanCollisionTimeS : 0;
+  const forcedRelaxTime =
+    c.bodyAccelerationXMPerS2 !== 0 || (c.bodyAccelerationZMPerS2 ?? 0) !== 0 ? 5 * ref.meanCollisionTimeS : 0;
   const relaxTime = Math.max(
     (10 * length) / ref.mostProbableSpeedMPerS,
     (0.7 * length * length * ref.massDensityKgPerM3) / ref.viscosityPaS,
@@ -344,6 +347,7 @@ export function plan(c: Case, options: PlanOptions = {}): PlanResult {
       boundaries: b,
       surfaces,
       bodyAccelerationXMPerS2: c.bodyAccelerationXMPerS2,
+      bodyAccelerationZMPerS2: c.bodyAccelerationZMPerS2 ?? 0,
       timeStepS,
       particlesPerCell,
       moleculesPerParticle,

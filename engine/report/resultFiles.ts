@@ -27,7 +27,7 @@ export function resultFiles(result: SimulationResult, extra: SummaryExtra & { pl
     'profiles.csv': profilesCsv(result, comparison),
     'fields.csv': fieldsCsv(result),
     'surfaces.csv': surfacesCsv(result),
-    ...(result.flow ? { 'flow.csv': flowCsv(result.flow, !result.axisymmetric) } : {}),
+    ...(result.flow ? { 'flow.csv': flowCsv(result.flow, result.flow.perDepth ?? !result.axisymmetric) } : {}),
     ...(comparison?.recognised ? { 'verdict.csv': verdictCsv(comparison) } : {}),
   };
 }

@@ -132,7 +132,7 @@ export function summaryJson(result: SimulationResult, extra: SummaryExtra): Summ
     performance[key] = jsonNumber(extra.performance[key]);
     units[key] = PERFORMANCE_UNITS[key];
   }
-  const flow = result.flow ? flowJson(result.flow, units, !result.axisymmetric) : undefined;
+  const flow = result.flow ? flowJson(result.flow, units, result.flow.perDepth ?? !result.axisymmetric) : undefined;
   const continuum = extra.comparison ? continuumJson(extra.comparison, units) : {};
   return {
     format: SUMMARY_FORMAT,

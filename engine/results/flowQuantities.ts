@@ -68,6 +68,8 @@ export interface FlowResult {
   readonly upstreamPressurePa: number;
   readonly downstreamPressurePa: number;
   readonly temperatureK: number;
+  /** Per metre of depth (a planar case whose flow crosses its sections); false for a tube or a cross-section. */
+  readonly perDepth: boolean;
 }
 
 /** The pressures and temperature the flow numbers are based on: flowReport's, else the left and right reservoirs'. */
@@ -95,6 +97,8 @@ export function isForceDrivenDuct(plan: Plan): boolean {
 /** Whether the case defines a flow number (a case with flow sections always has the mass flow and its multiples). */
 export function flowQuantityDefined(plan: Plan, q: FlowQuantityName): boolean {
   const c = plan.caseData;
+  if (isCrossSectionFlow(plan))
+    return q !== 'conductance' && q !== 'transmissionProbability' && q !== 'thermalCreepFlowRate';
   const { up, down } = flowReferenceOf(plan);
   const dp = up - down;
   const r = c.flowReport;
@@ -143,6 +147,65 @@ export function thermalCreepNonlinearity(plan: Plan): number {
   return drive * drive * (c.flowReport!.duct === 'tube' ? kn : kn * kn);
 }
 
+/** A planar case driven along z (out of the plane): its domain is a duct's cross-section, the flow along the duct. */
+export function isCrossSectionFlow(plan: Plan): boolean {
+  return !plan.grid.axisymmetric && plan.bodyAccelerationZMPerS2 !== 0;
+}
+
+/** Whether a run of the case reports flow numbers: through its flow sections, or along the duct of a cross-section. */
+export function hasFlowResult(plan: Plan): boolean {
+  return plan.caseData.flowSections.length > 0 || isCrossSectionFlow(plan);
+}
+
+/** Whether the case's flow numbers are per metre of depth (planar flow through sections). */
+export function flowPerDepth(plan: Plan): boolean {
+  return !plan.grid.axisymmetric && !isCrossSectionFlow(plan);
+}
+
+/** The side H of a cross-section that G_P and δ are based on: the case's length scale (domain.characteristicLengthM). */
+export function crossSectionScaleM(plan: Plan): number {
+  return plan.reference.lengthScaleM;
+}
+
+/**
+ * The flow along a duct whose cross-section is the domain (the cross-section mode), from the cross-section's mean
+ * density ρ̄ and mean axial velocity ū_z (every particle of every cell, with their half-widths): ṁ = ρ̄ ū_z A through
+ * the gas area A (m²), and G_P in the normalisation of a rectangle of height H and width W = A/H,
+ * ṁ = (H² W / v0)(−dp/dx) G_P with −dp/dx = ρ a (a the body acceleration along z), so that W → ∞ gives the planar
+ * channel's G_P per width. No sections are crossed, so `sections` is empty.
+ */
+export function crossSectionFlowOf(
+  plan: Plan,
+  meanDensity: Estimate,
+  meanVelocityZ: Estimate,
+  areaM2: number,
+): FlowResult {
+  const m = plan.gas.model.massKg;
+  const t = plan.reference.temperatureK;
+  const mean = meanDensity.mean * meanVelocityZ.mean * areaM2;
+  // The axial velocity's scatter dominates; the density's (a few particles' worth) is added in quadrature.
+  const ci95 =
+    Math.abs(mean) * Math.hypot(meanVelocityZ.ci95 / meanVelocityZ.mean, meanDensity.ci95 / meanDensity.mean);
+  const scaled = (factor: number): Estimate => ({ mean: mean * factor, ci95: ci95 * Math.abs(factor) });
+  const h = crossSectionScaleM(plan);
+  const v0 = Math.sqrt((2 * K_B * t) / m);
+  const gradient = plan.reference.massDensityKgPerM3 * plan.bodyAccelerationZMPerS2;
+  return {
+    section: 'crossSection',
+    sections: {},
+    values: {
+      massFlowRate: { mean, ci95 },
+      throughput: scaled((K_B * t) / m),
+      molarFlow: scaled(1 / (m * MOLECULES_PER_S_PER_SCCM)),
+      reducedFlowRate: scaled(v0 / (h * areaM2 * gradient)),
+    },
+    upstreamPressurePa: NaN,
+    downstreamPressurePa: NaN,
+    temperatureK: t,
+    perDepth: false,
+  };
+}
+
 /** Flow numbers from the mass flow rate estimate of each section; undefined when the case has no sections. */
 export function flowResultOf(plan: Plan, sections: Record<string, IntegralEstimate>): FlowResult | undefined {
   const c = plan.caseData;
@@ -173,5 +236,13 @@ export function flowResultOf(plan: Plan, sections: Record<string, IntegralEstima
     const scale = r.duct === 'channel' ? r.sizeM * r.sizeM : Math.PI * r.sizeM ** 3;
     if (Number.isFinite(gradient) && gradient !== 0) values.reducedFlowRate = scaled(v0 / (scale * gradient));
   }
-  return { section, sections, values, upstreamPressurePa: up, downstreamPressurePa: down, temperatureK: t };
+  return {
+    section,
+    sections,
+    values,
+    upstreamPressurePa: up,
+    downstreamPressurePa: down,
+    temperatureK: t,
+    perDepth: !plan.grid.axisymmetric,
+  };
 }

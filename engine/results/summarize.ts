@@ -12,7 +12,9 @@
 import type { Plan } from '../plan/plan';
 import type { SampleSet } from './sampleSet';
 import {
+  crossSectionFlowOf,
   flowResultOf,
+  isCrossSectionFlow,
   isForceDrivenDuct,
   thermalCreepFromHeatFlux,
   thermalCreepNonlinearity,
@@ -130,8 +132,18 @@ export function summarizeSamples(set: SampleSet): SimulationResult {
         `flow.sections.${name}.massFlowRate: no plateau in the blocking analysis; its error bar may be too small — sample longer`,
       );
   }
-  const flow = flowResultOf(plan, sections);
-  if (flow && isForceDrivenDuct(plan)) {
+  let flow = flowResultOf(plan, sections);
+  if (isCrossSectionFlow(plan)) {
+    // The flow along the duct, from every particle's axial velocity (flowQuantities.ts).
+    let area = 0;
+    for (let c = 0; c < st.cells; c++) area += st.cellVolumes[c];
+    const whole = groupedFields(set, new Int32Array(st.cells), 1, Float64Array.of(area));
+    const at = (name: string) => {
+      const f = CELL_FIELDS.findIndex((x) => x.name === name);
+      return { mean: whole.mean[f], ci95: whole.ci95[f] };
+    };
+    flow = crossSectionFlowOf(plan, at('massDensity'), at('velocityZ'), area);
+  } else if (flow && isForceDrivenDuct(plan)) {
     // The whole cross-section as one group: its mean axial heat flux gives G_T by reciprocity (flowQuantities.ts).
     let volume = 0;
     for (let c = 0; c < st.cells; c++) volume += st.cellVolumes[c];

@@ -8,7 +8,7 @@
 import type { Plan } from '../plan/plan';
 import { wallNamesOf } from '../kernel/sideTable';
 import { WALL_QUANTITIES } from './wallQuantities';
-import { FLOW_QUANTITIES } from './flowQuantities';
+import { FLOW_QUANTITIES, hasFlowResult } from './flowQuantities';
 import type { Estimate } from '../stats/estimate';
 import type { SimulationResult } from './summarize';
 
@@ -16,7 +16,7 @@ import type { SimulationResult } from './summarize';
 export function targetPathsOf(plan: Plan): string[] {
   return [
     ...wallNamesOf(plan).flatMap((w) => WALL_QUANTITIES.map((q) => `walls.${w}.${q}`)),
-    ...(plan.caseData.flowSections.length ? FLOW_QUANTITIES.map((q) => `flow.${q}`) : []),
+    ...(hasFlowResult(plan) ? FLOW_QUANTITIES.map((q) => `flow.${q}`) : []),
     ...plan.caseData.flowSections.map((s) => `flow.sections.${s.name}.massFlowRate`),
   ];
 }

@@ -11,7 +11,7 @@ import type { Plan } from '../plan/plan';
 import type { SimState } from '../kernel/state';
 import { wallNamesOf } from '../kernel/sideTable';
 import { seriesKeysOf, sectionSeriesKey } from '../results/seriesKeys';
-import { moveFreely } from '../kernel/move';
+import { kickAlongZ, moveFreely } from '../kernel/move';
 import { boundaryPass } from '../kernel/boundaryPass';
 import { indexParticles, reorderParticles } from '../kernel/indexCells';
 import { collideParticles } from '../kernel/collide';
@@ -111,8 +111,10 @@ export function advance(sim: Simulation, steps: number): void {
   for (let s = 0; s < steps; s++) {
     beginStep(sim);
     let t0 = startTiming(sim);
+    kickAlongZ(st, dt);
     const listed = moveFreely(st, dt);
     boundaryPass(st, dt, listed);
+    kickAlongZ(st, dt);
     t0 = lap(sim, 'move', t0);
     indexStep(st);
     t0 = lap(sim, 'index', t0);

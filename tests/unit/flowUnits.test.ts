@@ -64,6 +64,7 @@ describe('flowCsv() with chosen units', () => {
     upstreamPressurePa: 1,
     downstreamPressurePa: 0.5,
     temperatureK: 300,
+    perDepth: false,
   };
   it('without the option the file is the command line’s (four columns)', () => {
     const lines = flowCsv(flow, false).trimEnd().split('\n');

@@ -18,7 +18,18 @@ const cli = join(repoRoot, 'dist-cli', 'tenuis.mjs');
 const fixturePath = join(repoRoot, 'tests', 'fixtures', 'presetOutputs.json');
 const writing = process.env.TENUIS_WRITE_PRESET_OUTPUTS === '1';
 
-const PRESETS = ['couette', 'fourier', 'poiseuille', 'forceDrivenTube', 'channel', 'tube', 'slit', 'orifice', 'cavity'];
+const PRESETS = [
+  'couette',
+  'fourier',
+  'poiseuille',
+  'forceDrivenTube',
+  'rectangularDuct',
+  'channel',
+  'tube',
+  'slit',
+  'orifice',
+  'cavity',
+];
 /** Runs checked: every preset on one replica, and two presets on two worker-thread replicas (the merge path). */
 const RUNS: { preset: string; replicas: number }[] = [
   ...PRESETS.map((preset) => ({ preset, replicas: 1 })),
