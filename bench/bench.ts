@@ -11,13 +11,15 @@
  * is reported next to the figures (item 9), everything is written to bench-results.json at the repository root, and
  * the process ends explicitly (item 10).
  *
- * Then the long-duct solver's timings (longDuctBench.ts).
+ * Then the long-duct solver's timings (longDuctBench.ts) and the cross-section mode against the planar engine
+ * (crossSectionBench.ts).
  *
  * Options: --sizes 1e5,1e6   --steps 300,40 (one per size)   --repeats 3   --out <file>   --scaling no (skip replicas)
  */
 import { writeFileSync } from 'node:fs';
 import { measureReplicaScaling } from './replicaScaling';
 import { measureLongDuct } from './longDuctBench';
+import { measureCrossSection } from './crossSectionBench';
 import os from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { couetteBenchCase } from './couetteBenchCase';
@@ -158,6 +160,10 @@ async function main(): Promise<void> {
   console.log(
     `long duct (BGK channel table): isothermal solve ${longDuct.isothermalSolveMs.toFixed(2)} ms, thermal-creep ODE solve ${longDuct.odeSolveMs.toFixed(1)} ms, 50-point conductance curve ${longDuct.conductanceCurve50Ms.toFixed(0)} ms (medians)`,
   );
+  const crossSection = measureCrossSection();
+  console.log(
+    `cross-section mode (square, ${crossSection.particles} particles): ${crossSection.crossSectionMParticleStepsPerS.toFixed(1)} M p-steps/s driven along z, ${crossSection.planarMParticleStepsPerS.toFixed(1)} M p-steps/s the same box undriven`,
+  );
   const report = {
     benchmark: 'hard-sphere argon Couette, ~20 particles per cell, one thread',
     date: new Date().toISOString(),
@@ -166,6 +172,7 @@ async function main(): Promise<void> {
     results,
     replicaScaling: scaling,
     longDuct,
+    crossSection,
   };
   writeFileSync(out, JSON.stringify(report, null, 2) + '\n');
   console.log(`written ${out}`);

@@ -123,10 +123,13 @@ export function LongDuctView() {
       return;
     }
     const shapeOk =
-      t && typeof t === 'object' && (t.shape === 'tube' || t.shape === 'channel') && Array.isArray(t.points);
+      t &&
+      typeof t === 'object' &&
+      (t.shape === 'tube' || t.shape === 'channel' || t.shape === 'rectangle') &&
+      Array.isArray(t.points);
     const problem = shapeOk
       ? api?.tableProblem(t)
-      : `${file.name}: not a coefficient table (it needs shape tube or channel, source, gasAndWall and points); make one with tenuis coefficients`;
+      : `${file.name}: not a coefficient table (it needs shape tube, channel or rectangle, source, gasAndWall and points); make one with tenuis coefficients`;
     if (problem) {
       setTableMessage(problem);
       return;
@@ -150,9 +153,11 @@ export function LongDuctView() {
         <section className="panel" aria-labelledby="long-duct-form-title">
           <h2 id="long-duct-form-title">Long duct</h2>
           <p className="hint">
-            A tube or channel much longer than its radius or gap, at any pressure ratio, from a table of its kinetic
-            coefficients G_P(δ) computed by Tenuis&apos;s own DSMC (Sharipov &amp; Seleznev 1998 method). Shorter than
-            about 20 radii or gaps: run the DSMC tube or channel preset instead.
+            A tube, channel or rectangular duct much longer than its radius or gap, at any pressure ratio, from a table
+            of its kinetic coefficients G_P(δ) computed by Tenuis&apos;s own DSMC (Sharipov &amp; Seleznev 1998 method).
+            Shorter than about 20 radii or gaps: run the DSMC tube or channel preset instead. Results are model
+            estimates; defer to local codes, standards and licensed engineering practice for vacuum vessels and
+            pressurised parts.
           </p>
           <div className="field">
             <label htmlFor="long-duct-shape">shape</label>
@@ -160,15 +165,25 @@ export function LongDuctView() {
               <select
                 id="long-duct-shape"
                 value={form.shape}
-                onChange={(e) => edit({ shape: e.target.value as 'tube' | 'channel', tableSource: '' })}
+                onChange={(e) => edit({ shape: e.target.value as LongDuctFormState['shape'], tableSource: '' })}
               >
                 <option value="channel">planar channel (gap H, width w)</option>
                 <option value="tube">round tube (radius R)</option>
+                <option value="rectangle">rectangle (height H, width W; a table of its H/W)</option>
               </select>
             </div>
           </div>
-          {entry('size', form.shape === 'tube' ? 'Tube radius R' : 'Channel gap H', 'length')}
+          {entry(
+            'size',
+            form.shape === 'tube'
+              ? 'Tube radius R'
+              : form.shape === 'rectangle'
+                ? 'Height H (smaller side)'
+                : 'Channel gap H',
+            'length',
+          )}
           {form.shape === 'channel' && entry('width', 'Channel width w', 'length', 'blank: per metre of width')}
+          {form.shape === 'rectangle' && entry('width', 'Width W', 'length')}
           {entry('length', 'Duct length L', 'length')}
           <div className="field">
             <label htmlFor="long-duct-gas">gas</label>
@@ -226,7 +241,8 @@ export function LongDuctView() {
                 {shapeTables.map((t) => (
                   <option key={t.source} value={t.source}>
                     {(api?.BUILTIN_TABLES ?? []).includes(t) ? 'built-in: ' : ''}
-                    {t.gasAndWall} — {t.points.length} points
+                    {t.gasAndWall}
+                    {t.aspectRatio !== undefined ? `, H/W ${t.aspectRatio}` : ''} — {t.points.length} points
                   </option>
                 ))}
               </select>

@@ -17,10 +17,10 @@ export interface Entry {
 }
 
 export interface LongDuctFormState {
-  readonly shape: 'tube' | 'channel';
-  /** Tube radius R or channel gap H. */
+  readonly shape: 'tube' | 'channel' | 'rectangle';
+  /** Tube radius R, channel gap H or rectangle height H (its smaller side). */
   readonly size: Entry;
-  /** Channel width (blank: per metre of width). */
+  /** Channel width (blank: per metre of width) or rectangle width (needed). */
   readonly width: Entry;
   readonly length: Entry;
   readonly gas: SpeciesId;
@@ -122,7 +122,13 @@ export function readLongDuctForm(
 ): LongDuctFormResult {
   const errors: Partial<Record<LongDuctField, string>> = {};
   const label = (field: LongDuctField) =>
-    field === 'size' ? (f.shape === 'tube' ? 'tube radius' : 'channel gap') : FIELD_LABELS[field];
+    field === 'size'
+      ? f.shape === 'tube'
+        ? 'tube radius'
+        : f.shape === 'rectangle'
+          ? 'rectangle height'
+          : 'channel gap'
+      : FIELD_LABELS[field];
   /** A value above 0 (or any finite value when `signed`), in SI; NaN and a message when it is not. */
   const read = (field: LongDuctField, e: Entry, what: string, signed = false): number => {
     const v = Number(e.text);
@@ -137,9 +143,13 @@ export function readLongDuctForm(
   };
   const size = read('size', f.size, 'a length above 0');
   const width =
-    f.shape === 'channel' && f.width.text.trim()
-      ? read('width', f.width, 'a length above 0, or leave it blank for 1 m')
-      : 1;
+    f.shape === 'rectangle'
+      ? read('width', f.width, 'a length above 0, at least the height')
+      : f.shape === 'channel' && f.width.text.trim()
+        ? read('width', f.width, 'a length above 0, or leave it blank for 1 m')
+        : 1;
+  if (f.shape === 'rectangle' && width < size && !errors.width)
+    errors.width = 'width: the height is the smaller side; give a width at least the height (or swap them)';
   const length = read('length', f.length, 'a length above 0');
   const tUp = read('upstreamTemperature', f.upstreamTemperature, 'a temperature above 0 K');
   const tDown = f.downstreamTemperature.text.trim()
@@ -172,7 +182,9 @@ export function readLongDuctForm(
   const geometry: DuctGeometry =
     f.shape === 'tube'
       ? { shape: 'tube', radiusM: size, lengthM: length }
-      : { shape: 'channel', gapM: size, widthM: width, lengthM: length };
+      : f.shape === 'rectangle'
+        ? { shape: 'rectangle', heightM: size, widthM: width, lengthM: length }
+        : { shape: 'channel', gapM: size, widthM: width, lengthM: length };
   const request: LongDuctRequest = {
     geometry,
     species: f.gas,

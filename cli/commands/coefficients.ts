@@ -10,7 +10,7 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { basename } from 'node:path';
 import { parseCase, type Case } from '../../engine/case/schema';
-import type { CoefficientPoint, CoefficientTable } from '../../engine/longDuct/coefficientTable';
+import type { CoefficientPoint, CoefficientTable, DuctShapeKind } from '../../engine/longDuct/coefficientTable';
 import { tableProblem } from '../../engine/longDuct/coefficientTable';
 import { CliError, EXIT_OK, UsageError } from '../errors';
 import { readJsonFile } from '../readCase';
@@ -24,7 +24,9 @@ export const COEFFICIENTS_USAGE = `Usage:
 
 Computes a long duct's reduced flow rate G_P(δ) by DSMC and writes it as a coefficient table (JSON) for tenuis
 duct --coefficients FILE. CASE is a force-driven channel or tube (body acceleration along a periodic duct, e.g.
-tenuis preset poiseuille, with its gas, collision model and wall accommodation); it is swept over the rarefaction
+tenuis preset poiseuille or forceDrivenTube, with its gas, collision model and wall accommodation), or a rectangular
+cross-section driven along the duct (tenuis preset rectangularDuct: a table of its aspect ratio, G_P only); it is
+swept over the rarefaction
 δ = √π/(2 Kn) from D1 to D2 with equal ratios. Every point's full result stays in FILE.points/ (as tenuis sweep
 writes it). G_T (thermal creep) comes from each point's axial heat flow by Onsager reciprocity, where that run is
 linear in its drive and resolves it; elsewhere the point has G_P only (the run's warnings say why).
@@ -84,10 +86,15 @@ export const coefficientsCommand = defineCommand({
       throw new CliError(`${positionals[0]} is not a valid case:\n${parsed.errors.map((m) => `  ${m}`).join('\n')}`);
     const c = parsed.value;
     const duct = c.flowReport?.duct;
-    if (c.bodyAccelerationXMPerS2 === 0 || (duct !== 'channel' && duct !== 'tube'))
+    const crossSection = c.domain.geometry !== 'axisymmetric' && (c.bodyAccelerationZMPerS2 ?? 0) !== 0;
+    if (!crossSection && (c.bodyAccelerationXMPerS2 === 0 || (duct !== 'channel' && duct !== 'tube')))
       throw new CliError(
-        `${positionals[0]}: a coefficient table comes from a force-driven channel or tube (a body acceleration along a periodic duct with flowReport.duct channel or tube), e.g. tenuis preset poiseuille`,
+        `${positionals[0]}: a coefficient table comes from a force-driven channel or tube (a body acceleration along a periodic duct with flowReport.duct channel or tube, e.g. tenuis preset poiseuille or forceDrivenTube) or a rectangular cross-section driven along the duct (tenuis preset rectangularDuct)`,
       );
+    const shape: DuctShapeKind = crossSection ? 'rectangle' : (duct as 'channel' | 'tube');
+    const aspectRatio = crossSection
+      ? Math.min(c.domain.lengthXM, c.domain.lengthYM) / Math.max(c.domain.lengthXM, c.domain.lengthYM)
+      : undefined;
     // Knudsen ↔ rarefaction: δ = √π/(2 Kn) (viscosity-based mean free path; Sharipov & Seleznev 1998).
     const knudsenOf = (delta: number) => Math.sqrt(Math.PI) / (2 * delta);
     const dir = `${values.out}.points`;
@@ -109,7 +116,7 @@ export const coefficientsCommand = defineCommand({
       watchInterrupt,
     );
     if (code !== EXIT_OK) return code;
-    const { table, thermalCreepLeftOut } = tableFromSweep(dir, c.name, duct, gasAndWallOf(c));
+    const { table, thermalCreepLeftOut } = tableFromSweep(dir, c.name, shape, aspectRatio, gasAndWallOf(c));
     const problem = tableProblem(table);
     if (problem) throw new CliError(problem);
     writeFileSync(values.out, `${prettyJson(table)}\n`);
@@ -125,7 +132,9 @@ export const coefficientsCommand = defineCommand({
 });
 
 function gasAndWallOf(c: Case): string {
-  const walls = [c.boundaries.bottom, c.boundaries.top].filter((b) => b.type === 'wall');
+  const walls = [c.boundaries.bottom, c.boundaries.top, c.boundaries.left, c.boundaries.right].filter(
+    (b) => b.type === 'wall',
+  );
   const accommodation = walls
     .map((w) => ('accommodation' in w ? (w as { accommodation?: number }).accommodation : undefined))
     .find((a) => a !== undefined);
@@ -137,7 +146,8 @@ function gasAndWallOf(c: Case): string {
 function tableFromSweep(
   dir: string,
   caseName: string,
-  shape: 'channel' | 'tube',
+  shape: DuctShapeKind,
+  aspectRatio: number | undefined,
   gasAndWall: string,
 ): { table: CoefficientTable; thermalCreepLeftOut: number[] } {
   const sweepJson = JSON.parse(readFileSync(`${dir}/sweep.json`, 'utf8')) as {
@@ -165,6 +175,7 @@ function tableFromSweep(
   thermalCreepLeftOut.sort((a, b) => a - b);
   const table: CoefficientTable = {
     shape,
+    ...(aspectRatio !== undefined ? { aspectRatio } : {}),
     source: `Tenuis ${packageVersion()} DSMC, tenuis coefficients on case "${caseName}" (every point in ${basename(dir)}/)`,
     gasAndWall,
     points,

@@ -35,10 +35,22 @@ interface DuctParameter {
 }
 
 const PARAMETERS: readonly DuctParameter[] = [
-  { name: 'shape', kind: 'choice', unitShown: '', choices: ['tube', 'channel'], description: 'duct cross-section' },
+  {
+    name: 'shape',
+    kind: 'choice',
+    unitShown: '',
+    choices: ['tube', 'channel', 'rectangle'],
+    description: 'duct cross-section (a rectangle needs a table of its aspect ratio)',
+  },
   { name: 'radius', kind: 'length', unitShown: 'mm', description: 'tube radius R' },
   { name: 'gap', kind: 'length', unitShown: 'µm', description: 'channel gap H' },
-  { name: 'width', kind: 'length', unitShown: 'mm', description: 'channel width w (default 1 m: per metre of width)' },
+  { name: 'height', kind: 'length', unitShown: 'µm', description: 'rectangle height H (its smaller side)' },
+  {
+    name: 'width',
+    kind: 'length',
+    unitShown: 'mm',
+    description: 'channel width w (default 1 m: per metre of width), or rectangle width W',
+  },
   { name: 'length', kind: 'length', unitShown: 'm', description: 'duct length L' },
   {
     name: 'gas',
@@ -174,7 +186,7 @@ export const ductCommand = defineCommand({
         return undefined;
       }
     });
-    const wantedShape = (v.shape as 'tube' | 'channel' | undefined) ?? 'tube';
+    const wantedShape = (v.shape as 'tube' | 'channel' | 'rectangle' | undefined) ?? 'tube';
     const builtin = o.coefficients ? null : builtinTableFor(wantedShape);
     if (!o.coefficients && !builtin)
       throw usage(
@@ -194,12 +206,14 @@ export const ductCommand = defineCommand({
     const geometry: DuctGeometry =
       shape === 'tube'
         ? { shape: 'tube', radiusM: need('radius'), lengthM: need('length') }
-        : {
-            shape: 'channel',
-            gapM: need('gap'),
-            widthM: (v.width as number | undefined) ?? 1,
-            lengthM: need('length'),
-          };
+        : shape === 'rectangle'
+          ? { shape: 'rectangle', heightM: need('height'), widthM: need('width'), lengthM: need('length') }
+          : {
+              shape: 'channel',
+              gapM: need('gap'),
+              widthM: (v.width as number | undefined) ?? 1,
+              lengthM: need('length'),
+            };
     const gas = modelFromSpecies(speciesOf(v), 'VHS');
     const t = (v.temperature as number | undefined) ?? 293.15;
     const tUp = (v.upstreamTemperature as number | undefined) ?? t;

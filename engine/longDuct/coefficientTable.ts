@@ -12,7 +12,9 @@
  * reported with it (extrapolatedBy).
  */
 
-export type DuctShapeKind = 'tube' | 'channel';
+import { rectangleFlowFactor } from '../continuum/rectangularDuct';
+
+export type DuctShapeKind = 'tube' | 'channel' | 'rectangle';
 
 export interface CoefficientPoint {
   readonly rarefaction: number;
@@ -29,12 +31,18 @@ export interface CoefficientTable {
   readonly source: string;
   /** The gas model and wall the table holds for, in words (e.g. "hard spheres, diffuse walls"). */
   readonly gasAndWall: string;
+  /** A rectangle's height over width H/W in (0, 1] (δ and G_P on the height H, ṁ = (H² W / v0)(−dp/dx) G_P). */
+  readonly aspectRatio?: number;
   /** Rarefaction ascending, at least two points. */
   readonly points: readonly CoefficientPoint[];
 }
 
-/** Slope of G_P against δ in the slip regime: 1/4 for a tube, 1/6 for a channel (no-slip Poiseuille flow). */
-export function slipSlope(shape: DuctShapeKind): number {
+/**
+ * Slope of G_P against δ in the slip regime (no-slip Poiseuille flow): 1/4 for a tube, 1/6 for a channel, and 1/6
+ * times the no-slip series' bracket for a rectangle of aspect ratio H/W (continuum/rectangularDuct.ts).
+ */
+export function slipSlope(shape: DuctShapeKind, aspectRatio?: number): number {
+  if (shape === 'rectangle') return rectangleFlowFactor(aspectRatio ?? 1) / 6;
   return shape === 'tube' ? 1 / 4 : 1 / 6;
 }
 
@@ -52,6 +60,10 @@ export interface InterpolatedCoefficient {
 
 /** Checks a table (ascending, finite, positive δ; at least two points) and says what is wrong, or null. */
 export function tableProblem(t: CoefficientTable): string | null {
+  if (t.shape !== 'tube' && t.shape !== 'channel' && t.shape !== 'rectangle')
+    return `coefficient table "${t.source}": shape ${String(t.shape)}; it must be tube, channel or rectangle`;
+  if (t.shape === 'rectangle' && !(typeof t.aspectRatio === 'number' && t.aspectRatio > 0 && t.aspectRatio <= 1))
+    return `coefficient table "${t.source}": a rectangle's table needs its aspectRatio H/W, above 0 and at most 1`;
   if (t.points.length < 2) return `coefficient table "${t.source}": needs at least two points, has ${t.points.length}`;
   for (let k = 0; k < t.points.length; k++) {
     const p = t.points[k];
@@ -114,7 +126,7 @@ export function reducedFlowRateAt(t: CoefficientTable, rarefaction: number): Int
 export function interpolator(t: CoefficientTable): (rarefaction: number) => InterpolatedCoefficient {
   const problem = tableProblem(t);
   if (problem) throw new Error(problem);
-  const slope = slipSlope(t.shape);
+  const slope = slipSlope(t.shape, t.aspectRatio);
   const x = t.points.map((p) => Math.log(p.rarefaction));
   const r = t.points.map((p) => p.reducedFlowRate - slope * p.rarefaction);
   const ci = t.points.map((p) => p.reducedFlowRateCi95);

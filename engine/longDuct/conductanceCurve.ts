@@ -9,7 +9,8 @@
  */
 import { KINETIC_BGK_SLIP } from '../continuum/slipCoefficients';
 import { meanSpeedMPerS, type MolecularModel } from '../gas/molecularModel';
-import { slipSlope, type CoefficientTable } from './coefficientTable';
+import { slipSlope, type CoefficientTable, type DuctShapeKind } from './coefficientTable';
+import { rectangleFreeMolecularReducedFlowRate, rectangleSlipFlowFactor } from '../continuum/rectangularDuct';
 import { solveIsothermalDuct, type DuctGeometry, type Estimate } from './isothermalDuct';
 
 export interface ConductancePoint {
@@ -34,11 +35,28 @@ export interface ConductanceCurveInput {
 }
 
 /** A model's G_P as a table over a wide range of δ (exact for these forms up to the interpolation, see the tests). */
-function lineTable(shape: 'tube' | 'channel', gp: (delta: number) => number, what: string): CoefficientTable {
+function lineTable(
+  shape: DuctShapeKind,
+  aspectRatio: number | undefined,
+  gp: (delta: number) => number,
+  what: string,
+): CoefficientTable {
   const points = [];
   for (let e = -8; e <= 8; e += 0.25)
     points.push({ rarefaction: 10 ** e, reducedFlowRate: gp(10 ** e), reducedFlowRateCi95: 0 });
-  return { shape, source: what, gasAndWall: 'continuum model', points };
+  return { shape, aspectRatio, source: what, gasAndWall: 'continuum model', points };
+}
+
+/**
+ * The first-order slip offset of G_P − slope·δ at large δ: σ_P for a tube and a channel; for a rectangle (1/6)·f′(0)·σ_P,
+ * f(s) the slip solution's flow factor (continuum/rectangularDuct.ts) differentiated at zero slip — its slip-regime
+ * line, the linear part of first-order slip in σ_P/δ.
+ */
+function slipOffset(shape: DuctShapeKind, aspectRatio: number | undefined): number {
+  if (shape !== 'rectangle') return KINETIC_BGK_SLIP.value;
+  const a = aspectRatio ?? 1;
+  const s = 1e-3;
+  return ((rectangleSlipFlowFactor(a, s) - rectangleSlipFlowFactor(a, 0)) / s / 6) * KINETIC_BGK_SLIP.value;
 }
 
 export function conductanceCurve(input: ConductanceCurveInput): ConductancePoint[] {
@@ -46,10 +64,16 @@ export function conductanceCurve(input: ConductanceCurveInput): ConductancePoint
   if (!(ratio > 0 && ratio < 1))
     throw new Error(`pressure ratio downstream/upstream = ${ratio}: must be between 0 and 1`);
   const shape = input.geometry.shape;
-  const slope = slipSlope(shape);
-  const noSlip = lineTable(shape, (d) => slope * d, 'no-slip Poiseuille');
-  const firstOrder = lineTable(shape, (d) => slope * d + KINETIC_BGK_SLIP.value, 'first-order slip');
   const g = input.geometry;
+  const aspect = g.shape === 'rectangle' ? g.heightM / g.widthM : undefined;
+  const slope = slipSlope(shape, aspect);
+  const offset = slipOffset(shape, aspect);
+  const noSlip = lineTable(shape, aspect, (d) => slope * d, 'no-slip Poiseuille');
+  const firstOrder = lineTable(shape, aspect, (d) => slope * d + offset, 'first-order slip');
+  const rectangleFm =
+    aspect !== undefined
+      ? lineTable(shape, aspect, () => rectangleFreeMolecularReducedFlowRate(aspect), 'free-molecular')
+      : null;
   const fm =
     g.shape === 'tube'
       ? ((8 * g.radiusM) / (3 * g.lengthM)) *
@@ -75,7 +99,9 @@ export function conductanceCurve(input: ConductanceCurveInput): ConductancePoint
       conductanceM3PerS: r.conductanceM3PerS,
       noSlipM3PerS: solveIsothermalDuct({ ...base, table: noSlip }).conductanceM3PerS.mean,
       firstOrderSlipM3PerS: solveIsothermalDuct({ ...base, table: firstOrder }).conductanceM3PerS.mean,
-      freeMolecularM3PerS: fm,
+      freeMolecularM3PerS: rectangleFm
+        ? solveIsothermalDuct({ ...base, table: rectangleFm }).conductanceM3PerS.mean
+        : fm,
     };
   });
 }

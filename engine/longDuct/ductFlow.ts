@@ -13,7 +13,7 @@ import { BOLTZMANN_J_PER_K as K_B } from '../physics/constants';
 import { mostProbableSpeedMPerS, viscosityPaS, type MolecularModel } from '../gas/molecularModel';
 import { speedOfSoundMPerS } from '../stats/expectedNoise';
 import { interpolator, thermalCreepInterpolator, type CoefficientTable } from './coefficientTable';
-import { dimensionsOf, type DuctDimensions, type DuctGeometry, type Estimate } from './isothermalDuct';
+import { checkTableFits, dimensionsOf, type DuctDimensions, type DuctGeometry, type Estimate } from './isothermalDuct';
 
 export interface DuctFlowInput {
   readonly geometry: DuctGeometry;
@@ -189,8 +189,7 @@ export function solveDuctFlow(input: DuctFlowInput): DuctFlowResult {
   ] as const)
     if (!(Number.isFinite(v) && v > 0)) throw new Error(`${what} = ${v}: must be a number above 0`);
   const d = dimensionsOf(input.geometry);
-  if (input.table.shape !== d.shape)
-    throw new Error(`coefficient table "${input.table.source}" is for a ${input.table.shape}, not a ${d.shape}`);
+  checkTableFits(input.table, input.geometry);
   const gpOf = interpolator(input.table);
   const gtOf = thermalCreepInterpolator(input.table);
   const isothermal = input.upstreamTemperatureK === input.downstreamTemperatureK;
@@ -224,7 +223,7 @@ export function solveDuctFlow(input: DuctFlowInput): DuctFlowResult {
   const ratio = d.lengthM / d.scaleM;
   if (ratio < 20)
     warnings.push(
-      `the duct is ${ratio.toPrecision(3)} ${d.shape === 'tube' ? 'radii' : 'gaps'} long, less than about 20: the long-duct result neglects the ends; run the full DSMC ${d.shape} preset instead`,
+      `the duct is ${ratio.toPrecision(3)} ${d.shape === 'tube' ? 'radii' : d.shape === 'rectangle' ? 'heights' : 'gaps'} long, less than about 20: the long-duct result neglects the ends; run the full DSMC ${d.shape} preset instead`,
     );
   const lo = input.table.points[0].rarefaction;
   const hi = input.table.points[input.table.points.length - 1].rarefaction;

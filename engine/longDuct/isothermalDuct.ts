@@ -20,7 +20,9 @@ import { tubeEndConductanceM3PerS } from './endCorrection';
 export type DuctGeometry =
   | { readonly shape: 'tube'; readonly radiusM: number; readonly lengthM: number }
   /** widthM: the channel's width; 1 m gives the flow per metre of width. */
-  | { readonly shape: 'channel'; readonly gapM: number; readonly widthM: number; readonly lengthM: number };
+  | { readonly shape: 'channel'; readonly gapM: number; readonly widthM: number; readonly lengthM: number }
+  /** A rectangle of height H (the smaller side) and width W, with its own table (of its aspect ratio H/W). */
+  | { readonly shape: 'rectangle'; readonly heightM: number; readonly widthM: number; readonly lengthM: number };
 
 export interface IsothermalDuctInput {
   readonly geometry: DuctGeometry;
@@ -83,9 +85,34 @@ export function dimensionsOf(g: DuctGeometry): DuctDimensions {
     positive(g.radiusM, 'tube radius');
     return { shape: 'tube', areaM2: Math.PI * g.radiusM ** 2, scaleM: g.radiusM, lengthM: g.lengthM };
   }
+  if (g.shape === 'rectangle') {
+    positive(g.heightM, 'rectangle height');
+    positive(g.widthM, 'rectangle width');
+    if (g.heightM > g.widthM)
+      throw new Error(
+        `rectangle height ${g.heightM} m is above its width ${g.widthM} m: H is the smaller side; swap them`,
+      );
+    return { shape: 'rectangle', areaM2: g.heightM * g.widthM, scaleM: g.heightM, lengthM: g.lengthM };
+  }
   positive(g.gapM, 'channel gap');
   positive(g.widthM, 'channel width');
   return { shape: 'channel', areaM2: g.gapM * g.widthM, scaleM: g.gapM, lengthM: g.lengthM };
+}
+
+/**
+ * Throws unless the table is for the duct's shape — and, for a rectangle, for its aspect ratio within 1 % (a table
+ * holds for one aspect ratio; interpolating between tables of others is not offered).
+ */
+export function checkTableFits(table: CoefficientTable, g: DuctGeometry): void {
+  if (table.shape !== g.shape)
+    throw new Error(`coefficient table "${table.source}" is for a ${table.shape}, not a ${g.shape}`);
+  if (g.shape === 'rectangle') {
+    const aspect = g.heightM / g.widthM;
+    if (!(table.aspectRatio !== undefined && Math.abs(table.aspectRatio / aspect - 1) <= 0.01))
+      throw new Error(
+        `coefficient table "${table.source}" is for a rectangle of H/W = ${table.aspectRatio}, the duct's is ${aspect.toPrecision(4)}: compute a table for this aspect ratio (tenuis coefficients on a rectangularDuct case)`,
+      );
+  }
 }
 
 /** Adaptive Simpson integration of f over [a, b] to a relative tolerance (Lyness 1969; common practice). */
@@ -123,8 +150,7 @@ export function solveIsothermalDuct(input: IsothermalDuctInput): IsothermalDuctR
       `downstream pressure = ${down} Pa: must be above 0 and below the upstream pressure (${up} Pa); a duct at one pressure carries no flow`,
     );
   const d = dimensionsOf(input.geometry);
-  if (table.shape !== d.shape)
-    throw new Error(`coefficient table "${table.source}" is for a ${table.shape}, not a ${d.shape}`);
+  checkTableFits(table, input.geometry);
   const mu = viscosityPaS(gas, t);
   const v0 = mostProbableSpeedMPerS(gas.massKg, t);
   const toDelta = (p: number) => (p * d.scaleM) / (mu * v0);
@@ -162,7 +188,7 @@ export function solveIsothermalDuct(input: IsothermalDuctInput): IsothermalDuctR
   const ratio = d.lengthM / d.scaleM;
   if (ratio < 20)
     warnings.push(
-      `the duct is ${ratio.toPrecision(3)} ${d.shape === 'tube' ? 'radii' : 'gaps'} long, less than about 20: the long-duct result neglects the ends${input.endCorrection ? ' beyond the end correction' : ''}; run the full DSMC ${d.shape} preset instead`,
+      `the duct is ${ratio.toPrecision(3)} ${d.shape === 'tube' ? 'radii' : d.shape === 'rectangle' ? 'heights' : 'gaps'} long, less than about 20: the long-duct result neglects the ends${input.endCorrection ? ' beyond the end correction' : ''}; run the full DSMC ${d.shape} preset instead`,
     );
   const maxMach = Math.max(...profile.mach);
   if (maxMach > 0.3)
