@@ -17,7 +17,7 @@ const RUNS = Number(process.env.TENUIS_FUZZ_RUNS ?? 1000);
 const BUDGET_BYTES = 2e9;
 /** A message names a field when it starts with the field's dotted path (or (case) for the whole file). */
 const NAMES_A_FIELD =
-  /^(\(case\)|schemaVersion|name|description|gas|initial|domain|boundaries|blocks|flowSections|flowReport|bodyAccelerationXMPerS2|numerics|sampling|seed)\b/;
+  /^(\(case\)|schemaVersion|name|description|gas|initial|domain|boundaries|blocks|flowSections|flowReport|bodyAccelerationXMPerS2|bodyAccelerationZMPerS2|numerics|sampling|seed)\b/;
 const FACTORS = [1e-300, 1e-30, 1e-9, 1e-3, 0, -1, 0.5, 2, 1e3, 1e9, 1e30, 1e154, 1e300];
 const SIDES = ['left', 'right', 'bottom', 'top'] as const;
 

@@ -218,7 +218,7 @@ describe('sweepCsv()', () => {
       '1e-10',
     ]);
     expect(cells.slice(8, 12)).toEqual(['3', '', '', '']); // throughput without a half-width; molarFlow not there
-    expect(second).toBe(`2,1,interrupted${','.repeat(3 + 12)}`);
+    expect(second).toBe(`2,1,interrupted${','.repeat(3 + 14)}`);
     const axi = sweepCsv(rows, { parameter: 'pressure', planar: false, hasFlow: true }).split('\n')[0];
     expect(axi).toMatch(
       /^point \[1\],pressure \[Pa\],status,.*massFlowRate \[kg\/s\].*throughput \[Pa m\^3\/s\].*molarFlow \[sccm\]/,
