@@ -97,9 +97,20 @@ export const test = base.extend<{ workbench: Workbench; problems: string[] }>({
       if (m.type() === 'error') problems.push(`console: ${m.text()} (${m.location().url})`);
     });
     page.on('pageerror', (e) => problems.push(`page error: ${e.message}`));
+    // Requests the page still had in flight when a test reloaded or navigated it are aborted by that navigation:
+    // count the main frame's navigations and remember, for each request, how many had started before it.
+    let navigations = 0;
+    const startedAfter = new WeakMap<object, number>();
+    page.on('request', (r) => {
+      if (r.isNavigationRequest() && r.frame() === page.mainFrame()) navigations++;
+      startedAfter.set(r, navigations);
+    });
     page.on('requestfailed', (r) => {
-      // A download's blob URL and an aborted prefetch are not failures of the page.
-      if (!r.url().startsWith('blob:')) problems.push(`request failed: ${r.url()} ${r.failure()?.errorText ?? ''}`);
+      // A download's blob URL, an aborted prefetch, and a request a later navigation aborted are not failures of
+      // the page.
+      const error = r.failure()?.errorText ?? '';
+      const leftBehind = error.includes('ERR_ABORTED') && navigations > (startedAfter.get(r) ?? navigations);
+      if (!r.url().startsWith('blob:') && !leftBehind) problems.push(`request failed: ${r.url()} ${error}`);
     });
     page.on('response', (r) => {
       if (r.status() >= 400) problems.push(`HTTP ${r.status()}: ${r.url()}`);
